@@ -1,0 +1,25 @@
+// Two kinds of tests: pure TypeScript (shared, sync, server, CLI) in Node, and React components
+// under jest-expo. Browser tests have their own runner (tests/browser/run.mjs).
+const alias = { '^@/(.*)$': '<rootDir>/$1' };
+
+module.exports = {
+  projects: [
+    {
+      displayName: 'node',
+      testEnvironment: 'node',
+      roots: ['<rootDir>/tests'],
+      testMatch: ['<rootDir>/tests/{shared,sync,server,cli}/**/*.test.ts'],
+      transform: {
+        '^.+\\.ts$': ['ts-jest', { tsconfig: 'server/tsconfig.json', isolatedModules: true }],
+      },
+      moduleNameMapper: alias,
+    },
+    {
+      displayName: 'app',
+      preset: 'jest-expo/web',
+      roots: ['<rootDir>/tests'],
+      testMatch: ['<rootDir>/tests/app/**/*.test.tsx'],
+      moduleNameMapper: alias,
+    },
+  ],
+};
