@@ -1,0 +1,87 @@
+// Sketches: the record a user draws on the Slate. Its writable fields (what a sync mutation may
+// carry, sync/SPEC.md S5, S24) and the REST read shapes. The diagram is stored as data (PD code,
+// unknot count, framings, the drawn strokes); invariants are derived from it, never stored here.
+import { z } from 'zod';
+
+export const sketchPaths = {
+  sketches: '/api/sketches', // GET list of visible sketches (own + shared to my groups)
+  sketch: (id: string) => `/api/sketches/${id}`, // GET one visible sketch
+} as const;
+
+export const RecordId = z.string().min(1).max(100);
+export const Sha256 = z.string().regex(/^[0-9a-f]{64}$/, 'Expected a SHA-256 hash in lowercase hex');
+
+const Label = z.int().min(-1_000_000).max(1_000_000);
+const Point = z.tuple([z.number(), z.number()]);
+
+export const Stroke = z.object({
+  points: z.array(Point).max(20_000),
+  closed: z.boolean().optional(),
+});
+export type Stroke = z.infer<typeof Stroke>;
+
+/**
+ * The link diagram: PD code (DESIGN.md conventions), unknotted circles with no crossings that
+ * the PD code cannot show, one framing per component (components in `orient()` order, unknots
+ * after them; null = blackboard framing), and the drawn strokes with any further geometry
+ * of the drawing code as free JSON.
+ */
+export const Diagram = z.object({
+  pd: z.array(z.tuple([Label, Label, Label, Label])).max(2_000),
+  unknots: z.int().min(0).max(1_000),
+  framings: z.array(z.int().nullable()).max(3_000),
+  strokes: z.array(Stroke).max(2_000),
+  geometry: z.json().optional(),
+});
+export type Diagram = z.infer<typeof Diagram>;
+
+export const emptyDiagram = (): Diagram => ({ pd: [], unknots: 0, framings: [], strokes: [] });
+
+const IsoTime = z.iso.datetime({ offset: true });
+
+/** Every field a device writes. `ownerId` is not among them: the server sets it (S23). */
+export const SketchFields = z.object({
+  title: z.string().max(200),
+  seenAt: z.string().max(300), // where it was seen, free text ("Topology seminar, room 2")
+  notes: z.string().max(20_000),
+  tags: z.array(z.string().trim().min(1).max(50)).max(50),
+  diagram: Diagram,
+  attachments: z.array(Sha256).max(20),
+  createdAt: IsoTime,
+  updatedAt: IsoTime,
+  groupId: z.string().nullable(), // shared to this group; null = private
+  deleted: z.boolean(),
+});
+export type SketchFields = z.infer<typeof SketchFields>;
+export const sketchFieldNames = Object.keys(SketchFields.shape) as (keyof SketchFields)[];
+
+/** A mutation carries any subset of the fields (S5). */
+export const SketchFieldsPatch = SketchFields.partial().strict();
+export type SketchFieldsPatch = z.infer<typeof SketchFieldsPatch>;
+
+/** The defaults a record starts from when an update arrives before its add (S13). */
+export const sketchDefaults = (now: string): SketchFields => ({
+  title: '',
+  seenAt: '',
+  notes: '',
+  tags: [],
+  diagram: emptyDiagram(),
+  attachments: [],
+  createdAt: now,
+  updatedAt: now,
+  groupId: null,
+  deleted: false,
+});
+
+export const Sketch = SketchFields.extend({
+  id: RecordId,
+  ownerId: z.string(),
+  version: z.int().min(0),
+});
+export type Sketch = z.infer<typeof Sketch>;
+export const SketchList = z.array(Sketch);
+
+export const SketchListQuery = z.object({
+  groupId: z.string().optional(), // only those shared to this group
+  includeDeleted: z.enum(['true', 'false']).optional(),
+});
