@@ -16,6 +16,7 @@ export const errorCodes = [
   'invitation_expired', // 410: the invitation link is past its expiry
   'payload_too_large', // 413: body over the size limit
   'rate_limited', // 429: too many attempts, try later
+  'mail_failed', // 502: the e-mail (e.g. an invitation) could not be sent; nothing was kept
   'internal', // 500: a bug on our side; details are in the server log only
 ] as const;
 

@@ -1,0 +1,45 @@
+// The Express app: security headers, logs, JSON bodies, the areas' routes, the exported web
+// build with a fallback to index.html for client routes, and the one error middleware.
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { HealthResponse } from '@/shared/api/auth';
+import { areas, devAreas } from './areas';
+import type { Deps } from './deps';
+import { errorHandler, notFound } from './http/errors';
+
+export function createApp(deps: Deps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(
+    helmet({
+      // The Expo web export injects inline styles and scripts; a CSP would need per-build hashes.
+      contentSecurityPolicy: false,
+      // expo-sqlite on web needs a cross-origin isolated page (STACK.md).
+      crossOriginOpenerPolicy: { policy: 'same-origin' },
+      crossOriginEmbedderPolicy: { policy: 'require-corp' },
+    }),
+  );
+  app.use(pinoHttp({ logger: deps.log }));
+  app.use(express.json({ limit: deps.config.jsonLimit }));
+
+  app.get('/api/health', (_req, res) => {
+    res.json({ ok: true } satisfies HealthResponse);
+  });
+  for (const area of [...areas, ...(deps.config.devPages ? devAreas : [])]) app.use(area.routes(deps));
+  app.use('/api', () => {
+    throw notFound('No such API route');
+  });
+
+  const webDir = deps.config.webDir && resolve(deps.config.webDir);
+  if (webDir && existsSync(join(webDir, 'index.html'))) {
+    app.use(express.static(webDir, { index: false }));
+    app.get('/{*splat}', (_req, res) => {
+      res.sendFile(join(webDir, 'index.html'));
+    });
+  }
+  app.use(errorHandler);
+  return app;
+}

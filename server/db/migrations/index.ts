@@ -1,0 +1,5 @@
+// Every migration, oldest first. A new migration file is added here too (no globbing: the
+// same list works under tsx, ts-jest and the TypeORM CLI).
+import { Foundation1796145751477 } from './1796145751477-Foundation';
+
+export const migrations = [Foundation1796145751477];

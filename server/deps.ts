@@ -1,0 +1,17 @@
+// What every area's routes and use-cases receive. Tests build it through startServer().
+import type { Logger } from 'pino';
+import type { DataSource } from 'typeorm';
+import type { Config } from './config';
+import type { Mailer } from './mail/mailer';
+import type { Mailbox } from './mail/smtp-fake';
+
+export interface Deps {
+  db: DataSource;
+  config: Config;
+  mailer: Mailer;
+  /** The local SMTP fake when one runs (development, tests), else null. */
+  mailbox: Mailbox | null;
+  log: Logger;
+  /** The clock; tests move it to expire invitations. */
+  now: () => Date;
+}

@@ -1,0 +1,36 @@
+// Outgoing mail for every area (invitations today; finished runs and notifications later):
+// compose a message, call mailer.send(). Delivery goes over SMTP with nodemailer.
+import nodemailer from 'nodemailer';
+
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  text: string;
+}
+
+export interface Mailer {
+  send(mail: OutgoingMail): Promise<void>;
+}
+
+export interface SmtpTarget {
+  host: string;
+  port: number;
+  /** For a real relay; the local fake needs none. */
+  auth?: { user: string; pass: string };
+}
+
+export function createSmtpMailer(target: SmtpTarget, from: string): Mailer {
+  const transport = nodemailer.createTransport({
+    host: target.host,
+    port: target.port,
+    secure: target.port === 465,
+    // The local fake speaks plain SMTP on loopback.
+    ignoreTLS: !target.auth,
+    auth: target.auth,
+  });
+  return {
+    async send(mail) {
+      await transport.sendMail({ from, ...mail });
+    },
+  };
+}

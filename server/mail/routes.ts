@@ -1,0 +1,44 @@
+// Development-only pages over the SMTP fake: a JSON list for tests and an HTML page where the
+// links in the kept mail can be clicked. Mounted only when config.devPages is on.
+import { Router } from 'express';
+import type { KeptMail } from '@/shared/api/dev-mail';
+import type { Deps } from '../deps';
+import { URL_PATTERN } from './smtp-fake';
+
+const escape = (s: string) =>
+  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+
+/** The text with its URLs turned into links; everything else escaped. */
+function linkify(text: string): string {
+  return escape(text).replace(URL_PATTERN, (url) => `<a href="${url}">${url}</a>`);
+}
+
+function page(mail: KeptMail[]): string {
+  const items = mail
+    .slice()
+    .reverse()
+    .map(
+      (m) => `<article><h2>${escape(m.subject)}</h2>
+<p class="meta">To ${escape(m.to.join(', '))} &middot; from ${escape(m.from)} &middot; ${escape(m.date)}</p>
+<pre>${linkify(m.text)}</pre></article>`,
+    )
+    .join('\n');
+  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Kept mail - Overstrand</title>
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<style>body{font-family:system-ui,sans-serif;max-width:46rem;margin:2rem auto;padding:0 1rem;color:#222}
+article{border-top:1px solid #ccc;padding:.5rem 0}.meta{color:#666;font-size:.9rem}pre{white-space:pre-wrap}</style>
+</head><body><h1>Kept mail</h1><p>Development only: every message the server sent, newest first.</p>
+${items || '<p>No mail yet.</p>'}</body></html>`;
+}
+
+export function routes({ mailbox }: Deps): Router {
+  const router = Router();
+  if (!mailbox) return router;
+  router.get('/api/dev/mail', (_req, res) => {
+    res.json(mailbox.list());
+  });
+  router.get('/dev/mail', (_req, res) => {
+    res.type('html').send(page(mailbox.list()));
+  });
+  return router;
+}

@@ -1,0 +1,85 @@
+// Starts and stops the whole server: database (migrated), mail, HTTP. Tests call
+// startServer({ port: 0 }) and get a fresh in-memory database and their own SMTP fake.
+import { createServer } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import type { Express } from 'express';
+import pino, { type Level } from 'pino';
+import { createApp } from './app';
+import { defaultConfig, type Config } from './config';
+import { openDatabase } from './db/connect';
+import { seedDemo } from './demo/seed';
+import type { Deps } from './deps';
+import { createSmtpMailer, type Mailer, type SmtpTarget } from './mail/mailer';
+import { startSmtpFake, type Mailbox } from './mail/smtp-fake';
+
+export interface StartOptions {
+  /** 0 (the default) picks a free port. */
+  port?: number;
+  /** Default 127.0.0.1; pass '0.0.0.0' or '::' to listen on every interface. */
+  host?: string;
+  /** SQLite file, created with its folder if missing; default ':memory:'. */
+  dbPath?: string;
+  /** publicUrl defaults to http://localhost:<port>. */
+  config?: Partial<Config>;
+  /** Send mail here instead of the built-in SMTP fake (then `mailbox` is null). */
+  mailer?: Mailer;
+  /** A real SMTP relay instead of the built-in fake. */
+  smtp?: SmtpTarget;
+  /** Default 'silent'. */
+  logLevel?: Level | 'silent';
+  now?: () => Date;
+  /** Load the demo scenario (idempotent). */
+  demo?: boolean;
+}
+
+export interface RunningServer {
+  url: string;
+  port: number;
+  app: Express;
+  deps: Deps;
+  /** The SMTP fake's kept mail, or null when mail goes elsewhere. */
+  mailbox: Mailbox | null;
+  /** Rows the demo seed added (0 when it already existed or demo is off). */
+  demoRowsAdded: number;
+  stop(): Promise<void>;
+}
+
+export async function startServer(options: StartOptions = {}): Promise<RunningServer> {
+  const log = pino({ level: options.logLevel ?? 'silent' });
+  const http = createServer();
+  await new Promise<void>((resolve, reject) => {
+    http.once('error', reject);
+    http.listen(options.port ?? 0, options.host ?? '127.0.0.1', resolve);
+  });
+  const port = (http.address() as AddressInfo).port;
+  const config = defaultConfig({ publicUrl: `http://localhost:${port}`, ...options.config });
+
+  const db = await openDatabase(options.dbPath ?? ':memory:').catch((err) => {
+    http.close();
+    throw err;
+  });
+  const mailbox = options.mailer || options.smtp ? null : await startSmtpFake();
+  const target = options.smtp ?? (mailbox && { host: mailbox.host, port: mailbox.port });
+  const mailer = options.mailer ?? createSmtpMailer(target!, config.mailFrom);
+  const deps: Deps = { db, config, mailer, mailbox, log, now: options.now ?? (() => new Date()) };
+  const demoRowsAdded = options.demo ? await seedDemo(deps) : 0;
+
+  const app = createApp(deps);
+  http.on('request', app);
+  return {
+    url: `http://localhost:${port}`,
+    port,
+    app,
+    deps,
+    mailbox,
+    demoRowsAdded,
+    async stop() {
+      await new Promise<void>((resolve) => {
+        http.close(() => resolve());
+        http.closeAllConnections();
+      });
+      await mailbox?.stop();
+      await db.destroy();
+    },
+  };
+}
