@@ -4,6 +4,7 @@
 
 import { orient, PDCode } from '../knot/pd';
 import { Ring } from '../linalg/ring';
+import { popcount } from './cobordism';
 import { Generator, homology, KhGroup } from './homology';
 
 /**
@@ -94,10 +95,4 @@ function edgeMap(from: State, to: State, [a, b, c]: readonly number[], mask: num
   const p = 1 << to.of[at(a)];
   const q = 1 << to.of[at(b)];
   return dotA ? [out | p | q] : [out | p, out | q];
-}
-
-function popcount(x: number): number {
-  let c = 0;
-  for (; x; x &= x - 1) c++;
-  return c;
 }

@@ -1,0 +1,181 @@
+// One step of Bar-Natan's local algorithm (math/0606318, Sect. 5): the planar composition of a
+// tangle complex with the complex of one crossing, 0-smoothing -> 1-smoothing{1} by a saddle,
+// followed by delooping (a closed circle is isomorphic to the empty set shifted by +1 and -1).
+
+import { Crossing } from '../knot/pd';
+import { cycles, dotsOf, glue, genus, Matching, Mor, Piece, popcount, reduce } from './cobordism';
+import { TangleComplex } from './complex';
+
+/** 0-smoothing joins (a,b)(c,d), 1-smoothing joins (a,d)(b,c) (DESIGN.md). */
+const SMOOTHING: readonly Matching[] = [
+  [1, 0, 3, 2],
+  [3, 2, 1, 0],
+];
+
+interface Side {
+  /** The new matching's id in the new complex. */
+  readonly mat: number;
+  /** Loop of every slot (-1 for slots on arcs to the boundary), loops numbered by first slot. */
+  readonly loopOf: number[];
+  readonly loops: number;
+}
+
+interface Gluing {
+  readonly pieces: Piece[];
+  readonly compPQ: number[];
+  readonly compX: number[];
+  /** Component of every bottom loop and every top loop. */
+  readonly bottomLoops: number[];
+  readonly topLoops: number[];
+}
+
+/**
+ * The complex of the tangle with crossing x added. Slots 0..n-1 are the old boundary points,
+ * n..n+3 the crossing's a, b, c, d; slots with the same label are glued.
+ */
+export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComplex<T> {
+  const { ring } = old;
+  const n = old.boundary.length;
+  const labelOf = [...old.boundary, ...x];
+  const slotsOf = new Map<number, number[]>();
+  labelOf.forEach((l, slot) => slotsOf.set(l, [...(slotsOf.get(l) ?? []), slot]));
+  const join = labelOf.map((l, slot) => {
+    const s = slotsOf.get(l)!;
+    return s.length === 2 ? (s[0] === slot ? s[1] : s[0]) : -1;
+  });
+  const freeSlots = labelOf.map((_, slot) => slot).filter((slot) => join[slot] < 0);
+  const newPos = new Array<number>(labelOf.length).fill(-1);
+  freeSlots.forEach((slot, k) => (newPos[slot] = k));
+  const cx = new TangleComplex(ring, freeSlots.map((slot) => labelOf[slot]));
+
+  const sides = new Map<string, Side>();
+  const side = (mat: number, s: number): Side => {
+    const key = `${mat},${s}`;
+    const cached = sides.get(key);
+    if (cached) return cached;
+    const p = old.matchings[mat];
+    const arc = (u: number): number => (u < n ? p[u] : n + SMOOTHING[s][u - n]);
+    const seen = new Array<boolean>(labelOf.length).fill(false);
+    const matching = new Array<number>(freeSlots.length);
+    for (const u of freeSlots) {
+      if (seen[u]) continue;
+      let v = arc(u);
+      seen[u] = seen[v] = true;
+      while (join[v] >= 0) {
+        const w = join[v];
+        v = arc(w);
+        seen[w] = seen[v] = true;
+      }
+      matching[newPos[u]] = newPos[v];
+      matching[newPos[v]] = newPos[u];
+    }
+    const loopOf = new Array<number>(labelOf.length).fill(-1);
+    let loops = 0;
+    for (let u = 0; u < labelOf.length; u++) {
+      if (seen[u]) continue;
+      let cur = u;
+      do {
+        const v = arc(cur);
+        seen[cur] = seen[v] = true;
+        loopOf[cur] = loopOf[v] = loops;
+        cur = join[v];
+      } while (cur !== u);
+      loops++;
+    }
+    const result = { mat: cx.matchingId(matching), loopOf, loops };
+    sides.set(key, result);
+    return result;
+  };
+
+  const gluings = new Map<string, Gluing>();
+  const gluing = (pMat: number, qMat: number, sb: number, st: number): Gluing => {
+    const key = `${pMat},${qMat},${sb},${st}`;
+    const cached = gluings.get(key);
+    if (cached) return cached;
+    const bottom = side(pMat, sb);
+    const top = side(qMat, st);
+    const pq = cycles(old.matchings[pMat], old.matchings[qMat]);
+    const xs = cycles(SMOOTHING[sb], SMOOTHING[st]);
+    const disc = (slot: number): number => (slot < n ? pq.of[slot] : pq.count + xs.of[slot - n]);
+    const arcs: [number, number][] = [];
+    join.forEach((partner, slot) => {
+      if (slot < partner) arcs.push([disc(slot), disc(partner)]);
+    });
+    const { comp, euler } = glue(pq.count + xs.count, arcs);
+    const circles = new Array<number>(euler.length).fill(0);
+    const boundary = new Array<number>(euler.length).fill(0);
+    const nc = cycles(cx.matchings[bottom.mat], cx.matchings[top.mat]);
+    nc.of.forEach((c, k) => {
+      const piece = comp[disc(freeSlots[k])];
+      if (!((boundary[piece] >> c) & 1)) circles[piece]++;
+      boundary[piece] |= 1 << c;
+    });
+    const loopComps = (s: Side): number[] => {
+      const out = new Array<number>(s.loops).fill(-1);
+      s.loopOf.forEach((loop, slot) => {
+        if (loop >= 0 && out[loop] < 0) out[loop] = comp[disc(slot)];
+      });
+      out.forEach((piece) => circles[piece]++);
+      return out;
+    };
+    const bottomLoops = loopComps(bottom);
+    const topLoops = loopComps(top);
+    const result: Gluing = {
+      pieces: euler.map((e, c) => ({ genus: genus(e, circles[c]), boundary: boundary[c] })),
+      compPQ: comp.slice(0, pq.count),
+      compX: comp.slice(pq.count),
+      bottomLoops,
+      topLoops,
+    };
+    gluings.set(key, result);
+    return result;
+  };
+
+  // New objects: loop bit 1 = the {-1} summand (x), bit 0 = the {+1} summand (1).
+  const ids = new Map<number, number[][]>();
+  old.objs.forEach((o, k) => {
+    if (!old.alive[k]) return;
+    ids.set(
+      k,
+      [0, 1].map((s) => {
+        const { mat, loops } = side(o.mat, s);
+        return Array.from({ length: 1 << loops }, (_, bits) =>
+          cx.addObject({ mat, shift: o.shift + s + loops - 2 * popcount(bits), height: o.height + s }),
+        );
+      }),
+    );
+  });
+
+  // The glued morphism between summands: cups on bottom loops (dotted for x), caps on top
+  // loops (dotted for 1).
+  const connect = (from: number[], to: number[], g: Gluing, f: Mor<T>, sign: T): void => {
+    from.forEach((source, sigma) => {
+      to.forEach((target, tau) => {
+        const result: Mor<T> = new Map();
+        for (const [mask, c] of f) {
+          const dots = dotsOf(g.pieces.length, [g.compPQ], [mask]);
+          g.bottomLoops.forEach((piece, l) => (dots[piece] += (sigma >> l) & 1));
+          g.topLoops.forEach((piece, l) => (dots[piece] += 1 - ((tau >> l) & 1)));
+          for (const [m, k] of reduce(g.pieces, dots)) {
+            const v = ring.add(result.get(m) ?? ring.zero, ring.mul(ring.fromInt(k), c));
+            if (ring.isZero(v)) result.delete(m);
+            else result.set(m, v);
+          }
+        }
+        if (result.size > 0) cx.addTo(source, target, result, sign);
+      });
+    });
+  };
+
+  const identity: Mor<T> = new Map([[0, ring.one]]);
+  for (const [k, [zero, one]] of ids) {
+    const o = old.objs[k];
+    for (const [t, f] of old.out[k]) {
+      const [tZero, tOne] = ids.get(t)!;
+      connect(zero, tZero, gluing(o.mat, old.objs[t].mat, 0, 0), f, ring.one);
+      connect(one, tOne, gluing(o.mat, old.objs[t].mat, 1, 1), f, ring.one);
+    }
+    connect(zero, one, gluing(o.mat, o.mat, 0, 1), identity, o.height % 2 ? ring.neg(ring.one) : ring.one);
+  }
+  return cx;
+}
