@@ -3,7 +3,7 @@ import { Invitation } from '../db/entities';
 
 type Db = DataSource | EntityManager;
 
-export async function insertInvitation(db: Db, row: Omit<Invitation, 'createdAt' | 'acceptedAt' | 'acceptedById'>) {
+export async function insertInvitation(db: Db, row: Omit<Invitation, 'acceptedAt' | 'acceptedById'>) {
   const repo = db.getRepository(Invitation);
   return repo.save(repo.create({ ...row, acceptedAt: null, acceptedById: null }));
 }

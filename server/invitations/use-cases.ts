@@ -44,7 +44,8 @@ export async function invite(deps: Deps, caller: User, groupId: string, input: C
   if (invitee && (await findMembership(db, groupId, invitee.id))) throw alreadyMember();
 
   const token = newToken();
-  const expiresAt = new Date(now().getTime() + config.invitationTtlMs);
+  const createdAt = now();
+  const expiresAt = new Date(createdAt.getTime() + config.invitationTtlMs);
   const row = await repo.insertInvitation(db, {
     id: randomUUID(),
     groupId,
@@ -53,6 +54,7 @@ export async function invite(deps: Deps, caller: User, groupId: string, input: C
     tokenHash: hashToken(token),
     invitedById: caller.id,
     expiresAt,
+    createdAt,
   });
   const link = `${config.publicUrl}${invitePagePath(token)}`;
   try {

@@ -1,0 +1,96 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import request from 'supertest';
+import { GroupList, MemberList } from '@/shared/api/groups';
+import { DEMO_GROUP, DEMO_USERS } from '@/server/demo/seed';
+import { bearer, signUp, testServer } from './helpers';
+
+let dir: string;
+beforeEach(() => {
+  dir = mkdtempSync(join(tmpdir(), 'overstrand-db-'));
+});
+afterEach(() => rmSync(dir, { recursive: true, force: true }));
+
+const counts = async (db: import('typeorm').DataSource) =>
+  Object.fromEntries(
+    await Promise.all(
+      ['users', 'groups', 'memberships', 'invitations', 'migrations'].map(async (t) => [t, (await db.query(`SELECT COUNT(*) AS n FROM "${t}"`))[0].n]),
+    ),
+  );
+
+describe('a database file across restarts', () => {
+  it('keeps accounts and groups, and running the migrations again changes nothing', async () => {
+    const dbPath = join(dir, 'nested', 'overstrand.sqlite');
+    const first = await testServer({ dbPath });
+    const { token, user } = await signUp(first, 'Persistent Pat');
+    await request(first.url).post('/api/groups').set(bearer(token)).send({ name: 'Kept group' }).expect(201);
+    const migrations = await first.deps.db.query('SELECT name FROM migrations');
+    const before = await counts(first.deps.db);
+    await first.stop();
+
+    const second = await testServer({ dbPath });
+    try {
+      expect(await counts(second.deps.db)).toEqual(before);
+      expect(await second.deps.db.query('SELECT name FROM migrations')).toEqual(migrations);
+      // The old token still works: same secret, same user row.
+      expect((await request(second.url).get('/api/me').set(bearer(token))).body).toEqual(user);
+      const groups = GroupList.parse((await request(second.url).get('/api/groups').set(bearer(token))).body);
+      expect(groups).toEqual([expect.objectContaining({ name: 'Kept group', role: 'owner' })]);
+      expect(await second.deps.db.showMigrations()).toBe(false); // nothing pending
+    } finally {
+      await second.stop();
+    }
+  });
+
+  it('uses WAL journaling for a file database', async () => {
+    const server = await testServer({ dbPath: join(dir, 'wal.sqlite') });
+    try {
+      expect(await server.deps.db.query('PRAGMA journal_mode')).toEqual([{ journal_mode: 'wal' }]);
+    } finally {
+      await server.stop();
+    }
+  });
+});
+
+describe('the demo scenario', () => {
+  it('is loaded once: a second start adds nothing and keeps changes made in the demo', async () => {
+    const dbPath = join(dir, 'demo.sqlite');
+    const first = await testServer({ dbPath, demo: true });
+    expect(first.demoRowsAdded).toBe(1 + 2 * DEMO_USERS.length);
+    const loaded = await counts(first.deps.db);
+    expect(loaded).toMatchObject({ users: 5, groups: 1, memberships: 5 });
+    // Someone changes the demo; a restart must not undo it.
+    const owner = DEMO_USERS.find((u) => u.role === 'owner')!;
+    const viewer = DEMO_USERS.find((u) => u.role === 'viewer')!;
+    const login = await request(first.url).post('/api/auth/login').send({ email: owner.email, password: owner.password });
+    await request(first.url).delete(`/api/groups/${DEMO_GROUP.id}/members/${viewer.id}`).set(bearer(login.body.token)).expect(204);
+    await first.stop();
+
+    const second = await testServer({ dbPath, demo: true });
+    try {
+      expect(second.demoRowsAdded).toBe(0);
+      expect(await counts(second.deps.db)).toEqual({ ...loaded, memberships: 4 });
+    } finally {
+      await second.stop();
+    }
+  });
+
+  it('signs in every demo person with the printed password and the stated role', async () => {
+    const server = await testServer({ demo: true });
+    try {
+      for (const u of DEMO_USERS) {
+        const res = await request(server.url).post('/api/auth/login').send({ email: u.email, password: u.password });
+        expect(res.status).toBe(200);
+        const groups = GroupList.parse((await request(server.url).get('/api/groups').set(bearer(res.body.token))).body);
+        expect(groups).toEqual([{ id: DEMO_GROUP.id, name: DEMO_GROUP.name, role: u.role }]);
+      }
+      const roles = MemberList.parse(
+        (await request(server.url).get(`/api/groups/${DEMO_GROUP.id}/members`).set(bearer((await request(server.url).post('/api/auth/login').send(DEMO_USERS[0])).body.token))).body,
+      ).map((m) => m.role);
+      expect(roles.sort()).toEqual(['admin', 'member', 'member', 'owner', 'viewer']);
+    } finally {
+      await server.stop();
+    }
+  });
+});
