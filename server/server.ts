@@ -46,28 +46,36 @@ export interface RunningServer {
 
 export async function startServer(options: StartOptions = {}): Promise<RunningServer> {
   const log = pino({ level: options.logLevel ?? 'silent' });
-  const http = createServer();
-  await new Promise<void>((resolve, reject) => {
-    http.once('error', reject);
-    http.listen(options.port ?? 0, options.host ?? '127.0.0.1', resolve);
-  });
-  const port = (http.address() as AddressInfo).port;
-  const config = defaultConfig({ publicUrl: `http://localhost:${port}`, ...options.config });
-
-  const db = await openDatabase(options.dbPath ?? ':memory:').catch((err) => {
-    http.close();
-    throw err;
-  });
+  // publicUrl is filled in once the port is known, before the first request can arrive.
+  const config = defaultConfig({ publicUrl: '', ...options.config });
+  const db = await openDatabase(options.dbPath ?? ':memory:');
   const mailbox = options.mailer || options.smtp ? null : await startSmtpFake();
   const target = options.smtp ?? (mailbox && { host: mailbox.host, port: mailbox.port });
   const mailer = options.mailer ?? createSmtpMailer(target!, config.mailFrom);
   const deps: Deps = { db, config, mailer, mailbox, log, now: options.now ?? (() => new Date()) };
-  const demoRowsAdded = options.demo ? await seedDemo(deps) : 0;
+  const closeAll = async () => {
+    await mailbox?.stop();
+    await db.destroy();
+  };
 
+  let demoRowsAdded = 0;
   const app = createApp(deps);
-  http.on('request', app);
+  const http = createServer(app);
+  try {
+    if (options.demo) demoRowsAdded = await seedDemo(deps);
+    await new Promise<void>((resolve, reject) => {
+      http.once('error', reject);
+      http.listen(options.port ?? 0, options.host ?? '127.0.0.1', resolve);
+    });
+  } catch (err) {
+    await closeAll();
+    throw err;
+  }
+  const port = (http.address() as AddressInfo).port;
+  const url = `http://localhost:${port}`;
+  config.publicUrl ||= url;
   return {
-    url: `http://localhost:${port}`,
+    url,
     port,
     app,
     deps,
@@ -78,8 +86,7 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
         http.close(() => resolve());
         http.closeAllConnections();
       });
-      await mailbox?.stop();
-      await db.destroy();
+      await closeAll();
     },
   };
 }
