@@ -6,6 +6,7 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { HealthResponse } from '@/shared/api/auth';
+import { syncPaths, syncPushLimit } from '@/shared/api/sync';
 import { areas, devAreas } from './areas';
 import type { Deps } from './deps';
 import { errorHandler, notFound } from './http/errors';
@@ -23,6 +24,7 @@ export function createApp(deps: Deps): Express {
     }),
   );
   app.use(pinoHttp({ logger: deps.log }));
+  app.use(syncPaths.push, express.json({ limit: syncPushLimit })); // a push carries whole diagrams
   app.use(express.json({ limit: deps.config.jsonLimit }));
 
   app.get('/api/health', (_req, res) => {

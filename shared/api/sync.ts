@@ -73,6 +73,9 @@ export const Mutation = z.object({
 export type Mutation = z.infer<typeof Mutation>;
 
 export const maxPushMutations = 200;
+/** Body limit of a push; the device also cuts its batches to stay below it. */
+export const syncPushLimit = '8mb';
+export const pushBatchBytes = 4 * 1024 * 1024;
 export const PushRequest = z.object({
   deviceId: z.string().min(1).max(100),
   mutations: z.array(Mutation).max(maxPushMutations),

@@ -1,5 +1,6 @@
 // Every migration, oldest first. A new migration file is added here too (no globbing: the
 // same list works under tsx, ts-jest and the TypeORM CLI).
 import { Foundation1796145751477 } from './1796145751477-Foundation';
+import { Sync1796145952708 } from './1796145952708-Sync';
 
-export const migrations = [Foundation1796145751477];
+export const migrations = [Foundation1796145751477, Sync1796145952708];
