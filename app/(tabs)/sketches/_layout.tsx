@@ -1,0 +1,3 @@
+import { TabStack } from '@/components/shell/TabStack';
+
+export default TabStack;

@@ -1,0 +1,40 @@
+// The calm page around sign-in, sign-up, sign-out and invitations: the mark, a title, one column.
+import { ScrollView, StyleSheet, Text, View } from 'react-native';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
+import { Mark } from '@/components/shell/icons';
+import { chalk, colors, fonts, radius, space, type } from '@/constants/theme';
+
+export function AuthFrame({ title, lead, children }: { title: string; lead?: string; children: React.ReactNode }) {
+  const insets = useSafeAreaInsets();
+  return (
+    <ScrollView style={styles.scroll} contentContainerStyle={[styles.content, { paddingTop: insets.top + space.xxl }]}
+      keyboardShouldPersistTaps="handled">
+      <View style={styles.column}>
+        <View style={styles.brand}>
+          <View style={styles.markTile}>
+            <Mark size={26} colors={[chalk[5], chalk[6]]} />
+          </View>
+          <Text style={styles.brandText}>Overstrand</Text>
+        </View>
+        <View style={styles.head}>
+          <Text role="heading" aria-level={1} style={styles.title}>{title}</Text>
+          {lead ? <Text style={styles.lead}>{lead}</Text> : null}
+        </View>
+        <View style={styles.card}>{children}</View>
+      </View>
+    </ScrollView>
+  );
+}
+
+const styles = StyleSheet.create({
+  scroll: { flex: 1, backgroundColor: colors.paper },
+  content: { flexGrow: 1, paddingHorizontal: space.lg + 4, paddingBottom: space.xxxl },
+  column: { width: '100%', maxWidth: 440, alignSelf: 'center', gap: space.xl },
+  brand: { flexDirection: 'row', alignItems: 'center', gap: space.sm + 2 },
+  markTile: { width: 40, height: 40, borderRadius: radius.md, backgroundColor: '#22292E', alignItems: 'center', justifyContent: 'center' },
+  brandText: { fontFamily: fonts.semibold, fontSize: 19, color: colors.ink, letterSpacing: -0.2 },
+  head: { gap: space.sm, marginTop: space.lg },
+  title: { ...type.display, color: colors.ink },
+  lead: { ...type.body, color: colors.inkMuted },
+  card: { backgroundColor: colors.surface, borderRadius: radius.lg, borderWidth: 1, borderColor: colors.line, padding: space.xl, gap: space.lg },
+});

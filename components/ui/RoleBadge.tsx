@@ -1,0 +1,19 @@
+import { StyleSheet, Text, View } from 'react-native';
+import type { Role } from '@/shared/api/groups';
+import { colors, radius, space, type } from '@/constants/theme';
+
+export function RoleBadge({ role }: { role: Role }) {
+  const strong = role === 'owner' || role === 'admin';
+  return (
+    <View style={[styles.badge, strong ? styles.strong : styles.plain]}>
+      <Text style={[styles.text, { color: strong ? colors.accent : colors.inkMuted }]}>{role}</Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  badge: { borderRadius: radius.pill, paddingHorizontal: space.sm + 2, paddingVertical: 2, alignSelf: 'flex-start' },
+  strong: { backgroundColor: colors.accentSoft },
+  plain: { backgroundColor: colors.sunken },
+  text: { ...type.caps, fontSize: 11 },
+});

@@ -1,0 +1,85 @@
+// The one way the app talks to the server: JSON over fetch, every answer parsed with the shared
+// zod contract (shared/api), every failure turned into an ApiError the screens can switch on.
+import { z } from 'zod';
+import { ApiErrorBody, type ErrorCode } from '@/shared/api/errors';
+
+/** Failures that never reached (or never came back from) the server as a proper API error. */
+export type ClientErrorCode = 'network' | 'bad_response';
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: ErrorCode | ClientErrorCode,
+    message: string,
+    /** Field path -> message, for invalid_input (put them beside the form inputs). */
+    readonly fields: Record<string, string> = {},
+  ) {
+    super(message);
+    this.name = 'ApiError';
+  }
+}
+
+export function isApiError(e: unknown, code?: ApiError['code']): e is ApiError {
+  return e instanceof ApiError && (code === undefined || e.code === code);
+}
+
+/**
+ * Web: same origin as the page (the server serves the build and /api). Native: the group's
+ * server, from EXPO_PUBLIC_API_URL at build time.
+ */
+const baseUrl = process.env.EXPO_PUBLIC_API_URL ?? '';
+
+let tokenSource: () => string | null = () => null;
+let onUnauthorized: () => void = () => {};
+
+/** Wired once by the session store, so the client never imports React state. */
+export function configureApi(opts: { token: () => string | null; onUnauthorized: () => void }) {
+  tokenSource = opts.token;
+  onUnauthorized = opts.onUnauthorized;
+}
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+
+/** Call `path`; parse a 2xx body with `schema` (null for 204 answers). */
+export async function api<S extends z.ZodType>(
+  method: Method,
+  path: string,
+  schema: S,
+  body?: unknown,
+): Promise<z.infer<S>>;
+export async function api(method: Method, path: string, schema: null, body?: unknown): Promise<void>;
+export async function api(method: Method, path: string, schema: z.ZodType | null, body?: unknown) {
+  const token = tokenSource();
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  if (token) headers.Authorization = `Bearer ${token}`;
+
+  let res: Response;
+  try {
+    res = await fetch(baseUrl + path, {
+      method,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiError(0, 'network', 'Cannot reach the server. Check the connection and try again.');
+  }
+
+  const json: unknown = await res.json().catch(() => undefined);
+  if (!res.ok) {
+    const parsed = ApiErrorBody.safeParse(json);
+    if (!parsed.success) {
+      throw new ApiError(res.status, 'bad_response', `The server answered ${res.status} without an explanation.`);
+    }
+    const { code, message, fields } = parsed.data.error;
+    // A stored token the server no longer accepts (expired, or the account is gone).
+    if (res.status === 401 && code === 'unauthorized' && token) onUnauthorized();
+    throw new ApiError(res.status, code, message, fields);
+  }
+  if (schema === null) return;
+  const parsed = schema.safeParse(json);
+  if (!parsed.success) {
+    throw new ApiError(res.status, 'bad_response', 'The server sent an answer this app does not understand.');
+  }
+  return parsed.data;
+}
