@@ -1,17 +1,15 @@
-// Who may do what inside a group: pure rules over roles, used by groups and invitations.
-// Owners and admins manage; an admin cannot act on an owner or create one; the group always
-// keeps an owner. Non-members never reach these rules (they get 404 earlier, see access.ts).
+// The role rules of shared/api/roles.ts, enforced: each check throws the error the client sees.
+// Non-members never reach these checks (they get 404 earlier, see access.ts).
 import type { Role } from '@/shared/api/groups';
+import { assignableRoles, canEditMember, canManage } from '@/shared/api/roles';
 import { AppError, forbidden } from '../http/errors';
-
-export const canManage = (role: Role) => role === 'owner' || role === 'admin';
 
 const lastOwner = (what: string) =>
   new AppError('last_owner', 409, `${what}: the group must keep at least one owner; make someone else owner first`);
 
 export function checkInvite(actor: Role, role: Role): void {
   if (!canManage(actor)) throw forbidden('Only owners and admins can invite people');
-  if (role === 'owner' && actor !== 'owner') throw forbidden('Only owners can invite owners');
+  if (!assignableRoles(actor).includes(role)) throw forbidden('Only owners can invite owners');
 }
 
 export function checkSeeInvitations(actor: Role): void {
@@ -20,7 +18,7 @@ export function checkSeeInvitations(actor: Role): void {
 
 export function checkChangeRole(actor: Role, target: Role, next: Role, owners: number): void {
   if (!canManage(actor)) throw forbidden('Only owners and admins can change roles');
-  if (actor !== 'owner' && (target === 'owner' || next === 'owner')) {
+  if (!canEditMember(actor, target) || !assignableRoles(actor).includes(next)) {
     throw forbidden('Only owners can change an owner or make someone owner');
   }
   if (target === 'owner' && next !== 'owner' && owners <= 1) throw lastOwner('Cannot demote the last owner');
@@ -33,5 +31,5 @@ export function checkRemove(actor: Role, target: Role, self: boolean, owners: nu
     return;
   }
   if (!canManage(actor)) throw forbidden('Only owners and admins can remove members');
-  if (target === 'owner' && actor !== 'owner') throw forbidden('Only owners can remove an owner');
+  if (!canEditMember(actor, target)) throw forbidden('Only owners can remove an owner');
 }
