@@ -12,8 +12,8 @@ export function checkInvite(actor: Role, role: Role): void {
   if (!assignableRoles(actor).includes(role)) throw forbidden('Only owners can invite owners');
 }
 
-export function checkSeeInvitations(actor: Role): void {
-  if (!canManage(actor)) throw forbidden('Only owners and admins can see invitations');
+export function checkManageInvitations(actor: Role): void {
+  if (!canManage(actor)) throw forbidden('Only owners and admins can see or withdraw invitations');
 }
 
 export function checkChangeRole(actor: Role, target: Role, next: Role, owners: number): void {

@@ -10,6 +10,8 @@ export async function insertInvitation(db: Db, row: Omit<Invitation, 'acceptedAt
 
 export const deleteInvitation = (db: Db, id: string) => db.getRepository(Invitation).delete({ id });
 
+export const findInGroup = (db: Db, groupId: string, id: string) => db.getRepository(Invitation).findOneBy({ groupId, id });
+
 export const findByTokenHash = (db: Db, tokenHash: string) =>
   db.getRepository(Invitation).findOne({ where: { tokenHash }, relations: { group: true, invitedBy: true } });
 

@@ -7,6 +7,7 @@ import { GroupParams } from '../groups/routes';
 import { parse } from '../http/validate';
 import * as invitations from './use-cases';
 
+const InvitationParams = GroupParams.extend({ invitationId: z.uuid({ message: 'Invitation id must be a UUID' }) });
 const TokenParams = z.object({ token: z.string().min(1).max(200) });
 
 export function routes(deps: Deps): Router {
@@ -21,6 +22,11 @@ export function routes(deps: Deps): Router {
   router.get(groupPaths.invitations(':id'), auth, async (req, res) => {
     const { id } = parse(GroupParams, req.params, 'path');
     res.json(await invitations.listInvitations(deps, currentUser(req), id));
+  });
+  router.delete(groupPaths.pendingInvitation(':id', ':invitationId'), auth, async (req, res) => {
+    const { id, invitationId } = parse(InvitationParams, req.params, 'path');
+    await invitations.revoke(deps, currentUser(req), id, invitationId);
+    res.status(204).end();
   });
   // Readable signed out, so the invite page can say what it is before asking to sign in.
   router.get(groupPaths.invitation(':token'), async (req, res) => {

@@ -13,7 +13,7 @@ import { inTransaction } from '../db/transaction';
 import type { Deps } from '../deps';
 import { findUserByEmail } from '../auth/repository';
 import { noSuchGroup, requireMember } from '../groups/access';
-import { checkInvite, checkSeeInvitations } from '../groups/permissions';
+import { checkInvite, checkManageInvitations } from '../groups/permissions';
 import { addMembership, findGroup, findMembership } from '../groups/repository';
 import { AppError, notFound } from '../http/errors';
 import { invitationMail } from './mail';
@@ -69,9 +69,18 @@ export async function invite(deps: Deps, caller: User, groupId: string, input: C
 }
 
 export async function listInvitations({ db, now }: Deps, caller: User, groupId: string): Promise<InvitationDto[]> {
-  checkSeeInvitations(await requireMember(db, groupId, caller.id));
+  checkManageInvitations(await requireMember(db, groupId, caller.id));
   const at = now();
   return (await repo.unaccepted(db, groupId)).filter((i) => statusOf(i, at) === 'pending').map(toDto);
+}
+
+/** Withdraws an invitation that has not been accepted yet; its link then answers 404. */
+export async function revoke({ db }: Deps, caller: User, groupId: string, invitationId: string): Promise<void> {
+  checkManageInvitations(await requireMember(db, groupId, caller.id));
+  const i = await repo.findInGroup(db, groupId, invitationId);
+  if (!i) throw notFound('No such invitation in this group');
+  if (i.acceptedAt) throw new AppError('invitation_used', 409, 'This invitation was already accepted; remove the member instead');
+  await repo.deleteInvitation(db, i.id);
 }
 
 const noSuchInvitation = () => notFound('This invitation link is not valid; ask for a new one');

@@ -13,8 +13,8 @@ export interface Mailbox {
   stop(): Promise<void>;
 }
 
-/** http(s) URLs in plain text, up to whitespace or a closing quote/bracket. */
-export const URL_PATTERN = /https?:\/\/[^\s<>"')]+/g;
+/** http(s) URLs in plain text, up to whitespace or a closing quote/bracket, minus end punctuation. */
+export const URL_PATTERN = /https?:\/\/[^\s<>"')]*[^\s<>"').,;:!?]/g;
 
 function addresses(field: AddressObject | AddressObject[] | undefined): string[] {
   const list = Array.isArray(field) ? field : field ? [field] : [];

@@ -15,6 +15,7 @@ export const groupPaths = {
   member: (id: string, userId: string) => `/api/groups/${id}/members/${userId}`, // PATCH role, DELETE remove
   leave: (id: string) => `/api/groups/${id}/leave`, // POST
   invitations: (id: string) => `/api/groups/${id}/invitations`, // GET pending, POST invite
+  pendingInvitation: (id: string, invitationId: string) => `/api/groups/${id}/invitations/${invitationId}`, // DELETE revoke (204)
   invitation: (token: string) => `/api/invitations/${token}`, // GET preview (no sign-in needed)
   accept: (token: string) => `/api/invitations/${token}/accept`, // POST (signed in)
 } as const;

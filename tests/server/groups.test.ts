@@ -1,5 +1,7 @@
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { GroupList, GroupSummary, MemberList, type Role } from '@/shared/api/groups';
+import { insertInvitation } from '@/server/invitations/repository';
 import type { RunningServer } from '@/server/server';
 import { bearer, groupWith, signUp, snapshot, testServer } from './helpers';
 
@@ -20,9 +22,12 @@ beforeAll(async () => {
 });
 afterAll(() => server.stop());
 
-/** owner and coowner own it; admin, admin2, member, member2, viewer as named; outsider is not in it. */
-const fullGroup = () =>
-  groupWith(server, [
+/**
+ * owner and coowner own it; admin, admin2, member, member2, viewer as named; outsider is not in
+ * it. One invitation is pending.
+ */
+const fullGroup = async () => {
+  const id = await groupWith(server, [
     [people.owner.id, 'owner'],
     [people.coowner.id, 'owner'],
     [people.admin.id, 'admin'],
@@ -31,6 +36,18 @@ const fullGroup = () =>
     [people.member2.id, 'member'],
     [people.viewer.id, 'viewer'],
   ]);
+  await insertInvitation(server.deps.db, {
+    id: randomUUID(),
+    groupId: id,
+    email: 'pending@example.org',
+    role: 'member',
+    tokenHash: randomUUID(),
+    invitedById: people.owner.id,
+    expiresAt: new Date(Date.now() + 3600_000),
+    createdAt: new Date(),
+  });
+  return id;
+};
 
 describe('creating and listing groups', () => {
   it('POST /api/groups makes the creator owner; GET lists it with the role', async () => {
@@ -135,12 +152,17 @@ describe('bad input changes nothing', () => {
 
 // The role matrix: every actor role (and a non-member) against every group action.
 // Expected status per actor: owner, admin, member, viewer, outsider.
-type Row = [action: string, call: (groupId: string, token: string) => request.Test, expect: Record<Exclude<Part, 'coowner' | 'admin2' | 'member2'>, number>];
+type Row = [action: string, call: (groupId: string, token: string) => PromiseLike<request.Response>, expect: Record<Exclude<Part, 'coowner' | 'admin2' | 'member2'>, number>];
 const invite = (role: Role) => (g: string, t: string) =>
   api().post(`/api/groups/${g}/invitations`).set(bearer(t)).send({ email: `someone-${Math.random().toString(36).slice(2)}@example.org`, role });
 const patch = (who: Part, role: Role) => (g: string, t: string) =>
   api().patch(`/api/groups/${g}/members/${people[who].id}`).set(bearer(t)).send({ role });
 const remove = (who: Part) => (g: string, t: string) => api().delete(`/api/groups/${g}/members/${people[who].id}`).set(bearer(t));
+
+const revoke = async (g: string, t: string) => {
+  const [{ id }] = await server.deps.db.query('SELECT id FROM invitations WHERE groupId = ?', [g]);
+  return api().delete(`/api/groups/${g}/invitations/${id}`).set(bearer(t));
+};
 
 const matrix: Row[] = [
   ['view the group', (g, t) => api().get(`/api/groups/${g}`).set(bearer(t)), { owner: 200, admin: 200, member: 200, viewer: 200, outsider: 404 }],
@@ -150,6 +172,7 @@ const matrix: Row[] = [
   ['invite a member', invite('member'), { owner: 201, admin: 201, member: 403, viewer: 403, outsider: 404 }],
   ['invite an admin', invite('admin'), { owner: 201, admin: 201, member: 403, viewer: 403, outsider: 404 }],
   ['invite an owner', invite('owner'), { owner: 201, admin: 403, member: 403, viewer: 403, outsider: 404 }],
+  ['withdraw an invitation', revoke, { owner: 204, admin: 204, member: 403, viewer: 403, outsider: 404 }],
   ['make a member viewer', patch('member2', 'viewer'), { owner: 200, admin: 200, member: 403, viewer: 403, outsider: 404 }],
   ['make a member admin', patch('member2', 'admin'), { owner: 200, admin: 200, member: 403, viewer: 403, outsider: 404 }],
   ['make a member owner', patch('member2', 'owner'), { owner: 200, admin: 403, member: 403, viewer: 403, outsider: 404 }],

@@ -175,6 +175,36 @@ describe('POST /api/groups/:id/invitations', () => {
   });
 });
 
+describe('DELETE /api/groups/:id/invitations/:invitationId', () => {
+  it('withdraws a pending invitation: its link then answers 404', async () => {
+    const { owner, groupId } = await ownedGroup();
+    const created = await api().post(`/api/groups/${groupId}/invitations`).set(bearer(owner.token)).send({ email: 'gone@example.org', role: 'member' });
+    const token = await tokenMailedTo('gone@example.org');
+    await api().delete(`/api/groups/${groupId}/invitations/${created.body.id}`).set(bearer(owner.token)).expect(204);
+    expect((await api().get(`/api/invitations/${token}`)).status).toBe(404);
+    expect((await api().get(`/api/groups/${groupId}/invitations`).set(bearer(owner.token))).body).toEqual([]);
+    expect((await api().delete(`/api/groups/${groupId}/invitations/${created.body.id}`).set(bearer(owner.token))).status).toBe(404);
+  });
+
+  it('refuses to withdraw an accepted invitation (409)', async () => {
+    const { owner, groupId } = await ownedGroup();
+    const created = await api().post(`/api/groups/${groupId}/invitations`).set(bearer(owner.token)).send({ email: 'kept@example.org', role: 'member' });
+    await api().post(`/api/invitations/${await tokenMailedTo('kept@example.org')}/accept`).set(bearer((await signUp(server)).token)).expect(200);
+    const res = await api().delete(`/api/groups/${groupId}/invitations/${created.body.id}`).set(bearer(owner.token));
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('invitation_used');
+  });
+
+  it('cannot reach an invitation of another group through a group you manage', async () => {
+    const a = await ownedGroup();
+    const b = await ownedGroup();
+    const created = await api().post(`/api/groups/${a.groupId}/invitations`).set(bearer(a.owner.token)).send({ email: 'cross@example.org', role: 'member' });
+    const res = await api().delete(`/api/groups/${b.groupId}/invitations/${created.body.id}`).set(bearer(b.owner.token));
+    expect(res.status).toBe(404);
+    expect((await api().get(`/api/groups/${a.groupId}/invitations`).set(bearer(a.owner.token))).body).toHaveLength(1);
+  });
+});
+
 describe('when the mail cannot be sent', () => {
   it('answers 502 mail_failed and keeps no invitation', async () => {
     const broken = await testServer({ mailer: { send: () => Promise.reject(new Error('relay down')) } });
