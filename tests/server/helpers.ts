@@ -1,11 +1,11 @@
 // Shared set-up for the API tests: a server on port 0 with an in-memory database, fast
 // password hashing, a rate limit tests never reach, and the built-in SMTP fake.
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import type { AuthResponse } from '@/shared/api/auth';
 import type { Role } from '@/shared/api/groups';
 import { addMembership, insertGroup } from '@/server/groups/repository';
 import { startServer, type RunningServer, type StartOptions } from '@/server/server';
-import { randomUUID } from 'node:crypto';
 
 export function testServer(options: StartOptions = {}): Promise<RunningServer> {
   return startServer({
