@@ -1,0 +1,76 @@
+// What the Slate and the Sketches screens use (SketchRepository) and what the sync engine
+// uses (SyncStore). One implementation serves both: local-store.ts.
+import type { SketchFields, SketchFieldsPatch } from '@/shared/api/sketches';
+import type { ConflictFields, Mutation, PullResponse, PushResult } from '@/shared/api/sync';
+
+export interface LocalSketch extends SketchFields {
+  id: string;
+  /** Server version of the base this view is built on (0: never synced). */
+  version: number;
+  /** Changes of this sketch still waiting in the outbox. */
+  pending: number;
+}
+
+export interface LocalConflict extends ConflictFields {
+  id: string;
+}
+
+export interface Revision {
+  recordId: string;
+  clock: number;
+  at: string;
+  fields: Record<string, unknown>;
+}
+
+export interface LocalComment {
+  id: string;
+  sketchId: string;
+  body: string;
+  createdAt: string;
+}
+
+export interface PendingUpload {
+  sha256: string;
+  mimeType: string;
+  /** The bytes, base64: JSON storage on every platform. */
+  base64: string;
+}
+
+export interface SketchRepository {
+  list(opts?: { includeDeleted?: boolean }): Promise<LocalSketch[]>;
+  get(id: string): Promise<LocalSketch | null>;
+  create(init?: Partial<SketchFields>): Promise<LocalSketch>;
+  update(id: string, patch: SketchFieldsPatch): Promise<LocalSketch>;
+  remove(id: string): Promise<void>;
+  revisions(id: string): Promise<Revision[]>;
+  conflicts(): Promise<LocalConflict[]>;
+  /** S21: write the chosen values to the sketch and mark the conflict copy resolved. */
+  resolveConflict(conflictId: string, chosen: SketchFieldsPatch): Promise<void>;
+  addComment(sketchId: string, body: string): Promise<LocalComment>;
+  comments(sketchId: string): Promise<LocalComment[]>;
+  /** S28: keep a photo until the server has it; answers its hash to list in `attachments`. */
+  queueUpload(bytes: Uint8Array, mimeType: string): Promise<string>;
+  cacheRun(key: string, value: unknown): Promise<void>;
+  cachedRun<T>(key: string): Promise<T | undefined>;
+  /** Called after every change of the store (local write or pull). */
+  subscribe(listener: () => void): () => void;
+}
+
+export interface SyncCounts {
+  waiting: number;
+  conflicts: number;
+  rejected: number;
+  uploads: number;
+}
+
+export interface SyncStore {
+  deviceId(): Promise<string>;
+  cursor(): Promise<number>;
+  outbox(limit: number): Promise<Mutation[]>;
+  settle(results: readonly PushResult[]): Promise<void>;
+  /** S16: the page's records and its cursor in one transaction. */
+  storePage(page: PullResponse): Promise<void>;
+  pendingUploads(): Promise<PendingUpload[]>;
+  uploaded(sha256: string): Promise<void>;
+  counts(): Promise<SyncCounts>;
+}

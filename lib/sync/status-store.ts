@@ -1,0 +1,25 @@
+// The sync status every screen can read (sync/SPEC.md S31), as a zustand store outside React
+// so the engine (no React) writes it and hooks/useSyncStatus reads it.
+import { createStore } from 'zustand/vanilla';
+import { statusOf, type StatusInput } from '@/sync/status';
+
+export interface SyncState extends StatusInput {
+  rejected: number;
+  lastError: string | null;
+  lastSyncedAt: string | null;
+}
+
+export const initialSyncState: SyncState = {
+  online: true,
+  syncing: false,
+  waiting: 0,
+  conflicts: 0,
+  rejected: 0,
+  lastError: null,
+  lastSyncedAt: null,
+};
+
+export const createSyncStatusStore = () => createStore<SyncState>(() => ({ ...initialSyncState }));
+export type SyncStatusStore = ReturnType<typeof createSyncStatusStore>;
+
+export const selectStatus = (s: SyncState) => statusOf(s);
