@@ -153,3 +153,68 @@ function loopLabels(pd: PDCode, slots: Map<number, Slot[]>, from: Slot): number[
 export function writhe(o: Oriented): number {
   return o.signs.reduce((s, x) => s + x, 0);
 }
+
+/**
+ * Throws PDError unless the PD code is a planar diagram: with the counterclockwise order at
+ * every crossing, each connected piece of n_i crossings must have n_i + 2 faces (Euler's formula
+ * V - E + F = 2 with E = 2V).
+ */
+export function checkPlanar(pd: PDCode): void {
+  const slots = slotsOf(pd);
+  const key = (s: Slot) => s.crossing * 4 + s.position;
+  const seen = new Set<number>();
+  let faces = 0;
+  pd.forEach((_, crossing) => {
+    for (let position = 0; position < 4; position++) {
+      if (seen.has(crossing * 4 + position)) continue;
+      faces++;
+      let s: Slot = { crossing, position };
+      while (!seen.has(key(s))) {
+        seen.add(key(s));
+        const t = other(slots.get(pd[s.crossing][s.position])!, s);
+        s = { crossing: t.crossing, position: (t.position + 1) % 4 };
+      }
+    }
+  });
+  const pieces = connectedPieces(pd).length;
+  if (faces !== pd.length + 2 * pieces) {
+    throw new PDError(`the PD code is not planar: it has ${faces} faces where a planar diagram with ${pd.length} crossings in ${pieces} piece${pieces === 1 ? '' : 's'} has ${pd.length + 2 * pieces}`);
+  }
+}
+
+/** The crossing indices of each connected piece of the diagram, in order of first crossing. */
+export function connectedPieces(pd: PDCode): number[][] {
+  const parent = pd.map((_, i) => i);
+  const find = (i: number): number => (parent[i] === i ? i : (parent[i] = find(parent[i])));
+  for (const [, [p, q]] of slotsOf(pd)) parent[find(p.crossing)] = find(q.crossing);
+  const pieces = new Map<number, number[]>();
+  pd.forEach((_, i) => {
+    const root = find(i);
+    pieces.set(root, [...(pieces.get(root) ?? []), i]);
+  });
+  return [...pieces.values()];
+}
+
+/**
+ * The same diagram with labels 1, 2, ... numbered along the components in order of travel
+ * (the components and their starting edges as orient() finds them). Orientation is kept: an
+ * over-only component still has increasing labels, so orient() reads the same directions back.
+ */
+export function relabel(o: Oriented): PDCode {
+  const fresh = new Map<number, number>();
+  o.components.flat().forEach((label, i) => fresh.set(label, i + 1));
+  return o.pd.map((x) => x.map((label) => fresh.get(label)!) as unknown as Crossing);
+}
+
+/** Reads a PD code from JSON text: an array of crossings, each an array of four integer labels. */
+export function parsePD(text: string): PDCode {
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch {
+    throw new PDError('a PD code must be JSON: an array of crossings such as [[1,5,2,4],[3,1,4,6],[5,3,6,2]]');
+  }
+  if (!Array.isArray(value)) throw new PDError('a PD code must be an array of crossings');
+  slotsOf(value as PDCode);
+  return value as PDCode;
+}
