@@ -1,6 +1,6 @@
 // The device store: every write lands in the records and, in the same transaction, in the
 // outbox (sync/SPEC.md S8); pulls rebase records on their server snapshots (S16, S17).
-import { SketchFields, sketchDefaults, type SketchFieldsPatch } from '@/shared/api/sketches';
+import { SketchFields, SketchFieldsPatch, sketchDefaults } from '@/shared/api/sketches';
 import type { ConflictFields, Fields, Mutation, Op, PullResponse, PushResult, RecordType } from '@/shared/api/sync';
 import { byClock, mutationFor, settle, type Rejected } from '@/sync/outbox';
 import { applyPulled, type LocalRecord } from '@/sync/rebase';
@@ -106,7 +106,7 @@ export class LocalStore implements SketchRepository, SyncStore {
   }
 
   async update(id: string, patch: SketchFieldsPatch): Promise<LocalSketch> {
-    const fields = { ...patch, updatedAt: patch.updatedAt ?? this.now().toISOString() };
+    const fields = SketchFieldsPatch.parse({ ...patch, updatedAt: patch.updatedAt ?? this.now().toISOString() });
     const r = await this.write('sketch', id, 'update', fields);
     return (await this.get(r.id))!;
   }

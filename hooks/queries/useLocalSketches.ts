@@ -1,0 +1,74 @@
+// Sketches read from the device store (never from the network: sync/SPEC.md S8, S17), kept
+// fresh by the store's change notifications.
+import { useEffect } from 'react';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { SketchFields, SketchFieldsPatch } from '@/shared/api/sketches';
+import { useDevice } from '@/hooks/useDevice';
+
+export const localKeys = {
+  all: (userId: string) => ['local', userId] as const,
+  sketches: (userId: string) => [...localKeys.all(userId), 'sketches'] as const,
+  sketch: (userId: string, id: string) => [...localKeys.all(userId), 'sketch', id] as const,
+  conflicts: (userId: string) => [...localKeys.all(userId), 'conflicts'] as const,
+};
+
+/** Every local query of this user refreshes when the store changes (local write or pull). */
+function useStoreRefresh() {
+  const device = useDevice();
+  const qc = useQueryClient();
+  useEffect(() => {
+    if (!device) return;
+    return device.store.subscribe(() => void qc.invalidateQueries({ queryKey: localKeys.all(device.userId) }));
+  }, [device, qc]);
+  return device;
+}
+
+const local = { staleTime: Infinity, networkMode: 'always' as const };
+
+export function useLocalSketches() {
+  const device = useStoreRefresh();
+  return useQuery({
+    ...local,
+    queryKey: localKeys.sketches(device?.userId ?? ''),
+    queryFn: () => device!.store.list(),
+    enabled: !!device,
+  });
+}
+
+export function useLocalSketch(id: string) {
+  const device = useStoreRefresh();
+  return useQuery({
+    ...local,
+    queryKey: localKeys.sketch(device?.userId ?? '', id),
+    queryFn: () => device!.store.get(id),
+    enabled: !!device,
+  });
+}
+
+export function useConflicts() {
+  const device = useStoreRefresh();
+  return useQuery({
+    ...local,
+    queryKey: localKeys.conflicts(device?.userId ?? ''),
+    queryFn: () => device!.store.conflicts(),
+    enabled: !!device,
+  });
+}
+
+export function useSketchWrites() {
+  const device = useDevice();
+  const need = () => {
+    if (!device) throw new Error('The device store is not open yet');
+    return device.store;
+  };
+  const opts = { networkMode: 'always' as const };
+  return {
+    create: useMutation({ ...opts, mutationFn: (init: Partial<SketchFields>) => need().create(init) }),
+    update: useMutation({ ...opts, mutationFn: ({ id, patch }: { id: string; patch: SketchFieldsPatch }) => need().update(id, patch) }),
+    remove: useMutation({ ...opts, mutationFn: (id: string) => need().remove(id) }),
+    resolve: useMutation({
+      ...opts,
+      mutationFn: ({ conflictId, chosen }: { conflictId: string; chosen: SketchFieldsPatch }) => need().resolveConflict(conflictId, chosen),
+    }),
+  };
+}

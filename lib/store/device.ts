@@ -1,0 +1,36 @@
+// The app's device store and sync engine, one per signed-in account (a shared browser never
+// mixes two people's sketchbooks), opened on first use.
+import { openDatabaseAsync } from 'expo-sqlite';
+import { SyncEngine } from '@/lib/sync/engine';
+import { createSyncStatusStore } from '@/lib/sync/status-store';
+import { httpTransport } from '@/lib/sync/transport';
+import { LocalStore } from './local-store';
+import { migrate, sqliteTables } from './sqlite';
+
+export interface OpenDevice {
+  userId: string;
+  store: LocalStore;
+  engine: SyncEngine;
+}
+
+export const syncStatus = createSyncStatusStore();
+
+const opened = new Map<string, Promise<OpenDevice>>();
+
+/** Web: same origin as the page; native: EXPO_PUBLIC_API_URL (as lib/api.ts). */
+const baseUrl = () => process.env.EXPO_PUBLIC_API_URL ?? '';
+
+export function openDevice(userId: string, token: () => string | null): Promise<OpenDevice> {
+  let d = opened.get(userId);
+  if (!d) {
+    d = (async () => {
+      const db = await openDatabaseAsync(`overstrand-${userId}.db`);
+      await migrate(db);
+      const store = new LocalStore(sqliteTables(db));
+      const engine = new SyncEngine({ store, transport: httpTransport({ baseUrl, token }), status: syncStatus });
+      return { userId, store, engine };
+    })();
+    opened.set(userId, d);
+  }
+  return d;
+}

@@ -1,0 +1,121 @@
+// The device store (lib/store) on both of its tables: memory and the SQLite schema of
+// lib/store/sqlite.ts (run here on better-sqlite3 behind expo-sqlite's async call shapes).
+import Database from 'better-sqlite3';
+import { LocalStore } from '@/lib/store/local-store';
+import { memoryTables } from '@/lib/store/memory';
+import { migrate, migrations, sqliteTables, type SqlDatabase } from '@/lib/store/sqlite';
+import type { Tables } from '@/lib/store/tables';
+import type { PullResponse } from '@/shared/api/sync';
+
+function betterSqlite(db: Database.Database): SqlDatabase {
+  return {
+    execAsync: async (sql) => void db.exec(sql),
+    runAsync: async (sql, ...p) => db.prepare(sql).run(...p),
+    getAllAsync: async <T>(sql: string, ...p: (string | number)[]) => db.prepare(sql).all(...p) as T[],
+    getFirstAsync: async <T>(sql: string, ...p: (string | number)[]) => (db.prepare(sql).get(...p) as T | undefined) ?? null,
+    withTransactionAsync: async (task) => {
+      db.exec('BEGIN');
+      try {
+        await task();
+        db.exec('COMMIT');
+      } catch (e) {
+        db.exec('ROLLBACK');
+        throw e;
+      }
+    },
+  };
+}
+
+const kinds: [string, () => Promise<Tables>][] = [
+  ['memory', async () => memoryTables()],
+  [
+    'sqlite',
+    async () => {
+      const sql = betterSqlite(new Database(':memory:'));
+      await migrate(sql);
+      return sqliteTables(sql);
+    },
+  ],
+];
+
+describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
+  let store: LocalStore;
+  let n = 0;
+  beforeEach(async () => {
+    n = 0;
+    const ids = () => `00000000-0000-4000-8000-${String(++n).padStart(12, '0')}`;
+    store = new LocalStore(await open(), { newId: ids, now: () => new Date('2026-12-01T12:00:00Z') });
+  });
+
+  test('S8: a write shows at once and queues one mutation per write, in clock order', async () => {
+    const s = await store.create({ title: 'first' });
+    await store.update(s.id, { notes: 'more' });
+    expect(await store.get(s.id)).toMatchObject({ title: 'first', notes: 'more', pending: 2, version: 0 });
+    const box = await store.outbox(10);
+    expect(box.map((m) => [m.op, m.clock])).toEqual([['add', 1], ['update', 2]]);
+    expect(new Set(box.map((m) => m.deviceId)).size).toBe(1);
+    expect((await store.revisions(s.id)).map((r) => r.fields.notes)).toEqual(['', 'more']);
+  });
+
+  test('S4: remove is a tombstone: hidden from the list, kept with its content', async () => {
+    const s = await store.create({ title: 'gone' });
+    await store.remove(s.id);
+    expect(await store.list()).toEqual([]);
+    expect((await store.list({ includeDeleted: true }))[0]).toMatchObject({ title: 'gone', deleted: true });
+  });
+
+  test('S16, S17: a stored page rebases, moves the cursor, keeps pending writes', async () => {
+    const s = await store.create({ title: 'first' });
+    await store.settle([{ mutationId: (await store.outbox(1))[0].mutationId, status: 'applied', seq: 1 }]);
+    await store.update(s.id, { title: 'local title' });
+    const page: PullResponse = {
+      changes: [{ seq: 4, record: { id: s.id, type: 'sketch', version: 4, ownerId: 'u', fields: { ...(await store.get(s.id))!, title: 'server title', notes: 'from server' } } }],
+      cursor: 9,
+      hasMore: false,
+    };
+    await store.storePage(page);
+    expect(await store.cursor()).toBe(9);
+    expect(await store.get(s.id)).toMatchObject({ title: 'local title', notes: 'from server', version: 4 });
+    expect((await store.counts()).waiting).toBe(1);
+  });
+
+  test('offline comments, run cache and the upload queue are kept', async () => {
+    const s = await store.create({});
+    await store.addComment(s.id, 'is this the figure eight?');
+    expect((await store.comments(s.id)).map((c) => c.body)).toEqual(['is this the figure eight?']);
+    await store.cacheRun('kh:abc', { ok: 1 });
+    expect(await store.cachedRun('kh:abc')).toEqual({ ok: 1 });
+    // SHA-256 of the empty string (FIPS 180-4 test vector, common practice).
+    expect(await store.queueUpload(new Uint8Array(), 'image/png')).toBe('e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855');
+    expect((await store.pendingUploads()).length).toBe(1);
+  });
+
+  test('S8: a write that fails halfway leaves neither record nor outbox entry', async () => {
+    const tables = await open();
+    let failRecords = false;
+    const flaky: Tables = {
+      ...tables,
+      put: (c, k, v) => (failRecords && c === 'records' ? Promise.reject(new Error('disk full (test)')) : tables.put(c, k, v)),
+      transaction: (work) => tables.transaction(() => work(flaky)),
+    };
+    const s2 = new LocalStore(flaky);
+    const s = await s2.create({ title: 'x' });
+    failRecords = true;
+    await expect(s2.update(s.id, { title: 'y' })).rejects.toThrow('disk full');
+    failRecords = false;
+    expect((await s2.outbox(10)).map((m) => m.op)).toEqual(['add']); // the outbox put was rolled back
+    expect((await s2.get(s.id))?.title).toBe('x');
+    await expect(s2.update(s.id, { diagram: 'not a diagram' as never })).rejects.toThrow();
+    expect((await s2.outbox(10)).length).toBe(1); // invalid fields never reach the outbox
+  });
+});
+
+test('the SQLite schema migrates once and records its version', async () => {
+  const db = new Database(':memory:');
+  const sql = betterSqlite(db);
+  expect(await migrate(sql)).toBe(migrations.length);
+  expect(await migrate(sql)).toBe(migrations.length);
+  expect(db.pragma('user_version', { simple: true })).toBe(migrations.length);
+  const tables = db.prepare("SELECT name FROM sqlite_master WHERE type = 'table' ORDER BY name").all() as { name: string }[];
+  expect(tables.map((t) => t.name)).toEqual(['comments', 'meta', 'outbox', 'records', 'rejected', 'revisions', 'runs', 'uploads']);
+});
