@@ -178,19 +178,18 @@ export class LocalStore implements SketchRepository, SyncStore {
     return (await this.tx((t) => t.list<Mutation>('outbox', '', limit))).sort(byClock);
   }
 
-  settle(results: readonly PushResult[]): Promise<void> {
+  settle(sent: readonly Mutation[], results: readonly PushResult[]): Promise<void> {
     return this.tx(async (t) => {
-      const box = await t.list<Mutation>('outbox');
-      const { done, rejected } = settle(box, results);
+      const { done, rejected } = settle(sent, results);
       const gone = new Set([...done, ...rejected.map((r) => r.mutation.mutationId)]);
-      for (const m of box) if (gone.has(m.mutationId)) await t.remove('outbox', numberKey(m.clock));
+      for (const m of sent) if (gone.has(m.mutationId)) await t.remove('outbox', numberKey(m.clock));
       for (const r of rejected) await t.put('rejected', r.mutation.mutationId, r satisfies Rejected);
     }, true);
   }
 
   storePage(page: PullResponse): Promise<void> {
     return this.tx(async (t) => {
-      const box = await t.list<Mutation>('outbox');
+      const box = (await t.count('outbox')) > 0 ? await t.list<Mutation>('outbox') : [];
       for (const change of page.changes) {
         const ref = 'record' in change ? change.record : change.revoked;
         const key = recordKey(ref.type, ref.id);

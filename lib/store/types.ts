@@ -67,7 +67,8 @@ export interface SyncStore {
   deviceId(): Promise<string>;
   cursor(): Promise<number>;
   outbox(limit: number): Promise<Mutation[]>;
-  settle(results: readonly PushResult[]): Promise<void>;
+  /** S8: `sent` is the batch the results answer. */
+  settle(sent: readonly Mutation[], results: readonly PushResult[]): Promise<void>;
   /** S16: the page's records and its cursor in one transaction. */
   storePage(page: PullResponse): Promise<void>;
   pendingUploads(): Promise<PendingUpload[]>;

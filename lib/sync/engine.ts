@@ -118,7 +118,7 @@ export class SyncEngine {
       const batch = box.filter((m, i) => (bytes += JSON.stringify(m).length) <= pushBatchBytes || i === 0);
       const { results } = await this.o.transport.push({ deviceId, mutations: batch });
       if (results.length !== batch.length) throw new TransportError('server', 'The push answer does not cover the batch');
-      await this.o.store.settle(results);
+      await this.o.store.settle(batch, results);
       this.o.status.setState(await this.o.store.counts());
     }
   }

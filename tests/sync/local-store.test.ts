@@ -66,7 +66,8 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
 
   test('S16, S17: a stored page rebases, moves the cursor, keeps pending writes', async () => {
     const s = await store.create({ title: 'first' });
-    await store.settle([{ mutationId: (await store.outbox(1))[0].mutationId, status: 'applied', seq: 1 }]);
+    const [add] = await store.outbox(1);
+    await store.settle([add], [{ mutationId: add.mutationId, status: 'applied', seq: 1 }]);
     await store.update(s.id, { title: 'local title' });
     const page: PullResponse = {
       changes: [{ seq: 4, record: { id: s.id, type: 'sketch', version: 4, ownerId: 'u', fields: { ...(await store.get(s.id))!, title: 'server title', notes: 'from server' } } }],
