@@ -11,3 +11,12 @@ export function nextPath(next: string | string[] | undefined): string {
 export function withNext(path: string, next: string | undefined): string {
   return next ? `${path}?next=${encodeURIComponent(next)}` : path;
 }
+
+/**
+ * The path being visited, for `?next=`. A layout that redirects before its navigator mounts
+ * gets "/" from usePathname(), so on web the address bar is the truth.
+ */
+export function visitedPath(routerPath: string): string {
+  const loc = globalThis.location;
+  return loc?.pathname ? loc.pathname + loc.search : routerPath;
+}

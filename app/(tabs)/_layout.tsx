@@ -7,7 +7,7 @@ import { AppTabBar } from '@/components/shell/AppTabBar';
 import { destinations } from '@/components/shell/destinations';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { useSession } from '@/hooks/useSession';
-import { withNext } from '@/lib/next-path';
+import { visitedPath, withNext } from '@/lib/next-path';
 import { colors } from '@/constants/theme';
 
 export default function TabsLayout() {
@@ -16,7 +16,7 @@ export default function TabsLayout() {
   const wide = useIsWide();
 
   if (status === 'loading') return <View style={{ flex: 1, backgroundColor: colors.paper }} />;
-  if (status === 'signedOut') return <Redirect href={withNext('/sign-in', pathname) as never} />;
+  if (status === 'signedOut') return <Redirect href={withNext('/sign-in', visitedPath(pathname)) as never} />;
   return (
     <Tabs
       tabBar={(props) => <AppTabBar {...props} wide={wide} />}

@@ -2,7 +2,7 @@
 import { ScrollView, StyleSheet, Text, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { Mark } from '@/components/shell/icons';
-import { chalk, colors, fonts, radius, space, type } from '@/constants/theme';
+import { colors, fonts, radius, space, type } from '@/constants/theme';
 
 export function AuthFrame({ title, lead, children }: { title: string; lead?: string; children: React.ReactNode }) {
   const insets = useSafeAreaInsets();
@@ -11,9 +11,7 @@ export function AuthFrame({ title, lead, children }: { title: string; lead?: str
       keyboardShouldPersistTaps="handled">
       <View style={styles.column}>
         <View style={styles.brand}>
-          <View style={styles.markTile}>
-            <Mark size={26} colors={[chalk[5], chalk[6]]} />
-          </View>
+          <Mark size={40} />
           <Text style={styles.brandText}>Overstrand</Text>
         </View>
         <View style={styles.head}>
@@ -31,7 +29,6 @@ const styles = StyleSheet.create({
   content: { flexGrow: 1, paddingHorizontal: space.lg + 4, paddingBottom: space.xxxl },
   column: { width: '100%', maxWidth: 440, alignSelf: 'center', gap: space.xl },
   brand: { flexDirection: 'row', alignItems: 'center', gap: space.sm + 2 },
-  markTile: { width: 40, height: 40, borderRadius: radius.md, backgroundColor: '#22292E', alignItems: 'center', justifyContent: 'center' },
   brandText: { fontFamily: fonts.semibold, fontSize: 19, color: colors.ink, letterSpacing: -0.2 },
   head: { gap: space.sm, marginTop: space.lg },
   title: { ...type.display, color: colors.ink },

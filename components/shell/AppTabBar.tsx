@@ -1,7 +1,7 @@
 // The tab bar for app/(tabs): a bottom bar on phones (thumb reach), a side rail on wide screens.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { BottomTabBarProps } from 'expo-router/js-tabs';
-import { chalk, colors, fonts, radius, space, type } from '@/constants/theme';
+import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { useSession } from '@/hooks/useSession';
 import { destinations } from './destinations';
 import type { PressState } from '@/components/ui/press-state';
@@ -50,7 +50,7 @@ export function AppTabBar({ state, navigation, insets, wide }: BottomTabBarProps
   return (
     <View role="tablist" style={[styles.rail, { paddingTop: insets.top + space.xl }]}>
       <View style={styles.brand}>
-        <Mark colors={[chalk[5], chalk[6]]} />
+        <Mark size={34} />
         <Text style={styles.brandText}>Overstrand</Text>
       </View>
       <View style={styles.railItems}>{items}</View>

@@ -1,5 +1,7 @@
 // Line icons drawn for Overstrand (no icon font to ship). 24-unit grid, 1.75 stroke.
 import Svg, { Circle, Path, Rect } from 'react-native-svg';
+import { chalk, slate } from '@/constants/theme';
+import { hopfPaths } from './hopf';
 
 type IconProps = { color: string; size?: number };
 
@@ -11,12 +13,13 @@ function Frame({ size = 24, children }: { size?: number; children: React.ReactNo
   );
 }
 
-/** A strand crossing itself once: a kink, the smallest sketch. The gap marks the under-strand. */
+/** A figure-eight curve crossing itself once, broken where it passes under: a sketch. */
 export function SketchesIcon({ color, size }: IconProps) {
   return (
     <Frame size={size}>
-      <Path d="M3 19 C 9 19, 17 14, 17 8.5 A 4.5 4.5 0 0 0 8 8.5 C 8 11, 9.5 13, 11 14.2" stroke={color} strokeWidth={1.75} strokeLinecap="round" />
-      <Path d="M13.6 15.8 C 15.5 17.4, 18 19, 21 19" stroke={color} strokeWidth={1.75} strokeLinecap="round" />
+      <Path
+        d="M13.4 10.3 C 15 7.6, 20.5 7.4, 20.5 12 C 20.5 16.6, 15 16.4, 12 12 C 9 7.6, 3.5 7.4, 3.5 12 C 3.5 16.6, 9 16.4, 10.6 13.7"
+        stroke={color} strokeWidth={1.75} strokeLinecap="round" />
     </Frame>
   );
 }
@@ -47,12 +50,14 @@ export function AccountIcon({ color, size }: IconProps) {
   );
 }
 
-/** The mark: two chalk strands of the Hopf link, one over, one under. */
-export function Mark({ size = 28, colors }: { size?: number; colors: readonly [string, string] }) {
+/** The mark: the Hopf link in chalk on a slate tile. */
+export function Mark({ size = 36 }: { size?: number }) {
+  const [left, right] = hopfPaths(18, 18, 8.4, 4.6, 0.42);
   return (
-    <Svg width={size} height={size} viewBox="0 0 28 28" fill="none">
-      <Path d="M17.2 8.4 A 6.5 6.5 0 1 0 17.2 19.6" stroke={colors[0]} strokeWidth={2.6} strokeLinecap="round" />
-      <Path d="M10.8 8.4 A 6.5 6.5 0 1 1 10.8 19.6" stroke={colors[1]} strokeWidth={2.6} strokeLinecap="round" />
+    <Svg width={size} height={size} viewBox="0 0 36 36" fill="none">
+      <Rect x={0} y={0} width={36} height={36} rx={9} fill={slate.surface} />
+      <Path d={left} stroke={chalk[2]} strokeWidth={2.6} strokeLinecap="round" />
+      <Path d={right} stroke={chalk[1]} strokeWidth={2.6} strokeLinecap="round" />
     </Svg>
   );
 }

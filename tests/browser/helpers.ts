@@ -1,0 +1,38 @@
+// Shared by the browser specs: the browser (Debian chromium via playwright-core), the server URL
+// from run.mjs, and screenshots at the two sizes the app is designed for.
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+
+export const baseUrl = process.env.BROWSER_BASE_URL ?? '';
+if (!baseUrl) throw new Error('Run the browser specs with `npm run test:browser` (it starts the server).');
+
+/** STACK.md: the flags Debian chromium needs here when run as root in a container. */
+const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
+  '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+
+export function launch(): Promise<Browser> {
+  return chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: ARGS });
+}
+
+export const PHONE = { width: 390, height: 844 };
+export const WIDE = { width: 1440, height: 900 };
+
+const ARTIFACTS = join(__dirname, '../artifacts');
+mkdirSync(ARTIFACTS, { recursive: true });
+
+/** Screenshots of the current page at phone and wide size, then back to the page's own size. */
+export async function shoot(page: Page, name: string): Promise<void> {
+  const own = page.viewportSize() ?? PHONE;
+  for (const size of [PHONE, WIDE]) {
+    await page.setViewportSize(size);
+    await page.waitForTimeout(250); // let the layout switch (tabs <-> rail) settle
+    await page.screenshot({ path: join(ARTIFACTS, `${name}-${size.width}x${size.height}.png`) });
+  }
+  await page.setViewportSize(own);
+}
+
+/** A unique address per run, so specs never depend on each other's leftovers. */
+export function uniqueEmail(who: string): string {
+  return `${who}.${Date.now().toString(36)}@seminar.example`;
+}
