@@ -1,0 +1,14 @@
+// The public face of the knot core: diagrams, codes, invariants, families and moves.
+export { checkPlanar, connectedPieces, orient, parsePD, PDError, relabel, writhe } from './pd';
+export type { Crossing, Oriented, PDCode, Slot } from './pd';
+export { blackboardFramings, componentCount, diagram, framingsOf, unknot } from './diagram';
+export type { Diagram, DiagramOptions } from './diagram';
+export { assemble, directions } from './assemble';
+export { braidStrands, checkBraid, fromBraid, parseBraid } from './braid';
+export type { BraidWord } from './braid';
+export { fromDT, MAX_DT_CROSSINGS, parseDT, toDT } from './dt';
+export { fromGauss, toGauss } from './gauss';
+export type { GaussCode } from './gauss';
+export { bracket, bracketOfPD, loopFactor } from './bracket';
+export { jones, jonesFromBracket } from './jones';
+export { Laurent } from '@/shared/poly/laurent';
