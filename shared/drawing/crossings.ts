@@ -159,7 +159,7 @@ export function findCrossings(paths: readonly Path[], o: DrawingOptions): { cros
     if (hits.length > 1) mark('tangle', at, ids(nearest));
     else {
       const along = new Set(cluster.map((c) => c.g)).size * o.spacing;
-      mark(along > 4 * o.tolerance ? 'overlap' : 'touch', at, ids(nearest));
+      mark(along > 10 * o.tolerance ? 'overlap' : 'touch', at, ids(nearest));
     }
   }
 

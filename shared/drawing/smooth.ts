@@ -1,5 +1,6 @@
-// Stroke smoothing: Chaikin corner cutting (Chaikin 1974, "An algorithm for high speed curve
-// generation"), then resampling at even arc length so that later steps see uniform segments.
+// Stroke smoothing: a moving average over even arc length (removes finger jitter), Chaikin
+// corner cutting (Chaikin 1974, "An algorithm for high speed curve generation"), then
+// resampling at even arc length so that later steps see uniform segments.
 // Degenerate input: repeated touch points are dropped; fewer than two distinct points give the
 // points back unchanged.
 
@@ -66,7 +67,24 @@ export function resample(points: readonly Point[], closed: boolean, spacing: num
   return out;
 }
 
-/** Smoothing used for every stroke: Chaikin, then even resampling. */
-export function smoothPath(points: readonly Point[], closed: boolean, spacing: number, rounds = 2): Point[] {
-  return resample(chaikin(dedupe(points), closed, rounds), closed, spacing);
+/** Each point replaced by the mean of its `k` neighbours on each side; open ends stay put. */
+export function movingAverage(points: readonly Point[], closed: boolean, k: number): Point[] {
+  const n = points.length;
+  return points.map((p, i) => {
+    const reach = closed ? Math.min(k, Math.floor((n - 1) / 2)) : Math.min(k, i, n - 1 - i);
+    let x = 0;
+    let y = 0;
+    for (let j = -reach; j <= reach; j++) {
+      const q = points[(i + j + n) % n];
+      x += q.x;
+      y += q.y;
+    }
+    return { x: x / (2 * reach + 1), y: y / (2 * reach + 1) };
+  });
+}
+
+/** Smoothing used for every stroke: averaging over about 2 * spacing each side, Chaikin, resampling. */
+export function smoothPath(points: readonly Point[], closed: boolean, spacing: number, rounds = 1): Point[] {
+  const fine = resample(points, closed, spacing / 2);
+  return resample(chaikin(movingAverage(fine, closed, 4), closed, rounds), closed, spacing);
 }

@@ -1,0 +1,63 @@
+// Gaps cut into under-strands, and the SVG / TikZ exports.
+
+import { analyse } from '@/shared/drawing/analyse';
+import { toSVG, toTikZ } from '@/shared/drawing/export';
+import { visiblePieces } from '@/shared/drawing/pieces';
+import { dist } from '@/shared/drawing/point';
+import { circleCurve, drawCurves } from './drawing-fixtures';
+
+const square = [{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 10 }, { x: 0, y: 10 }];
+
+describe('visible pieces', () => {
+  test('a gap splits an open path in two at the right arc lengths', () => {
+    const pieces = visiblePieces(square, false, [{ from: 5, to: 15 }]);
+    expect(pieces).toHaveLength(2);
+    expect(pieces[0][pieces[0].length - 1]).toEqual({ x: 5, y: 0 });
+    expect(pieces[1][0]).toEqual({ x: 10, y: 5 });
+  });
+
+  test('a closed path with one gap is one piece; a gap across the start wraps', () => {
+    expect(visiblePieces(square, true, [{ from: 5, to: 15 }])).toHaveLength(1);
+    const wrapped = visiblePieces(square, true, [{ from: 35, to: 5 }]);
+    expect(wrapped).toHaveLength(1);
+    expect(wrapped[0][0]).toEqual({ x: 5, y: 0 });
+    expect(wrapped[0][wrapped[0].length - 1]).toEqual({ x: 0, y: 5 });
+  });
+
+  test('under-strands get a gap at each crossing, over-strands none', () => {
+    const a = analyse(drawCurves([circleCurve(200, 200, 50), circleCurve(260, 200, 50)]));
+    expect(a.gaps.map((g) => g.component)).toEqual([a.paths[1].id, a.paths[1].id]);
+    const over = visiblePieces(a.paths[0].points, true, a.gaps.filter((g) => g.component === a.paths[0].id));
+    const under = visiblePieces(a.paths[1].points, true, a.gaps.filter((g) => g.component === a.paths[1].id));
+    expect(over).toHaveLength(1);
+    expect(under).toHaveLength(2);
+    // No visible point of the under-strand lies within the gap around a crossing.
+    for (const c of a.crossings) for (const piece of under) for (const p of piece) expect(dist(p, c.at)).toBeGreaterThan(4);
+  });
+});
+
+describe('export', () => {
+  const a = analyse(drawCurves([circleCurve(200, 200, 50), circleCurve(260, 200, 50)]));
+
+  test('SVG: one path per visible piece, a colour per component', () => {
+    const svg = toSVG(a, { colors: ['red', 'blue'], background: '#223' });
+    expect(svg.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
+    expect(svg.match(/<path /g)).toHaveLength(3);
+    expect(svg.match(/stroke="red"/g)).toHaveLength(1);
+    expect(svg.match(/stroke="blue"/g)).toHaveLength(2);
+    expect(svg).toContain('fill="#223"');
+  });
+
+  test('TikZ: one \\draw per piece, coordinates within the requested size, y pointing up', () => {
+    const tikz = toTikZ(a, { size: 5 });
+    expect(tikz.split('\n')[0]).toBe('\\begin{tikzpicture}[line cap=round, line join=round]');
+    expect(tikz.match(/\\draw/g)).toHaveLength(3);
+    const coords = [...tikz.matchAll(/\((-?[\d.]+),(-?[\d.]+)\)/g)].map((m) => [Number(m[1]), Number(m[2])]);
+    expect(Math.max(...coords.map((c) => c[0]))).toBeCloseTo(5, 1);
+    expect(Math.min(...coords.flat())).toBeGreaterThanOrEqual(0);
+    // The top of the screen picture (smallest y on screen) is the top of the TikZ picture.
+    const top = a.paths[0].points.reduce((m, p) => (p.y < m.y ? p : m));
+    expect(top.y).toBeLessThan(200);
+    expect(Math.max(...coords.map((c) => c[1]))).toBeGreaterThan(3);
+  });
+});

@@ -1,0 +1,68 @@
+// Programmatic drawings for the drawing tests: parametric curves sampled as touch points with
+// deterministic jitter, and a helper that flips crossings so every component alternates.
+
+import { analyse } from '@/shared/drawing/analyse';
+import { Point } from '@/shared/drawing/point';
+import { addStroke, flipCrossing, Sketch } from '@/shared/drawing/sketch';
+
+/** Deterministic jitter in [0, 1): the usual fract(sin(x) * 43758.5453) hash. */
+export function random(seed: number): () => number {
+  let i = 0;
+  return () => {
+    const v = Math.sin(++i * 12.9898 + seed * 78.233) * 43758.5453;
+    return v - Math.floor(v);
+  };
+}
+
+/**
+ * Touch points along a closed parametric curve over [0, 2 pi), ending just short of the start
+ * as a finger would, with up to `noise` pixels of jitter.
+ */
+export function touches(curve: (t: number) => Point, samples: number, noise = 0.6, seed = 1, from = 0): Point[] {
+  const rnd = random(seed);
+  const out: Point[] = [];
+  for (let i = 0; i <= samples * 0.995; i++) {
+    const p = curve(from + (2 * Math.PI * i) / samples);
+    out.push({ x: p.x + (rnd() - 0.5) * 2 * noise, y: p.y + (rnd() - 0.5) * 2 * noise });
+  }
+  return out;
+}
+
+const at = (cx: number, cy: number, r: number, f: (t: number) => [number, number]) => (t: number): Point => {
+  const [x, y] = f(t);
+  return { x: cx + r * x, y: cy + r * y };
+};
+
+/** The usual trefoil projection (three lobes). */
+export const trefoilCurve = at(200, 200, 50, (t) => [Math.sin(t) + 2 * Math.sin(2 * t), Math.cos(t) - 2 * Math.cos(2 * t)]);
+
+/** A four-crossing figure-eight projection. */
+export const figureEightCurve = at(200, 200, 55, (t) => [(2 + Math.cos(2 * t)) * Math.cos(3 * t), (2 + Math.cos(2 * t)) * Math.sin(3 * t)]);
+
+/** A circle drawn counterclockwise as seen on screen (y down). */
+export const circleCurve = (cx: number, cy: number, r: number) => at(cx, cy, r, (t) => [Math.cos(t), -Math.sin(t)]);
+
+/** Draws each curve as one stroke. */
+export function drawCurves(curves: readonly ((t: number) => Point)[], samples = 400, noise = 0.6): Sketch {
+  return curves.reduce((s, c, i) => addStroke(s, touches(c, samples, noise, i + 1)), { components: [], flips: [], nextSeq: 1 } as Sketch);
+}
+
+/** Flips crossings so that, along every component, passages alternate over and under. */
+export function makeAlternating(s: Sketch): Sketch {
+  const a = analyse(s);
+  // For every crossing, whether its current over passage should stay over (first claim wins).
+  const keepOver = new Map<number, boolean>();
+  for (const path of a.paths.filter((p) => p.closed)) {
+    const passes = a.crossings
+      .flatMap((c, i) => [
+        { i, arc: c.overArc, id: c.over, over: true },
+        { i, arc: c.underArc, id: c.under, over: false },
+      ])
+      .filter((p) => p.id === path.id)
+      .sort((p, q) => p.arc - q.arc);
+    passes.forEach((p, k) => {
+      if (!keepOver.has(p.i)) keepOver.set(p.i, p.over === (k % 2 === 0));
+    });
+  }
+  return a.crossings.reduce((acc, c, i) => (keepOver.get(i) ? acc : flipCrossing(acc, { a: c.over, b: c.under, at: c.at })), s);
+}
