@@ -1,9 +1,9 @@
 // The device store: every write lands in the records and, in the same transaction, in the
 // outbox (sync/SPEC.md S8); pulls rebase records on their server snapshots (S16, S17).
 import { SketchFields, SketchFieldsPatch, sketchDefaults } from '@/shared/api/sketches';
-import type { ConflictFields, Fields, Mutation, Op, PullResponse, PushResult, RecordType } from '@/shared/api/sync';
+import type { ConflictFields, Fields, Mutation, Op, PullResponse, PullViewer, PushResult, RecordType } from '@/shared/api/sync';
 import { byClock, mutationFor, settle, type Rejected } from '@/sync/outbox';
-import { applyPulled, type LocalRecord } from '@/sync/rebase';
+import { applyPulled, outOfScope, sameViewer, type LocalRecord } from '@/sync/rebase';
 import { numberKey, type Tables } from './tables';
 import type { LocalComment, LocalConflict, LocalSketch, PendingUpload, Revision, SketchRepository, SyncCounts, SyncStore } from './types';
 
@@ -187,9 +187,18 @@ export class LocalStore implements SketchRepository, SyncStore {
     }, true);
   }
 
-  storePage(page: PullResponse): Promise<void> {
+  storePage(page: PullResponse): Promise<boolean> {
     return this.tx(async (t) => {
       const box = (await t.count('outbox')) > 0 ? await t.list<Mutation>('outbox') : [];
+      const before = await t.get<PullViewer>('meta', 'viewer');
+      await t.put('meta', 'viewer', page.viewer);
+      if (before && !sameViewer(before, page.viewer)) {
+        for (const r of await t.list<LocalRecord>('records')) {
+          if (outOfScope(r, page.viewer, box)) await t.remove('records', recordKey(r.type, r.id));
+        }
+        await t.put('meta', 'cursor', 0);
+        return false;
+      }
       for (const change of page.changes) {
         const ref = 'record' in change ? change.record : change.revoked;
         const key = recordKey(ref.type, ref.id);
@@ -198,7 +207,8 @@ export class LocalStore implements SketchRepository, SyncStore {
         if (effect.kind === 'drop') await t.remove('records', key);
       }
       await t.put('meta', 'cursor', page.cursor);
-    }, page.changes.length > 0);
+      return true;
+    }, true);
   }
 
   pendingUploads(): Promise<PendingUpload[]> {

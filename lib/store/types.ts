@@ -69,8 +69,11 @@ export interface SyncStore {
   outbox(limit: number): Promise<Mutation[]>;
   /** S8: `sent` is the batch the results answer. */
   settle(sent: readonly Mutation[], results: readonly PushResult[]): Promise<void>;
-  /** S16: the page's records and its cursor in one transaction. */
-  storePage(page: PullResponse): Promise<void>;
+  /**
+   * S16: the page's records and its cursor in one transaction. False (page not stored, cursor
+   * back to 0) when the user's groups changed since the last pull (S22a).
+   */
+  storePage(page: PullResponse): Promise<boolean>;
   pendingUploads(): Promise<PendingUpload[]>;
   uploaded(sha256: string): Promise<void>;
   counts(): Promise<SyncCounts>;

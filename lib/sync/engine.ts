@@ -135,8 +135,8 @@ export class SyncEngine {
   private async pullAll(): Promise<void> {
     for (;;) {
       const page = await this.o.transport.pull(await this.o.store.cursor(), this.pageSize);
-      await this.o.store.storePage(page);
-      if (!page.hasMore) return;
+      const stored = await this.o.store.storePage(page);
+      if (stored && !page.hasMore) return;
     }
   }
 }

@@ -101,6 +101,7 @@ export function pull(deps: Deps, user: User, q: PullQuery): Promise<PullResponse
       ),
       cursor: page.cursor,
       hasMore: page.hasMore,
+      viewer: { userId: viewer.userId, groupIds: [...viewer.groups.keys()].sort() },
     };
   });
 }

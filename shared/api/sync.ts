@@ -109,10 +109,15 @@ export const PulledChange = z.union([
   z.object({ seq: z.int(), revoked: z.object({ id: RecordId, type: RecordType }) }), // S22
 ]);
 export type PulledChange = z.infer<typeof PulledChange>;
+/** S22a: whose view a pull answered: the user and the groups they are in, sorted. */
+export const PullViewer = z.object({ userId: z.string(), groupIds: z.array(z.string()) });
+export type PullViewer = z.infer<typeof PullViewer>;
+
 export const PullResponse = z.object({
   changes: z.array(PulledChange),
   cursor: z.int().min(0), // S15: seq of the last change scanned
   hasMore: z.boolean(),
+  viewer: PullViewer,
 });
 export type PullResponse = z.infer<typeof PullResponse>;
 

@@ -58,7 +58,7 @@ describe('push and pull', () => {
   test('S15: an up-to-date pull is empty, hasMore false, cursor unchanged', async () => {
     const { cursor } = await pullAll(server, bob.token);
     const res = await request(server.url).get(`/api/sync/pull?cursor=${cursor}`).set(bearer(bob.token));
-    expect(PullResponse.parse(res.body)).toEqual({ changes: [], cursor, hasMore: false });
+    expect(PullResponse.parse(res.body)).toEqual({ changes: [], cursor, hasMore: false, viewer: { userId: bob.id, groupIds: expect.any(Array) } });
   });
 
   test('S24: a mutation with bad fields is rejected as invalid and changes nothing', async () => {

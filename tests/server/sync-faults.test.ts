@@ -221,3 +221,28 @@ test('S8, S24: a rejected mutation leaves the outbox for the rejected list, coun
   expect(d.status.getState()).toMatchObject({ waiting: 0, rejected: 1 });
   expect((await serverSketches(other.token)).get(id)?.title).toBe('not yours');
 });
+
+test('S22a: joining a group brings its earlier sketches; leaving drops them from the device', async () => {
+  const owner = await signUp(server, 'Group owner');
+  const joiner = await signUp(server, 'Late joiner');
+  const { addMembership, deleteMembership, insertGroup } = await import('@/server/groups/repository');
+  const group = crypto.randomUUID();
+  await insertGroup(server.deps.db, group, 'Knot seminar', owner.user.id);
+  const writer = new Device(url, owner.token);
+  const shared = await writer.store.create({ title: 'shared before you came', groupId: group });
+  expect(await writer.sync()).toBeNull();
+
+  const d = new Device(url, joiner.token);
+  const own = await d.store.create({ title: 'my own' });
+  expect(await d.sync()).toBeNull();
+  expect(await d.store.get(shared.id)).toBeNull();
+
+  await addMembership(server.deps.db, group, joiner.user.id, 'member');
+  expect(await d.sync()).toBeNull();
+  expect((await d.store.get(shared.id))?.title).toBe('shared before you came');
+
+  await deleteMembership(server.deps.db, group, joiner.user.id);
+  expect(await d.sync()).toBeNull();
+  expect(await d.store.get(shared.id)).toBeNull();
+  expect((await d.store.get(own.id))?.title).toBe('my own');
+});

@@ -1,7 +1,7 @@
 // Device side of the protocol: outbox (S5-S8), rebase on pull (S16, S17), cursor pages (S15),
 // scope (S22-S24), back-off (S30) and status (S31).
 import { mutationFor, settle } from '@/sync/outbox';
-import { applyPulled, localOnly, rebase } from '@/sync/rebase';
+import { applyPulled, localOnly, outOfScope, rebase, sameViewer } from '@/sync/rebase';
 import { pageOf } from '@/sync/cursor';
 import { canSee, canWrite, type Viewer } from '@/sync/scope';
 import { backoffDelay, backoffMaxMs } from '@/sync/backoff';
@@ -57,6 +57,23 @@ describe('rebase', () => {
   test('S13, S17: a record made on the device shows defaults plus its writes', () => {
     const r = localOnly('r', 'sketch', [m(1, { title: 'new' }, 'add')], '2026-12-01T00:00:00Z');
     expect(r.fields).toMatchObject({ title: 'new', notes: '', tags: [], deleted: false, groupId: null });
+  });
+});
+
+describe('S22a: viewer changes', () => {
+  const v = { userId: 'me', groupIds: ['g1'] };
+  const shared = (ownerId: string, groupId: string | null) => ({ id: 'r', type: 'sketch' as const, base: { ...rec(3, { groupId }), ownerId }, fields: {} });
+  test('a changed group list is a different viewer', () => {
+    expect(sameViewer(v, { userId: 'me', groupIds: ['g1'] })).toBe(true);
+    expect(sameViewer(v, { userId: 'me', groupIds: ['g1', 'g2'] })).toBe(false);
+    expect(sameViewer(v, { userId: 'you', groupIds: ['g1'] })).toBe(false);
+  });
+  test('only others\' records outside my groups and without my pending writes go', () => {
+    expect(outOfScope(shared('other', 'g9'), v, [])).toBe(true);
+    expect(outOfScope(shared('other', null), v, [])).toBe(true);
+    expect(outOfScope(shared('other', 'g1'), v, [])).toBe(false);
+    expect(outOfScope(shared('me', 'g9'), v, [])).toBe(false);
+    expect(outOfScope(shared('other', 'g9'), v, [m(1, {})])).toBe(false);
   });
 });
 

@@ -19,7 +19,7 @@ function setup(failures: TransportError[]) {
       if (f) throw f;
       return { results: req.mutations.map((m) => ({ mutationId: m.mutationId, status: 'applied' as const, seq: 1 })) };
     },
-    pull: async (cursor) => (calls.push('pull'), { changes: [], cursor, hasMore: false }),
+    pull: async (cursor) => (calls.push('pull'), { changes: [], cursor, hasMore: false, viewer: { userId: 'u', groupIds: [] } }),
     hasUpload: async () => true,
     upload: async () => undefined,
   };

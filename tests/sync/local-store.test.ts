@@ -73,6 +73,7 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
       changes: [{ seq: 4, record: { id: s.id, type: 'sketch', version: 4, ownerId: 'u', fields: { ...(await store.get(s.id))!, title: 'server title', notes: 'from server' } } }],
       cursor: 9,
       hasMore: false,
+      viewer: { userId: 'u', groupIds: [] },
     };
     await store.storePage(page);
     expect(await store.cursor()).toBe(9);
