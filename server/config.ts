@@ -1,4 +1,6 @@
 // Everything the server reads from the environment, in one place, with development defaults.
+import { photoStorageFromEnv, type PhotoStorage } from './photos/store';
+
 export interface Config {
   /** Base URL links in e-mails point to, e.g. http://localhost:8080 (no trailing slash). */
   publicUrl: string;
@@ -16,6 +18,8 @@ export interface Config {
   /** Exported web build to serve (dist/), or null for API only. */
   webDir: string | null;
   mailFrom: string;
+  /** Where board photos are kept: a local folder, or an S3-compatible bucket. */
+  photos: PhotoStorage;
 }
 
 const DEV_SECRET = 'overstrand-development-secret-do-not-use-in-production';
@@ -32,6 +36,7 @@ export function defaultConfig(overrides: Partial<Config> = {}): Config {
     devPages: true,
     webDir: null,
     mailFrom: 'Overstrand <no-reply@overstrand.invalid>',
+    photos: { kind: 'disk', dir: 'data/photos' },
     ...overrides,
   };
 }
@@ -46,6 +51,7 @@ export function configFromEnv(env: NodeJS.ProcessEnv): Partial<Config> {
     ...(env.PUBLIC_URL && { publicUrl: env.PUBLIC_URL.replace(/\/+$/, '') }),
     ...(env.JWT_SECRET && { jwtSecret: env.JWT_SECRET }),
     ...(env.MAIL_FROM && { mailFrom: env.MAIL_FROM }),
+    photos: photoStorageFromEnv(env),
     ...(env.AUTH_RATE_LIMIT && { authRateLimit: { windowMs: 15 * 60 * 1000, limit: Number(env.AUTH_RATE_LIMIT) } }),
   };
 }

@@ -16,6 +16,7 @@ import { noSuchGroup, requireMember } from '../groups/access';
 import { checkInvite, checkManageInvitations } from '../groups/permissions';
 import { addMembership, findGroup, findMembership } from '../groups/repository';
 import { AppError, notFound } from '../http/errors';
+import { notify } from '../notifications/use-cases';
 import { invitationMail } from './mail';
 import * as repo from './repository';
 import { hashToken, newToken } from './token';
@@ -98,8 +99,9 @@ export async function preview({ db, now }: Deps, token: string): Promise<Invitat
   };
 }
 
-export function accept({ db, now }: Deps, caller: User, token: string): Promise<GroupSummary> {
-  return inTransaction(db, async (m) => {
+export async function accept(deps: Deps, caller: User, token: string): Promise<GroupSummary> {
+  const { db, now } = deps;
+  const { joined, invitedById } = await inTransaction(db, async (m) => {
     const i = await repo.findByTokenHash(m, hashToken(token));
     if (!i) throw noSuchInvitation();
     const at = now();
@@ -109,6 +111,8 @@ export function accept({ db, now }: Deps, caller: User, token: string): Promise<
     if (await findMembership(m, i.groupId, caller.id)) throw alreadyMember();
     await addMembership(m, i.groupId, caller.id, i.role);
     await repo.markAccepted(m, i.id, caller.id, at);
-    return { id: i.groupId, name: i.group!.name, role: i.role };
+    return { joined: { id: i.groupId, name: i.group!.name, role: i.role } satisfies GroupSummary, invitedById: i.invitedById };
   });
+  await notify(deps, invitedById, 'invitation_accepted', { groupId: joined.id, groupName: joined.name, who: caller.displayName, role: joined.role });
+  return joined;
 }

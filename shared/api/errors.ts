@@ -15,6 +15,7 @@ export const errorCodes = [
   'last_owner', // 409: the change would leave the group without an owner
   'invitation_expired', // 410: the invitation link is past its expiry
   'payload_too_large', // 413: body over the size limit
+  'unsupported_type', // 415: an upload that is not one of the accepted kinds (checked by content)
   'rate_limited', // 429: too many attempts, try later
   'mail_failed', // 502: the e-mail (e.g. an invitation) could not be sent; nothing was kept
   'internal', // 500: a bug on our side; details are in the server log only

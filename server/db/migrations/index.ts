@@ -2,5 +2,6 @@
 // same list works under tsx, ts-jest and the TypeORM CLI).
 import { Foundation1796145751477 } from './1796145751477-Foundation';
 import { Sync1796145952708 } from './1796145952708-Sync';
+import { Feed1796146642029 } from './1796146642029-Feed';
 
-export const migrations = [Foundation1796145751477, Sync1796145952708];
+export const migrations = [Foundation1796145751477, Sync1796145952708, Feed1796146642029];

@@ -1,0 +1,36 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { CommentRequest, commentPaths } from '@/shared/api/comments';
+import { RecordId } from '@/shared/api/sketches';
+import { currentUser, requireAuth } from '../auth/middleware';
+import type { Deps } from '../deps';
+import { parse } from '../http/validate';
+import * as comments from './use-cases';
+
+const SketchParams = z.object({ id: RecordId });
+const CommentParams = z.object({ commentId: z.uuid({ message: 'Comment id must be a UUID' }) });
+
+export function routes(deps: Deps): Router {
+  const router = Router();
+  const auth = requireAuth(deps);
+  router.get(commentPaths.comments(':id'), auth, async (req, res) => {
+    const { id } = parse(SketchParams, req.params, 'path');
+    res.json(await comments.list(deps, currentUser(req), id));
+  });
+  router.post(commentPaths.comments(':id'), auth, async (req, res) => {
+    const { id } = parse(SketchParams, req.params, 'path');
+    const { body } = parse(CommentRequest, req.body);
+    res.status(201).json(await comments.add(deps, currentUser(req), id, body));
+  });
+  router.patch(commentPaths.comment(':commentId'), auth, async (req, res) => {
+    const { commentId } = parse(CommentParams, req.params, 'path');
+    const { body } = parse(CommentRequest, req.body);
+    res.json(await comments.edit(deps, currentUser(req), commentId, body));
+  });
+  router.delete(commentPaths.comment(':commentId'), auth, async (req, res) => {
+    const { commentId } = parse(CommentParams, req.params, 'path');
+    await comments.remove(deps, currentUser(req), commentId);
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,42 @@
+// The Readout summary the feed shows for a stored diagram: crossings, components and the Jones
+// polynomial, computed with the knot core (shared/knot). `key` groups sketches with the same
+// crossing count and Jones polynomial ("same invariants as").
+import { createHash } from 'node:crypto';
+import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
+import { diagram } from '@/shared/knot/diagram';
+import { jones } from '@/shared/knot/jones';
+import { orient } from '@/shared/knot/pd';
+
+/** Above this the feed leaves Jones to a run rather than block the server on a read. */
+export const feedJonesMaxCrossings = 120;
+
+export interface Summary {
+  crossings: number;
+  components: number | null;
+  jones: string | null;
+  jonesText: string | null;
+  key: string | null;
+}
+
+/**
+ * Degenerate inputs: an empty diagram (nothing drawn) has no Jones polynomial here (null), an
+ * invalid PD code gives null components and Jones, a large one null Jones.
+ */
+export function summarise(d: StoredDiagram): Summary {
+  const crossings = d.pd.length;
+  const none = { crossings, components: null, jones: null, jonesText: null, key: null };
+  if (crossings === 0 && d.unknots === 0) return { ...none, components: 0 };
+  let components: number;
+  let dg: ReturnType<typeof diagram>;
+  try {
+    dg = diagram(d.pd, { unknots: d.unknots });
+    components = orient(d.pd).components.length + d.unknots;
+  } catch {
+    return none;
+  }
+  if (crossings > feedJonesMaxCrossings) return { ...none, components };
+  const v = jones(dg);
+  const json = JSON.stringify(v.toJSON());
+  const key = createHash('sha256').update(`${crossings}|${json}`).digest('hex');
+  return { crossings, components, jones: json, jonesText: v.format('t', 'unicode'), key };
+}

@@ -1,0 +1,55 @@
+// Run results for the feed, read from the Runs area's table (server/runs) by plain SQL, so the
+// feed works before that table exists (no results) and without importing that area. Columns
+// used: runs.id, sketchId, status ('done' = a result), finishedAt, kind, label, parentRunId (a
+// sweep's cells are skipped), ring, reduced, result (JSON with poincareText).
+import type { DataSource, EntityManager } from 'typeorm';
+import type { RunSummary } from '@/shared/api/feed';
+
+type Db = DataSource | EntityManager;
+
+const NEEDED = ['id', 'sketchId', 'status', 'finishedAt', 'kind', 'label', 'parentRunId', 'ring', 'reduced', 'result'];
+
+async function runsTable(db: Db): Promise<boolean> {
+  const rows: { name: string }[] = await db.query(`SELECT name FROM pragma_table_info('runs')`);
+  const have = new Set(rows.map((r) => r.name));
+  return NEEDED.every((n) => have.has(n));
+}
+
+const DONE = `r."status" = 'done' AND r."parentRunId" IS NULL`;
+
+/** SQL for "this sketch has a finished run", or null when there is no runs table. */
+export async function hasResultsSql(db: Db, sketchColumn: string): Promise<string | null> {
+  return (await runsTable(db)) ? `EXISTS (SELECT 1 FROM "runs" r WHERE r."sketchId" = ${sketchColumn} AND ${DONE})` : null;
+}
+
+const marks = (n: number) => Array.from({ length: n }, () => '?').join(',');
+
+export async function latestRuns(db: Db, sketchIds: string[]): Promise<Map<string, RunSummary>> {
+  const out = new Map<string, RunSummary>();
+  if (sketchIds.length === 0 || !(await runsTable(db))) return out;
+  const rows: { id: string; sketchId: string; kind: string; label: string; finishedAt: string; poincare: string | null }[] = await db.query(
+    `SELECT r."id" AS id, r."sketchId" AS sketchId, r."kind" AS kind, r."label" AS label, r."finishedAt" AS finishedAt,
+            json_extract(r."result", '$.poincareText') AS poincare
+       FROM "runs" r WHERE ${DONE} AND r."sketchId" IN (${marks(sketchIds.length)}) ORDER BY r."finishedAt" DESC`,
+    sketchIds,
+  );
+  for (const r of rows) {
+    const summary = [r.label, r.poincare && `Kh Poincaré polynomial ${r.poincare}`].filter(Boolean).join(': ');
+    if (!out.has(r.sketchId)) out.set(r.sketchId, { id: r.id, kind: r.kind, finishedAt: r.finishedAt, summary });
+  }
+  return out;
+}
+
+/** Sketches among `candidates` with a finished run giving the same Khovanov Poincaré polynomial (same ring, reduced or not) as one of `sketchId`'s. */
+export async function sameKhovanov(db: Db, sketchId: string, candidates: string[]): Promise<Set<string>> {
+  if (candidates.length === 0 || !(await runsTable(db))) return new Set();
+  const rows: { sketchId: string }[] = await db.query(
+    `SELECT DISTINCT o."sketchId" AS sketchId FROM "runs" r JOIN "runs" o
+        ON o."ring" = r."ring" AND o."reduced" = r."reduced"
+       AND json_extract(o."result", '$.poincareText') = json_extract(r."result", '$.poincareText')
+     WHERE r."sketchId" = ? AND ${DONE} AND o."status" = 'done' AND o."parentRunId" IS NULL
+       AND o."sketchId" IN (${marks(candidates.length)})`,
+    [sketchId, ...candidates],
+  );
+  return new Set(rows.map((r) => r.sketchId));
+}

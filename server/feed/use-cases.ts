@@ -1,0 +1,164 @@
+// The group feed: sharing (a sync mutation of the sketch's groupId, so devices learn of it by
+// pull like any other edit, sync/SPEC.md S11, S22), the paged feed, a shared sketch's page with
+// photos, comments, fork link and "same invariants as", and forking into my own sketchbook.
+import { randomUUID } from 'node:crypto';
+import type { User } from '@/shared/api/auth';
+import type { FeedItem, FeedPage, FeedQuery, ForkResponse, GroupSketch, InvariantSummary, ShareResponse, SketchRef } from '@/shared/api/feed';
+import { canModerate, canPost } from '@/shared/api/feed-rules';
+import type { Stroke } from '@/shared/api/sketches';
+import type { Mutation, PushResult } from '@/shared/api/sync';
+import { canSee } from '@/sync/scope';
+import { toDtos as commentDtos } from '../comments/use-cases';
+import { commentsOn } from '../comments/repository';
+import type { Sketch, SketchInvariant } from '../db/entities';
+import { inTransaction } from '../db/transaction';
+import type { Deps } from '../deps';
+import { requireMember } from '../groups/access';
+import { AppError, forbidden, notFound } from '../http/errors';
+import { photosOf } from '../photos/repository';
+import { thumbUrl, toDtos as photoDtos } from '../photos/use-cases';
+import { findSketch } from '../sketches/repository';
+import { viewerOf } from '../sync/repository';
+import { push } from '../sync/use-cases';
+import { sketchAccess } from './access';
+import * as repo from './repository';
+import { latestRuns, sameKhovanov } from './runs';
+
+/** A feed thumbnail needs the shape, not every sample: at most this many points per stroke. */
+const THUMB_POINTS = 48;
+const THUMB_STROKES = 60;
+
+function thinStrokes(strokes: Stroke[]): Stroke[] {
+  return strokes.slice(0, THUMB_STROKES).map((s) => {
+    const step = Math.max(1, Math.ceil(s.points.length / THUMB_POINTS));
+    const points = s.points.filter((_, i) => i % step === 0 || i === s.points.length - 1);
+    return { points: points.map(([x, y]) => [Math.round(x * 10) / 10, Math.round(y * 10) / 10]), ...(s.closed && { closed: true }) };
+  });
+}
+
+const summaryOf = (inv: SketchInvariant | undefined, s: Sketch): InvariantSummary => ({
+  crossings: inv?.crossings ?? s.diagram.pd.length,
+  components: inv?.components ?? null,
+  jones: inv?.jones ? JSON.parse(inv.jones) : null,
+  jonesText: inv?.jonesText ?? null,
+});
+
+async function feedItems(deps: Deps, groupId: string, rows: Sketch[]): Promise<FeedItem[]> {
+  const ids = rows.map((s) => s.id);
+  const [users, counts, photos, invariants, runs] = [
+    await repo.usersById(deps.db, rows.map((s) => s.ownerId)),
+    await repo.commentCounts(deps.db, groupId, ids),
+    await repo.firstPhotos(deps.db, ids),
+    await repo.invariantsOf(deps.db, rows),
+    await latestRuns(deps.db, ids),
+  ];
+  return rows.map((s) => ({
+    id: s.id,
+    groupId,
+    title: s.title,
+    tags: s.tags,
+    owner: { id: s.ownerId, displayName: users.get(s.ownerId)?.displayName ?? 'Former member' },
+    updatedAt: s.updatedAt,
+    strokes: thinStrokes(s.diagram.strokes),
+    photoThumbUrl: photos.has(s.id) ? thumbUrl(deps, photos.get(s.id)!.id) : null,
+    invariants: summaryOf(invariants.get(s.id), s),
+    latestRun: runs.get(s.id) ?? null,
+    commentCount: counts.get(s.id) ?? 0,
+    version: s.version,
+  }));
+}
+
+export async function feed(deps: Deps, caller: User, groupId: string, q: FeedQuery): Promise<FeedPage> {
+  await requireMember(deps.db, groupId, caller.id);
+  const hasResults = q.hasResults === undefined ? undefined : q.hasResults === 'true';
+  const rows = await repo.feedSketches(deps.db, { groupId, before: q.cursor, tag: q.tag, ownerId: q.person, hasResults, take: q.limit + 1 });
+  const page = rows.slice(0, q.limit);
+  return { items: await feedItems(deps, groupId, page), nextCursor: rows.length > q.limit ? page[page.length - 1].version : null };
+}
+
+async function refsOf(deps: Deps, rows: Pick<Sketch, 'id' | 'title' | 'ownerId'>[]): Promise<SketchRef[]> {
+  const users = await repo.usersById(deps.db, rows.map((r) => r.ownerId));
+  return rows.map((r) => ({ id: r.id, title: r.title, owner: { id: r.ownerId, displayName: users.get(r.ownerId)?.displayName ?? 'Former member' } }));
+}
+
+/**
+ * Other live sketches of the group whose crossing count and Jones polynomial equal this one's,
+ * or with a finished run giving the same Khovanov Poincare polynomial.
+ */
+async function sameInvariants(deps: Deps, groupId: string, s: Sketch, key: string | null): Promise<SketchRef[]> {
+  const others = (await repo.groupSketchVersions(deps.db, groupId)).filter((o) => o.id !== s.id);
+  const inv = key ? await repo.invariantsOf(deps.db, others) : new Map<string, SketchInvariant>();
+  const kh = await sameKhovanov(deps.db, s.id, others.map((o) => o.id));
+  return refsOf(deps, others.filter((o) => (key && inv.get(o.id)?.key === key) || kh.has(o.id)));
+}
+
+async function forkedFrom(deps: Deps, caller: User, sketchId: string): Promise<SketchRef | null> {
+  const link = await repo.findFork(deps.db, sketchId);
+  const original = link && (await findSketch(deps.db, link.forkedFrom));
+  if (!original || original.deleted || !canSee(await viewerOf(deps.db, caller.id), original)) return null;
+  return (await refsOf(deps, [original]))[0];
+}
+
+export async function groupSketch(deps: Deps, caller: User, groupId: string, sketchId: string): Promise<GroupSketch> {
+  const role = await requireMember(deps.db, groupId, caller.id);
+  const s = await findSketch(deps.db, sketchId);
+  if (!s || s.deleted || s.groupId !== groupId) throw notFound('No such sketch in this group');
+  const [item] = await feedItems(deps, groupId, [s]);
+  const key = (await repo.invariantsOf(deps.db, [s])).get(s.id)?.key ?? null;
+  const isOwner = s.ownerId === caller.id;
+  return {
+    ...item,
+    seenAt: s.seenAt,
+    notes: s.notes,
+    pd: s.diagram.pd,
+    photos: await photoDtos(deps, await photosOf(deps.db, s.id)),
+    comments: await commentDtos(deps, await commentsOn(deps.db, s.id, groupId)),
+    forkedFrom: await forkedFrom(deps, caller, s.id),
+    sameInvariants: await sameInvariants(deps, groupId, s, key),
+    myRole: role,
+    can: { comment: canPost(role), moderate: canModerate(role), uploadPhoto: isOwner || canPost(role), fork: true, unshare: isOwner },
+  };
+}
+
+/** The server writes sketches the way devices do: one sync mutation through push (S11, S23, S24). */
+const SERVER_DEVICE = 'server-feed';
+
+async function pushOne(deps: Deps, caller: User, m: Omit<Mutation, 'mutationId' | 'deviceId' | 'clock' | 'type'>): Promise<PushResult> {
+  const mutation: Mutation = { mutationId: randomUUID(), deviceId: SERVER_DEVICE, clock: deps.now().getTime(), type: 'sketch', ...m };
+  const [result] = (await push(deps, caller, { deviceId: SERVER_DEVICE, mutations: [mutation] })).results;
+  if (result.status === 'rejected') {
+    throw result.reason === 'forbidden' ? forbidden(result.message ?? 'Not allowed') : new AppError('invalid_input', 400, result.message ?? 'Rejected');
+  }
+  return result;
+}
+
+export async function share(deps: Deps, caller: User, sketchId: string, groupId: string | null): Promise<ShareResponse> {
+  const { sketch, isOwner } = await sketchAccess(deps.db, caller.id, sketchId);
+  if (!isOwner) throw forbidden("Only the sketch's owner can share it or stop sharing it");
+  if (groupId) {
+    const role = await requireMember(deps.db, groupId, caller.id);
+    if (!canPost(role)) throw forbidden('Viewers cannot share sketches to this group');
+  }
+  const result = await pushOne(deps, caller, {
+    recordId: sketchId,
+    op: 'update',
+    baseVersion: sketch.version,
+    fields: { groupId, updatedAt: deps.now().toISOString() },
+  });
+  return { id: sketchId, groupId, version: result.version ?? sketch.version };
+}
+
+export async function fork(deps: Deps, caller: User, sketchId: string): Promise<ForkResponse> {
+  const { sketch: s } = await sketchAccess(deps.db, caller.id, sketchId);
+  const id = randomUUID();
+  const now = deps.now().toISOString();
+  const result = await pushOne(deps, caller, {
+    recordId: id,
+    op: 'add',
+    baseVersion: 0,
+    fields: { title: s.title, seenAt: s.seenAt, notes: s.notes, tags: s.tags, diagram: s.diagram, attachments: s.attachments, createdAt: now, updatedAt: now, groupId: null, deleted: false },
+  });
+  await inTransaction(deps.db, (m) => repo.insertFork(m, { sketchId: id, forkedFrom: s.id, createdAt: deps.now() }));
+  return { id, forkedFrom: s.id, version: result.version! };
+}
+

@@ -1,0 +1,81 @@
+// Board photos of a sketch. Whoever may see the sketch sees its photos; its owner and the
+// members (not viewers) of the group it is shared to add them; the uploader removes their own,
+// owners and admins of the group remove any.
+import { randomUUID } from 'node:crypto';
+import type { User } from '@/shared/api/auth';
+import { canModerate, canPost } from '@/shared/api/feed-rules';
+import type { Photo as PhotoDto, PhotoVariant } from '@/shared/api/photos';
+import type { Photo } from '../db/entities';
+import { inTransaction } from '../db/transaction';
+import type { Deps } from '../deps';
+import { sketchAccess } from '../feed/access';
+import { usersById } from '../feed/repository';
+import { AppError, forbidden, notFound } from '../http/errors';
+import { processPhoto } from './image';
+import * as repo from './repository';
+import { checkSignature, signedPhotoUrl } from './signing';
+import { photoStoreFor } from './store';
+
+const keyOf = (id: string, variant: PhotoVariant) => `${id}/${variant}`;
+const storeOf = (deps: Deps) => photoStoreFor(deps.config.photos);
+
+export async function toDtos(deps: Deps, rows: Photo[]): Promise<PhotoDto[]> {
+  const users = await usersById(deps.db, rows.map((p) => p.uploaderId));
+  const now = deps.now();
+  return rows.map((p) => ({
+    id: p.id,
+    sketchId: p.sketchId,
+    uploader: { id: p.uploaderId, displayName: users.get(p.uploaderId)?.displayName ?? 'Former member' },
+    width: p.width,
+    height: p.height,
+    url: signedPhotoUrl(deps.config.jwtSecret, p.id, 'full', now),
+    thumbUrl: thumbUrl(deps, p.id),
+    createdAt: p.createdAt.toISOString(),
+  }));
+}
+
+export const thumbUrl = (deps: Deps, photoId: string) => signedPhotoUrl(deps.config.jwtSecret, photoId, 'thumb', deps.now());
+
+export async function list(deps: Deps, caller: User, sketchId: string): Promise<PhotoDto[]> {
+  await sketchAccess(deps.db, caller.id, sketchId);
+  return toDtos(deps, await repo.photosOf(deps.db, sketchId));
+}
+
+export async function upload(deps: Deps, caller: User, sketchId: string, file: Buffer): Promise<PhotoDto> {
+  const { isOwner, role } = await sketchAccess(deps.db, caller.id, sketchId);
+  if (!isOwner && !(role && canPost(role))) throw forbidden('Viewers cannot add photos');
+  const img = await processPhoto(file); // before anything is stored
+  const row: Photo = { id: randomUUID(), sketchId, uploaderId: caller.id, width: img.width, height: img.height, bytes: img.full.length, createdAt: deps.now() };
+  const store = storeOf(deps);
+  try {
+    await store.put(keyOf(row.id, 'full'), img.full, 'image/jpeg');
+    await store.put(keyOf(row.id, 'thumb'), img.thumb, 'image/jpeg');
+    await inTransaction(deps.db, (m) => repo.insertPhoto(m, row));
+  } catch (err) {
+    await Promise.all([store.delete(keyOf(row.id, 'full')), store.delete(keyOf(row.id, 'thumb'))]).catch(() => undefined);
+    throw err;
+  }
+  return (await toDtos(deps, [row]))[0];
+}
+
+export async function remove(deps: Deps, caller: User, photoId: string): Promise<void> {
+  const p = await repo.findPhoto(deps.db, photoId);
+  if (!p) throw notFound('No such photo');
+  const { role } = await sketchAccess(deps.db, caller.id, p.sketchId).catch(() => {
+    throw notFound('No such photo');
+  });
+  if (p.uploaderId !== caller.id && !(role && canModerate(role))) throw forbidden('Only the person who added a photo, an admin or an owner can remove it');
+  await inTransaction(deps.db, (m) => repo.deletePhoto(m, p.id));
+  const store = storeOf(deps);
+  await Promise.all([store.delete(keyOf(p.id, 'full')), store.delete(keyOf(p.id, 'thumb'))]);
+}
+
+/** The bytes behind a signed URL (see signing.ts). */
+export async function read(deps: Deps, photoId: string, variant: PhotoVariant, exp: number, sig: string): Promise<Buffer> {
+  if (!checkSignature(deps.config.jwtSecret, photoId, variant, exp, sig, deps.now())) {
+    throw new AppError('forbidden', 403, 'This photo link is invalid or has expired; reload the page');
+  }
+  const bytes = (await repo.findPhoto(deps.db, photoId)) && (await storeOf(deps).get(keyOf(photoId, variant)));
+  if (!bytes) throw notFound('No such photo');
+  return bytes;
+}
