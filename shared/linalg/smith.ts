@@ -20,7 +20,7 @@ export function smith(m: Sparse<Int>): Smith {
   const { pivots, rest } = eliminateUnits(integers, m);
   const diagonal = diagonalise(rest);
   const primary = diagonal.flatMap(primePowers).sort((a, b) => Z.sign(Z.sub(a, b)));
-  return { rank: pivots + diagonal.length, invariants: invariantFactors(primary), primary };
+  return { rank: pivots + diagonal.length, invariants: invariantFactors(diagonal), primary };
 }
 
 // The absolute values of the nonzero diagonal entries of an equivalent diagonal matrix.
@@ -66,9 +66,13 @@ function diagonalise(rows: Map<number, Int>[]): Int[] {
   }
 }
 
-/** n = p1^e1 ... as [p1^e1, ...]; 1 gives []. Trial division: torsion orders here are small. */
+/** n = p1^e1 ... as [p1^e1, ...] in increasing p; 1 gives []. Trial division: torsion orders here are small. */
 export function primePowers(n: Int): Int[] {
-  const out: Int[] = [];
+  return factor(n).map(([, power]) => power);
+}
+
+function factor(n: Int): [Int, Int][] {
+  const out: [Int, Int][] = [];
   let rest = Z.abs(n);
   for (let p: Int = 2; Z.cmpAbs(Z.mul(p, p), rest) <= 0; p = Z.add(p, 1)) {
     let power: Int = 1;
@@ -76,26 +80,19 @@ export function primePowers(n: Int): Int[] {
       power = Z.mul(power, p);
       rest = Z.divExact(rest, p);
     }
-    if (power !== 1) out.push(power);
+    if (power !== 1) out.push([p, power]);
   }
-  if (rest !== 1) out.push(rest);
+  if (rest !== 1) out.push([rest, rest]);
   return out;
 }
 
-/** Groups prime powers into invariant factors d1 | d2 | ... (ascending). */
-function invariantFactors(primary: Int[]): Int[] {
+/** Groups the prime powers of the diagonal entries into invariant factors d1 | d2 | ... (ascending). */
+function invariantFactors(diagonal: Int[]): Int[] {
   const byPrime = new Map<string, Int[]>();
-  for (const q of primary) {
-    const key = smallestPrime(q).toString();
-    byPrime.set(key, [...(byPrime.get(key) ?? []), q]);
-  }
+  for (const [p, power] of diagonal.flatMap(factor)) byPrime.set(p.toString(), [...(byPrime.get(p.toString()) ?? []), power]);
   const lists = [...byPrime.values()].map((l) => l.sort((a, b) => Z.sign(Z.sub(b, a))));
   const count = Math.max(0, ...lists.map((l) => l.length));
   const out: Int[] = [];
   for (let k = 0; k < count; k++) out.push(lists.reduce<Int>((acc, l) => (k < l.length ? Z.mul(acc, l[k]) : acc), 1));
   return out.reverse();
-}
-
-function smallestPrime(q: Int): Int {
-  for (let p: Int = 2; ; p = Z.add(p, 1)) if (Z.isZero(Z.rem(q, p))) return p;
 }
