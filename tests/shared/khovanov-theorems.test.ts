@@ -1,0 +1,158 @@
+// Theorems about Khovanov homology, checked on generated diagrams (seeded random braids), and
+// the fast engine against the reference cube. Each property names its source.
+
+import { cubeKhovanov } from '@/shared/khovanov/cube';
+import { khovanov, KhCancelled, KhGroup, KhRing } from '@/shared/khovanov';
+import { orient, PDCode } from '@/shared/knot/pd';
+import { integers, primeField, rationals, Ring } from '@/shared/linalg/ring';
+import { pdOf, random, randomWord, relabel, table } from './khovanov-fixtures';
+
+const rnd = random(20261201);
+/** Random braid words on 3 or 4 strands, `min`..`max` crossings. */
+const words = (count: number, min: number, max: number, alternating = false): number[][] =>
+  Array.from({ length: count }, () => randomWord(rnd, 3 + Math.floor(rnd() * 2), min + Math.floor(rnd() * (max - min + 1)), alternating));
+
+const small = words(10, 3, 9);
+const medium = words(8, 8, 14);
+const alternating = words(8, 4, 12, true);
+
+const kh = (pd: PDCode, ring: KhRing, reduced = false, component = 0): KhGroup[] => khovanov(pd, { ring, reduced, component, eulerCheck: false }).groups;
+const at = (groups: readonly KhGroup[], i: number, j: number): KhGroup | undefined => groups.find((g) => g.i === i && g.j === j);
+const dim = (groups: readonly KhGroup[], i: number, j: number): number => at(groups, i, j)?.free ?? 0;
+const cells = (...tables: (readonly KhGroup[])[]): [number, number][] => {
+  const keys = new Set(tables.flat().flatMap((g) => [`${g.i},${g.j}`, `${g.i - 1},${g.j}`, `${g.i},${g.j - 1}`, `${g.i},${g.j + 1}`]));
+  return [...keys].map((k) => k.split(',').map(Number) as [number, number]);
+};
+
+describe('fast engine = reference cube', () => {
+  const rings: [string, Ring<unknown>, KhRing][] = [
+    ['Z', integers as Ring<unknown>, 'Z'],
+    ['Q', rationals as Ring<unknown>, 'Q'],
+    ['F2', primeField(2) as Ring<unknown>, 'F2'],
+    ['F3', primeField(3) as Ring<unknown>, 'F3'],
+  ];
+  it.each(small.map((w) => [w.join(' '), w]))('braid %s', (_, word) => {
+    const pd = pdOf(word as number[]);
+    const marked = orient(pd).components[0][0];
+    for (const [name, ring, khRing] of rings) {
+      expect([name, table(kh(pd, khRing))]).toEqual([name, table(cubeKhovanov(pd, ring))]);
+      expect([name, 'reduced', table(kh(pd, khRing, true))]).toEqual([name, 'reduced', table(cubeKhovanov(pd, ring, marked))]);
+    }
+  });
+});
+
+describe('theorems on generated diagrams', () => {
+  it('graded Euler characteristic = (q + q^-1) V, reduced = V (Khovanov 2000, arXiv math/9908171; Bar-Natan 2002 normalisation)', () => {
+    for (const w of [...small, ...medium]) {
+      for (const reduced of [false, true]) {
+        const r = khovanov(pdOf(w), { ring: 'Z', reduced });
+        expect([w.join(' '), reduced, r.euler?.ok]).toEqual([w.join(' '), reduced, true]);
+      }
+    }
+  });
+
+  it('rank over Q is at least 2^components (Lee 2005, arXiv math/0210213: Lee homology has dimension 2^c)', () => {
+    for (const w of [...small, ...medium]) {
+      const pd = pdOf(w);
+      const total = kh(pd, 'Q').reduce((s, g) => s + g.free, 0);
+      expect(total).toBeGreaterThanOrEqual(2 ** orient(pd).components.length);
+    }
+  });
+
+  it('alternating non-split links are thin with only Z/2 torsion (Lee 2005; Shumakovitch 2014, arXiv math/0405474)', () => {
+    for (const w of alternating) {
+      const r = khovanov(pdOf(w), { ring: 'Z' });
+      expect([w.join(' '), r.thin, r.width <= 2]).toEqual([w.join(' '), true, true]);
+      expect(r.groups.flatMap((g) => g.torsion).filter((t) => t !== 2)).toEqual([]);
+      expect(khovanov(pdOf(w), { ring: 'Z', reduced: true }).width).toBe(1);
+    }
+  });
+
+  it('universal coefficients relate Z to F2 and F3 (H^i(C; F_p) = H^i (x) F_p + Tor(H^{i+1}, F_p))', () => {
+    for (const w of [...small, ...medium.slice(0, 4)]) {
+      const pd = pdOf(w);
+      const z = kh(pd, 'Z');
+      const pTorsion = (p: number, i: number, j: number) => (at(z, i, j)?.torsion ?? []).filter((t) => t % p === 0).length;
+      for (const p of [2, 3]) {
+        const f = kh(pd, `F${p}`);
+        for (const [i, j] of cells(z, f)) {
+          expect([w.join(' '), p, i, j, dim(f, i, j)]).toEqual([w.join(' '), p, i, j, dim(z, i, j) + pTorsion(p, i, j) + pTorsion(p, i + 1, j)]);
+        }
+      }
+    }
+  });
+
+  it('over F2, unreduced = reduced (x) (q + q^-1), at any component (Shumakovitch 2014, arXiv math/0405474)', () => {
+    for (const w of [...small, ...medium.slice(0, 4)]) {
+      const pd = pdOf(w);
+      const un = kh(pd, 'F2');
+      const count = orient(pd).components.length;
+      for (let c = 0; c < count; c++) {
+        const red = kh(pd, 'F2', true, c);
+        for (const [i, j] of cells(un, red)) expect([w.join(' '), c, i, j, dim(un, i, j)]).toEqual([w.join(' '), c, i, j, dim(red, i, j - 1) + dim(red, i, j + 1)]);
+      }
+    }
+  });
+
+  it('the mirror dualises: free (i,j) -> (-i,-j), torsion (i,j) -> (1-i,-j) (Khovanov 2000, arXiv math/9908171, Sect. 7, from memory)', () => {
+    for (const w of [...small, ...medium.slice(0, 3)]) {
+      const z = kh(pdOf(w), 'Z');
+      const m = kh(pdOf(w.map((k) => -k)), 'Z');
+      const dual = new Map<string, { free: number; torsion: number[] }>();
+      const cell = (i: number, j: number) => dual.get(`${i},${j}`) ?? dual.set(`${i},${j}`, { free: 0, torsion: [] }).get(`${i},${j}`)!;
+      for (const g of z) {
+        cell(-g.i, -g.j).free += g.free;
+        cell(1 - g.i, -g.j).torsion.push(...g.torsion);
+      }
+      const expected = [...dual]
+        .map(([k, v]) => ({ i: Number(k.split(',')[0]), j: Number(k.split(',')[1]), free: v.free, torsion: v.torsion.sort((a, b) => a - b) }))
+        .filter((g) => g.free > 0 || g.torsion.length > 0)
+        .sort((a, b) => a.i - b.i || a.j - b.j);
+      expect(table(m)).toEqual(table(expected));
+    }
+  });
+});
+
+describe('invariance (Kh is a link invariant: Khovanov 2000; Markov 1936 for braids)', () => {
+  it('under relabelling the edges and reordering the crossings of the PD code', () => {
+    for (const w of medium.slice(0, 4)) {
+      const pd = pdOf(w);
+      expect(table(kh(relabel(pd, rnd), 'Z'))).toEqual(table(kh(pd, 'Z')));
+    }
+  });
+
+  it('under braid conjugation, stabilisation, R2 pairs and braid relations', () => {
+    for (const w of medium.slice(0, 5)) {
+      const strands = Math.max(...w.map(Math.abs)) + 1;
+      const base = table(kh(pdOf(w), 'Z'));
+      const k = 1 + Math.floor(rnd() * (w.length - 1));
+      const g = 1 + Math.floor(rnd() * (strands - 1));
+      const variants = [
+        [...w.slice(k), ...w.slice(0, k)], // conjugation
+        [...w, rnd() < 0.5 ? strands : -strands], // Markov stabilisation
+        [...w.slice(0, k), g, -g, ...w.slice(k)], // Reidemeister II
+        [...w.slice(0, k), 1, 2, 1, -2, -1, -2, ...w.slice(k)], // s1 s2 s1 = s2 s1 s2 (Reidemeister III)
+      ];
+      for (const v of variants) expect([v.join(' '), table(kh(pdOf(v), 'Z'))]).toEqual([v.join(' '), base]);
+    }
+  });
+});
+
+describe('progress and cancellation', () => {
+  it('reports each merged crossing and the complex size', () => {
+    const pd = pdOf([1, -2, 1, -2, 1, 2]);
+    const seen: number[] = [];
+    khovanov(pd, { ring: 'Q', onProgress: (p) => {
+      expect(p.total).toBe(pd.length);
+      expect(p.objects).toBeGreaterThan(0);
+      seen.push(p.fraction);
+    } });
+    expect(seen).toEqual(pd.map((_, k) => (k + 1) / pd.length));
+  });
+
+  it('stops with KhCancelled when the signal is aborted', () => {
+    const signal = { aborted: false };
+    const run = () => khovanov(pdOf([1, 2, 1, 2, 1, 2, 1, 2]), { ring: 'Z', signal, onProgress: (p) => (signal.aborted = p.merged >= 2) });
+    expect(run).toThrow(KhCancelled);
+  });
+});
