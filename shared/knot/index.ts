@@ -12,3 +12,5 @@ export type { GaussCode } from './gauss';
 export { bracket, bracketOfPD, loopFactor } from './bracket';
 export { jones, jonesFromBracket } from './jones';
 export { Laurent } from '@/shared/poly/laurent';
+export * as families from './families';
+export { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, reverseComponent, torusLink, twistKnot } from './families';
