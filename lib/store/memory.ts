@@ -32,12 +32,26 @@ export function memoryTables(disk: MemoryDisk = memoryDisk()): Tables {
       return sortedKeys(c, prefix).length;
     },
     async transaction(work) {
-      const before = new Map([...disk].map(([c, t]) => [c, new Map(t)]));
+      // An undo log of the keys this transaction wrote, replayed backwards on failure.
+      const undo: [Collection, string, string | undefined][] = [];
+      const inTx: Tables = {
+        ...tables,
+        put: async (c, key, value) => {
+          undo.push([c, key, table(c).get(key)]);
+          await tables.put(c, key, value);
+        },
+        remove: async (c, key) => {
+          undo.push([c, key, table(c).get(key)]);
+          await tables.remove(c, key);
+        },
+      };
       try {
-        return await work(tables);
+        return await work(inTx);
       } catch (e) {
-        disk.clear();
-        for (const [c, t] of before) disk.set(c, t);
+        for (const [c, key, old] of undo.reverse()) {
+          if (old === undefined) table(c).delete(key);
+          else table(c).set(key, old);
+        }
         throw e;
       }
     },

@@ -4,7 +4,7 @@
 import type { DataSource, EntityManager, ObjectLiteral, SelectQueryBuilder } from 'typeorm';
 
 import type { Role } from '@/shared/api/groups';
-import type { SketchFields } from '@/shared/api/sketches';
+import { sketchFieldNames, type SketchFields } from '@/shared/api/sketches';
 import type { ConflictFields, PushResult, RecordType, SyncRecord } from '@/shared/api/sync';
 import type { StoredState } from '@/sync/merge';
 import type { Scope, Viewer } from '@/sync/scope';
@@ -36,13 +36,14 @@ export async function loadRecord(db: Db, type: RecordType, id: string): Promise<
   return c && { state: { fields: c.fields, writers: c.writers, version: c.version }, scope: { ownerId: c.ownerId, groupId: null } };
 }
 
+/** Insert or update in one statement: TypeORM's save() would read the row back and deep-merge it. */
 export async function saveRecord(db: Db, type: RecordType, id: string, ownerId: string, state: StoredState): Promise<void> {
-  if (type === 'sketch') {
-    const fields = state.fields as SketchFields;
-    await db.getRepository(Sketch).save({ id, ownerId, ...fields, version: state.version, writers: state.writers });
-  } else {
-    await db.getRepository(SyncConflict).save({ id, ownerId, fields: state.fields as ConflictFields, version: state.version, writers: state.writers });
-  }
+  const { fields, version, writers } = state;
+  const [entity, row, columns] =
+    type === 'sketch'
+      ? [Sketch, { id, ownerId, ...(fields as SketchFields), version, writers }, [...sketchFieldNames, 'version', 'writers']]
+      : [SyncConflict, { id, ownerId, fields: fields as ConflictFields, version, writers }, ['fields', 'version', 'writers']];
+  await db.createQueryBuilder().insert().into(entity).values(row as object).orUpdate(columns, ['id']).execute();
 }
 
 export const snapshotOf = (type: RecordType, id: string, ownerId: string, state: StoredState): SyncRecord => ({
@@ -80,11 +81,22 @@ export function whereVisible<T extends ObjectLiteral>(qb: SelectQueryBuilder<T>,
   return qb.andWhere(`(${alias}.ownerId = :me${inGroup})`, { me: v.userId, groups });
 }
 
-/** Changes after `cursor` up to `head` that concern the viewer (S15, S22), at most `take`. */
-export function changesFor(db: Db, v: Viewer, cursor: number, head: number, take: number): Promise<SyncChange[]> {
-  const qb = db.getRepository(SyncChange).createQueryBuilder('c').where('c.seq > :cursor AND c.seq <= :head', { cursor, head });
-  return whereVisible(qb, 'c', v, ['groupId', 'prevGroupId']).orderBy('c.seq', 'ASC').limit(take).getMany();
+const visibleChanges = (db: Db, v: Viewer, after: number, upTo: number) =>
+  whereVisible(
+    db.getRepository(SyncChange).createQueryBuilder('c').where('c.seq > :after AND c.seq <= :upTo', { after, upTo }),
+    'c',
+    v,
+    ['groupId', 'prevGroupId'],
+  ).orderBy('c.seq', 'ASC');
+
+/** Seq and snapshot size of the changes after `cursor` up to `head` the viewer may see, at most `take` (S15, S22). */
+export async function changeSizes(db: Db, v: Viewer, cursor: number, head: number, take: number) {
+  const rows = await visibleChanges(db, v, cursor, head).select('c.seq', 'seq').addSelect('LENGTH(c.snapshot)', 'bytes').limit(take).getRawMany<{ seq: number; bytes: number }>();
+  return rows.map((r) => ({ seq: Number(r.seq), bytes: Number(r.bytes) }));
 }
+
+/** The whole visible changes in (after, upTo]. */
+export const changesBetween = (db: Db, v: Viewer, after: number, upTo: number) => visibleChanges(db, v, after, upTo).getMany();
 
 export const findApplied = (db: Db, mutationId: string) => db.getRepository(SyncMutation).findOneBy({ mutationId });
 

@@ -11,6 +11,7 @@ import {
   type PullResponse,
   type PushRequest,
   type PushResult,
+  maxPullPageBytes,
 } from '@/shared/api/sync';
 import { pageOf } from '@/sync/cursor';
 import { mergeMutation, type ConflictCopy } from '@/sync/merge';
@@ -91,10 +92,12 @@ export function pull(deps: Deps, user: User, q: PullQuery): Promise<PullResponse
   return inTransaction(deps.db, async (em) => {
     const viewer = await repo.viewerOf(em, user.id);
     const head = await repo.headSeq(em); // read before the rows (S15)
-    const rows = await repo.changesFor(em, viewer, q.cursor, head, q.limit + 1);
-    const page = pageOf(rows, q.limit, q.cursor, head);
+    // Sizes first, so only the rows that fit the page are read and parsed.
+    const sizes = await repo.changeSizes(em, viewer, q.cursor, head, q.limit + 1);
+    const page = pageOf(sizes, { limit: q.limit, maxBytes: maxPullPageBytes, sizeOf: (c) => c.bytes }, q.cursor, head);
+    const rows = page.rows.length ? await repo.changesBetween(em, viewer, q.cursor, page.rows[page.rows.length - 1].seq) : [];
     return {
-      changes: page.rows.map((c) =>
+      changes: rows.map((c) =>
         canSee(viewer, { ownerId: c.ownerId, groupId: c.groupId })
           ? { seq: c.seq, record: c.snapshot }
           : { seq: c.seq, revoked: { id: c.recordId, type: c.recordType } }, // S22

@@ -98,6 +98,8 @@ export type PushResponse = z.infer<typeof PushResponse>;
 
 export const defaultPullLimit = 200;
 export const maxPullLimit = 500;
+/** S15: a page also stops past this many bytes of records (at least one record). */
+export const maxPullPageBytes = 1024 * 1024;
 export const PullQuery = z.object({
   cursor: z.coerce.number().int().min(0).default(0),
   limit: z.coerce.number().int().min(1).max(maxPullLimit).default(defaultPullLimit),

@@ -80,14 +80,19 @@ describe('S22a: viewer changes', () => {
 describe('pageOf', () => {
   const rows = (...seqs: number[]) => seqs.map((seq) => ({ seq }));
   test('S15: a full page says hasMore and its cursor is its last seq', () => {
-    expect(pageOf(rows(3, 4, 7), 2, 0, 20)).toEqual({ rows: rows(3, 4), cursor: 4, hasMore: true });
+    expect(pageOf(rows(3, 4, 7), { limit: 2 }, 0, 20)).toEqual({ rows: rows(3, 4), cursor: 4, hasMore: true });
   });
   test('S15: the last page moves the cursor to the head even past invisible changes', () => {
-    expect(pageOf(rows(3), 2, 0, 20)).toEqual({ rows: rows(3), cursor: 20, hasMore: false });
-    expect(pageOf([], 2, 7, 20)).toEqual({ rows: [], cursor: 20, hasMore: false });
+    expect(pageOf(rows(3), { limit: 2 }, 0, 20)).toEqual({ rows: rows(3), cursor: 20, hasMore: false });
+    expect(pageOf([], { limit: 2 }, 7, 20)).toEqual({ rows: [], cursor: 20, hasMore: false });
+  });
+  test('S15: a page stops at its byte budget, but always holds one row', () => {
+    const sized = { limit: 10, maxBytes: 25, sizeOf: () => 10 };
+    expect(pageOf(rows(1, 2, 3, 4), sized, 0, 9)).toEqual({ rows: rows(1, 2), cursor: 2, hasMore: true });
+    expect(pageOf(rows(1, 2), { ...sized, maxBytes: 5 }, 0, 9)).toEqual({ rows: rows(1), cursor: 1, hasMore: true });
   });
   test('S15: the cursor never moves back', () => {
-    expect(pageOf([], 5, 30, 20).cursor).toBe(30);
+    expect(pageOf([], { limit: 5 }, 30, 20).cursor).toBe(30);
   });
 });
 

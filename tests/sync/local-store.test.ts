@@ -95,11 +95,11 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
   test('S8: a write that fails halfway leaves neither record nor outbox entry', async () => {
     const tables = await open();
     let failRecords = false;
-    const flaky: Tables = {
-      ...tables,
-      put: (c, k, v) => (failRecords && c === 'records' ? Promise.reject(new Error('disk full (test)')) : tables.put(c, k, v)),
-      transaction: (work) => tables.transaction(() => work(flaky)),
-    };
+    const failing = (t: Tables): Tables => ({
+      ...t,
+      put: (c, k, v) => (failRecords && c === 'records' ? Promise.reject(new Error('disk full (test)')) : t.put(c, k, v)),
+    });
+    const flaky: Tables = { ...tables, transaction: (work) => tables.transaction((inner) => work(failing(inner))) };
     const s2 = new LocalStore(flaky);
     const s = await s2.create({ title: 'x' });
     failRecords = true;
