@@ -39,7 +39,7 @@ export function segmentDistance(a: Segment, b: Segment): number {
 
 /** Index pairs i < j of segments whose bounding boxes, grown by `within`, share a grid cell. */
 export function nearbyPairs(segments: readonly Segment[], within: number, cell: number): [number, number][] {
-  const grid = new Map<string, number[]>();
+  const grid = new Map<number, number[]>();
   segments.forEach((s, i) => {
     const x0 = Math.floor((Math.min(s.p.x, s.q.x) - within) / cell);
     const x1 = Math.floor((Math.max(s.p.x, s.q.x) + within) / cell);
@@ -47,7 +47,7 @@ export function nearbyPairs(segments: readonly Segment[], within: number, cell: 
     const y1 = Math.floor((Math.max(s.p.y, s.q.y) + within) / cell);
     for (let x = x0; x <= x1; x++) {
       for (let y = y0; y <= y1; y++) {
-        const key = `${x},${y}`;
+        const key = (x + 1048576) * 2097152 + (y + 1048576); // exact: well below 2^53
         const list = grid.get(key);
         if (list) list.push(i);
         else grid.set(key, [i]);

@@ -1,0 +1,62 @@
+// Slate latency: from the end of a stroke to a diagram and its Jones polynomial, for drawings
+// of 5, 15 and 30 crossings (goal: 15 crossings within one 16 ms frame). The drawings are the
+// layouts of closures of (sigma_1 sigma_2^-1)^k; the timed stroke is the last component drawn
+// again as one stroke (smoothing, closing, crossings, degeneracy checks, PD code, then Jones
+// from the knot core), the others being on the Slate already.
+
+import { analyse } from '@/shared/drawing/analyse';
+import { addStroke, flipCrossing, Sketch } from '@/shared/drawing/sketch';
+import { layoutPD } from '@/shared/layout/layout';
+import { layoutToSketch } from '@/shared/layout/to-sketch';
+import { fromBraid } from '@/shared/knot/braid';
+import { jones } from '@/shared/knot/jones';
+
+interface Line {
+  name: string;
+  value: number;
+  unit: string;
+  goal?: string;
+}
+
+const word = (n: number) => Array.from({ length: n }, (_, i) => (i % 2 === 0 ? 1 : -2));
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)];
+}
+
+// The link's picture: a sketch of all components but the last, the last as raw touch points of
+// one stroke, and the flips that make the crossings right.
+function drawingOf(crossings: number): { before: Sketch; points: { x: number; y: number }[]; flips: Sketch['flips'] } {
+  const d = fromBraid(word(crossings));
+  const s = layoutToSketch(layoutPD(d.pd, d.unknots));
+  const last = s.components[s.components.length - 1];
+  return { before: { ...s, components: s.components.slice(0, -1), flips: [] }, points: [...last.points, last.points[0]], flips: s.flips };
+}
+
+export function drawingBench(runs = 30): Line[] {
+  return [5, 15, 30].flatMap((n) => {
+    const { before, points, flips } = drawingOf(n);
+    const times: number[] = [];
+    const analysis: number[] = [];
+    let found = 0;
+    for (let r = -5; r < runs; r++) {
+      const t0 = performance.now();
+      const s = flips.reduce((acc, f) => flipCrossing(acc, f), addStroke(before, points));
+      const a = analyse(s);
+      const t1 = performance.now();
+      if (a.diagram) jones(a.diagram.diagram);
+      if (r < 0) continue; // warm-up
+      times.push(performance.now() - t0);
+      analysis.push(t1 - t0);
+      found = a.crossings.length;
+      if (!a.diagram || found !== n) throw new Error(`bench drawing of ${n} crossings read back as ${found}`);
+    }
+    return [
+      { name: `drawing: stroke end -> diagram, ${found} crossings (median of ${runs})`, value: median(analysis), unit: 'ms' },
+      { name: `drawing: stroke end -> diagram + Jones, ${found} crossings (median of ${runs})`, value: median(times), unit: 'ms', goal: n === 15 ? '<= 16 ms' : undefined },
+    ];
+  });
+}
+
+if (require.main === module) for (const line of drawingBench()) console.log(`${line.name}: ${line.value.toFixed(2)} ${line.unit}${line.goal ? ` (goal ${line.goal})` : ''}`);
