@@ -23,8 +23,9 @@ export type Stroke = z.infer<typeof Stroke>;
 /**
  * The link diagram: PD code (DESIGN.md conventions), unknotted circles with no crossings that
  * the PD code cannot show, one framing per component (components in `orient()` order, unknots
- * after them; null = blackboard framing), and the drawn strokes with any further geometry
- * of the drawing code as free JSON.
+ * after them; null = blackboard framing), the drawn strokes, and in `geometry` the Slate's
+ * own drawing state as JSON (shared/drawing's Sketch: components, flips, nextSeq), so the
+ * drawing reopens exactly as it was left.
  */
 export const Diagram = z.object({
   pd: z.array(z.tuple([Label, Label, Label, Label])).max(2_000),

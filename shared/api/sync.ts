@@ -82,7 +82,7 @@ export const PushRequest = z.object({
 });
 export type PushRequest = z.infer<typeof PushRequest>;
 
-export const rejectReasons = ['forbidden', 'invalid', 'unknown_type'] as const; // S24
+export const rejectReasons = ['forbidden', 'invalid'] as const; // S24
 export const PushResult = z.object({
   mutationId: z.string(),
   status: z.enum(['applied', 'duplicate', 'rejected']), // S11, S12
