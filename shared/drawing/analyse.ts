@@ -10,6 +10,7 @@ import { FoundCrossing, findCrossings, Marker, Passage } from './crossings';
 import { DrawingOptions, withDefaults } from './options';
 import { dist, Point, scale } from './point';
 import { Flip, Sketch, SketchComponent } from './sketch';
+import { gapsAround } from './pieces';
 import { length } from './smooth';
 import { isPositive, OverUnder, StrandPass, toPD } from './to-pd';
 
@@ -86,7 +87,6 @@ export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): 
   const ids = closed.map((c) => c.id);
   const { crossings: found, markers } = findCrossings(closed, o);
   const flipped = flippedSet(found, ids, sketch.flips, o.flipRadius);
-  const lengths = closed.map((c) => length(c.points, true));
 
   const travel = (p: Passage): StrandPass => ({
     path: p.path,
@@ -110,11 +110,6 @@ export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): 
     sign: isPositive(overUnder[i]) ? 1 : -1,
     flipped: flipped.has(i),
   }));
-  const gaps: Gap[] = crossings.map((c, i) => {
-    const total = lengths[overUnder[i].under.path];
-    const wrap = (s: number) => ((s % total) + total) % total;
-    return { component: c.under, crossing: i, from: wrap(c.underArc - o.gapRadius), to: wrap(c.underArc + o.gapRadius) };
-  });
   const paths: DrawnPath[] = sketch.components.map((c) => ({
     id: c.id,
     points: c.points,
@@ -125,7 +120,7 @@ export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): 
   return {
     paths,
     crossings,
-    gaps,
+    gaps: gapsAround(crossings, new Map(paths.map((p) => [p.id, p.length])), o.gapRadius),
     markers,
     open: sketch.components.filter((c) => !c.closed).map((c) => c.id),
     diagram: markers.length === 0 && closed.length > 0 ? diagramOf(pd, closed, overUnder) : null,

@@ -3,7 +3,7 @@
 
 import { Analysis } from './analyse';
 import { Point } from './point';
-import { visiblePieces } from './pieces';
+import { gapsAround, visiblePieces } from './pieces';
 
 export interface ExportOptions {
   /** One colour per component, cycled (CSS colours for SVG, any xcolor name/HTML for TikZ). */
@@ -12,6 +12,8 @@ export interface ExportOptions {
   /** Background fill (SVG only); none when omitted. */
   readonly background?: string;
   readonly padding?: number;
+  /** Half-length of the gap in under-strands (default: 2.5 stroke widths). */
+  readonly gap?: number;
 }
 
 /** Chalk on slate: light colours that stay apart for the common colour-vision deficiencies. */
@@ -19,9 +21,10 @@ export const chalkPalette: readonly string[] = ['#f4f1e8', '#f2c14e', '#5fb7e5',
 
 const fixed = (x: number) => (Math.round(x * 100) / 100).toString();
 
-function piecesOf(a: Analysis): { component: number; points: Point[] }[] {
+function piecesOf(a: Analysis, gap: number): { component: number; points: Point[] }[] {
+  const all = gapsAround(a.crossings, new Map(a.paths.map((p) => [p.id, p.length])), gap);
   return a.paths.flatMap((path, component) => {
-    const gaps = a.gaps.filter((g) => g.component === path.id);
+    const gaps = all.filter((g) => g.component === path.id);
     return visiblePieces(path.points, path.closed, gaps).map((points) => ({ component, points }));
   });
 }
@@ -40,7 +43,7 @@ export function toSVG(a: Analysis, options: ExportOptions = {}): string {
   const colors = options.colors ?? chalkPalette;
   const width = options.strokeWidth ?? 3;
   const b = bounds(a, options.padding ?? 10);
-  const paths = piecesOf(a).map(({ component, points }) => {
+  const paths = piecesOf(a, options.gap ?? 2.5 * width).map(({ component, points }) => {
     const d = points.map((p, i) => `${i === 0 ? 'M' : 'L'}${fixed(p.x)} ${fixed(p.y)}`).join(' ');
     return `<path d="${d}" fill="none" stroke="${colors[component % colors.length]}" stroke-width="${width}" stroke-linecap="round" stroke-linejoin="round"/>`;
   });
@@ -62,7 +65,8 @@ export function toTikZ(a: Analysis, options: ExportOptions & { size?: number } =
   const b = bounds(a, 0);
   const k = (options.size ?? 6) / Math.max(b.width, b.height, 1e-9);
   const coord = (p: Point) => `(${fixed((p.x - b.minX) * k)},${fixed((b.minY + b.height - p.y) * k)})`;
-  const lines = piecesOf(a).map(
+  // Default gap: 1.2 mm either side on paper.
+  const lines = piecesOf(a, options.gap ?? 0.12 / k).map(
     ({ component, points }) => `  \\draw[${colors[component % colors.length]}, line width=${options.strokeWidth ?? 1}pt] ${points.map(coord).join(' -- ')};`,
   );
   return ['\\begin{tikzpicture}[line cap=round, line join=round]', ...lines, '\\end{tikzpicture}'].join('\n');

@@ -23,6 +23,7 @@ export type { History } from './history';
 export { analyse } from './analyse';
 export type { Analysis, DrawnPath, DrawnCrossing, Gap, DrawnDiagram } from './analyse';
 export type { Marker, MarkerKind } from './crossings';
-export { visiblePieces } from './pieces';
+export { visiblePieces, gapsAround } from './pieces';
 export { toSVG, toTikZ, chalkPalette } from './export';
 export type { ExportOptions } from './export';
+export { crossingNear, componentNear, arrowOf } from './pick';

@@ -45,3 +45,16 @@ export function visiblePieces(points: readonly Point[], closed: boolean, gaps: r
   }
   return pieces;
 }
+
+/** The gap each crossing cuts into its under-strand: `radius` either side, wrapping round. */
+export function gapsAround<C extends { readonly under: string; readonly underArc: number }>(
+  crossings: readonly C[],
+  lengths: ReadonlyMap<string, number>,
+  radius: number,
+): { component: string; crossing: number; from: number; to: number }[] {
+  return crossings.map((c, crossing) => {
+    const total = lengths.get(c.under)!;
+    const wrap = (s: number) => ((s % total) + total) % total;
+    return { component: c.under, crossing, from: wrap(c.underArc - radius), to: wrap(c.underArc + radius) };
+  });
+}

@@ -3,8 +3,12 @@
 import { analyse } from '@/shared/drawing/analyse';
 import { toSVG, toTikZ } from '@/shared/drawing/export';
 import { visiblePieces } from '@/shared/drawing/pieces';
+import { arrowOf, componentNear, crossingNear } from '@/shared/drawing/pick';
+import { reverseComponent } from '@/shared/drawing/sketch';
 import { dist } from '@/shared/drawing/point';
 import { circleCurve, drawCurves } from './drawing-fixtures';
+
+const hopf = drawCurves([circleCurve(200, 200, 50), circleCurve(260, 200, 50)]);
 
 const square = [{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 10 }, { x: 0, y: 10 }];
 
@@ -25,7 +29,7 @@ describe('visible pieces', () => {
   });
 
   test('under-strands get a gap at each crossing, over-strands none', () => {
-    const a = analyse(drawCurves([circleCurve(200, 200, 50), circleCurve(260, 200, 50)]));
+    const a = analyse(hopf);
     expect(a.gaps.map((g) => g.component)).toEqual([a.paths[1].id, a.paths[1].id]);
     const over = visiblePieces(a.paths[0].points, true, a.gaps.filter((g) => g.component === a.paths[0].id));
     const under = visiblePieces(a.paths[1].points, true, a.gaps.filter((g) => g.component === a.paths[1].id));
@@ -37,7 +41,7 @@ describe('visible pieces', () => {
 });
 
 describe('export', () => {
-  const a = analyse(drawCurves([circleCurve(200, 200, 50), circleCurve(260, 200, 50)]));
+  const a = analyse(hopf);
 
   test('SVG: one path per visible piece, a colour per component', () => {
     const svg = toSVG(a, { colors: ['red', 'blue'], background: '#223' });
@@ -46,6 +50,12 @@ describe('export', () => {
     expect(svg.match(/stroke="red"/g)).toHaveLength(1);
     expect(svg.match(/stroke="blue"/g)).toHaveLength(2);
     expect(svg).toContain('fill="#223"');
+  });
+
+  test('a wider gap hides more of the under-strand', () => {
+    const visible = (gap: number) =>
+      [...toSVG(a, { gap }).matchAll(/d="([^"]*)"/g)].map((m) => m[1].split('L').length).reduce((x, y) => x + y, 0);
+    expect(visible(12)).toBeLessThan(visible(4));
   });
 
   test('TikZ: one \\draw per piece, coordinates within the requested size, y pointing up', () => {
@@ -59,5 +69,32 @@ describe('export', () => {
     const top = a.paths[0].points.reduce((m, p) => (p.y < m.y ? p : m));
     expect(top.y).toBeLessThan(200);
     expect(Math.max(...coords.map((c) => c[1]))).toBeGreaterThan(3);
+  });
+});
+
+describe('picking', () => {
+  const a = analyse(hopf);
+
+  test('a tap near a crossing finds it; far away finds nothing', () => {
+    const top = a.crossings.findIndex((c) => c.at.y < 200);
+    expect(crossingNear(a, { x: 231, y: 161 }, 10)).toBe(top);
+    expect(crossingNear(a, { x: 100, y: 100 }, 10)).toBeNull();
+  });
+
+  test('a tap near a strand finds its component and the nearest point', () => {
+    const hit = componentNear(a, { x: 150, y: 202 }, 6);
+    expect(hit?.id).toBe(a.paths[0].id);
+    expect(dist(a.paths[0].points[hit!.index], { x: 150, y: 202 })).toBeLessThan(4); // points are 3 px apart
+    expect(componentNear(a, { x: 230, y: 200 }, 6)).toBeNull();
+  });
+
+  test('the arrow sits away from crossings and follows the orientation', () => {
+    const arrow = arrowOf(a, a.paths[0]);
+    for (const c of a.crossings) expect(dist(arrow.at, c.at)).toBeGreaterThan(40);
+    expect(Math.hypot(arrow.direction.x, arrow.direction.y)).toBeCloseTo(1, 6);
+    const back = analyse(reverseComponent(hopf, hopf.components[0].id));
+    const reversed = arrowOf(back, back.paths[0]);
+    expect(reversed.direction.x).toBeCloseTo(-arrow.direction.x, 6);
+    expect(reversed.direction.y).toBeCloseTo(-arrow.direction.y, 6);
   });
 });
