@@ -59,8 +59,7 @@ function diagonalise(rows: Map<number, Int>[]): Int[] {
         if (!Z.isZero(a[pr][j])) [pc, clean] = [j, false];
       }
     }
-    const d = Z.abs(a[pr][pc]);
-    if (d !== 1) out.push(d);
+    out.push(Z.abs(a[pr][pc]));
     liveRows.delete(pr);
     liveCols.delete(pc);
   }

@@ -5,7 +5,7 @@ import { cubeKhovanov } from '@/shared/khovanov/cube';
 import { khovanov, KhCancelled, KhGroup, KhRing } from '@/shared/khovanov';
 import { orient, PDCode } from '@/shared/knot/pd';
 import { integers, primeField, rationals, Ring } from '@/shared/linalg/ring';
-import { pdOf, random, randomWord, relabel, table } from './khovanov-fixtures';
+import { pdOf, random, randomWord, relabel, table, torusWord } from './khovanov-fixtures';
 
 const rnd = random(20261201);
 /** Random braid words on 3 or 4 strands, `min`..`max` crossings. */
@@ -68,10 +68,12 @@ describe('theorems on generated diagrams', () => {
     }
   });
 
-  it('universal coefficients relate Z to F2 and F3 (H^i(C; F_p) = H^i (x) F_p + Tor(H^{i+1}, F_p))', () => {
+  it('universal coefficients relate Z to Q, F2 and F3 (H^i(C; F_p) = H^i (x) F_p + Tor(H^{i+1}, F_p))', () => {
     for (const w of [...small, ...medium.slice(0, 4)]) {
       const pd = pdOf(w);
       const z = kh(pd, 'Z');
+      const q = kh(pd, 'Q');
+      for (const [i, j] of cells(z, q)) expect([w.join(' '), 'Q', i, j, dim(q, i, j)]).toEqual([w.join(' '), 'Q', i, j, dim(z, i, j)]);
       const pTorsion = (p: number, i: number, j: number) => (at(z, i, j)?.torsion ?? []).filter((t) => t % p === 0).length;
       for (const p of [2, 3]) {
         const f = kh(pd, `F${p}`);
@@ -118,6 +120,12 @@ describe('invariance (Kh is a link invariant: Khovanov 2000; Markov 1936 for bra
     for (const w of medium.slice(0, 4)) {
       const pd = pdOf(w);
       expect(table(kh(relabel(pd, rnd), 'Z'))).toEqual(table(kh(pd, 'Z')));
+    }
+  });
+
+  it('T(p,q) and T(q,p) agree (the same link: Rolfsen, Knots and Links, 1976, 3.C)', () => {
+    for (const [p, q] of [[2, 5], [3, 4], [3, 5], [4, 5], [3, 7]]) {
+      expect([p, q, table(kh(pdOf(torusWord(p, q)), 'Z'))]).toEqual([p, q, table(kh(pdOf(torusWord(q, p)), 'Z'))]);
     }
   });
 

@@ -106,6 +106,24 @@ describe('rank and Smith form', () => {
     expect(t.invariants).toEqual([3n ** 40n]);
   });
 
+  it('agrees with ranks over Q and F_p on random matrices (rank_Q - rank_Fp = number of invariant factors divisible by p)', () => {
+    let seed = 7;
+    const rnd = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+    for (let t = 0; t < 400; t++) {
+      const [rows, cols] = [1 + Math.floor(rnd() * 6), 1 + Math.floor(rnd() * 6)];
+      const triples: [number, number, number][] = [];
+      for (let i = 0; i < rows; i++) for (let j = 0; j < cols; j++) if (rnd() < 0.5) triples.push([i, j, [2, -2, 4, 3, 1, -1, 6][Math.floor(rnd() * 7)]]);
+      const s = smith(sparse(rows, cols, triples, Z.add, Z.isZero));
+      const q = rank(rationals, sparse(rows, cols, triples.map(([i, j, v]) => [i, j, rationals.fromInt(v)] as const), rationals.add, rationals.isZero));
+      expect(s.rank).toBe(q);
+      for (const p of [2, 3]) {
+        const f = primeField(p);
+        const rp = rank(f, sparse(rows, cols, triples.map(([i, j, v]) => [i, j, f.fromInt(v)] as const), f.add, f.isZero));
+        expect(s.invariants.filter((d) => Z.isZero(Z.rem(d, p))).length).toBe(q - rp);
+      }
+    }
+  });
+
   it('handles empty and zero matrices', () => {
     expect(smith(sparse(0, 0, [], Z.add, Z.isZero))).toEqual({ rank: 0, invariants: [], primary: [] });
     expect(rank(rationals, sparse(3, 2, [], rationals.add, rationals.isZero))).toBe(0);
