@@ -1,0 +1,120 @@
+// One `overstrand` request: which diagram (PD code, braid word or DT code) and what to compute,
+// validated with zod, answered as a plain JSON object. Shared by `batch` (one per line) and
+// `invariants --json`, so both speak the contract of issue 3 exactly.
+import { z } from 'zod';
+import { Diagram, diagram, fromBraid, fromDT, Laurent, orient, writhe } from '@/shared/knot';
+import { alexander } from '@/shared/knot/alexander';
+import { bracket } from '@/shared/knot/bracket';
+import { colourings } from '@/shared/knot/colourings';
+import { linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
+import { jonesFromBracket } from '@/shared/knot/jones';
+import { linkingMatrix } from '@/shared/knot/linking';
+import { guessName } from '@/shared/knot/names';
+import { khovanov, KhRing } from '@/shared/khovanov';
+
+export const computable = [
+  'components',
+  'crossings',
+  'writhe',
+  'bracket',
+  'jones',
+  'alexander',
+  'determinant',
+  'signature',
+  'linking',
+  'colourings',
+  'name',
+  'kh',
+] as const;
+export type Computable = (typeof computable)[number];
+
+/** What is computed when a request names nothing: everything but the heavy Khovanov homology. */
+export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh');
+
+const label = z.number().int();
+export const Request = z
+  .object({
+    id: z.unknown().optional(),
+    pd: z.array(z.tuple([label, label, label, label])).optional(),
+    braid: z.array(z.number().int().refine((k) => k !== 0, 'braid letters are nonzero integers')).optional(),
+    dt: z.array(z.number().int()).optional(),
+    /** Crossingless unknot components beside the code (default 0). */
+    unknots: z.number().int().min(0).optional(),
+    compute: z.array(z.enum(computable)).optional(),
+    /** For "kh": 'Z', 'Q' or 'F<p>'. */
+    ring: z.string().regex(/^(Z|Q|F\d+)$/, "ring must be 'Z', 'Q' or 'F<p>' (e.g. 'F2')").optional(),
+    reduced: z.boolean().optional(),
+    /** For "colourings": the modulus n (default 3). */
+    n: z.number().int().min(2).optional(),
+  })
+  .strict()
+  .refine((r) => [r.pd, r.braid, r.dt].filter((x) => x !== undefined).length === 1, {
+    message: 'give exactly one of "pd", "braid" or "dt"',
+  });
+export type Request = z.infer<typeof Request>;
+
+export type Answer = Record<string, unknown>;
+
+/** Numbers stay numbers while they are safe integers; beyond 2^53 they travel as decimal strings. */
+export const jsonInteger = (x: bigint): number | string => (Number.isSafeInteger(Number(x)) ? Number(x) : x.toString());
+
+export function diagramOf(r: Request): Diagram {
+  const base = r.pd ? diagram(r.pd) : r.braid ? fromBraid(r.braid) : fromDT(r.dt!);
+  return r.unknots ? diagram(base.pd, { unknots: base.unknots + r.unknots }) : base;
+}
+
+/** Computes what the request asks; throws (PDError, RangeError, ...) when it cannot. */
+export function answer(r: Request): Answer {
+  const d = diagramOf(r);
+  const wanted = new Set(r.compute ?? defaultCompute);
+  const o = orient(d.pd);
+  const out: Answer = {};
+  let kauffman: Laurent | undefined;
+  const bracketOnce = () => (kauffman ??= bracket(d));
+  if (wanted.has('crossings')) out.crossings = d.pd.length;
+  if (wanted.has('components')) out.components = o.components.length + d.unknots;
+  if (wanted.has('writhe')) out.writhe = writhe(o);
+  if (wanted.has('bracket')) out.bracket = bracketOnce().toJSON();
+  if (wanted.has('jones')) out.jones = jonesFromBracket(d, bracketOnce()).toJSON();
+  if (wanted.has('alexander')) {
+    const a = alexander(d);
+    out.alexander = a.polynomial.toJSON();
+    out.alexanderSign = a.conwaySign ? 'conway' : 'convention';
+  }
+  if (wanted.has('determinant')) out.determinant = jsonInteger(linkDeterminant(d));
+  if (wanted.has('signature')) out.signature = linkSignature(d);
+  if (wanted.has('linking')) out.linking = linkingMatrix(d);
+  if (wanted.has('colourings')) {
+    const n = r.n ?? 3;
+    out.colourings = { n, count: jsonInteger(colourings(d, n)) };
+  }
+  if (wanted.has('name')) out.name = guessName(d)?.text ?? null;
+  if (wanted.has('kh')) {
+    const kh = khovanov(d.pd, { ring: (r.ring ?? 'Z') as KhRing, reduced: r.reduced ?? false, unknots: d.unknots });
+    out.kh = { ring: kh.ring, reduced: kh.reduced, groups: kh.groups.map(({ i, j, free, torsion }) => ({ i, j, free, torsion })) };
+  }
+  return out;
+}
+
+/** A readable message for a failed validation: "field: problem; field: problem". */
+export function describeIssues(error: z.ZodError): string {
+  return error.issues.map((i) => (i.path.length > 0 ? `${i.path.join('.')}: ${i.message}` : i.message)).join('; ');
+}
+
+/** One batch line in, one JSON line out; never throws. The id is kept whenever it can be read. */
+export function answerLine(line: string): string {
+  let value: unknown;
+  try {
+    value = JSON.parse(line);
+  } catch {
+    return JSON.stringify({ id: null, error: 'the line is not valid JSON' });
+  }
+  const id = typeof value === 'object' && value !== null && 'id' in value ? (value as { id: unknown }).id ?? null : null;
+  const parsed = Request.safeParse(value);
+  if (!parsed.success) return JSON.stringify({ id, error: describeIssues(parsed.error) });
+  try {
+    return JSON.stringify({ id, ...answer(parsed.data) });
+  } catch (e) {
+    return JSON.stringify({ id, error: e instanceof Error ? e.message : String(e) });
+  }
+}

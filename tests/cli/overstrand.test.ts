@@ -1,0 +1,111 @@
+// The `overstrand` command line as a user runs it: through the package bin (server/cli/bin.mjs),
+// as a child process. Values: DESIGN.md conventions (positive trefoil Jones t + t^3 - t^4, Kh
+// with Z/2 at (3,7)); determinant 3 and signature -2 of the positive trefoil (Lickorish ch. 6).
+import { spawn, spawnSync } from 'node:child_process';
+import path from 'node:path';
+import { answerLine, jsonInteger } from '@/server/cli/requests';
+
+const bin = path.join(__dirname, '../../server/cli/bin.mjs');
+const run = (args: string[], input = '') => spawnSync(process.execPath, [bin, ...args], { input, encoding: 'utf8', timeout: 60_000 });
+const lines = (text: string) => text.split('\n').filter((l) => l !== '').map((l) => JSON.parse(l));
+
+describe('overstrand invariants', () => {
+  it('answers a braid word as JSON', () => {
+    const r = run(['invariants', '--braid', '1 1 1', '--json']);
+    expect(r.status).toBe(0);
+    const a = JSON.parse(r.stdout);
+    expect(a).toMatchObject({ crossings: 3, components: 1, writhe: 3, determinant: 3, signature: -2, linking: [[3]] });
+    expect(a.jones).toEqual([[1, 1], [3, 1], [4, -1]]);
+    expect(a.alexander).toEqual([[-1, 1], [0, -1], [1, 1]]);
+    expect(a.colourings).toEqual({ n: 3, count: 9 });
+  });
+
+  it('prints a readable summary for PD and DT codes', () => {
+    const pd = run(['invariants', '--pd', '[[1,5,2,4],[3,1,4,6],[5,3,6,2]]']);
+    expect(pd.status).toBe(0);
+    expect(pd.stdout).toMatch(/determinant\s+3\n/);
+    expect(pd.stdout).toMatch(/name\s+invariants match 3_1/);
+    const dt = run(['invariants', '--dt', '4 6 8 2']); // figure-eight
+    expect(dt.stdout).toMatch(/Jones polynomial\s+t\^-2 - t\^-1 \+ 1 - t \+ t\^2\n/);
+  });
+
+  it('half-integer Jones exponents travel as 0.5 (Hopf link)', () => {
+    const a = JSON.parse(run(['invariants', '--braid', '1 1', '--json']).stdout);
+    expect(a.jones).toEqual([[0.5, -1], [2.5, -1]]); // -t^(1/2) - t^(5/2), Jones 1985 (from memory)
+    expect(a.linking).toEqual([[0, 1], [1, 0]]);
+  });
+
+  it('rejects bad input with a message and exit code 1', () => {
+    const r = run(['invariants', '--pd', '[[1,5,2,4]]']);
+    expect(r.status).toBe(1);
+    expect(r.stderr).toMatch(/label 1 appears 1 time/);
+    const both = run(['invariants', '--braid', '1', '--dt', '4 6 2']);
+    expect(both.status).toBe(1);
+    expect(both.stderr).toMatch(/exactly one of --pd, --braid or --dt/);
+  });
+});
+
+describe('overstrand batch', () => {
+  it('answers good, malformed and failing lines, keeps ids, exits 0', () => {
+    const input = [
+      '{"id": 1, "braid": [1, 1, 1], "compute": ["jones", "determinant"]}',
+      'this is not json',
+      '{"id": "two", "pd": [[1, 2, 3]]}',
+      '{"id": [3], "pd": [[1,5,2,4],[3,1,4,6],[5,3,6,7]]}',
+      '',
+      '{"id": 4, "braid": [1, 1], "compute": ["nonsense"]}',
+      '{"id": 5, "dt": [4, 6, 2], "compute": ["kh"], "ring": "Z"}',
+      '{"id": 6, "braid": [1], "pd": [[1,1,2,2]]}',
+    ].join('\n');
+    const r = run(['batch'], input);
+    expect(r.status).toBe(0);
+    const out = lines(r.stdout);
+    expect(out).toHaveLength(7);
+    expect(out[0]).toEqual({ id: 1, jones: [[1, 1], [3, 1], [4, -1]], determinant: 3 });
+    expect(out[1]).toEqual({ id: null, error: 'the line is not valid JSON' });
+    expect(out[2].id).toBe('two');
+    expect(out[2].error).toMatch(/pd/);
+    expect(out[3]).toEqual({ id: [3], error: 'label 2 appears 1 time; each label must appear exactly twice' });
+    expect(out[4].id).toBe(4);
+    expect(out[4].error).toMatch(/compute/);
+    expect(out[5].kh.groups).toContainEqual({ i: 3, j: 7, free: 0, torsion: [2] });
+    expect(out[6].error).toMatch(/exactly one of "pd", "braid" or "dt"/);
+  });
+
+  it('streams: an answer comes out before stdin is closed', async () => {
+    const child = spawn(process.execPath, [bin, 'batch'], { stdio: ['pipe', 'pipe', 'inherit'] });
+    const first = new Promise<string>((resolve) => child.stdout.once('data', (chunk: Buffer) => resolve(chunk.toString())));
+    child.stdin.write('{"id": "early", "braid": [1, -2, 1, -2], "compute": ["determinant"]}\n');
+    expect(JSON.parse(await first)).toEqual({ id: 'early', determinant: 5 }); // figure-eight, det 5
+    child.stdin.end();
+    const code = await new Promise<number | null>((resolve) => child.on('exit', resolve));
+    expect(code).toBe(0);
+  }, 60_000);
+});
+
+describe('overstrand kh', () => {
+  it('prints the Khovanov table of the trefoil, torsion included', () => {
+    const r = run(['kh', '--braid', '1 1 1', '--ring', 'Z']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/Khovanov homology over Z/);
+    expect(r.stdout).toMatch(/7 .*Z\/2/);
+    const q = JSON.parse(run(['kh', '--braid', '1 1 1', '--ring', 'Q', '--reduced', '--json']).stdout);
+    expect(q.kh.ring).toBe('Q');
+    expect(q.kh.reduced).toBe(true);
+  });
+});
+
+describe('request answers in process', () => {
+  it('writes integers beyond 2^53 as strings', () => {
+    expect(jsonInteger(2n ** 60n)).toBe('1152921504606846976');
+    expect(jsonInteger(-7n)).toBe(-7);
+  });
+
+  it('computes only what is asked, and the defaults without kh', () => {
+    expect(JSON.parse(answerLine('{"id":0,"braid":[1,1,1],"compute":["crossings"]}'))).toEqual({ id: 0, crossings: 3 });
+    const all = JSON.parse(answerLine('{"id":0,"braid":[1,-1,1],"unknots":1}'));
+    expect(all.components).toBe(2);
+    expect(all.kh).toBeUndefined();
+    expect(all.determinant).toBe(0); // split link (unknot + unknot)
+  });
+});
