@@ -4,11 +4,10 @@
 import fc from 'fast-check';
 import { Diagram, fromBraid, fromDT, jones, Laurent } from '@/shared/knot';
 import { alexander } from '@/shared/knot/alexander';
-import { colourings } from '@/shared/knot/colourings';
+import { colourings, solutionsModN } from '@/shared/knot/colourings';
 import { goeritzForms, linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
 import { linkingMatrix } from '@/shared/knot/linking';
 import { orient, writhe } from '@/shared/knot/pd';
-import { solutionsModN } from '@/shared/knot/diagonal';
 import { arbBraid } from './arbitraries';
 
 const L = (pairs: [number, number][]) => Laurent.fromPairs(pairs);
@@ -182,7 +181,8 @@ describe('Fox colourings', () => {
         const forms = goeritzForms(orient(d.pd));
         if (forms.length !== 1 || d.unknots > 0) return;
         const g = forms[0].matrix;
-        expect(colourings(d, n)).toBe(BigInt(n) * solutionsModN(g, g.length, n));
+        const entries = g.flatMap((row, i) => row.map((v, j) => [i, j, v] as const));
+        expect(colourings(d, n)).toBe(BigInt(n) * solutionsModN(g.length, g.length, entries, n));
       }),
       { numRuns: 150 },
     );
