@@ -23,45 +23,57 @@ export function smith(m: Sparse<Int>): Smith {
   return { rank: pivots + diagonal.length, invariants: invariantFactors(diagonal), primary };
 }
 
-// The absolute values of the nonzero diagonal entries of an equivalent diagonal matrix.
-function diagonalise(rows: Map<number, Int>[]): Int[] {
-  const cols = [...new Set(rows.flatMap((r) => [...r.keys()]))];
-  const index = new Map(cols.map((c, i) => [c, i]));
-  const a: Int[][] = rows.map((r) => {
-    const dense = new Array<Int>(cols.length).fill(0);
-    r.forEach((v, c) => (dense[index.get(c)!] = v));
-    return dense;
-  });
+// The absolute values of the nonzero diagonal entries of an equivalent diagonal matrix, by
+// sparse Euclidean steps: the pivot is a smallest entry; its column is cleared by row steps and
+// then its row by column steps (which, the column being clear, touch the pivot row only); a
+// nonzero remainder becomes the new, smaller pivot.
+function diagonalise(input: Map<number, Int>[]): Int[] {
+  const { isZero, sub, mul, divRound, cmpAbs, abs } = Z;
+  const rows = input.map((r) => new Map(r));
+  const colRows = new Map<number, Set<number>>();
+  rows.forEach((r, i) => r.forEach((_, c) => (colRows.get(c) ?? colRows.set(c, new Set()).get(c)!).add(i)));
+  const set = (i: number, c: number, v: Int): void => {
+    if (isZero(v)) {
+      rows[i].delete(c);
+      colRows.get(c)!.delete(i);
+    } else {
+      rows[i].set(c, v);
+      colRows.get(c)!.add(i);
+    }
+  };
   const out: Int[] = [];
-  const liveRows = new Set(a.keys());
-  const liveCols = new Set(cols.map((_, i) => i));
   for (;;) {
     let pr = -1;
     let pc = -1;
-    for (const i of liveRows) {
-      for (const j of liveCols) {
-        if (!Z.isZero(a[i][j]) && (pr < 0 || Z.cmpAbs(a[i][j], a[pr][pc]) < 0)) [pr, pc] = [i, j];
-      }
-    }
+    rows.forEach((r, i) => {
+      for (const [c, v] of r) if (pr < 0 || cmpAbs(v, rows[pr].get(pc)!) < 0) [pr, pc] = [i, c];
+    });
     if (pr < 0) return out;
     for (let clean = false; !clean; ) {
       clean = true;
-      for (const i of liveRows) {
-        if (i === pr || Z.isZero(a[i][pc])) continue;
-        const q = Z.divRound(a[i][pc], a[pr][pc]);
-        for (const j of liveCols) a[i][j] = Z.sub(a[i][j], Z.mul(q, a[pr][j]));
-        if (!Z.isZero(a[i][pc])) [pr, clean] = [i, false];
+      const p = rows[pr].get(pc)!;
+      for (const i of [...colRows.get(pc)!]) {
+        if (i === pr) continue;
+        const q = divRound(rows[i].get(pc)!, p);
+        for (const [c, v] of rows[pr]) set(i, c, sub(rows[i].get(c) ?? 0, mul(q, v)));
       }
-      for (const j of liveCols) {
-        if (j === pc || Z.isZero(a[pr][j])) continue;
-        const q = Z.divRound(a[pr][j], a[pr][pc]);
-        for (const i of liveRows) a[i][j] = Z.sub(a[i][j], Z.mul(q, a[i][pc]));
-        if (!Z.isZero(a[pr][j])) [pc, clean] = [j, false];
+      const remainders = [...colRows.get(pc)!].filter((i) => i !== pr);
+      if (remainders.length > 0) {
+        pr = remainders.reduce((best, i) => (cmpAbs(rows[i].get(pc)!, rows[best].get(pc)!) < 0 ? i : best));
+        clean = false;
+        continue;
+      }
+      for (const [c, v] of [...rows[pr]]) {
+        if (c !== pc) set(pr, c, sub(v, mul(divRound(v, p), p)));
+      }
+      const left = [...rows[pr].keys()].filter((c) => c !== pc);
+      if (left.length > 0) {
+        pc = left.reduce((best, c) => (cmpAbs(rows[pr].get(c)!, rows[pr].get(best)!) < 0 ? c : best));
+        clean = false;
       }
     }
-    out.push(Z.abs(a[pr][pc]));
-    liveRows.delete(pr);
-    liveCols.delete(pc);
+    out.push(abs(rows[pr].get(pc)!));
+    set(pr, pc, 0);
   }
 }
 
