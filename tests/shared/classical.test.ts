@@ -2,7 +2,7 @@
 // linking matrix. Published values name their source; most checks are theorems on random
 // braid closures, which no choice of constants can satisfy by accident.
 import fc from 'fast-check';
-import { Diagram, fromBraid, fromDT, jones, Laurent } from '@/shared/knot';
+import { Diagram, fromBraid, fromDT, jones, Laurent, pretzelLink, rationalLink } from '@/shared/knot';
 import { alexander } from '@/shared/knot/alexander';
 import { colourings, solutionsModN } from '@/shared/knot/colourings';
 import { goeritzForms, linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
@@ -85,6 +85,46 @@ describe('Alexander polynomial, Conway-normalised', () => {
   });
 });
 
+// A braid word, a letter position and the three words of a skein triple at that letter.
+const arbSkein = arbBraid(10, 4).chain((w) =>
+  fc.nat({ max: w.length - 1 }).map((i) => {
+    const strands = Math.max(...w.map(Math.abs)) + 1;
+    const at = (k: number) => [...w.slice(0, i), k, ...w.slice(i + 1)];
+    const k = Math.abs(w[i]);
+    return { strands, plus: at(k), minus: at(-k), zero: [...w.slice(0, i), ...w.slice(i + 1)] };
+  }),
+);
+
+describe('skein relations at a crossing (random braids)', () => {
+  it('Conway: Delta(L+) - Delta(L-) = (t^(1/2) - t^(-1/2)) Delta(L0) (Conway 1970; Lickorish, ch. 8)', () => {
+    const z = L([[0.5, 1], [-0.5, -1]]);
+    let checked = 0;
+    fc.assert(
+      fc.property(arbSkein, ({ strands, plus, minus, zero }) => {
+        const [p, m, o] = [plus, minus, zero].map((w) => alexander(fromBraid(w, strands)));
+        if (!p.conwaySign || !m.conwaySign || !o.conwaySign) return; // a sign we only chose
+        checked++;
+        expect(p.polynomial.sub(m.polynomial).equals(z.mul(o.polynomial))).toBe(true);
+      }),
+      { numRuns: 200 },
+    );
+    expect(checked).toBeGreaterThan(100);
+  });
+
+  it('signature: sigma(L+) <= sigma(L-) <= sigma(L+) + 2 and |sigma(L+-) - sigma(L0)| <= 1 (Murasugi 1965, from memory)', () => {
+    fc.assert(
+      fc.property(arbSkein, ({ strands, plus, minus, zero }) => {
+        const [p, m, o] = [plus, minus, zero].map((w) => linkSignature(fromBraid(w, strands)));
+        expect(m - p).toBeGreaterThanOrEqual(0);
+        expect(m - p).toBeLessThanOrEqual(2);
+        expect(Math.abs(p - o)).toBeLessThanOrEqual(1);
+        expect(Math.abs(m - o)).toBeLessThanOrEqual(1);
+      }),
+      { numRuns: 200 },
+    );
+  });
+});
+
 describe('determinant and signature', () => {
   it('match the tables for small knots and links', () => {
     // Rolfsen, Appendix C, and Lickorish, ch. 6 (from memory); signature convention: the
@@ -118,6 +158,23 @@ describe('determinant and signature', () => {
         const det = linkDeterminant(d);
         expect(absAtMinusOne(jones(d))).toBe(det);
         expect(absAtMinusOne(alexander(d).polynomial)).toBe(det);
+      }),
+      { numRuns: 150 },
+    );
+  });
+
+  it('|V(-1)| = det = |Delta(-1)| and the shading does not matter, on pretzel and rational links too', () => {
+    const nonzero = fc.integer({ min: -4, max: 4 }).filter((a) => a !== 0);
+    const arbFamily = fc.oneof(
+      fc.array(nonzero, { minLength: 1, maxLength: 4 }).map((a) => pretzelLink(a)),
+      fc.array(fc.integer({ min: 1, max: 4 }), { minLength: 1, maxLength: 4 }).map((a) => rationalLink(a)),
+    );
+    fc.assert(
+      fc.property(arbFamily, (d) => {
+        const det = linkDeterminant(d);
+        expect(absAtMinusOne(jones(d))).toBe(det);
+        expect(absAtMinusOne(alexander(d).polynomial)).toBe(det);
+        expect(linkSignature(d, 1)).toBe(linkSignature(d, 0));
       }),
       { numRuns: 150 },
     );
