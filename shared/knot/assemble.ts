@@ -13,31 +13,55 @@ export interface Framed {
 
 /**
  * `heads` gives the head slot (where the edge enters a crossing) of at least one label of every
- * component that only passes over; incoming under-strands are read from the code. Labels are
- * then renumbered along travel. Components not named in `framed` get the blackboard framing;
- * `unknotFramings` frames the crossingless unknots, one entry each.
+ * component that only passes over; directions then follow along the strands, and elsewhere the
+ * under-strand at a -> c decides. A crossing whose under-strand turns out to enter at c is
+ * turned by two slots (the same crossing, read from its other incoming end), so constructions
+ * may reverse strands freely. Labels are then renumbered along travel. Components not named in
+ * `framed` get the blackboard framing; `unknotFramings` frames the crossingless unknots.
  */
 export function assemble(pd: PDCode, heads: ReadonlyMap<number, Slot>, framed: readonly Framed[], unknotFramings: readonly (number | null)[]): Diagram {
   const slots = slotsOf(pd);
-  const hints = new Map(heads);
-  pd.forEach((x, crossing) => hints.set(x[0], { crossing, position: 0 }));
-  const fresh = new Map<number, number>();
-  for (const [start, startHead] of hints) {
-    if (fresh.has(start)) continue;
+  const head = new Map<number, Slot>();
+  const follow = (start: number, startHead: Slot) => {
     let label = start;
-    let head = startHead;
-    while (!fresh.has(label)) {
-      fresh.set(label, fresh.size + 1);
-      const out: Slot = { crossing: head.crossing, position: (head.position + 2) % 4 };
+    let h = startHead;
+    while (!head.has(label)) {
+      head.set(label, h);
+      const out: Slot = { crossing: h.crossing, position: (h.position + 2) % 4 };
       label = pd[out.crossing][out.position];
       const [p, q] = slots.get(label)!;
-      head = p.crossing === out.crossing && p.position === out.position ? q : p;
+      h = p.crossing === out.crossing && p.position === out.position ? q : p;
+    }
+  };
+  for (const [label, h] of heads) follow(label, h);
+  pd.forEach((x, crossing) => {
+    if (!head.has(x[0])) follow(x[0], { crossing, position: 0 });
+  });
+  for (const label of slots.keys()) {
+    if (!head.has(label)) throw new PDError(`construction error: no direction known for the component through edge ${label}`);
+  }
+  const turned = pd.map((x, crossing) => {
+    const h = head.get(x[2])!;
+    return h.crossing === crossing && h.position === 2 ? ([x[2], x[3], x[0], x[1]] as Crossing) : x;
+  });
+  const turnedHeads = new Map<number, Slot>();
+  for (const [label, h] of head) {
+    const t = turned[h.crossing] !== pd[h.crossing];
+    turnedHeads.set(label, t ? { crossing: h.crossing, position: (h.position + 2) % 4 } : h);
+  }
+  // Number along travel so that components passing only over read the intended direction.
+  const fresh = new Map<number, number>();
+  const walked = new Set<number>();
+  for (const [start] of turnedHeads) {
+    let label = start;
+    while (!walked.has(label)) {
+      walked.add(label);
+      fresh.set(label, fresh.size + 1);
+      const h = turnedHeads.get(label)!;
+      label = turned[h.crossing][(h.position + 2) % 4];
     }
   }
-  for (const label of slots.keys()) {
-    if (!fresh.has(label)) throw new PDError(`construction error: no direction known for the component through edge ${label}`);
-  }
-  const numbered = pd.map((x) => x.map((l) => fresh.get(l)!) as unknown as Crossing);
+  const numbered = turned.map((x) => x.map((l) => fresh.get(l)!) as unknown as Crossing);
   const o = orient(numbered);
   const framings: (number | null)[] = new Array<number | null>(o.components.length).fill(null);
   for (const { label, framing } of framed) framings[o.componentOf.get(fresh.get(label)!)!] = framing;
