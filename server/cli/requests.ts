@@ -38,7 +38,7 @@ export const Request = z
     pd: z.array(z.tuple([label, label, label, label])).optional(),
     braid: z.array(z.number().int().refine((k) => k !== 0, 'braid letters are nonzero integers')).optional(),
     dt: z.array(z.number().int()).optional(),
-    /** Crossingless unknot components beside the code (default 0). */
+    /** Crossingless unknot components beside the code (default 0; for an empty PD code 1). */
     unknots: z.number().int().min(0).optional(),
     compute: z.array(z.enum(computable)).optional(),
     /** For "kh": 'Z', 'Q' or 'F<p>'. */
@@ -58,8 +58,10 @@ export type Answer = Record<string, unknown>;
 /** Numbers stay numbers while they are safe integers; beyond 2^53 they travel as decimal strings. */
 export const jsonInteger = (x: bigint): number | string => (Number.isSafeInteger(Number(x)) ? Number(x) : x.toString());
 
+/** An empty PD code alone is the unknot (as for khovanov()); "unknots" adds free components to a braid or DT code. */
 export function diagramOf(r: Request): Diagram {
-  const base = r.pd ? diagram(r.pd) : r.braid ? fromBraid(r.braid) : fromDT(r.dt!);
+  if (r.pd) return diagram(r.pd, { unknots: r.unknots ?? (r.pd.length === 0 ? 1 : 0) });
+  const base = r.braid ? fromBraid(r.braid) : fromDT(r.dt!);
   return r.unknots ? diagram(base.pd, { unknots: base.unknots + r.unknots }) : base;
 }
 

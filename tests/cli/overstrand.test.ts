@@ -108,4 +108,10 @@ describe('request answers in process', () => {
     expect(all.kh).toBeUndefined();
     expect(all.determinant).toBe(0); // split link (unknot + unknot)
   });
+
+  it('reads an empty PD code as the unknot, and "unknots" as free components', () => {
+    // <O> = 1 and <O O> = -A^2 - A^-2 (DESIGN.md conventions).
+    expect(JSON.parse(answerLine('{"id":0,"pd":[],"compute":["components","bracket","name"]}'))).toEqual({ id: 0, components: 1, bracket: [[0, 1]], name: 'invariants match 0_1 (the unknot)' });
+    expect(JSON.parse(answerLine('{"id":0,"pd":[],"unknots":2,"compute":["bracket","determinant"]}'))).toEqual({ id: 0, bracket: [[-2, -1], [2, -1]], determinant: 0 });
+  });
 });
