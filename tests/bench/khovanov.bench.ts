@@ -1,0 +1,88 @@
+// Khovanov homology timings and memory: T(5,6) over Z (goal <= 10 s), T(6,7) over Q (<= 20 s),
+// T(9,5) over Z (<= 60 s, <= 2 GB), and two 14-crossing knots against the reference cube
+// (goal >= 1000x). Torus links come from the knot core as braid closures on p strands.
+// Memory is the process's resident set (rss), sampled after every merged crossing; the cube
+// is sampled once at its end, a lower bound of its peak.
+
+import { khovanov, KhRing } from '@/shared/khovanov';
+import { cubeKhovanov } from '@/shared/khovanov/cube';
+import { fromBraid } from '@/shared/knot/braid';
+import { torusLink } from '@/shared/knot/families/torus';
+import { PDCode } from '@/shared/knot/pd';
+import { integers } from '@/shared/linalg/ring';
+
+export interface BenchLine {
+  name: string;
+  value: number;
+  unit: string;
+  goal?: string;
+}
+
+const MB = 1024 * 1024;
+
+function timeEngine(pd: PDCode, ring: KhRing, runs: number): { ms: number; rssMB: number; heapMB: number; groups: string } {
+  const times: number[] = [];
+  let rss = 0;
+  let heap = 0;
+  let groups = '';
+  for (let r = 0; r < runs; r++) {
+    const sample = () => {
+      const m = process.memoryUsage();
+      rss = Math.max(rss, m.rss);
+      heap = Math.max(heap, m.heapUsed);
+    };
+    const t = performance.now();
+    const result = khovanov(pd, { ring, eulerCheck: false, onProgress: sample });
+    times.push(performance.now() - t);
+    sample();
+    groups = JSON.stringify(result.groups);
+  }
+  times.sort((a, b) => a - b);
+  return { ms: times[Math.floor(times.length / 2)], rssMB: rss / MB, heapMB: heap / MB, groups };
+}
+
+const round = (x: number, digits = 0) => Number(x.toFixed(digits));
+
+export function khovanovBench(): BenchLine[] {
+  const lines: BenchLine[] = [];
+  const goals: [string, PDCode, KhRing, string, string?][] = [
+    ['T(5,6) over Z', torusLink(5, 6).pd, 'Z', '<= 10000 ms'],
+    ['T(6,7) over Q', torusLink(6, 7).pd, 'Q', '<= 20000 ms'],
+    ['T(9,5) over Z (9-strand braid, 40 crossings)', torusLink(9, 5).pd, 'Z', '<= 60000 ms', '<= 2048 MB'],
+  ];
+  for (const [name, pd, ring, timeGoal, memGoal] of goals) {
+    const r = timeEngine(pd, ring, 3);
+    lines.push({ name: `kh: ${name}, median of 3`, value: round(r.ms), unit: 'ms', goal: timeGoal });
+    lines.push({ name: `kh: ${name}, peak rss`, value: round(r.rssMB), unit: 'MB', goal: memGoal });
+    lines.push({ name: `kh: ${name}, peak heap used`, value: round(r.heapMB), unit: 'MB' });
+  }
+
+  // The cube's growth on the same alternating family, then both 14-crossing knots in full.
+  const alternating = (k: number) => fromBraid(Array.from({ length: k }, () => [1, -2]).flat()).pd;
+  for (const k of [4, 5]) {
+    const t = performance.now();
+    cubeKhovanov(alternating(k), integers);
+    lines.push({ name: `kh: reference cube, closure of (s1 s2^-1)^${k} (${2 * k} crossings) over Z`, value: round(performance.now() - t), unit: 'ms' });
+  }
+  const knots: [string, PDCode][] = [
+    ['T(3,7) (14 crossings, positive braid)', torusLink(3, 7).pd],
+    ['closure of (s1 s2^-1)^7 (14 crossings, alternating)', alternating(7)],
+  ];
+  for (const [name, pd] of knots) {
+    const fast = timeEngine(pd, 'Z', 5);
+    const t = performance.now();
+    const cube = JSON.stringify(cubeKhovanov(pd, integers));
+    const cubeMs = performance.now() - t;
+    const cubeRss = process.memoryUsage().rss / MB;
+    if (cube !== fast.groups) throw new Error(`engine and cube disagree on ${name}`);
+    lines.push({ name: `kh: ${name}, engine over Z, median of 5`, value: round(fast.ms, 1), unit: 'ms' });
+    lines.push({ name: `kh: ${name}, reference cube over Z`, value: round(cubeMs), unit: 'ms' });
+    lines.push({ name: `kh: ${name}, cube rss at its end`, value: round(cubeRss), unit: 'MB' });
+    lines.push({ name: `kh: ${name}, cube time / engine time`, value: round(cubeMs / fast.ms), unit: 'x', goal: '>= 1000 x' });
+  }
+  return lines;
+}
+
+if (require.main === module) {
+  for (const l of khovanovBench()) console.log(`${l.name}: ${l.value} ${l.unit}${l.goal ? ` (goal ${l.goal})` : ''}`);
+}
