@@ -1,0 +1,67 @@
+// Bracket + Jones speed by tangle contraction, for braid closures and torus links of 15, 30,
+// 60 and 100 crossings (goals: 15 crossings <= 5 ms, 60 crossings <= 1 s), with the ratio to
+// the plain state sum where that is feasible (<= 20 crossings).
+
+import { fromBraid } from '@/shared/knot/braid';
+import { bracket } from '@/shared/knot/bracket';
+import { Diagram } from '@/shared/knot/diagram';
+import { torusLink } from '@/shared/knot/families/torus';
+import { jonesFromBracket } from '@/shared/knot/jones';
+import { seededRng } from '@/shared/knot/moves/random';
+import { stateSumBracket } from '@/shared/knot/statesum';
+
+export interface BenchLine {
+  name: string;
+  value: number;
+  unit: string;
+  goal?: string;
+}
+
+const SIZES = [15, 30, 60, 100];
+const STATE_SUM_LIMIT = 20;
+
+function medianMs(f: () => unknown, budgetMs: number, maxRuns = 31): number {
+  const times: number[] = [];
+  const start = performance.now();
+  while (times.length < maxRuns && (times.length < 3 || performance.now() - start < budgetMs)) {
+    const t = performance.now();
+    f();
+    times.push(performance.now() - t);
+  }
+  times.sort((a, b) => a - b);
+  return times[Math.floor(times.length / 2)];
+}
+
+// A fixed pseudo-random braid on 4 strands using every generator, seeded so runs compare.
+function braidOf(crossings: number): Diagram {
+  const rng = seededRng(crossings);
+  const word = Array.from({ length: crossings }, (_, i) => ((i % 3) + 1) * (rng() < 0.5 ? 1 : -1));
+  return fromBraid(word, 4);
+}
+
+// T(p, q) with (p - 1) q = crossings: T(2,15), T(3,15), T(4,20), T(5,25).
+const TORUS: Record<number, [number, number]> = { 15: [2, 15], 30: [3, 15], 60: [4, 20], 100: [5, 25] };
+
+const goal = (n: number) => (n === 15 ? '<= 5 ms' : n === 60 ? '<= 1000 ms' : undefined);
+const round = (x: number, digits = 2) => Number(x.toFixed(digits));
+
+export function jonesBench(): BenchLine[] {
+  const lines: BenchLine[] = [];
+  const cases: [string, (n: number) => Diagram][] = [
+    ['braid closure (4 strands)', braidOf],
+    ['torus link', (n) => torusLink(...TORUS[n])],
+  ];
+  for (const [family, make] of cases) {
+    for (const n of SIZES) {
+      const d = make(n);
+      const name = family === 'torus link' ? `T(${TORUS[n].join(',')})` : family;
+      const ms = medianMs(() => jonesFromBracket(d, bracket(d)), 2000);
+      lines.push({ name: `bracket+Jones, ${name}, ${d.pd.length} crossings`, value: round(ms), unit: 'ms', goal: goal(n) });
+      if (d.pd.length <= STATE_SUM_LIMIT) {
+        const slow = medianMs(() => stateSumBracket(d), 5000, 3);
+        lines.push({ name: `state sum / contraction, ${name}, ${d.pd.length} crossings`, value: round(slow / ms, 0), unit: 'x' });
+      }
+    }
+  }
+  return lines;
+}
