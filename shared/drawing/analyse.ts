@@ -30,6 +30,9 @@ export interface DrawnCrossing {
   /** Arc length of the passage along each path, in drawing order. */
   readonly overArc: number;
   readonly underArc: number;
+  /** Unit directions of travel of the two strands here (current orientations). */
+  readonly overDirection: Point;
+  readonly underDirection: Point;
   /** +1 or -1 with the components' current orientations. */
   readonly sign: number;
   /** Whether a stored flip swapped the default. */
@@ -81,6 +84,8 @@ function flippedSet(found: readonly FoundCrossing[], ids: readonly string[], fli
   return flipped;
 }
 
+const unit = (p: Point): Point => scale(p, 1 / (Math.hypot(p.x, p.y) || 1));
+
 export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): Analysis {
   const o = withDefaults(options);
   const closed = sketch.components.filter((c) => c.closed && c.points.length >= 3);
@@ -107,6 +112,8 @@ export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): 
     under: ids[overUnder[i].under.path],
     overArc: overUnder[i].over.arc,
     underArc: overUnder[i].under.arc,
+    overDirection: unit(overUnder[i].over.direction),
+    underDirection: unit(overUnder[i].under.direction),
     sign: isPositive(overUnder[i]) ? 1 : -1,
     flipped: flipped.has(i),
   }));

@@ -1,5 +1,5 @@
 // PD code to planar picture: the public API of shared/layout.
 
 export { layoutPD } from './layout';
-export type { LinkLayout, LayoutCrossing, LayoutPassage, LayoutOptions } from './layout';
+export type { LinkLayout, LayoutCrossing, LayoutOptions } from './layout';
 export { layoutToSketch } from './to-sketch';

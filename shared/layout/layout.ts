@@ -5,23 +5,22 @@
 // side by side, crossingless unknots as circles after them. Coordinates are on screen (y down)
 // and the counterclockwise order of every PD crossing is counterclockwise as seen.
 
-import { chaikin } from '@/shared/drawing/smooth';
+import { findCrossings } from '@/shared/drawing/crossings';
+import { defaultOptions } from '@/shared/drawing/options';
+import { chaikin, resample } from '@/shared/drawing/smooth';
 import { Point } from '@/shared/drawing/point';
-import { connectedPieces, orient, PDCode } from '@/shared/knot/pd';
-import { relax } from './relax';
-import { scaffold } from './scaffold';
+import { connectedPieces, orient, PDCode, slotsOf } from '@/shared/knot/pd';
+import { relax, Spring } from './relax';
+import { Scaffold, scaffold } from './scaffold';
 import { tutte } from './tutte';
-
-export interface LayoutPassage {
-  readonly component: number;
-  /** Where along the component's path the passage lies, as a fraction of its length. */
-  readonly fraction: number;
-}
 
 export interface LayoutCrossing {
   readonly at: Point;
-  readonly over: LayoutPassage;
-  readonly under: LayoutPassage;
+  /** Components (indices into paths) of the over- and under-strand. */
+  readonly over: number;
+  readonly under: number;
+  /** The crossing sign of the PD code; the picture's strands meet with the same rotation. */
+  readonly sign: number;
 }
 
 export interface LinkLayout {
@@ -41,6 +40,22 @@ export interface LayoutOptions {
 
 const restOf = { square: 0.7, centre: 0.5, strand: 1, face: 1.2 };
 
+// Springs along the refinement's edges, plus "bending" springs across each slot and each
+// crossing whose rest length is the straight-line sum, so strands run straight through.
+function springsOf(pd: PDCode, sc: Scaffold): Spring[] {
+  const springs: Spring[] = sc.edges.map(([a, b], i) => ({ a, b, rest: restOf[sc.kind[i]], weight: 1 }));
+  const kinks = new Set([...slotsOf(pd)].filter(([, [p, q]]) => p.crossing === q.crossing).map(([label]) => label));
+  pd.forEach((x, i) => {
+    for (let p = 0; p < 4; p++) {
+      // A kink's loop (an edge from a crossing back to it) is held open instead.
+      const straight = restOf.centre + restOf.strand;
+      springs.push({ a: sc.centre(i), b: sc.midpoint(x[p]), rest: kinks.has(x[p]) ? 2 * straight : straight, weight: 0.5 });
+      if (p < 2) springs.push({ a: sc.slot(i, p), b: sc.slot(i, p + 2), rest: 2 * restOf.centre, weight: 0.5 });
+    }
+  });
+  return springs;
+}
+
 /** Vertex positions of one connected piece (its crossings renumbered 0..k-1), unit scale. */
 function embedPiece(pd: PDCode, iterations: number) {
   const sc = scaffold(pd);
@@ -49,8 +64,7 @@ function embedPiece(pd: PDCode, iterations: number) {
   const start = tutte(sc.vertexCount, sc.edges, fixed);
   let pos = relax({
     positions: start,
-    edges: sc.edges,
-    rest: sc.kind.map((k) => restOf[k]),
+    springs: springsOf(pd, sc),
     triangles: sc.triangles,
     fixed: new Set(sc.outer),
     iterations,
@@ -61,11 +75,18 @@ function embedPiece(pd: PDCode, iterations: number) {
   return { sc, pos };
 }
 
-const cumulative = (pts: readonly Point[]): number[] => {
-  const out = [0];
-  for (let i = 1; i <= pts.length; i++) out.push(out[i - 1] + Math.hypot(pts[i % pts.length].x - pts[i - 1].x, pts[i % pts.length].y - pts[i - 1].y));
-  return out;
-};
+// The strands cross exactly once near every crossing centre (within one spacing: neighbouring
+// centres are farther apart), between the right two components, nowhere else, and without any
+// degeneracy.
+function faithful(paths: readonly Point[][], centres: readonly { at: Point; pair: string }[], spacing: number): boolean {
+  const found = findCrossings(paths.map((points, k) => ({ id: `${k}`, points })), defaultOptions);
+  if (found.markers.length > 0 || found.crossings.length !== centres.length) return false;
+  const pairOf = (x: (typeof found.crossings)[number]) => [x.passages[0].path, x.passages[1].path].sort().join();
+  return centres.every(({ at, pair }) => {
+    const near = found.crossings.filter((x) => Math.hypot(x.at.x - at.x, x.at.y - at.y) < spacing);
+    return near.length === 1 && pairOf(near[0]) === pair;
+  });
+}
 
 export function layoutPD(pd: PDCode, unknots = 0, options: LayoutOptions = {}): LinkLayout {
   const spacing = options.spacing ?? 24;
@@ -89,33 +110,33 @@ export function layoutPD(pd: PDCode, unknots = 0, options: LayoutOptions = {}): 
   const vertex = (x: number) => placed[where.get(x)!.piece];
 
   const crossingPoint = (x: number) => vertex(x).pos[vertex(x).sc.centre(where.get(x)!.local)];
-  const passIndex = new Map<string, number>(); // `${crossing}:${over|under}` -> raw polyline index
-  const rawPaths = o.components.map((labels, component) => {
-    const pts: Point[] = [];
-    for (const label of labels) {
+  // Control polygons of the strands, smoothest first: through crossing centres and edge
+  // midpoints only; then also through the slot vertices (the planar scaffold itself).
+  const polygon = (labels: readonly number[], slots: boolean): Point[] =>
+    labels.flatMap((label) => {
       const tail = o.tail.get(label)!;
       const head = o.head.get(label)!;
       const { sc, pos } = vertex(tail.crossing);
       const local = (x: number) => where.get(x)!.local;
-      passIndex.set(`${tail.crossing}:${tail.position % 2 === 1 ? 'over' : 'under'}:${component}`, pts.length);
-      pts.push(crossingPoint(tail.crossing));
-      pts.push(pos[sc.slot(local(tail.crossing), tail.position)]);
-      pts.push(pos[sc.midpoint(label)]);
-      pts.push(pos[sc.slot(local(head.crossing), head.position)]);
-    }
-    return pts;
-  });
-  const paths = rawPaths.map((pts) => chaikin(pts, true, rounds));
+      const mid = pos[sc.midpoint(label)];
+      // A kink's loop needs its slots, or it would run out to its midpoint and straight back.
+      if (!slots && tail.crossing !== head.crossing) return [crossingPoint(tail.crossing), mid];
+      return [crossingPoint(tail.crossing), pos[sc.slot(local(tail.crossing), tail.position)], mid, pos[sc.slot(local(head.crossing), head.position)]];
+    });
+  const attempts: [boolean, number][] = [[false, rounds + 1], [true, rounds], [true, 0]];
+  let paths: Point[][] = [];
+  for (const [slots, r] of attempts) {
+    paths = o.components.map((labels) => resample(chaikin(polygon(labels, slots), true, r), true, defaultOptions.spacing));
+    const centres = pd.map((x, i) => ({ at: crossingPoint(i), pair: [o.componentOf.get(x[0])!, o.componentOf.get(x[1])!].sort().join() }));
+    if (faithful(paths, centres, spacing)) break;
+  }
 
-  const fraction = (component: number, key: string): number => {
-    const arc = cumulative(rawPaths[component]);
-    return arc[passIndex.get(`${key}:${component}`)!] / arc[arc.length - 1];
-  };
-  const crossings = pd.map((x, i): LayoutCrossing => {
-    const under = o.componentOf.get(x[0])!;
-    const over = o.componentOf.get(x[1])!;
-    return { at: crossingPoint(i), over: { component: over, fraction: fraction(over, `${i}:over`) }, under: { component: under, fraction: fraction(under, `${i}:under`) } };
-  });
+  const crossings = pd.map((x, i): LayoutCrossing => ({
+    at: crossingPoint(i),
+    over: o.componentOf.get(x[1])!,
+    under: o.componentOf.get(x[0])!,
+    sign: o.signs[i],
+  }));
 
   const circles = Array.from({ length: unknots }, (_, k) => {
     const r = 2 * spacing;

@@ -6,11 +6,18 @@
 
 import { Point } from '@/shared/drawing/point';
 
+export interface Spring {
+  readonly a: number;
+  readonly b: number;
+  /** Rest length as a multiple of the mean spacing. */
+  readonly rest: number;
+  readonly weight: number;
+}
+
 export interface RelaxInput {
   readonly positions: readonly Point[];
-  readonly edges: readonly (readonly [number, number])[];
-  /** Rest length of each edge, as a multiple of the mean spacing. */
-  readonly rest: readonly number[];
+  /** Springs along the edges, and any others (e.g. ones that straighten strands). */
+  readonly springs: readonly Spring[];
   readonly triangles: readonly (readonly [number, number, number])[];
   readonly fixed: ReadonlySet<number>;
   readonly iterations: number;
@@ -24,11 +31,11 @@ export function relax(input: RelaxInput): Point[] {
   const spacing = Math.sqrt(Math.abs(input.triangles.reduce((s, [a, b, c]) => s + area(pos[a], pos[b], pos[c]), 0)) / input.triangles.length);
   const sign = Math.sign(area(pos[input.triangles[0][0]], pos[input.triangles[0][1]], pos[input.triangles[0][2]]));
   const minArea = 1e-3 * spacing * spacing;
-  const springs: { u: number; rest: number }[][] = Array.from({ length: n }, () => []);
-  input.edges.forEach(([a, b], i) => {
-    springs[a].push({ u: b, rest: input.rest[i] * spacing });
-    springs[b].push({ u: a, rest: input.rest[i] * spacing });
-  });
+  const springs: { u: number; rest: number; weight: number }[][] = Array.from({ length: n }, () => []);
+  for (const { a, b, rest, weight } of input.springs) {
+    springs[a].push({ u: b, rest: rest * spacing, weight });
+    springs[b].push({ u: a, rest: rest * spacing, weight });
+  }
   const around: (readonly [number, number, number])[][] = Array.from({ length: n }, () => []);
   for (const t of input.triangles) for (const v of t) around[v].push(t);
   const areas = (v: number) => around[v].map(([a, b, c]) => sign * area(pos[a], pos[b], pos[c]));
@@ -42,12 +49,12 @@ export function relax(input: RelaxInput): Point[] {
       if (input.fixed.has(v)) continue;
       let fx = 0;
       let fy = 0;
-      for (const { u, rest } of springs[v]) {
+      for (const { u, rest, weight } of springs[v]) {
         const dx = pos[u].x - pos[v].x;
         const dy = pos[u].y - pos[v].y;
         const len = Math.hypot(dx, dy) || 1e-12;
-        fx += (dx / len) * (len - rest);
-        fy += (dy / len) * (len - rest);
+        fx += (dx / len) * (len - rest) * weight;
+        fy += (dy / len) * (len - rest) * weight;
       }
       for (let u = 0; u < n; u++) {
         if (u === v) continue;

@@ -1,15 +1,13 @@
 // A layout turned into an editable Sketch: each path becomes a closed component drawn in its
 // direction of travel, and crossings where the default rule (later stroke under) disagrees
-// with the PD code get a flip. Framings follow the diagram's components.
+// with the PD code get a flip: the strands of the picture meet with the PD code's rotation, so
+// a crossing is right exactly when its sign is. Framings follow the diagram's components.
 
 import { analyse } from '@/shared/drawing/analyse';
 import { DrawingOptions } from '@/shared/drawing/options';
 import { dist } from '@/shared/drawing/point';
 import { addPath, emptySketch, flipCrossing, setFraming, Sketch } from '@/shared/drawing/sketch';
 import { LinkLayout } from './layout';
-
-// Distance between two fractions of a closed path, going the short way round.
-const around = (p: number, q: number) => Math.min(Math.abs(p - q), 1 - Math.abs(p - q));
 
 export function layoutToSketch(layout: LinkLayout, framings: readonly (number | null)[] = [], options: Partial<DrawingOptions> = {}): Sketch {
   let s = layout.paths.reduce((acc, path) => addPath(acc, path, true, options), emptySketch);
@@ -18,14 +16,10 @@ export function layoutToSketch(layout: LinkLayout, framings: readonly (number | 
     if (f !== null && k < ids.length) s = setFraming(s, ids[k], f);
   });
   const a = analyse(s, options);
-  const length = new Map(a.paths.map((p) => [p.id, p.length]));
+  // The strands meet as in the PD code, so the sign alone says which one is over.
   for (const c of a.crossings) {
     const target = layout.crossings.reduce((best, x) => (dist(x.at, c.at) < dist(best.at, c.at) ? x : best));
-    const overIsRight =
-      target.over.component !== target.under.component
-        ? ids[target.over.component] === c.over
-        : around(c.overArc / length.get(c.over)!, target.over.fraction) < around(c.underArc / length.get(c.under)!, target.over.fraction);
-    if (!overIsRight) s = flipCrossing(s, { a: c.over, b: c.under, at: c.at }, options);
+    if (c.sign !== target.sign) s = flipCrossing(s, { a: c.over, b: c.under, at: c.at }, options);
   }
   return s;
 }
