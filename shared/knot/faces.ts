@@ -1,8 +1,9 @@
-// The planar faces of a PD code and their checkerboard colouring. A corner (crossing, p) is
-// the sector between positions p and p+1 (counterclockwise); leaving it along edge p+1, the
-// same face continues at the far end in the corner that follows the arriving slot. Planarity
-// itself is checked by diagram() (checkPlanar in pd.ts); a failed colouring is reported too.
-import { connectedPieces, PDCode, PDError, slotsOf } from './pd';
+// The checkerboard colouring of the faces of a PD code. Corner p of a crossing is the sector
+// between positions p and p+1 (counterclockwise), where a face walk (moves/faces.ts) arrives
+// through p. Planarity itself is checked by diagram() (checkPlanar in pd.ts); a failed
+// colouring is reported too.
+import { faces } from './moves/faces';
+import { connectedPieces, PDCode, PDError } from './pd';
 
 export interface Faces {
   /** faceOf[crossing][p]: the face containing corner p of that crossing. */
@@ -15,24 +16,10 @@ export interface Faces {
 }
 
 export function facesOf(pd: PDCode): Faces {
-  const slots = slotsOf(pd);
   const faceOf = pd.map(() => [-1, -1, -1, -1]);
-  let count = 0;
-  pd.forEach((_, crossing) => {
-    for (let p = 0; p < 4; p++) {
-      if (faceOf[crossing][p] >= 0) continue;
-      let at = { crossing, position: p };
-      while (faceOf[at.crossing][at.position] < 0) {
-        faceOf[at.crossing][at.position] = count;
-        const leaving = { crossing: at.crossing, position: (at.position + 1) % 4 };
-        const [s, t] = slots.get(pd[leaving.crossing][leaving.position])!;
-        at = s.crossing === leaving.crossing && s.position === leaving.position ? t : s;
-      }
-      count++;
-    }
-  });
-
-  return { faceOf, count, colour: checkerboard(faceOf, count), pieces: connectedPieces(pd) };
+  const all = faces(pd);
+  all.forEach((face, f) => face.forEach((corner) => (faceOf[corner.crossing][corner.arrive] = f)));
+  return { faceOf, count: all.length, colour: checkerboard(faceOf, all.length), pieces: connectedPieces(pd) };
 }
 
 // Corners p and p+1 of a crossing lie on either side of edge p+1, so their faces differ.
