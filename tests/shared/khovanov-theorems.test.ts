@@ -3,6 +3,8 @@
 
 import { cubeKhovanov } from '@/shared/khovanov/cube';
 import { khovanov, KhCancelled, KhGroup, KhRing } from '@/shared/khovanov';
+import { fromBraid } from '@/shared/knot/braid';
+import { Braid, randomMarkovMove, randomMoves, seededRng } from '@/shared/knot/moves';
 import { orient, PDCode } from '@/shared/knot/pd';
 import { integers, primeField, rationals, Ring } from '@/shared/linalg/ring';
 import { pdOf, random, randomWord, relabel, table, torusWord } from './khovanov-fixtures';
@@ -120,6 +122,26 @@ describe('invariance (Kh is a link invariant: Khovanov 2000; Markov 1936 for bra
     for (const w of medium.slice(0, 4)) {
       const pd = pdOf(w);
       expect(table(kh(relabel(pd, rnd), 'Z'))).toEqual(table(kh(pd, 'Z')));
+    }
+  });
+
+  it('under random Reidemeister moves of the knot core (Reidemeister 1927)', () => {
+    for (const [k, w] of medium.slice(0, 6).entries()) {
+      const d = fromBraid(w);
+      const moved = randomMoves(d, 3 + (k % 4), 1000 + k);
+      const count = orient(d.pd).components.length;
+      expect([w.join(' '), table(khovanov(moved.pd, { ring: 'Z', unknots: moved.unknots, eulerCheck: false }))]).toEqual([w.join(' '), table(kh(d.pd, 'Z'))]);
+      if (count === 1) expect(table(khovanov(moved.pd, { ring: 'Z', reduced: true, unknots: moved.unknots, eulerCheck: false }))).toEqual(table(kh(d.pd, 'Z', true)));
+    }
+  });
+
+  it('under random Markov moves of the knot core (Markov 1935)', () => {
+    const rng = seededRng(77);
+    for (const w of medium.slice(0, 5)) {
+      let b: Braid = { word: w, strands: Math.max(...w.map(Math.abs)) + 1 };
+      for (let k = 0; k < 4; k++) b = randomMarkovMove(b, rng);
+      const d = fromBraid(b.word, b.strands);
+      expect([b.word.join(' '), table(khovanov(d.pd, { ring: 'F3', unknots: d.unknots, eulerCheck: false }))]).toEqual([b.word.join(' '), table(kh(pdOf(w), 'F3'))]);
     }
   });
 
