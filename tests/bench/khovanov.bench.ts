@@ -68,18 +68,19 @@ export function khovanovBench(): BenchLine[] {
     ['T(3,7) (14 crossings, positive braid)', torusLink(3, 7).pd],
     ['closure of (s1 s2^-1)^7 (14 crossings, alternating)', alternating(7)],
   ];
-  for (const [name, pd] of knots) {
-    const fast = timeEngine(pd, 'Z', 5);
+  // Engines first, so the cube's garbage does not slow them down.
+  const fast = knots.map(([, pd]) => timeEngine(pd, 'Z', 5));
+  knots.forEach(([name, pd], k) => {
     const t = performance.now();
     const cube = JSON.stringify(cubeKhovanov(pd, integers));
     const cubeMs = performance.now() - t;
     const cubeRss = process.memoryUsage().rss / MB;
-    if (cube !== fast.groups) throw new Error(`engine and cube disagree on ${name}`);
-    lines.push({ name: `kh: ${name}, engine over Z, median of 5`, value: round(fast.ms, 1), unit: 'ms' });
+    if (cube !== fast[k].groups) throw new Error(`engine and cube disagree on ${name}`);
+    lines.push({ name: `kh: ${name}, engine over Z, median of 5`, value: round(fast[k].ms, 1), unit: 'ms' });
     lines.push({ name: `kh: ${name}, reference cube over Z`, value: round(cubeMs), unit: 'ms' });
     lines.push({ name: `kh: ${name}, cube rss at its end`, value: round(cubeRss), unit: 'MB' });
-    lines.push({ name: `kh: ${name}, cube time / engine time`, value: round(cubeMs / fast.ms), unit: 'x', goal: '>= 1000 x' });
-  }
+    lines.push({ name: `kh: ${name}, cube time / engine time`, value: round(cubeMs / fast[k].ms), unit: 'x', goal: '>= 1000 x' });
+  });
   return lines;
 }
 

@@ -19,6 +19,22 @@ describe('published tables over Z', () => {
     expect(table(khovanov([], { ring: 'Z', unknots: 2 }).groups)).toEqual(['0,-2:1', '0,0:2', '0,2:1']);
   });
 
+  it('a split unknot tensors with V; reduced at that unknot gives back Kh (Khovanov 2000, arXiv math/9908171: Kh of a disjoint union is the tensor product; from memory)', () => {
+    const trefoil = pdOf([1, 1, 1]);
+    const withUnknot = khovanov(trefoil, { ring: 'Z', unknots: 1 }).groups;
+    const times = (g: { i: number; j: number; free: number; torsion: number[] }[], shift: number) => g.map((x) => ({ ...x, j: x.j + shift }));
+    const base = kh([1, 1, 1]).groups;
+    const expected = new Map<string, { i: number; j: number; free: number; torsion: number[] }>();
+    for (const g of [...times(base, 1), ...times(base, -1)]) {
+      const k = `${g.i},${g.j}`;
+      const e = expected.get(k) ?? { i: g.i, j: g.j, free: 0, torsion: [] };
+      expected.set(k, { ...e, free: e.free + g.free, torsion: [...e.torsion, ...g.torsion].sort((a, b) => a - b) });
+    }
+    expect(table(withUnknot)).toEqual(table([...expected.values()].sort((a, b) => a.i - b.i || a.j - b.j)));
+    expect(table(khovanov(trefoil, { ring: 'Z', unknots: 1, reduced: true, component: 1 }))).toEqual(table(base));
+    expect(khovanov(trefoil, { ring: 'Z', unknots: 1 }).euler?.ok).toBe(true);
+  });
+
   it('positive Hopf link', () => {
     // Bar-Natan 2002 (arXiv math/0201043), the Hopf link with positive crossings (from memory).
     expect(table(kh([1, 1]))).toEqual(['0,0:1', '0,2:1', '2,4:1', '2,6:1']);
