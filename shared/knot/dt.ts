@@ -1,11 +1,14 @@
 // Dowker-Thistlethwaite code of a knot (C. H. Dowker and M. B. Thistlethwaite, "Classification
 // of knot projections", Topology Appl. 16, 1983). Passes are numbered 1..2n along the knot; the
 // code lists, for 1, 3, ..., 2n-1, the even number met at the same crossing, negated when the
-// even pass goes over. The code fixes the diagram only up to reflection; we take the
-// reflection in which, at the crossing of pass 1, the even strand crosses from right to left.
-// Realising a code searches the 2^(n-1) choices of the other crossings' handedness for a planar
-// one (fine for table-sized knots, capped at MAX_DT_CROSSINGS); for composite knots the first
-// planar choice found is returned.
+// even pass goes over. A code whose crossings are all interlaced (a prime diagram) fixes the
+// diagram up to reflection (Dowker and Thistlethwaite, ibid.); we take the reflection in which,
+// at the crossing of pass 1, the even strand crosses from right to left. For a composite or
+// nugatory diagram each group of interlaced crossings is reflected independently, so the
+// summands' chirality is not recorded: fromDT makes the first crossing of each group
+// right-to-left, and toDT o fromDT keeps the knot type only for prime diagrams. Realising a code
+// searches the handedness of the other crossings for a planar choice (2^(n - groups) tries, so
+// it is capped at MAX_DT_CROSSINGS).
 
 import { Diagram, unknot } from './diagram';
 import { fromGauss, toGauss } from './gauss';
@@ -47,8 +50,11 @@ export function fromDT(code: readonly number[]): Diagram {
   });
   // handedness[k] = +1: the even strand crosses the odd one from right to left. The crossing
   // sign is positive exactly when the under-strand crosses the over-strand from right to left.
-  for (let mask = 0; mask < 2 ** (n - 1); mask++) {
-    const signs = code.map((e, k) => (k > 0 && (mask >> (k - 1)) & 1 ? -1 : 1) * Math.sign(e));
+  // Search all crossings' handedness but the first of each group.
+  const free = interlacedGroups(code).flatMap((g) => g.slice(1));
+  for (let mask = 0; mask < 2 ** free.length; mask++) {
+    const flipped = new Set(free.filter((_, b) => (mask >> b) & 1));
+    const signs = code.map((e, k) => (flipped.has(k) ? -1 : 1) * Math.sign(e));
     try {
       return fromGauss({ components: [passes], signs });
     } catch (err) {
@@ -56,6 +62,25 @@ export function fromDT(code: readonly number[]): Diagram {
     }
   }
   throw new PDError('this DT code is not realisable by a planar knot diagram');
+}
+
+/**
+ * The groups of interlaced crossings (0-based, by odd pass): crossings k and j interlace when
+ * exactly one pass of j lies between the two passes of k. One group means a prime diagram.
+ */
+export function interlacedGroups(code: readonly number[]): number[][] {
+  const passes = code.map((e, k) => [2 * k + 1, Math.abs(e)].sort((a, b) => a - b));
+  const between = (k: number, p: number) => passes[k][0] < p && p < passes[k][1];
+  const group = code.map((_, k) => k);
+  const find = (k: number): number => (group[k] === k ? k : (group[k] = find(group[k])));
+  code.forEach((_, k) => {
+    code.forEach((__, j) => {
+      if (between(k, passes[j][0]) !== between(k, passes[j][1])) group[find(j)] = find(k);
+    });
+  });
+  const groups = new Map<number, number[]>();
+  code.forEach((_, k) => groups.set(find(k), [...(groups.get(find(k)) ?? []), k]));
+  return [...groups.values()];
 }
 
 /** The DT code of a knot diagram (one component), in the reflection convention above. */

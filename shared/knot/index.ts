@@ -6,7 +6,7 @@ export type { Diagram, DiagramOptions } from './diagram';
 export { assemble, directions } from './assemble';
 export { braidStrands, checkBraid, fromBraid, parseBraid } from './braid';
 export type { BraidWord } from './braid';
-export { fromDT, MAX_DT_CROSSINGS, parseDT, toDT } from './dt';
+export { fromDT, interlacedGroups, MAX_DT_CROSSINGS, parseDT, toDT } from './dt';
 export { fromGauss, toGauss } from './gauss';
 export type { GaussCode } from './gauss';
 export { bracket, bracketOfPD, loopFactor } from './bracket';

@@ -1,7 +1,7 @@
 // Laurent polynomials in one variable with exact BigInt coefficients. Exponents are JS numbers
-// and may be fractions with a power-of-two denominator (halves for the Jones polynomial of
-// links with an even number of components, quarters in passing when A = t^(-1/4)); those are
-// exact in floating point, so exponents can be compared with ===.
+// and may be fractions with a power-of-two denominator up to 1024 (halves for the Jones
+// polynomial of links with an even number of components, quarters in passing when
+// A = t^(-1/4)); those are exact in floating point, so exponents can be compared with ===.
 
 export type Coefficient = bigint | number;
 /** [exponent, coefficient] as it travels in JSON: a number, or a decimal string beyond 2^53. */
@@ -22,7 +22,7 @@ const toBig = (c: Coefficient): bigint => {
 };
 
 const checkExponent = (e: number): number => {
-  if (!Number.isFinite(e)) throw new RangeError(`exponent ${e} is not a finite number`);
+  if (!Number.isFinite(e) || !Number.isInteger(e * 1024)) throw new RangeError(`exponent ${e} is not a multiple of 1/1024`);
   return e === 0 ? 0 : e; // fold -0 into 0
 };
 
@@ -48,16 +48,13 @@ export class Laurent {
     return Laurent.fromPairs([[e, c]]);
   }
 
-  /**
-   * Dense coefficients: coeffs[i] is the coefficient of x^((offset + i) * step). Used by the
-   * bracket, which works on dense arrays for speed.
-   */
-  static fromDense(coeffs: readonly bigint[], offset: number, step = 1): Laurent {
+  /** Dense coefficients: coeffs[i] is the coefficient of x^(offset + i), offset an integer. */
+  static fromDense(coeffs: readonly bigint[], offset: number): Laurent {
     const terms: [number, bigint][] = [];
     coeffs.forEach((c, i) => {
-      if (c !== 0n) terms.push([checkExponent((offset + i) * step), c]);
+      if (c !== 0n) terms.push([checkExponent(offset + i), c]);
     });
-    return new Laurent(step > 0 ? terms : terms.reverse());
+    return new Laurent(terms);
   }
 
   private static fromMap(sums: Map<number, bigint>): Laurent {

@@ -22,8 +22,9 @@ function linking(d: ReturnType<typeof fromBraid>, i: number, j: number): number 
   return s / 2;
 }
 
-// Jones 1985 ("Hecke algebra representations of braid groups and link polynomials", Ann. Math.
-// 126, 1987, Thm 14.1 for torus knots): V(T(p,q)) = t^((p-1)(q-1)/2) (1 - t^(p+1) - t^(q+1) + t^(p+q)) / (1 - t^2).
+// Jones' torus knot formula (V. F. R. Jones, "Hecke algebra representations of braid groups and
+// link polynomials", Ann. of Math. 126, 1987; stated from memory), p, q coprime and positive:
+// V(T(p,q)) = t^((p-1)(q-1)/2) (1 - t^(p+1) - t^(q+1) + t^(p+q)) / (1 - t^2).
 function jonesTorusKnot(p: number, q: number): Laurent {
   const numerator = V([[0, 1], [p + 1, -1], [q + 1, -1], [p + q, 1]]);
   // Divide by 1 - t^2: the quotient's coefficients c_k = n_k + c_(k-2).

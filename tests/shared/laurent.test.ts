@@ -54,6 +54,7 @@ describe('Laurent polynomials', () => {
     expect(L([[-1, 1], [0, 1]]).evaluate(2)).toEqual({ num: 3n, den: 2n });
     expect(L([[-2, 3], [0, 1]]).evaluate(-3)).toEqual({ num: 4n, den: 3n });
     expect(() => L([[0.5, 1]]).evaluate(4)).toThrow(/fractional/);
+    expect(() => L([[1 / 3, 1]])).toThrow('exponent 0.3333333333333333 is not a multiple of 1/1024');
   });
 
   it('prints in three styles', () => {

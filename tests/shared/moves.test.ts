@@ -140,7 +140,8 @@ describe('bracket and Jones identities', () => {
   });
 
   it('V(1) = (-2)^(c-1) and V(e^(2 pi i/3)) = 1 for knots (property)', () => {
-    // Jones 1985: V_L(1) = (-2)^(c-1); V_K(e^(2 pi i/3)) = 1 for every knot K (Lickorish, ch. 3)
+    // V_L(1) = (-2)^(c-1) and V_K(e^(2 pi i/3)) = 1 for every knot K (Jones 1985, Bull. AMS 12;
+    // also Lickorish, An Introduction to Knot Theory, ch. 3; from memory)
     fc.assert(
       fc.property(arbDiagram(14), (d) => {
         const v = jones(d);
