@@ -3,18 +3,17 @@
 // against Descartes' rule of signs on the characteristic polynomial (exact for symmetric
 // matrices, whose eigenvalues are all real), computed by Faddeev-LeVerrier.
 import fc from 'fast-check';
-import { determinant, integers } from '@/shared/knot/bareiss';
+import { determinant, integers, Ring } from '@/shared/knot/bareiss';
 import { IntPoly, polynomials } from '@/shared/knot/int-poly';
 import { signature } from '@/shared/knot/symmetric';
 
-function laplace<T>(ring: typeof integers | typeof polynomials, m: T[][]): T {
-  const r = ring as unknown as { zero: T; one: T; mul(a: T, b: T): T; sub(a: T, b: T): T; neg(a: T): T };
-  if (m.length === 0) return r.one;
+function laplace<T>(ring: Ring<T>, m: readonly (readonly T[])[]): T {
+  if (m.length === 0) return ring.one;
   return m[0].reduce((sum, a, j) => {
     const minor = m.slice(1).map((row) => row.filter((_, k) => k !== j));
-    const term = r.mul(a, laplace(ring, minor));
-    return j % 2 === 0 ? r.sub(sum, r.neg(term)) : r.sub(sum, term);
-  }, r.zero);
+    const term = ring.mul(a, laplace(ring, minor));
+    return j % 2 === 0 ? ring.sub(sum, ring.neg(term)) : ring.sub(sum, term);
+  }, ring.zero);
 }
 
 // Coefficients c_0..c_n of det(x I - A) (Faddeev-LeVerrier; every division is exact over Z).
