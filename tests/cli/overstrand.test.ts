@@ -20,6 +20,12 @@ describe('overstrand invariants', () => {
     expect(a.colourings).toEqual({ n: 3, count: 9 });
   });
 
+  it('takes negative braid letters as values, not options (the negative trefoil)', () => {
+    const a = JSON.parse(run(['invariants', '--braid', '-1 -1 -1', '--json']).stdout);
+    expect(a).toMatchObject({ writhe: -3, signature: 2, name: 'invariants match 3_1 (mirror)' });
+    expect(a.jones).toEqual([[-4, -1], [-3, 1], [-1, 1]]); // V(1/t) of the positive trefoil
+  });
+
   it('prints a readable summary for PD and DT codes', () => {
     const pd = run(['invariants', '--pd', '[[1,5,2,4],[3,1,4,6],[5,3,6,2]]']);
     expect(pd.status).toBe(0);
