@@ -13,6 +13,6 @@ export { bracket, bracketOfPD, loopFactor } from './bracket';
 export { jones, jonesFromBracket } from './jones';
 export { Laurent } from '@/shared/poly/laurent';
 export * as families from './families';
-export { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, reverseComponent, torusLink, twistKnot } from './families';
+export { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, reverseComponent, sublink, torusLink, twistKnot } from './families';
 export * as moves from './moves';
 export { simplify } from './moves/simplify';

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { fromBraid } from '@/shared/knot/braid';
 import { componentCount, diagram, unknot } from '@/shared/knot/diagram';
-import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, reverseComponent, torusLink, twistKnot } from '@/shared/knot/families';
+import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, reverseComponent, sublink, torusLink, twistKnot } from '@/shared/knot/families';
 import { jones } from '@/shared/knot/jones';
 import { orient } from '@/shared/knot/pd';
 import { Laurent } from '@/shared/poly/laurent';
@@ -126,6 +126,15 @@ describe('families', () => {
     );
   });
 
+  it('sublinks: any two rings of the Borromean rings are unlinked, a Hopf component is an unknot', () => {
+    // Borromean rings: every two-component sublink is trivial (common practice)
+    const borromean = fromBraid([1, -2, 1, -2, 1, -2]);
+    for (const keep of [[0, 1], [0, 2], [1, 2]]) expect(jones(sublink(borromean, keep)).equals(loop)).toBe(true);
+    const one = sublink(diagram(fromBraid([1, 1]).pd, { framings: [4, null] }), [0]);
+    expect(one).toEqual({ pd: [], unknots: 1, framings: [4] });
+    expect(jones(sublink(disjointUnion(fromBraid([1, 1, 1]), unknot), [1])).equals(Laurent.one)).toBe(true);
+  });
+
   it('cables: follow the framing, copies link as the framing says', () => {
     // (r,0)-cable of the f-framed unknot is T(r, r f) (common practice).
     for (const [r, f] of [[2, 1], [2, -3], [3, 2], [3, -1]]) {
@@ -141,6 +150,10 @@ describe('families', () => {
         const framed = diagram(d.pd, { unknots: d.unknots, framings: d.framings.map((_, i) => (i === 0 ? f : 0)) });
         const c = cable(framed, 0, rp, rm);
         expect(componentCount(c)).toBe(componentCount(d) + rp + rm - 1);
+        // Each copy alone is the component alone (a pushoff is isotopic to it; common practice).
+        const alone = jones(sublink(d, [0]));
+        const copies = c.framings.flatMap((x, i) => (x === null ? [i] : []));
+        for (const copy of copies) expect(jones(sublink(c, [copy])).equals(alone)).toBe(true);
         // With r = 1 the cable is the component itself, reversed for (0, 1).
         if (rp + rm === 1) {
           const expected = rm === 1 ? reverseComponent(d, 0) : d;
@@ -148,7 +161,6 @@ describe('families', () => {
         }
         // Two copies link f times, times -1 when one is reversed (framing = pushoff linking).
         if (rp + rm === 2) {
-          const copies = c.framings.flatMap((x, i) => (x === null ? [i] : []));
           expect(linking(c, copies[0], copies[1])).toBe((rm === 1 ? -f : f) + 0); // + 0 folds -0
         }
       }),

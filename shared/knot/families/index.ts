@@ -10,3 +10,4 @@ export { connectedSum } from './sum';
 export { torusLink } from './torus';
 export { twistKnot } from './twist';
 export { disjointUnion } from './union';
+export { sublink } from './sublink';

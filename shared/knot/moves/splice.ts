@@ -1,5 +1,5 @@
 // Removing crossings and joining the strands that ran through them: shared by the moves that
-// take crossings away (R1 and R2 undone) and by deleting components.
+// take crossings away (R1 and R2 undone) and by deleting components (sublinks).
 
 import { assemble, Framed } from '../assemble';
 import { Diagram } from '../diagram';
@@ -8,9 +8,10 @@ import { orient, PDError, Slot, slotsOf } from '../pd';
 /**
  * Removes the crossings `remove`; each pair in `joins` is (label entering the removed part,
  * label leaving it) along one strand, joined into one edge. Labels with both ends in removed
- * crossings vanish; a joined strand with no crossing left becomes a crossingless unknot.
+ * crossings vanish; a joined strand with no crossing left becomes a crossingless unknot. The
+ * PD components in `dropped` are deleted (all their crossings must be removed).
  */
-export function splice(d: Diagram, remove: readonly number[], joins: readonly (readonly [number, number])[]): Diagram {
+export function splice(d: Diagram, remove: readonly number[], joins: readonly (readonly [number, number])[], dropped: readonly number[] = []): Diagram {
   const o = orient(d.pd);
   const slots = slotsOf(d.pd);
   const gone = new Set(remove);
@@ -36,6 +37,7 @@ export function splice(d: Diagram, remove: readonly number[], joins: readonly (r
   const framed: Framed[] = [];
   const unknotFramings = [...d.framings.slice(o.components.length)];
   o.components.forEach((labels, c) => {
+    if (dropped.includes(c)) return;
     const anchor = labels.map(find).find((l) => present.has(l));
     if (anchor !== undefined) framed.push({ label: anchor, framing: d.framings[c] });
     else if (labels.some((l) => joined.has(l))) unknotFramings.push(d.framings[c]);
