@@ -46,7 +46,9 @@ export function goeritzForms(o: Oriented, white: 0 | 1 = 0): GoeritzForm[] {
 /** The determinant |det G|; 0 when the diagram falls apart (pieces or free unknots), 1 for the unknot. */
 export function linkDeterminant(d: Diagram): bigint {
   const forms = goeritzForms(orient(d.pd));
-  if (forms.length + d.unknots !== 1) return forms.length + d.unknots === 0 ? 1n : 0n;
+  const pieces = forms.length + d.unknots;
+  // The empty diagram gets 1, like its Jones polynomial: |V(-1)| = det holds there too.
+  if (pieces !== 1) return pieces === 0 ? 1n : 0n;
   if (forms.length === 0) return 1n;
   const det = determinant(integers, forms[0].matrix);
   return det < 0n ? -det : det;

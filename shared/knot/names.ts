@@ -63,6 +63,8 @@ export const knotTable: readonly KnotEntry[] = [
   e('8_14', { rational: [2, 2, 1, 1, 2] }, 31, 2, [-11, 8, -2], false, 'from memory (signature: computed, see comment)'),
   e('8_15', { dt: [4, 8, 12, 2, 14, 6, 16, 10] }, 33, 4, [11, -8, 3]),
   e('8_16', { dt: [6, 8, 14, 12, 4, 16, 2, 10] }, 35, 2, [-9, 8, -4, 1]),
+  // 8_17 is only negatively amphichiral (its mirror is its reverse, from memory); for a knot the
+  // Jones polynomial cannot see reversal, so as unoriented knots it is listed amphichiral.
   e('8_17', { dt: [6, 8, 12, 14, 4, 16, 2, 10] }, 37, 0, [11, -8, 4, -1], true),
   e('8_18', { dt: [6, 8, 10, 12, 14, 16, 2, 4] }, 45, 0, [13, -10, 5, -1], true),
   e('8_19', { dt: [4, 8, -12, 2, -14, -16, -6, -10] }, 3, 6, [1, 0, -1, 1]),
