@@ -4,6 +4,8 @@
 import { cubeKhovanov } from '@/shared/khovanov/cube';
 import { khovanov, KhCancelled, KhGroup, KhRing } from '@/shared/khovanov';
 import { fromBraid } from '@/shared/knot/braid';
+import { disjointUnion } from '@/shared/knot/families/union';
+import { connectedSum } from '@/shared/knot/families/sum';
 import { Braid, randomMarkovMove, randomMoves, seededRng } from '@/shared/knot/moves';
 import { orient, PDCode } from '@/shared/knot/pd';
 import { integers, primeField, rationals, Ring } from '@/shared/linalg/ring';
@@ -113,6 +115,37 @@ describe('theorems on generated diagrams', () => {
         .filter((g) => g.free > 0 || g.torsion.length > 0)
         .sort((a, b) => a.i - b.i || a.j - b.j);
       expect(table(m)).toEqual(table(expected));
+    }
+  });
+});
+
+describe('products (Kunneth over a field)', () => {
+  // Poincare polynomial as a map "i,j" -> dimension, and the product of two.
+  const poly = (g: readonly KhGroup[]) => new Map(g.map((x) => [`${x.i},${x.j}`, x.free]));
+  const product = (a: readonly KhGroup[], b: readonly KhGroup[], shift = 0) => {
+    const out = new Map<string, number>();
+    for (const x of a) for (const y of b) {
+      const k = `${x.i + y.i},${x.j + y.j + shift}`;
+      out.set(k, (out.get(k) ?? 0) + x.free * y.free);
+    }
+    return out;
+  };
+  const sorted = (m: Map<string, number>) => [...m].sort();
+  const pairs = [[small[0], small[1]], [small[2], alternating[0]], [[1, 1, 1], [1, -2, 1, -2]]];
+
+  it('disjoint union: Kh(L1 u L2) = Kh(L1) (x) Kh(L2) over Q (Khovanov 2000, arXiv math/9908171)', () => {
+    for (const [w1, w2] of pairs) {
+      const d = disjointUnion(fromBraid(w1), fromBraid(w2));
+      expect(sorted(poly(kh(d.pd, 'Q')))).toEqual(sorted(product(kh(pdOf(w1), 'Q'), kh(pdOf(w2), 'Q'))));
+    }
+  });
+
+  it('connected sum of knots: reduced Kh multiplies over Q (Khovanov 2003, arXiv math/0201306; from memory)', () => {
+    const knots = [...small, ...alternating].filter((w) => orient(pdOf(w)).components.length === 1).slice(0, 4);
+    expect(knots.length).toBeGreaterThanOrEqual(2);
+    for (let k = 0; k + 1 < knots.length; k += 2) {
+      const d = connectedSum(fromBraid(knots[k]), fromBraid(knots[k + 1]));
+      expect(sorted(poly(kh(d.pd, 'Q', true)))).toEqual(sorted(product(kh(pdOf(knots[k]), 'Q', true), kh(pdOf(knots[k + 1]), 'Q', true))));
     }
   });
 });
