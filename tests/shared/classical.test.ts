@@ -2,7 +2,7 @@
 // linking matrix. Published values name their source; most checks are theorems on random
 // braid closures, which no choice of constants can satisfy by accident.
 import fc from 'fast-check';
-import { Diagram, fromBraid, fromDT, jones, Laurent, pretzelLink, rationalLink } from '@/shared/knot';
+import { diagram, Diagram, fromBraid, fromDT, jones, Laurent, pretzelLink, rationalLink } from '@/shared/knot';
 import { alexander } from '@/shared/knot/alexander';
 import { colourings, solutionsModN } from '@/shared/knot/colourings';
 import { goeritzForms, linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
@@ -256,6 +256,14 @@ describe('linking matrix', () => {
     expect([b[0][1], b[0][2], b[1][2]]).toEqual([0, 0, 0]);
     expect(linkingMatrix(fromBraid([1, 1, 1, 1]))[0][1]).toBe(2);
     expect(linkingMatrix(trefoil)).toEqual([[3]]); // diagonal: blackboard framing = self-writhe
+  });
+
+  it('carries set framings on the diagonal, blackboard framings where none is set', () => {
+    const t4 = fromBraid([1, 1, 1, 1]);
+    expect(linkingMatrix(diagram(t4.pd, { framings: [-3, null] }))).toEqual([[-3, 2], [2, 0]]);
+    const kinked = diagram([[1, 1, 2, 2]]); // a positive kink: blackboard framing +1
+    expect(linkingMatrix(kinked)).toEqual([[1]]);
+    expect(linkingMatrix(diagram([[1, 1, 2, 2]], { framings: [0] }))).toEqual([[0]]);
   });
 
   it('is symmetric, integral, and its entries add up to the writhe (common practice)', () => {
