@@ -29,6 +29,9 @@ export function isApiError(e: unknown, code?: ApiError['code']): e is ApiError {
  */
 const baseUrl = process.env.EXPO_PUBLIC_API_URL ?? '';
 
+/** An absolute URL for a server path the API handed out (e.g. a signed photo URL for <Image>). */
+export const apiUrl = (path: string) => baseUrl + path;
+
 let tokenSource: () => string | null = () => null;
 let onUnauthorized: () => void = () => {};
 
@@ -38,7 +41,7 @@ export function configureApi(opts: { token: () => string | null; onUnauthorized:
   onUnauthorized = opts.onUnauthorized;
 }
 
-type Method = 'GET' | 'POST' | 'PATCH' | 'DELETE';
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 /** Call `path`; parse a 2xx body with `schema` (null for 204 answers). */
 export async function api<S extends z.ZodType>(
@@ -51,7 +54,9 @@ export async function api(method: Method, path: string, schema: null, body?: unk
 export async function api(method: Method, path: string, schema: z.ZodType | null, body?: unknown) {
   const token = tokenSource();
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // FormData (uploads) sets its own multipart Content-Type with the boundary.
+  const form = typeof FormData !== 'undefined' && body instanceof FormData;
+  if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (token) headers.Authorization = `Bearer ${token}`;
 
   let res: Response;
@@ -59,7 +64,7 @@ export async function api(method: Method, path: string, schema: z.ZodType | null
     res = await fetch(baseUrl + path, {
       method,
       headers,
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : form ? (body as FormData) : JSON.stringify(body),
     });
   } catch {
     throw new ApiError(0, 'network', 'Cannot reach the server. Check the connection and try again.');

@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { useRouter, useGlobalSearchParams } from 'expo-router';
 import { useSession } from '@/hooks/useSession';
 import { useGroups } from '@/hooks/queries/useGroups';
+import { useNotifications } from '@/hooks/queries/useNotifications';
 import { isApiError } from '@/lib/api';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
@@ -20,6 +21,7 @@ export function AccountOverview() {
   const groups = useGroups();
   const { id: openId } = useGlobalSearchParams<{ id?: string }>();
   const open = (id: string) => router.push(`/account/groups/${id}`);
+  const unread = useNotifications().data?.unread ?? 0;
 
   return (
     <Screen>
@@ -37,6 +39,15 @@ export function AccountOverview() {
         <View style={styles.row}>
           <Button variant="secondary" label="Sign out" onPress={() => router.push('/sign-out')} />
         </View>
+      </Section>
+
+      <Section title="Notifications">
+        <Pressable role="link" aria-label="Open notifications" onPress={() => router.push('/account/notifications')}
+          style={({ hovered }: PressState) => [styles.group, hovered && styles.groupOn]}>
+          <Text style={styles.groupName}>Notifications</Text>
+          {unread ? <Text style={styles.unread}>{unread} new</Text> : null}
+          <Text style={styles.chevron}>›</Text>
+        </Pressable>
       </Section>
 
       <Section title="Groups" note="Your research group shares sketches, runs and discussion on its feed.">
@@ -85,4 +96,5 @@ const styles = StyleSheet.create({
   groupOn: { backgroundColor: colors.paper },
   groupName: { ...type.heading, color: colors.ink, flex: 1 },
   chevron: { ...type.title, color: colors.inkFaint },
+  unread: { ...type.label, color: colors.onAccent, backgroundColor: colors.accent, borderRadius: radius.pill, paddingHorizontal: space.sm, overflow: 'hidden' },
 });

@@ -1,22 +1,20 @@
-// The group feed. Later: shared sketches, comments, forks, "same invariants as" links.
-import { useRouter } from 'expo-router';
-import { Screen } from '@/components/ui/Screen';
-import { PageTitle } from '@/components/ui/PageTitle';
-import { EmptyState } from '@/components/ui/EmptyState';
-import { Button } from '@/components/ui/Button';
-import { FeedIcon } from '@/components/shell/icons';
-import { colors } from '@/constants/theme';
+// The group feed. Phone: the list itself. Wide: the list is already on the left, so hint at the right pane.
+import { StyleSheet, Text, View } from 'react-native';
+import { FeedList } from '@/components/feed/FeedList';
+import { useIsWide } from '@/components/shell/useIsWide';
+import { colors, space, type } from '@/constants/theme';
 
 export default function FeedScreen() {
-  const router = useRouter();
+  const wide = useIsWide();
+  if (!wide) return <FeedList />;
   return (
-    <Screen>
-      <PageTitle kicker="Group" title="Feed" />
-      <EmptyState art={<FeedIcon color={colors.inkFaint} size={40} />} title="Nothing shared yet"
-        action={<Button variant="secondary" label="Open my groups" onPress={() => router.navigate('/account')} />}>
-        When you or someone in your group shares a sketch, it appears here to comment on, fork into your
-        sketchbook, or start a run from. Join or create a group under Account first.
-      </EmptyState>
-    </Screen>
+    <View style={styles.hint}>
+      <Text style={styles.text}>Open a shared sketch to see its photos, discussion and related sketches.</Text>
+    </View>
   );
 }
+
+const styles = StyleSheet.create({
+  hint: { flex: 1, alignItems: 'center', justifyContent: 'center', padding: space.xxl },
+  text: { ...type.body, color: colors.inkFaint, textAlign: 'center', maxWidth: 360 },
+});

@@ -78,6 +78,7 @@ export default function GroupScreen() {
 
       <Section title={members.data ? `Members · ${members.data.length}` : 'Members'}>
         {members.isError ? <Banner tone="error">{members.error.message}</Banner> : null}
+        {manager ? <Button variant="secondary" label="Members table" onPress={() => router.push(`/account/members/${id}`)} /> : null}
         <View style={styles.members}>
           {members.data?.map((m) => (
             <MemberRow key={m.userId} groupId={id} member={m} myRole={role} isMe={m.userId === me?.id} />

@@ -1,0 +1,84 @@
+// The discussion under a shared sketch: oldest first, my own editable and removable, anyone's
+// removable by owners and admins; viewers read only.
+import { useState } from 'react';
+import { StyleSheet, Text, TextInput, View } from 'react-native';
+import type { Comment } from '@/shared/api/comments';
+import { useAddComment, useDeleteComment, useEditComment } from '@/hooks/queries/useFeed';
+import { useSession } from '@/hooks/useSession';
+import { Banner } from '@/components/ui/Banner';
+import { Button } from '@/components/ui/Button';
+import { colors, fonts, radius, space, type } from '@/constants/theme';
+import { CommentText } from './CommentText';
+import { when } from './when';
+
+function Composer({ initial = '', label, busy, onSubmit, onCancel }: { initial?: string; label: string; busy: boolean; onSubmit: (body: string) => void; onCancel?: () => void }) {
+  const [body, setBody] = useState(initial);
+  return (
+    <View style={styles.composer}>
+      <TextInput value={body} onChangeText={setBody} multiline aria-label={label} placeholder="Write a comment. **bold**, *italic*, `code`"
+        placeholderTextColor={colors.inkFaint} style={styles.input} />
+      <View style={styles.row}>
+        <Button label={label} busy={busy} busyLabel="Saving…" disabled={!body.trim()} onPress={() => onSubmit(body)} />
+        {onCancel ? <Button variant="quiet" label="Cancel" onPress={onCancel} /> : null}
+      </View>
+    </View>
+  );
+}
+
+function Item({ c, groupId, mine, moderate, canWrite }: { c: Comment; groupId: string; mine: boolean; moderate: boolean; canWrite: boolean }) {
+  const [editing, setEditing] = useState(false);
+  const edit = useEditComment(groupId);
+  const remove = useDeleteComment(groupId);
+  return (
+    <View style={styles.item}>
+      <Text style={styles.meta}>
+        <Text style={styles.author}>{c.author.displayName}</Text> · {when(c.createdAt)}{c.editedAt ? ' · edited' : ''}
+      </Text>
+      {editing ? (
+        <Composer initial={c.body} label="Save" busy={edit.isPending} onCancel={() => setEditing(false)}
+          onSubmit={(body) => edit.mutate({ id: c.id, body }, { onSuccess: () => setEditing(false) })} />
+      ) : (
+        <CommentText body={c.body} />
+      )}
+      {!editing && (mine || moderate) ? (
+        <View style={styles.actions}>
+          {mine && canWrite ? <Text role="button" style={styles.action} onPress={() => setEditing(true)}>Edit</Text> : null}
+          <Text role="button" style={[styles.action, styles.danger]} onPress={() => remove.mutate(c.id)}>{mine ? 'Delete' : 'Remove'}</Text>
+        </View>
+      ) : null}
+      {edit.error || remove.error ? <Banner tone="error">{(edit.error ?? remove.error)!.message}</Banner> : null}
+    </View>
+  );
+}
+
+export function Comments({ groupId, sketchId, comments, canComment, moderate }: { groupId: string; sketchId: string; comments: Comment[]; canComment: boolean; moderate: boolean }) {
+  const me = useSession((s) => s.user);
+  const add = useAddComment(groupId, sketchId);
+  const [round, setRound] = useState(0); // remounts the composer empty after a post
+  return (
+    <View style={styles.wrap}>
+      {comments.length === 0 ? <Text style={styles.muted}>No comments yet.</Text> : null}
+      {comments.map((c) => <Item key={c.id} c={c} groupId={groupId} mine={c.author.id === me?.id} moderate={moderate} canWrite={canComment} />)}
+      {add.error ? <Banner tone="error">{add.error.message}</Banner> : null}
+      {canComment ? (
+        <Composer key={round} label="Post comment" busy={add.isPending} onSubmit={(body) => add.mutate(body, { onSuccess: () => setRound((r) => r + 1) })} />
+      ) : (
+        <Text style={styles.muted}>Viewers read the discussion; ask an admin to make you a member to comment.</Text>
+      )}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.lg },
+  item: { gap: 4, paddingBottom: space.md, borderBottomWidth: 1, borderBottomColor: colors.line },
+  meta: { ...type.small, color: colors.inkMuted },
+  author: { fontFamily: fonts.medium, color: colors.ink },
+  actions: { flexDirection: 'row', gap: space.lg },
+  action: { ...type.label, color: colors.accent },
+  danger: { color: colors.danger },
+  composer: { gap: space.sm },
+  input: { minHeight: 88, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface, fontFamily: fonts.regular, fontSize: 16, color: colors.ink, textAlignVertical: 'top' },
+  row: { flexDirection: 'row', gap: space.sm },
+  muted: { ...type.small, color: colors.inkMuted },
+});

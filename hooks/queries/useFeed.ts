@@ -1,0 +1,114 @@
+// The group feed, a shared sketch's page and what can be done there (comment, fork, photos,
+// share). Keys live under ['feed', groupId] so one invalidation refreshes list and pages.
+import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { Comment, commentPaths } from '@/shared/api/comments';
+import { FeedPage, ForkResponse, GroupSketch, ShareResponse, feedPaths } from '@/shared/api/feed';
+import { Photo, photoPaths } from '@/shared/api/photos';
+import { SketchList, sketchPaths } from '@/shared/api/sketches';
+import { api } from '@/lib/api';
+
+export interface FeedFilters {
+  tag?: string;
+  person?: string;
+  hasResults?: boolean;
+}
+
+export const feedKeys = {
+  group: (groupId: string) => ['feed', groupId] as const,
+  list: (groupId: string, f: FeedFilters) => [...feedKeys.group(groupId), 'list', f] as const,
+  sketch: (groupId: string, sketchId: string) => [...feedKeys.group(groupId), 'sketch', sketchId] as const,
+  mySketches: () => ['feed', 'my-sketches'] as const,
+};
+
+function feedPath(groupId: string, f: FeedFilters, cursor: number | null): string {
+  const q = new URLSearchParams();
+  if (cursor) q.set('cursor', String(cursor));
+  if (f.tag) q.set('tag', f.tag);
+  if (f.person) q.set('person', f.person);
+  if (f.hasResults) q.set('hasResults', 'true');
+  const s = q.toString();
+  return feedPaths.feed(groupId) + (s ? `?${s}` : '');
+}
+
+export function useFeed(groupId: string | null, filters: FeedFilters) {
+  return useInfiniteQuery({
+    queryKey: feedKeys.list(groupId ?? '', filters),
+    enabled: !!groupId,
+    initialPageParam: null as number | null,
+    queryFn: ({ pageParam }) => api('GET', feedPath(groupId!, filters, pageParam), FeedPage),
+    getNextPageParam: (last) => last.nextCursor,
+  });
+}
+
+export function useGroupSketch(groupId: string, sketchId: string) {
+  return useQuery({ queryKey: feedKeys.sketch(groupId, sketchId), queryFn: () => api('GET', feedPaths.groupSketch(groupId, sketchId), GroupSketch) });
+}
+
+/** After any change on a sketch page: the page and the feed (comment counts, thumbnails). */
+function useRefreshGroup(groupId: string) {
+  const qc = useQueryClient();
+  return () => qc.invalidateQueries({ queryKey: feedKeys.group(groupId) });
+}
+
+export function useAddComment(groupId: string, sketchId: string) {
+  const refresh = useRefreshGroup(groupId);
+  return useMutation({ mutationFn: (body: string) => api('POST', commentPaths.comments(sketchId), Comment, { body }), onSuccess: refresh });
+}
+
+export function useEditComment(groupId: string) {
+  const refresh = useRefreshGroup(groupId);
+  return useMutation({
+    mutationFn: ({ id, body }: { id: string; body: string }) => api('PATCH', commentPaths.comment(id), Comment, { body }),
+    onSuccess: refresh,
+  });
+}
+
+export function useDeleteComment(groupId: string) {
+  const refresh = useRefreshGroup(groupId);
+  return useMutation({ mutationFn: (id: string) => api('DELETE', commentPaths.comment(id), null), onSuccess: refresh });
+}
+
+export function useFork() {
+  return useMutation({ mutationFn: (sketchId: string) => api('POST', feedPaths.fork(sketchId), ForkResponse) });
+}
+
+/** An image the user picked, as the browser or the device hands it over. */
+export interface PickedImage {
+  uri: string;
+  name: string;
+  type: string;
+  /** Web only: the File itself. */
+  file?: Blob;
+}
+
+export function useUploadPhoto(groupId: string, sketchId: string) {
+  const refresh = useRefreshGroup(groupId);
+  return useMutation({
+    mutationFn: async (img: PickedImage) => {
+      const form = new FormData();
+      // Web appends the File; native FormData takes {uri, name, type}.
+      form.append('file', (img.file ?? { uri: img.uri, name: img.name, type: img.type }) as Blob, img.name);
+      return api('POST', photoPaths.photos(sketchId), Photo, form);
+    },
+    onSuccess: refresh,
+  });
+}
+
+export function useDeletePhoto(groupId: string) {
+  const refresh = useRefreshGroup(groupId);
+  return useMutation({ mutationFn: (photoId: string) => api('DELETE', photoPaths.photo(photoId), null), onSuccess: refresh });
+}
+
+/** My sketches as the server holds them (to pick one to share). */
+export function useMyServerSketches(enabled: boolean) {
+  return useQuery({ queryKey: feedKeys.mySketches(), enabled, queryFn: () => api('GET', sketchPaths.sketches, SketchList) });
+}
+
+export function useShare() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ sketchId, groupId }: { sketchId: string; groupId: string | null }) =>
+      groupId ? api('PUT', feedPaths.share(sketchId), ShareResponse, { groupId }) : api('DELETE', feedPaths.share(sketchId), ShareResponse),
+    onSuccess: () => qc.invalidateQueries({ queryKey: ['feed'] }),
+  });
+}

@@ -1,0 +1,123 @@
+// The group journey (DESIGN.md journey 4) in a real browser, two people at once: Ada shares a
+// sketch to the group feed and adds a board photo; Bruno (wide screen) finds it in the feed,
+// comments and forks it; Ada sees the notification in the app and the e-mail in the kept mail.
+// Accounts, the group and Ada's synced sketch are set up through the API (their UI is covered
+// by accounts.spec.ts and the sync tests); everything after sign-in goes through the screens.
+import { randomUUID } from 'node:crypto';
+import sharp from 'sharp';
+import type { Browser, Page } from 'playwright-core';
+import { PHONE, WIDE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
+
+const ada = { name: 'Ada Feedwright', email: uniqueEmail('ada.feed'), password: 'correct horse 3' };
+const bruno = { name: 'Bruno Commenter', email: uniqueEmail('bruno.feed'), password: 'battery staple 4' };
+const title = 'Trefoil from the colloquium';
+
+let browser: Browser;
+let adaPage: Page;
+let brunoPage: Page;
+
+async function call(method: string, path: string, token: string | null, body?: unknown) {
+  const res = await fetch(baseUrl + path, {
+    method,
+    headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const json = await res.json().catch(() => null);
+  if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json)}`);
+  return json;
+}
+
+/** A circle-ish stroke set, as the Slate would store it. */
+const strokes = [
+  { points: Array.from({ length: 60 }, (_, i) => [100 + 80 * Math.cos((i / 60) * 6 * Math.PI) + 30 * Math.cos((i / 60) * 4 * Math.PI), 100 + 80 * Math.sin((i / 60) * 6 * Math.PI) - 30 * Math.sin((i / 60) * 4 * Math.PI)]), closed: true },
+];
+
+async function signIn(page: Page, who: typeof ada) {
+  await page.goto(baseUrl + '/sign-in');
+  await page.getByLabel('E-mail').fill(who.email);
+  await page.getByLabel('Password').fill(who.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Sketches', exact: true }).waitFor();
+}
+
+beforeAll(async () => {
+  const a = await call('POST', '/api/auth/register', null, { email: ada.email, password: ada.password, displayName: ada.name });
+  const b = await call('POST', '/api/auth/register', null, { email: bruno.email, password: bruno.password, displayName: bruno.name });
+  const group = await call('POST', '/api/groups', a.token, { name: 'Knot lunch' });
+  await call('POST', `/api/groups/${group.id}/invitations`, a.token, { email: bruno.email, role: 'member' });
+  const mail = (await call('GET', '/api/dev/mail', null)) as { to: string[]; links: string[] }[];
+  const link = mail.filter((m) => m.to.includes(bruno.email)).pop()!.links.find((l) => l.includes('/invite/'))!;
+  await call('POST', `/api/invitations/${new URL(link).pathname.split('/').pop()}/accept`, b.token);
+  const now = new Date().toISOString();
+  // Ada's sketch as her phone would have synced it: the positive trefoil (DESIGN.md PD convention, from memory).
+  await call('POST', '/api/sync/push', a.token, {
+    deviceId: 'ada-phone',
+    mutations: [{
+      mutationId: randomUUID(), deviceId: 'ada-phone', clock: 1, recordId: randomUUID(), type: 'sketch', op: 'add', baseVersion: 0,
+      fields: { title, seenAt: 'Colloquium, room 3', notes: 'Drawn during the talk.', tags: ['knot', 'torus'], attachments: [], groupId: null, deleted: false, createdAt: now, updatedAt: now,
+        diagram: { pd: [[1, 5, 2, 4], [3, 1, 4, 6], [5, 3, 6, 2]], unknots: 0, framings: [null], strokes } },
+    }],
+  });
+
+  browser = await launch();
+  const adaContext = await browser.newContext({ viewport: PHONE });
+  const brunoContext = await browser.newContext({ viewport: WIDE });
+  for (const c of [adaContext, brunoContext]) c.setDefaultTimeout(10_000);
+  adaPage = await adaContext.newPage();
+  brunoPage = await brunoContext.newPage();
+  await signIn(adaPage, ada);
+  await signIn(brunoPage, bruno);
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+test('Ada shares her sketch to the group and adds a board photo', async () => {
+  await adaPage.getByRole('tab', { name: 'Feed' }).click();
+  await adaPage.getByText('Nothing shared in this group yet.').waitFor();
+  await adaPage.getByRole('button', { name: 'Share a sketch' }).click();
+  await adaPage.getByRole('button', { name: `Share ${title}` }).click();
+  await adaPage.getByRole('heading', { name: title }).waitFor();
+  // Readout summary of the positive trefoil: Jones t + t^3 - t^4 (DESIGN.md conventions).
+  await adaPage.getByText('V(t) = t + t³ − t⁴').waitFor();
+
+  const photo = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#2a3b44' } })
+    .jpeg().withExif({ IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '48/1 51/1 24/1' } }).toBuffer();
+  const chooser = adaPage.waitForEvent('filechooser');
+  await adaPage.getByRole('button', { name: 'Add a board photo' }).click();
+  await (await chooser).setFiles({ name: 'board.jpg', mimeType: 'image/jpeg', buffer: photo });
+  await adaPage.getByText('Board photos · 1').waitFor();
+  await adaPage.getByLabel(`Board photo by ${ada.name}`).waitFor();
+  await shoot(adaPage, '20-feed-shared-sketch');
+});
+
+test('Bruno sees it in the feed, comments and forks it', async () => {
+  await brunoPage.getByRole('tab', { name: 'Feed' }).click();
+  const card = brunoPage.getByRole('link', { name: `Open ${title}` });
+  await card.waitFor();
+  await expect(card.innerText()).resolves.toContain(ada.name);
+  await expect(card.innerText()).resolves.toContain('3 crossings');
+  await shoot(brunoPage, '21-feed-list');
+  await card.click();
+  await brunoPage.getByRole('heading', { name: title }).waitFor();
+  await brunoPage.getByRole('textbox', { name: 'Post comment' }).fill('Is this the **positive** trefoil? Check `X[1,5,2,4]`.');
+  await brunoPage.getByRole('button', { name: 'Post comment' }).click();
+  await brunoPage.getByText('Discussion · 1').waitFor();
+  await brunoPage.getByText('positive', { exact: true }).waitFor(); // the bold span, rendered as text
+  await brunoPage.getByRole('button', { name: 'Fork into my sketchbook' }).click();
+  await brunoPage.getByText('A private copy is in your sketchbook').waitFor();
+  await shoot(brunoPage, '22-feed-sketch-discussion');
+});
+
+test('Ada sees the notification in the app and the e-mail in the kept mail', async () => {
+  await adaPage.getByRole('tab', { name: 'Account' }).click();
+  await adaPage.getByRole('link', { name: 'Open notifications' }).click();
+  const note = adaPage.getByTestId('notification-comment');
+  await note.waitFor();
+  await expect(note.innerText()).resolves.toContain(`${bruno.name} commented on “${title}”`);
+  await shoot(adaPage, '23-notifications');
+  await adaPage.goto(baseUrl + '/dev/mail');
+  await adaPage.getByText(`${bruno.name} commented on "${title}"`).first().waitFor();
+  await shoot(adaPage, '24-kept-mail-comment');
+});
