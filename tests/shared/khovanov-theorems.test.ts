@@ -45,6 +45,14 @@ describe('fast engine = reference cube', () => {
   });
 });
 
+describe('fast engine = reference cube on larger diagrams', () => {
+  it.each(words(2, 10, 11).map((w) => [w.join(' '), w]))('braid %s over Z and F5', (_, word) => {
+    const pd = pdOf(word as number[]);
+    expect(table(kh(pd, 'Z'))).toEqual(table(cubeKhovanov(pd, integers)));
+    expect(table(kh(pd, 'F5'))).toEqual(table(cubeKhovanov(pd, primeField(5))));
+  });
+});
+
 describe('theorems on generated diagrams', () => {
   it('graded Euler characteristic = (q + q^-1) V, reduced = V (Khovanov 2000, arXiv math/9908171; Bar-Natan 2002 normalisation)', () => {
     for (const w of [...small, ...medium]) {
