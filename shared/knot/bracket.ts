@@ -124,22 +124,30 @@ function join(step: Step, match: number[], smoothing: readonly number[]): { matc
   return { match: q, loops };
 }
 
-// Greedy order: next the crossing with most labels on the current boundary, then fewest new ones.
+// Greedy order: next the crossing with most edges on the current boundary, which keeps the cut
+// small; among those, the one touching the longest-open edge, so the cut sweeps the diagram.
 function contractionOrder(pd: PDCode): number[] {
   const left = new Set(pd.map((_, i) => i));
-  const open = new Map<number, number>(); // label -> times seen so far
+  const opened = new Map<number, number>(); // boundary label -> step at which it opened
+  const closed = new Set<number>();
   const order: number[] = [];
   while (left.size > 0) {
     let best = -1;
     let bestScore = -Infinity;
     for (const i of left) {
-      const shared = pd[i].filter((l) => open.get(l) === 1).length;
-      const score = shared * 8 - (4 - shared);
+      const shared = pd[i].filter((l) => opened.has(l));
+      const oldest = Math.min(...shared.map((l) => opened.get(l)!), pd.length);
+      const score = shared.length * (pd.length + 1) - oldest;
       if (score > bestScore) [best, bestScore] = [i, score];
     }
     left.delete(best);
+    for (const l of pd[best]) {
+      if (opened.has(l) || closed.has(l)) {
+        opened.delete(l);
+        closed.add(l);
+      } else opened.set(l, order.length);
+    }
     order.push(best);
-    for (const l of pd[best]) open.set(l, (open.get(l) ?? 0) + 1);
   }
   return order;
 }

@@ -1,4 +1,5 @@
 // npm run bench: every bench module in turn, one line per figure. Add a module with one line.
+import { jonesBench } from './jones.bench';
 import { khovanovBench } from './khovanov.bench';
 
 interface Line {
@@ -9,11 +10,15 @@ interface Line {
 }
 
 const benches: [string, () => Line[] | Promise<Line[]>][] = [
+  ['jones', jonesBench],
   ['khovanov', khovanovBench],
 ];
 
 async function main(): Promise<void> {
+  // `npm run bench -- jones` runs only the benches named.
+  const wanted = process.argv.slice(2);
   for (const [name, bench] of benches) {
+    if (wanted.length > 0 && !wanted.includes(name)) continue;
     console.log(`# ${name}`);
     for (const l of await bench()) console.log(`${l.name}: ${l.value} ${l.unit}${l.goal ? ` (goal ${l.goal})` : ''}`);
   }

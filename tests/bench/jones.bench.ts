@@ -32,11 +32,12 @@ function medianMs(f: () => unknown, budgetMs: number, maxRuns = 31): number {
   return times[Math.floor(times.length / 2)];
 }
 
-// A fixed pseudo-random braid on 4 strands using every generator, seeded so runs compare.
-function braidOf(crossings: number): Diagram {
+// A fixed pseudo-random braid using every generator in turn, seeded so runs compare; more
+// strands make a wider cut.
+function braidOf(strands: number, crossings: number): Diagram {
   const rng = seededRng(crossings);
-  const word = Array.from({ length: crossings }, (_, i) => ((i % 3) + 1) * (rng() < 0.5 ? 1 : -1));
-  return fromBraid(word, 4);
+  const word = Array.from({ length: crossings }, (_, i) => ((i % (strands - 1)) + 1) * (rng() < 0.5 ? 1 : -1));
+  return fromBraid(word, strands);
 }
 
 // T(p, q) with (p - 1) q = crossings: T(2,15), T(3,15), T(4,20), T(5,25).
@@ -48,7 +49,8 @@ const round = (x: number, digits = 2) => Number(x.toFixed(digits));
 export function jonesBench(): BenchLine[] {
   const lines: BenchLine[] = [];
   const cases: [string, (n: number) => Diagram][] = [
-    ['braid closure (4 strands)', braidOf],
+    ['braid closure (4 strands)', (n) => braidOf(4, n)],
+    ['braid closure (8 strands)', (n) => braidOf(8, n)],
     ['torus link', (n) => torusLink(...TORUS[n])],
   ];
   for (const [family, make] of cases) {
