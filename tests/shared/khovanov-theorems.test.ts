@@ -4,6 +4,7 @@
 import { cubeKhovanov } from '@/shared/khovanov/cube';
 import { khovanov, KhCancelled, KhGroup, KhRing } from '@/shared/khovanov';
 import { fromBraid } from '@/shared/knot/braid';
+import { rationalLink } from '@/shared/knot/families/rational';
 import { disjointUnion } from '@/shared/knot/families/union';
 import { connectedSum } from '@/shared/knot/families/sum';
 import { Braid, randomMarkovMove, randomMoves, seededRng } from '@/shared/knot/moves';
@@ -78,6 +79,17 @@ describe('theorems on generated diagrams', () => {
       expect(r.groups.flatMap((g) => g.torsion).filter((t) => t !== 2)).toEqual([]);
       expect(khovanov(pdOf(w), { ring: 'Z', reduced: true }).width).toBe(1);
     }
+    // Rational links from the knot core (2-bridge links are alternating: Burde-Zieschang, ch. 12).
+    for (const f of [[2, 3], [3, 1, 2], [2, 2, 2, 1], [4, 3, 2], [1, 2, 3, 2]]) {
+      const d = rationalLink(f);
+      const r = khovanov(d.pd, { ring: 'Z', unknots: d.unknots });
+      expect([f, r.thin, r.groups.flatMap((g) => g.torsion).filter((t) => t !== 2)]).toEqual([f, true, []]);
+    }
+  });
+
+  it('T(3,4) = 8_19 is thick, on three diagonals (Bar-Natan 2002, arXiv math/0201043, tables)', () => {
+    const r = khovanov(pdOf(torusWord(3, 4)), { ring: 'Z' });
+    expect([r.thin, r.width]).toEqual([false, 3]);
   });
 
   it('universal coefficients relate Z to Q, F2 and F3 (H^i(C; F_p) = H^i (x) F_p + Tor(H^{i+1}, F_p))', () => {
