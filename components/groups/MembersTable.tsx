@@ -30,7 +30,7 @@ function Row({ groupId, m, myRole, isMe, wide }: { groupId: string; m: RosterEnt
         <Text style={styles.name}>{m.displayName}{isMe ? <Text style={styles.muted}>  (you)</Text> : null}</Text>
         <Text style={styles.email} numberOfLines={1}>{m.email}</Text>
       </View>
-      <View role="cell" style={wide ? styles.cRole : undefined}>
+      <View role="cell" style={wide ? styles.cRole : styles.start}>
         {editable ? (
           <RolePicker label={`Role of ${m.displayName}`} value={m.role} options={assignableRoles(myRole)}
             onChange={(role) => role !== m.role && change.mutate({ userId: m.userId, role })} />
@@ -92,9 +92,10 @@ const styles = StyleSheet.create({
   headRow: { paddingBottom: space.sm },
   head: { ...type.caps, color: colors.inkMuted },
   cName: { flex: 3, minWidth: 180 },
-  cRole: { flex: 4, minWidth: 200 },
+  cRole: { flex: 4, minWidth: 200, alignItems: 'flex-start' },
   cDate: { flex: 2, minWidth: 96 },
   cAct: { flex: 1, minWidth: 64 },
+  start: { alignItems: 'flex-start' },
   name: { ...type.heading, color: colors.ink },
   email: { fontFamily: fonts.mono, fontSize: 13, color: colors.inkMuted, flexShrink: 1 },
   cell: { ...type.small, color: colors.ink },

@@ -82,8 +82,11 @@ test('Ada shares her sketch to the group and adds a board photo', async () => {
   // Readout summary of the positive trefoil: Jones t + t^3 - t^4 (DESIGN.md conventions).
   await adaPage.getByText('V(t) = t + t³ − t⁴').waitFor();
 
-  const photo = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#2a3b44' } })
-    .jpeg().withExif({ IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '48/1 51/1 24/1' } }).toBuffer();
+  // A "photo of the board": chalk curves on slate, with a GPS position in its EXIF as a phone would write.
+  const board = `<svg xmlns="http://www.w3.org/2000/svg" width="800" height="600"><rect width="800" height="600" fill="#2b3a36"/>
+    <path d="M400 120 C 620 120 640 420 470 470 C 300 520 160 300 300 200 C 420 120 560 300 480 400 C 400 500 220 420 260 300 C 300 180 400 120 400 120"
+      stroke="#eeeae0" stroke-width="9" fill="none" stroke-linecap="round"/><text x="60" y="560" fill="#d9d4c7" font-size="34" font-family="sans-serif">3_1 ?</text></svg>`;
+  const photo = await sharp(Buffer.from(board)).jpeg().withExif({ IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '48/1 51/1 24/1' } }).toBuffer();
   const chooser = adaPage.waitForEvent('filechooser');
   await adaPage.getByRole('button', { name: 'Add a board photo' }).click();
   await (await chooser).setFiles({ name: 'board.jpg', mimeType: 'image/jpeg', buffer: photo });
@@ -120,4 +123,15 @@ test('Ada sees the notification in the app and the e-mail in the kept mail', asy
   await adaPage.goto(baseUrl + '/dev/mail');
   await adaPage.getByText(`${bruno.name} commented on "${title}"`).first().waitFor();
   await shoot(adaPage, '24-kept-mail-comment');
+});
+
+test('Ada opens the members table: roles, joined, last active', async () => {
+  await adaPage.goto(baseUrl + '/account');
+  await adaPage.getByRole('link', { name: 'Open Knot lunch' }).click();
+  await adaPage.getByRole('button', { name: 'Members table' }).click();
+  await adaPage.getByRole('heading', { name: 'Members', exact: true }).waitFor();
+  const row = adaPage.getByTestId(`roster-${bruno.email}`);
+  await row.waitFor();
+  await expect(row.innerText()).resolves.toMatch(/ago|just now/); // Bruno was active in this run
+  await shoot(adaPage, '25-members-table');
 });
