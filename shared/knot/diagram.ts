@@ -2,7 +2,8 @@
 // framing per component. Components are numbered as orient() finds them, then the unknots.
 // A framing of null means the blackboard framing: the writhe of the component's self-crossings.
 
-import { checkPlanar, orient, Oriented, PDCode, PDError } from './pd';
+import { checkPlanar } from './moves/faces';
+import { orient, Oriented, PDCode, PDError } from './pd';
 
 export interface Diagram {
   readonly pd: PDCode;

@@ -1,6 +1,7 @@
 // The public face of the knot core: diagrams, codes, invariants, families and moves.
-export { checkPlanar, connectedPieces, orient, parsePD, PDError, relabel, writhe } from './pd';
+export { connectedPieces, orient, parsePD, PDError, relabel, writhe } from './pd';
 export type { Crossing, Oriented, PDCode, Slot } from './pd';
+export { checkPlanar } from './moves/faces';
 export { blackboardFramings, componentCount, diagram, framingsOf, unknot } from './diagram';
 export type { Diagram, DiagramOptions } from './diagram';
 export { assemble, directions } from './assemble';

@@ -154,34 +154,6 @@ export function writhe(o: Oriented): number {
   return o.signs.reduce((s, x) => s + x, 0);
 }
 
-/**
- * Throws PDError unless the PD code is a planar diagram: with the counterclockwise order at
- * every crossing, each connected piece of n_i crossings must have n_i + 2 faces (Euler's formula
- * V - E + F = 2 with E = 2V).
- */
-export function checkPlanar(pd: PDCode): void {
-  const slots = slotsOf(pd);
-  const key = (s: Slot) => s.crossing * 4 + s.position;
-  const seen = new Set<number>();
-  let faces = 0;
-  pd.forEach((_, crossing) => {
-    for (let position = 0; position < 4; position++) {
-      if (seen.has(crossing * 4 + position)) continue;
-      faces++;
-      let s: Slot = { crossing, position };
-      while (!seen.has(key(s))) {
-        seen.add(key(s));
-        const t = other(slots.get(pd[s.crossing][s.position])!, s);
-        s = { crossing: t.crossing, position: (t.position + 1) % 4 };
-      }
-    }
-  });
-  const pieces = connectedPieces(pd).length;
-  if (faces !== pd.length + 2 * pieces) {
-    throw new PDError(`the PD code is not planar: it has ${faces} faces where a planar diagram with ${pd.length} crossings in ${pieces} piece${pieces === 1 ? '' : 's'} has ${pd.length + 2 * pieces}`);
-  }
-}
-
 /** The crossing indices of each connected piece of the diagram, in order of first crossing. */
 export function connectedPieces(pd: PDCode): number[][] {
   const parent = pd.map((_, i) => i);

@@ -1,4 +1,5 @@
-import { checkPlanar, orient, parsePD, PDError, relabel, writhe } from '@/shared/knot/pd';
+import { checkPlanar } from '@/shared/knot/moves/faces';
+import { orient, parsePD, relabel, writhe } from '@/shared/knot/pd';
 import { blackboardFramings, diagram, framingsOf } from '@/shared/knot/diagram';
 
 // Right-handed trefoil in the DESIGN.md conventions (checked: all signs +1).

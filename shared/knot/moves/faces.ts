@@ -2,7 +2,7 @@
 // cycle of slots s -> (other end of s's edge, turned one slot counterclockwise); each slot is
 // where the walk leaves a crossing, and the face lies to the right of the walk.
 
-import { PDCode, Slot, slotsOf } from '../pd';
+import { connectedPieces, PDCode, PDError, Slot, slotsOf } from '../pd';
 
 export interface Corner {
   /** The crossing the walk passes. */
@@ -32,4 +32,18 @@ export function faces(pd: PDCode): Corner[][] {
     }
   });
   return result;
+}
+
+/**
+ * Throws PDError unless the PD code is a planar diagram: with the counterclockwise order at
+ * every crossing, each connected piece of n_i crossings must have n_i + 2 faces (Euler's formula
+ * V - E + F = 2 with E = 2V).
+ */
+export function checkPlanar(pd: PDCode): void {
+  const count = faces(pd).length;
+  const pieces = connectedPieces(pd).length;
+  const expected = pd.length + 2 * pieces;
+  if (count !== expected) {
+    throw new PDError(`the PD code is not planar: it has ${count} faces where a planar diagram with ${pd.length} crossings in ${pieces} piece${pieces === 1 ? '' : 's'} has ${expected}`);
+  }
 }
