@@ -1,4 +1,5 @@
 // Everything the server reads from the environment, in one place, with development defaults.
+import { defaultRunLimits, type RunLimits } from './runs/limits';
 import { photoStorageFromEnv, type PhotoStorage } from './photos/store';
 
 export interface Config {
@@ -18,6 +19,8 @@ export interface Config {
   /** Exported web build to serve (dist/), or null for API only. */
   webDir: string | null;
   mailFrom: string;
+  /** Limits of heavy runs and the size of their worker pool. */
+  runs: RunLimits;
   /** Where board photos are kept: a local folder, or an S3-compatible bucket. */
   photos: PhotoStorage;
 }
@@ -36,6 +39,7 @@ export function defaultConfig(overrides: Partial<Config> = {}): Config {
     devPages: true,
     webDir: null,
     mailFrom: 'Overstrand <no-reply@overstrand.invalid>',
+    runs: defaultRunLimits(),
     photos: { kind: 'disk', dir: 'data/photos' },
     ...overrides,
   };

@@ -5,6 +5,7 @@ import type { AddressInfo } from 'node:net';
 import type { Express } from 'express';
 import pino, { type Level } from 'pino';
 import { createApp } from './app';
+import { areas } from './areas';
 import { defaultConfig, type Config } from './config';
 import { openDatabase } from './db/connect';
 import { seedDemo } from './demo/seed';
@@ -53,7 +54,9 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
   const target = options.smtp ?? (mailbox && { host: mailbox.host, port: mailbox.port });
   const mailer = options.mailer ?? createSmtpMailer(target!, config.mailFrom);
   const deps: Deps = { db, config, mailer, mailbox, log, now: options.now ?? (() => new Date()) };
+  const services: { stop(): Promise<void> }[] = [];
   const closeAll = async () => {
+    for (const s of services.splice(0)) await s.stop();
     await mailbox?.stop();
     await db.destroy();
   };
@@ -63,6 +66,7 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
   const http = createServer(app);
   try {
     if (options.demo) demoRowsAdded = await seedDemo(deps);
+    for (const area of areas) if (area.start) services.push(await area.start(deps));
     await new Promise<void>((resolve, reject) => {
       http.once('error', reject);
       http.listen(options.port ?? 0, options.host ?? '127.0.0.1', resolve);

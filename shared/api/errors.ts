@@ -13,6 +13,7 @@ export const errorCodes = [
   'already_member', // 409: accepting an invitation to a group you are in
   'invitation_used', // 409: the invitation link was already accepted
   'last_owner', // 409: the change would leave the group without an owner
+  'run_finished', // 409: cancelling a run that has already ended
   'invitation_expired', // 410: the invitation link is past its expiry
   'payload_too_large', // 413: body over the size limit
   'unsupported_type', // 415: an upload that is not one of the accepted kinds (checked by content)

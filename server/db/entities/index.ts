@@ -3,6 +3,7 @@ import { Group } from './Group';
 import { Attachment, AttachmentUploader } from './Attachment';
 import { Invitation } from './Invitation';
 import { Membership } from './Membership';
+import { Run } from './Run';
 import { Sketch } from './Sketch';
 import { SyncChange } from './SyncChange';
 import { SyncConflict } from './SyncConflict';
@@ -18,6 +19,7 @@ import { UserSettings } from './UserSettings';
 
 export { Group, Invitation, Membership, User };
 export { Attachment, AttachmentUploader, Sketch, SyncChange, SyncConflict, SyncMutation };
+export { Run };
 export { Comment, Notification, Photo, SketchFork, SketchInvariant, UserActivity, UserSettings };
 export const entities = [User, Group, Membership, Invitation, Sketch, SyncChange, SyncConflict, SyncMutation, Attachment, AttachmentUploader,
-  Comment, Photo, SketchFork, SketchInvariant, Notification, UserSettings, UserActivity];
+  Comment, Photo, SketchFork, SketchInvariant, Notification, UserSettings, UserActivity, Run];

@@ -1,0 +1,237 @@
+// The rules of runs: who may start, read and cancel them, what a request is checked against,
+// and when a stored result is reused instead of computing again.
+import { createHash, randomUUID } from 'node:crypto';
+import type { User } from '@/shared/api/auth';
+import type { Role } from '@/shared/api/groups';
+import { isFinished, type CableCell, type RunDetail, type RunDiagram, type RunSummary, type StartRunParsed } from '@/shared/api/runs';
+import { canonicalPD } from '@/shared/knot/canonical';
+import { componentCount, diagram, type Diagram } from '@/shared/knot/diagram';
+import { canSee } from '@/sync/scope';
+import { Run } from '../db/entities';
+import type { Deps } from '../deps';
+import { requireMember } from '../groups/access';
+import { AppError, forbidden, notFound } from '../http/errors';
+import { findSketch } from '../sketches/repository';
+import { viewerOf } from '../sync/repository';
+import { cableOf, sweepCells, sweepSize } from './cables';
+import { afterChange, finishRun, refreshSweep } from './lifecycle';
+import { childrenOf, displayNames, findReusable, findRun, insertRun, listTopLevel, updateIf } from './repository';
+import { schedulerOf } from './scheduler';
+
+type Start = StartRunParsed;
+
+const noSuchRun = () => notFound('No such run, or it is not shared with you');
+const viewersCannot = () => forbidden('Viewers can read runs but not start or cancel them');
+const badDiagram = (message: string) => new AppError('invalid_input', 400, message, { diagram: message });
+
+/**
+ * The reuse key: SHA-256 of the canonical PD code (shared/knot/canonical.ts: least relabelling
+ * over all starting edges, so any relabelling or reordering of the same diagram gives the same
+ * key) with the unknot count and, for reduced runs, the marked component labelled first.
+ */
+export function diagramKey(d: RunDiagram, reduced: boolean): string {
+  const canonical = canonicalPD(d.pd, reduced && d.pd.length > 0 ? 0 : undefined);
+  return createHash('sha256').update(JSON.stringify({ pd: canonical, unknots: d.unknots })).digest('hex');
+}
+
+function checked(d: RunDiagram): Diagram {
+  try {
+    return diagram(d.pd, { unknots: d.unknots, framings: d.framings });
+  } catch (err) {
+    throw badDiagram(err instanceof Error ? err.message : 'The diagram is not valid');
+  }
+}
+
+/** The diagram and group a request runs on, after the role checks. */
+async function target(deps: Deps, user: User, req: Start): Promise<{ diagram: RunDiagram; groupId: string | null; sketchId: string | null; label: string }> {
+  if (req.sketchId !== undefined) {
+    const viewer = await viewerOf(deps.db, user.id);
+    const s = await findSketch(deps.db, req.sketchId);
+    if (!s || s.deleted || !canSee(viewer, s)) throw notFound('No such sketch, or it is not shared with you');
+    if (s.ownerId !== user.id && viewer.groups.get(s.groupId!) === 'viewer') throw viewersCannot();
+    const { pd, unknots, framings } = s.diagram;
+    return { diagram: { pd, unknots, framings }, groupId: s.groupId, sketchId: s.id, label: req.label || s.title || 'Untitled sketch' };
+  }
+  if (req.groupId !== undefined) {
+    const role: Role = await requireMember(deps.db, req.groupId, user.id);
+    if (role === 'viewer') throw viewersCannot();
+  }
+  const d = req.diagram!;
+  return { diagram: { pd: d.pd, unknots: d.unknots ?? 0, framings: d.framings }, groupId: req.groupId ?? null, sketchId: null, label: req.label || `PD code, ${d.pd.length} crossings` };
+}
+
+interface NewRun {
+  kind: Run['kind'];
+  diagram: RunDiagram;
+  label: string;
+  sketchId: string | null;
+  groupId: string | null;
+  ring: string;
+  reduced: boolean;
+  parentRunId?: string;
+  cable?: CableCell;
+  sweep?: Run['sweep'];
+}
+
+function row(deps: Deps, user: User, n: NewRun, key: string): Run {
+  return Object.assign(new Run(), {
+    id: randomUUID(),
+    kind: n.kind,
+    status: 'queued',
+    label: n.label.slice(0, 120),
+    sketchId: n.sketchId,
+    groupId: n.groupId,
+    startedBy: user.id,
+    parentRunId: n.parentRunId ?? null,
+    diagram: n.diagram,
+    diagramKey: key,
+    crossings: n.diagram.pd.length,
+    ring: n.ring,
+    reduced: n.reduced,
+    sweep: n.sweep ?? null,
+    cable: n.cable ?? null,
+    progress: 0,
+    complexSize: 0,
+    result: null,
+    error: null,
+    reusedFrom: null,
+    createdAt: deps.now().toISOString(),
+    startedAt: null,
+    finishedAt: null,
+  } satisfies Run);
+}
+
+/** A Khovanov computation: reused when a stored result fits, failed at once when over the limit, else queued. */
+async function startComputation(deps: Deps, user: User, n: NewRun): Promise<Run> {
+  const key = diagramKey(n.diagram, n.reduced);
+  const run = row(deps, user, n, key);
+  const max = deps.config.runs.maxCrossings;
+  const tooBig = run.crossings > max;
+  const stored = tooBig ? null : await findReusable(deps.db, key, n.ring, n.reduced);
+  if (stored) Object.assign(run, { status: 'running', startedAt: run.createdAt, reusedFrom: stored.reusedFrom ?? stored.id });
+  if (tooBig) run.status = 'running';
+  await insertRun(deps.db, run);
+  if (stored) await finishRun(deps, run.id, { status: 'done', result: stored.result! });
+  else if (tooBig) await finishRun(deps, run.id, { status: 'failed', error: `The diagram has ${run.crossings} crossings; this server computes at most ${max} per run.` });
+  return run;
+}
+
+export async function startRun(deps: Deps, user: User, req: Start): Promise<RunDetail> {
+  const t = await target(deps, user, req);
+  const d = checked(t.diagram);
+  const max = deps.config.runs.maxCrossings;
+  const base = { ...t, ring: req.ring, reduced: req.reduced };
+  let id: string;
+  if (req.kind === 'khovanov') {
+    if (d.pd.length > max) throw badDiagram(`The diagram has ${d.pd.length} crossings; this server computes at most ${max} per run.`);
+    id = (await startComputation(deps, user, { ...base, kind: 'khovanov' })).id;
+  } else {
+    id = await startSweep(deps, user, { ...base, kind: 'cable-sweep', sweep: req.sweep! }, d);
+  }
+  schedulerOf(deps).poke();
+  return getRun(deps, user, id);
+}
+
+async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promise<string> {
+  const components = componentCount(d);
+  if (components !== 1) {
+    const why = `Cable sweeps are available for knots only; this diagram has ${components} components`;
+    throw new AppError('invalid_input', 400, why, { kind: why });
+  }
+  const { maxStrands } = n.sweep!;
+  const size = sweepSize(components, maxStrands);
+  const maxCells = deps.config.runs.maxSweepCells;
+  if (size > maxCells) {
+    throw new AppError('invalid_input', 400, `A sweep up to ${maxStrands} strands of a ${components}-component link has ${size} cables; this server allows at most ${maxCells}. Lower maxStrands.`, { sweep: `At most ${maxCells} cables` });
+  }
+  const cells = sweepCells(components, maxStrands);
+  const cables = cells.map((cell) => cableOf(d, cell));
+  const sweep = row(deps, user, n, diagramKey(n.diagram, false));
+  Object.assign(sweep, { status: 'running', startedAt: sweep.createdAt });
+  await insertRun(deps.db, sweep);
+  for (const [k, cell] of cells.entries()) {
+    const c = cables[k];
+    const label = `${n.label} (${cell.map(([p, m]) => `${p},${m}`).join(' | ')})`;
+    await startComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label, diagram: { pd: c.pd.map((x) => [...x] as [number, number, number, number]), unknots: c.unknots, framings: [...c.framings] }, parentRunId: sweep.id, cable: cell });
+  }
+  await refreshSweep(deps, sweep.id);
+  return sweep.id;
+}
+
+async function visibleRun(deps: Deps, user: User, id: string): Promise<Run> {
+  const run = await findRun(deps.db, id);
+  if (!run) throw noSuchRun();
+  const viewer = await viewerOf(deps.db, user.id);
+  if (!canSee(viewer, { ownerId: run.startedBy, groupId: run.groupId })) throw noSuchRun();
+  return run;
+}
+
+function summary(r: Run, names: Map<string, string>): RunSummary {
+  return {
+    id: r.id,
+    kind: r.kind,
+    status: r.status,
+    label: r.label,
+    sketchId: r.sketchId,
+    groupId: r.groupId,
+    crossings: r.crossings,
+    ring: r.ring,
+    reduced: r.reduced,
+    progress: { fraction: r.progress, objects: r.complexSize },
+    error: r.error,
+    createdAt: r.createdAt,
+    startedAt: r.startedAt,
+    finishedAt: r.finishedAt,
+    startedBy: { id: r.startedBy, displayName: names.get(r.startedBy) ?? 'Former member' },
+    parentRunId: r.parentRunId,
+    reusedFrom: r.reusedFrom,
+    cable: r.cable,
+    sweep: r.sweep,
+  };
+}
+
+export async function getRun(deps: Deps, user: User, id: string): Promise<RunDetail> {
+  const run = await visibleRun(deps, user, id);
+  const children = run.kind === 'cable-sweep' ? await childrenOf(deps.db, run.id) : [];
+  const names = await displayNames(deps.db, [run.startedBy]);
+  return {
+    ...summary(run, names),
+    diagram: run.diagram,
+    result: run.result,
+    children: children.map((c) => ({ ...summary(c, names), result: c.result })),
+  };
+}
+
+export async function listRuns(deps: Deps, user: User, q: { mine?: string; sketchId?: string; groupId?: string }): Promise<RunSummary[]> {
+  let rows: Run[];
+  if (q.groupId !== undefined) {
+    await requireMember(deps.db, q.groupId, user.id);
+    rows = await listTopLevel(deps.db, { groupId: q.groupId });
+  } else if (q.sketchId !== undefined) {
+    const viewer = await viewerOf(deps.db, user.id);
+    rows = (await listTopLevel(deps.db, { sketchId: q.sketchId })).filter((r) => canSee(viewer, { ownerId: r.startedBy, groupId: r.groupId }));
+  } else {
+    rows = await listTopLevel(deps.db, { startedBy: user.id });
+  }
+  const names = await displayNames(deps.db, rows.map((r) => r.startedBy));
+  return rows.map((r) => summary(r, names));
+}
+
+/** The starter, or a member and above of the run's group, may cancel; a sweep cancels its cells. */
+export async function cancelRun(deps: Deps, user: User, id: string): Promise<RunDetail> {
+  const run = await visibleRun(deps, user, id);
+  if (run.startedBy !== user.id) {
+    const viewer = await viewerOf(deps.db, user.id);
+    if (viewer.groups.get(run.groupId!) === 'viewer') throw viewersCannot();
+  }
+  const ended = () => new AppError('run_finished', 409, `The run has already ended (${run.status}); there is nothing to cancel`);
+  if (isFinished(run.status)) throw ended();
+  const cells = run.kind === 'cable-sweep' ? (await childrenOf(deps.db, run.id)).filter((c) => !isFinished(c.status)) : [];
+  const cancelled = { status: 'cancelled' as const, finishedAt: deps.now().toISOString(), error: `Cancelled by ${user.displayName}` };
+  if (!(await updateIf(deps.db, run.id, ['queued', 'running'], cancelled))) throw ended();
+  const scheduler = schedulerOf(deps);
+  scheduler.cancel(run.id);
+  for (const c of cells) if (await updateIf(deps.db, c.id, ['queued', 'running'], cancelled)) scheduler.cancel(c.id);
+  await afterChange(deps, run.id);
+  return getRun(deps, user, id);
+}

@@ -1,0 +1,161 @@
+// Runs: heavy computations on the group server (Khovanov homology of a diagram, or a cable
+// sweep of a framed link: Kh of every (r+, r-)-cable, each a sub-run). The request and answer
+// shapes, shared by the server routes and the app.
+import { z } from 'zod';
+import { RecordId } from './sketches';
+
+export const runPaths = {
+  runs: '/api/runs', // POST start, GET list (?mine=1 | ?sketchId= | ?groupId=)
+  run: (id: string) => `/api/runs/${id}`, // GET one (with its sub-runs for a cable sweep)
+  cancel: (id: string) => `/api/runs/${id}/cancel`, // POST
+} as const;
+
+/** The page a finished-run e-mail links to, under PUBLIC_URL. */
+export const runPagePath = (id: string) => `/runs/${id}`;
+
+export const runKinds = ['khovanov', 'cable-sweep'] as const;
+export const RunKind = z.enum(runKinds);
+export type RunKind = z.infer<typeof RunKind>;
+
+export const runStatuses = ['queued', 'running', 'done', 'failed', 'cancelled'] as const;
+export const RunStatus = z.enum(runStatuses);
+export type RunStatus = z.infer<typeof RunStatus>;
+export const isFinished = (s: RunStatus): boolean => s === 'done' || s === 'failed' || s === 'cancelled';
+
+const isPrime = (p: number): boolean => {
+  if (p < 2) return false;
+  for (let d = 2; d * d <= p; d++) if (p % d === 0) return false;
+  return true;
+};
+
+/** 'Z' (with torsion), 'Q', or 'F<p>' for a prime p. */
+export const RunRing = z
+  .string()
+  .refine((r) => r === 'Z' || r === 'Q' || (/^F\d{1,5}$/.test(r) && isPrime(Number(r.slice(1)))), {
+    message: "Ring must be Z, Q or F<p> for a prime p (e.g. F2)",
+  });
+
+const Label = z.int().min(-1_000_000).max(1_000_000);
+
+/** A diagram given directly (pasted PD code, or a braid closure the app converted). */
+export const RunDiagram = z.object({
+  pd: z.array(z.tuple([Label, Label, Label, Label])).max(2_000),
+  unknots: z.int().min(0).max(100).default(0),
+  /** One per component (PD components in orient() order, then the unknots); null = blackboard. */
+  framings: z.array(z.int().min(-1000).max(1000).nullable()).max(2_100).optional(),
+});
+export type RunDiagram = z.infer<typeof RunDiagram>;
+
+/** Cable sweep: every component takes each (r+, r-) with 1 <= r+ + r- <= maxStrands. */
+export const CableSweep = z.object({ maxStrands: z.int().min(1).max(4) });
+export type CableSweep = z.infer<typeof CableSweep>;
+
+export const StartRunRequest = z
+  .object({
+    kind: RunKind.default('khovanov'),
+    sketchId: RecordId.optional(),
+    diagram: RunDiagram.optional(),
+    /** For a pasted diagram: share the run with this group (members and above). Omit: private. */
+    groupId: z.string().min(1).max(100).optional(),
+    ring: RunRing.default('Z'),
+    reduced: z.boolean().default(false),
+    sweep: CableSweep.optional(),
+    /** Short description shown in the table, e.g. "braid 1 1 1"; default: the sketch title. */
+    label: z.string().trim().max(120).optional(),
+  })
+  .refine((r) => (r.sketchId === undefined) !== (r.diagram === undefined), {
+    message: 'Give either sketchId or diagram, not both',
+    path: ['diagram'],
+  })
+  .refine((r) => (r.kind === 'cable-sweep') === (r.sweep !== undefined), {
+    message: 'A cable sweep needs sweep: { maxStrands }, and only a cable sweep takes it',
+    path: ['sweep'],
+  })
+  .refine((r) => r.sketchId === undefined || r.groupId === undefined, {
+    message: "A run on a sketch belongs to the sketch's group; do not give groupId",
+    path: ['groupId'],
+  });
+/** What the app sends (defaults may be left out). */
+export type StartRunRequest = z.input<typeof StartRunRequest>;
+/** What the server works with, defaults filled in. */
+export type StartRunParsed = z.output<typeof StartRunRequest>;
+
+export const RunListQuery = z
+  .object({
+    mine: z.enum(['1', 'true']).optional(),
+    sketchId: RecordId.optional(),
+    groupId: z.string().min(1).max(100).optional(),
+  })
+  .refine((q) => [q.mine, q.sketchId, q.groupId].filter((v) => v !== undefined).length === 1, {
+    message: 'Give exactly one of mine=1, sketchId or groupId',
+  });
+
+export const KhGroupJson = z.object({ i: z.int(), j: z.int(), free: z.int().min(0), torsion: z.array(z.int()) });
+export type KhGroupJson = z.infer<typeof KhGroupJson>;
+
+/** What a finished Khovanov run stores: the engine's result as JSON. */
+export const KhResultJson = z.object({
+  ring: z.string(),
+  reduced: z.boolean(),
+  groups: z.array(KhGroupJson),
+  poincare: z.array(z.tuple([z.int(), z.int(), z.int()])),
+  poincareText: z.string(),
+  euler: z
+    .object({
+      computed: z.array(z.tuple([z.number(), z.string()])),
+      expected: z.array(z.tuple([z.number(), z.string()])),
+      ok: z.boolean(),
+    })
+    .optional(),
+  width: z.number(),
+  thin: z.boolean(),
+});
+export type KhResultJson = z.infer<typeof KhResultJson>;
+
+export const RunProgress = z.object({
+  /** 0..1: crossings merged (a sweep: finished sub-runs plus the running ones' fractions). */
+  fraction: z.number().min(0).max(1),
+  /** Objects of the current complex (its size), 0 before the first step. */
+  objects: z.int().min(0),
+});
+export type RunProgress = z.infer<typeof RunProgress>;
+
+/** A sub-run's cable: (r+, r-) per component. */
+export const CableCell = z.array(z.tuple([z.int(), z.int()]));
+export type CableCell = z.infer<typeof CableCell>;
+
+const IsoTime = z.string();
+
+export const RunSummary = z.object({
+  id: z.string(),
+  kind: RunKind,
+  status: RunStatus,
+  label: z.string(),
+  sketchId: z.string().nullable(),
+  groupId: z.string().nullable(),
+  crossings: z.int(),
+  ring: z.string(),
+  reduced: z.boolean(),
+  progress: RunProgress,
+  error: z.string().nullable(),
+  createdAt: IsoTime,
+  startedAt: IsoTime.nullable(),
+  finishedAt: IsoTime.nullable(),
+  startedBy: z.object({ id: z.string(), displayName: z.string() }),
+  parentRunId: z.string().nullable(),
+  /** The run whose stored result this one reused (same diagram up to relabelling, ring, reduced). */
+  reusedFrom: z.string().nullable(),
+  cable: CableCell.nullable(),
+  sweep: CableSweep.nullable(),
+});
+export type RunSummary = z.infer<typeof RunSummary>;
+
+export const RunDetail = RunSummary.extend({
+  diagram: RunDiagram,
+  result: KhResultJson.nullable(),
+  /** A cable sweep's sub-runs, one per cell, in grid order. */
+  children: z.array(RunSummary.extend({ result: KhResultJson.nullable() })),
+});
+export type RunDetail = z.infer<typeof RunDetail>;
+
+export const RunList = z.array(RunSummary);
