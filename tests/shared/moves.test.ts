@@ -3,7 +3,7 @@ import { fromBraid } from '@/shared/knot/braid';
 import { bracket } from '@/shared/knot/bracket';
 import { componentCount, Diagram } from '@/shared/knot/diagram';
 import { jones } from '@/shared/knot/jones';
-import { addBigon, addKink, applyR3, Braid, bigons, destabilise, kinks, randomMarkovMove, randomMove, removeBigon, removeKink, seededRng, simplify, stabilise, triangles } from '@/shared/knot/moves';
+import { addBigon, addKink, applyR3, Braid, bigons, destabilise, faces, pushAcross, kinks, randomMarkovMove, randomMove, removeBigon, removeKink, seededRng, simplify, stabilise, triangles } from '@/shared/knot/moves';
 import { orient, relabel, writhe } from '@/shared/knot/pd';
 import { stateSumBracket } from '@/shared/knot/statesum';
 import { Laurent } from '@/shared/poly/laurent';
@@ -58,6 +58,26 @@ describe('Reidemeister moves', () => {
         }
       }
     }
+  });
+
+  it('R2 across any two edges of a face', () => {
+    const figureEight = fromBraid([1, -2, 1, -2]);
+    let tried = 0;
+    for (const face of faces(figureEight.pd)) {
+      face.forEach((_, i) =>
+        face.forEach((__, j) => {
+          const [e, f] = [face[i], face[j]].map((c) => figureEight.pd[c.crossing][c.arrive]);
+          if (e === f) return;
+          for (const eOver of [true, false]) {
+            const b = pushAcross(figureEight, face, i, j, eOver);
+            expect(b.pd.length).toBe(6);
+            expect(bracket(b).equals(bracket(figureEight))).toBe(true);
+            tried++;
+          }
+        }),
+      );
+    }
+    expect(tried).toBeGreaterThan(24); // more than the corners alone
   });
 
   it('R3 on the triangles of sigma_1 sigma_2 sigma_1 and a longer word', () => {

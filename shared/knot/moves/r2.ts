@@ -1,43 +1,60 @@
-// Reidemeister II: one edge pushed over its neighbour at a corner of a crossing (making a
-// bigon), or a bigon whose one strand passes over at both ends taken away.
+// Reidemeister II: one edge pushed across another edge of the same face (making a bigon), or a
+// bigon whose one strand passes over at both ends taken away.
 
 import { assemble, directions } from '../assemble';
 import { Diagram } from '../diagram';
 import { Crossing, PDError, Slot } from '../pd';
-import { faces } from './faces';
+import { Corner, faces } from './faces';
 import { splice } from './splice';
+
+/**
+ * In a face, the edge E arriving at corner i is pushed across the edge F arriving at corner j
+ * (a finger of E inside the face), E over F when `eOver`. E and F must be different edges.
+ */
+export function pushAcross(d: Diagram, face: readonly Corner[], i: number, j: number, eOver: boolean): Diagram {
+  const n = face.length;
+  const edge = (k: number) => {
+    const before = face[(k + n - 1) % n];
+    const start: Slot = { crossing: before.crossing, position: (before.arrive + 1) % 4 };
+    const end: Slot = { crossing: face[k].crossing, position: face[k].arrive };
+    return { label: d.pd[end.crossing][end.position], start, end };
+  };
+  const E = edge(i);
+  const F = edge(j);
+  if (i === j || E.label === F.label) throw new PDError('R2 needs two different edges of the face');
+  const { heads, framed, unknotFramings } = directions(d);
+  const next = Math.max(...d.pd.flat()) + 1;
+  const [e2, e3, f2, f3] = [next, next + 1, next + 2, next + 3];
+  const pd = d.pd.map((c) => [...c]);
+  pd[E.end.crossing][E.end.position] = e3;
+  pd[F.end.crossing][F.end.position] = f3;
+  // Along the walk (face on the right) E meets the finger's crossings P then Q, F meets Q then
+  // P; counterclockwise P = [E1, F3, E2, F2] and Q = [E3, F2, E2, F1], with E1 = E and F1 = F
+  // kept at their starts. Rotated so the under-strand sits at slots a and c.
+  const [p, q] = eOver ? [[f3, e2, f2, E.label], [f2, e2, F.label, e3]] : [[E.label, f3, e2, f2], [e3, f2, e2, F.label]];
+  const [P, Q] = [pd.length, pd.length + 1];
+  pd.push(p, q);
+  const hints = new Map<number, Slot>();
+  for (const [label, h] of heads) if (label !== E.label && label !== F.label) hints.set(label, h);
+  const same = (s: Slot, t: Slot) => s.crossing === t.crossing && s.position === t.position;
+  // An edge running along the walk now enters P (or Q) as its first piece; otherwise it still ends at its start.
+  hints.set(E.label, same(heads.get(E.label)!, E.end) ? { crossing: P, position: p.indexOf(E.label) } : E.start);
+  hints.set(F.label, same(heads.get(F.label)!, F.end) ? { crossing: Q, position: q.indexOf(F.label) } : F.start);
+  return assemble(pd as unknown as Crossing[], hints, framed, unknotFramings);
+}
 
 /**
  * At crossing `crossing`, the edge E at slot `position` and the edge F at the next slot
  * counterclockwise bound a corner; a finger of E is pushed across F inside that corner, E over
- * F when `eOver`. Both edges must differ.
+ * F when `eOver`.
  */
 export function addBigon(d: Diagram, crossing: number, position: number, eOver: boolean): Diagram {
-  const x = d.pd[crossing];
-  if (!x) throw new PDError(`there is no crossing ${crossing + 1}`);
-  const q = (position + 1) % 4;
-  const [E, F] = [x[position], x[q]];
-  if (E === F) throw new PDError(`the corner at slot ${position + 1} of crossing ${crossing + 1} is a kink's loop`);
-  const { heads, framed, unknotFramings } = directions(d);
-  const next = Math.max(...d.pd.flat()) + 1;
-  const [ea, eb, fa, fb] = [next, next + 1, next + 2, next + 3];
-  const pd = d.pd.map((c) => [...c]);
-  pd[crossing][position] = ea;
-  pd[crossing][q] = fa;
-  // Corner geometry (E leaving the crossing eastwards, F northwards): the finger crosses F at
-  // Q1 and Q2; counterclockwise Q1 = [ea, fb, eb, fa], Q2 = [E, F, eb, fb], rotated so that the
-  // under-strand sits at slots a and c (assemble fixes which end is incoming).
-  const [q1, q2] = eOver ? [[fb, eb, fa, ea], [F, eb, fb, E]] : [[ea, fb, eb, fa], [E, F, eb, fb]];
-  pd.push(q1, q2);
-  const hints = new Map<number, Slot>();
-  for (const [label, h] of heads) if (label !== E && label !== F) hints.set(label, h);
-  const here = (l: number) => heads.get(l)!.crossing === crossing && heads.get(l)!.position === (l === E ? position : q);
-  // An edge entering the crossing now does so as its near piece; otherwise its far end is unchanged.
-  for (const [l, near] of [[E, ea], [F, fa]] as const) {
-    if (here(l)) hints.set(near, { crossing, position: l === E ? position : q });
-    else hints.set(l, heads.get(l)!);
+  if (!d.pd[crossing] || !Number.isInteger(position) || position < 0 || position > 3) throw new PDError(`there is no slot ${position + 1} at crossing ${crossing + 1}`);
+  for (const face of faces(d.pd)) {
+    const i = face.findIndex((c) => c.crossing === crossing && c.arrive === position);
+    if (i >= 0) return pushAcross(d, face, i, (i + 1) % face.length, eOver);
   }
-  return assemble(pd as unknown as Crossing[], hints, framed, unknotFramings);
+  throw new PDError(`there is no corner at slot ${position + 1} of crossing ${crossing + 1}`);
 }
 
 export interface Bigon {

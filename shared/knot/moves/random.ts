@@ -3,7 +3,8 @@
 
 import { Diagram } from '../diagram';
 import { addKink, kinks, removeKink } from './r1';
-import { addBigon, bigons, removeBigon } from './r2';
+import { faces } from './faces';
+import { bigons, pushAcross, removeBigon } from './r2';
 import { applyR3, triangles } from './r3';
 
 export type Rng = () => number;
@@ -44,10 +45,12 @@ export function randomMove(d: Diagram, rng: Rng): { diagram: Diagram; kind?: Mov
     case 'R1-':
       return { kind, diagram: removeKink(d, pick(rng, ks)) };
     case 'R2+': {
-      const corners = d.pd.flatMap((x, c) => [0, 1, 2, 3].filter((p) => x[p] !== x[(p + 1) % 4]).map((p) => [c, p] as const));
-      if (corners.length === 0) return { kind: 'R1+', diagram: addKink(d, d.pd[0][0], { sign: 1, overFirst: true }) };
-      const [c, p] = pick(rng, corners);
-      return { kind, diagram: addBigon(d, c, p, rng() < 0.5) };
+      // Two different edges of one face; every diagram with a crossing has such a face.
+      const pairs = faces(d.pd).flatMap((face) =>
+        face.flatMap((c, i) => face.map((e, j) => [face, i, j] as const).filter(([, , j]) => d.pd[face[j].crossing][face[j].arrive] !== d.pd[c.crossing][c.arrive])),
+      );
+      const [face, i, j] = pick(rng, pairs);
+      return { kind, diagram: pushAcross(d, face, i, j, rng() < 0.5) };
     }
     case 'R2-':
       return { kind, diagram: removeBigon(d, pick(rng, bs)) };
