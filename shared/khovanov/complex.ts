@@ -21,7 +21,8 @@ export class TangleComplex<T> {
   /** out[s].get(t) = the component of the differential from s to t. */
   readonly out: Map<number, Mor<T>>[] = [];
   readonly inn: Set<number>[] = [];
-  private readonly compositions = new Map<string, Composition>();
+  /** Compositions by source matching, then target * matchings + middle. */
+  private readonly compositions = new Map<number, Map<number, Composition>>();
   live = 0;
 
   /** `boundary` lists the labels of the open ends; matchings are on their positions. */
@@ -47,20 +48,20 @@ export class TangleComplex<T> {
     return this.objs.length - 1;
   }
 
-  /** d(s -> t) += sign * m, dropping the entry when it cancels. */
-  addTo(s: number, t: number, m: Mor<T>, sign: T): void {
-    const row = this.out[s];
-    const current = row.get(t) ?? new Map<number, T>();
+  /** d(s -> t) += c [mask], dropping the entry when it cancels. */
+  addTerm(s: number, t: number, mask: number, c: T): void {
     const { ring } = this;
-    for (const [mask, c] of m) {
-      const v = ring.add(current.get(mask) ?? ring.zero, ring.mul(sign, c));
-      if (ring.isZero(v)) current.delete(mask);
-      else current.set(mask, v);
-    }
-    if (current.size > 0) {
+    const row = this.out[s];
+    let current = row.get(t);
+    if (!current) {
+      if (ring.isZero(c)) return;
+      current = new Map();
       row.set(t, current);
       this.inn[t].add(s);
-    } else {
+    }
+    const v = ring.add(current.get(mask) ?? ring.zero, c);
+    if (!ring.isZero(v)) current.set(mask, v);
+    else if (current.delete(mask) && current.size === 0) {
       row.delete(t);
       this.inn[t].delete(s);
     }
@@ -75,28 +76,25 @@ export class TangleComplex<T> {
     this.live--;
   }
 
-  /** y o x for x: a -> b and y: b -> c. */
-  compose(a: number, b: number, c: number, x: Mor<T>, y: Mor<T>): Mor<T> {
+  /** d(a -> c) += factor (y o x) for x: a -> b and y: b -> c. */
+  addComposite(a: number, b: number, c: number, x: Mor<T>, y: Mor<T>, factor: T): void {
     const [ma, mb, mc] = [this.objs[a].mat, this.objs[b].mat, this.objs[c].mat];
-    const key = `${ma},${mb},${mc}`;
-    let comp = this.compositions.get(key);
+    const bySource = this.compositions.get(ma) ?? this.compositions.set(ma, new Map()).get(ma)!;
+    const key = mc * this.matchings.length + mb;
+    let comp = bySource.get(key);
     if (!comp) {
       comp = composition(this.matchings[ma], this.matchings[mb], this.matchings[mc]);
-      this.compositions.set(key, comp);
+      bySource.set(key, comp);
     }
     const { ring } = this;
-    const result: Mor<T> = new Map();
     for (const [m1, c1] of x) {
       for (const [m2, c2] of y) {
-        const c12 = ring.mul(c1, c2);
+        const c12 = ring.mul(factor, ring.mul(c1, c2));
         for (const [mask, k] of reduce(comp.pieces, dotsOf(comp.pieces.length, [comp.compPQ, comp.compQR], [m1, m2]))) {
-          const v = ring.add(result.get(mask) ?? ring.zero, k === 1 ? c12 : ring.mul(ring.fromInt(k), c12));
-          if (ring.isZero(v)) result.delete(mask);
-          else result.set(mask, v);
+          this.addTerm(a, c, mask, k === 1 ? c12 : ring.mul(ring.fromInt(k), c12));
         }
       }
     }
-    return result;
   }
 
   entries(): number {

@@ -44,7 +44,7 @@ function cancel<T>(cx: TangleComplex<T>, b1: number, b2: number, minusInverse: T
   for (const s of sources) {
     const delta = cx.out[s].get(b2)!;
     for (const t of targets) {
-      cx.addTo(s, t, cx.compose(s, b1, t, delta, cx.out[b1].get(t)!), minusInverse);
+      cx.addComposite(s, b1, t, delta, cx.out[b1].get(t)!, minusInverse);
     }
   }
   cx.remove(b1);

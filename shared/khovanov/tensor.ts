@@ -48,9 +48,9 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
   freeSlots.forEach((slot, k) => (newPos[slot] = k));
   const cx = new TangleComplex(ring, freeSlots.map((slot) => labelOf[slot]));
 
-  const sides = new Map<string, Side>();
+  const sides = new Map<number, Side>();
   const side = (mat: number, s: number): Side => {
-    const key = `${mat},${s}`;
+    const key = 2 * mat + s;
     const cached = sides.get(key);
     if (cached) return cached;
     const p = old.matchings[mat];
@@ -87,9 +87,9 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
     return result;
   };
 
-  const gluings = new Map<string, Gluing>();
+  const gluings = new Map<number, Gluing>();
   const gluing = (pMat: number, qMat: number, sb: number, st: number): Gluing => {
-    const key = `${pMat},${qMat},${sb},${st}`;
+    const key = 4 * (pMat * old.matchings.length + qMat) + 2 * sb + st;
     const cached = gluings.get(key);
     if (cached) return cached;
     const bottom = side(pMat, sb);
@@ -151,18 +151,13 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
   const connect = (from: number[], to: number[], g: Gluing, f: Mor<T>, sign: T): void => {
     from.forEach((source, sigma) => {
       to.forEach((target, tau) => {
-        const result: Mor<T> = new Map();
         for (const [mask, c] of f) {
           const dots = dotsOf(g.pieces.length, [g.compPQ], [mask]);
           g.bottomLoops.forEach((piece, l) => (dots[piece] += (sigma >> l) & 1));
           g.topLoops.forEach((piece, l) => (dots[piece] += 1 - ((tau >> l) & 1)));
-          for (const [m, k] of reduce(g.pieces, dots)) {
-            const v = ring.add(result.get(m) ?? ring.zero, ring.mul(ring.fromInt(k), c));
-            if (ring.isZero(v)) result.delete(m);
-            else result.set(m, v);
-          }
+          const sc = ring.mul(sign, c);
+          for (const [m, k] of reduce(g.pieces, dots)) cx.addTerm(source, target, m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
         }
-        if (result.size > 0) cx.addTo(source, target, result, sign);
       });
     });
   };

@@ -38,35 +38,41 @@ export const integers: Ring<Int> = {
   toText: Z.toText,
 };
 
-/** A rational in lowest terms with a positive denominator. */
-export interface Rational {
+/** A non-integral rational in lowest terms with a denominator > 1. */
+export interface Fraction {
   readonly n: Int;
   readonly d: Int;
 }
 
+/** An element of Q: an integer as such (no allocation on the common path), otherwise a fraction. */
+export type Rational = Int | Fraction;
+
+const num = (a: Rational): Int => (typeof a === 'object' ? a.n : a);
+const den = (a: Rational): Int => (typeof a === 'object' ? a.d : 1);
+
 function rational(n: Int, d: Int): Rational {
-  if (Z.isZero(n)) return QZERO;
+  if (Z.isZero(n)) return 0;
   const g = Z.gcd(n, d);
   const s = Z.sign(d);
-  return { n: Z.divExact(s < 0 ? Z.neg(n) : n, g), d: Z.divExact(Z.abs(d), g) };
+  const n1 = Z.divExact(s < 0 ? Z.neg(n) : n, g);
+  const d1 = Z.divExact(Z.abs(d), g);
+  return d1 === 1 ? n1 : { n: n1, d: d1 };
 }
-
-const QZERO: Rational = { n: 0, d: 1 };
 
 export const rationals: Ring<Rational> = {
   name: 'Q',
-  zero: QZERO,
-  one: { n: 1, d: 1 },
+  zero: 0,
+  one: 1,
   isField: true,
-  fromInt: (n) => ({ n: Z.norm(n), d: 1 }),
-  add: (a, b) => (a.d === 1 && b.d === 1 ? { n: Z.add(a.n, b.n), d: 1 } : rational(Z.add(Z.mul(a.n, b.d), Z.mul(b.n, a.d)), Z.mul(a.d, b.d))),
-  sub: (a, b) => (a.d === 1 && b.d === 1 ? { n: Z.sub(a.n, b.n), d: 1 } : rational(Z.sub(Z.mul(a.n, b.d), Z.mul(b.n, a.d)), Z.mul(a.d, b.d))),
-  mul: (a, b) => (a.d === 1 && b.d === 1 ? { n: Z.mul(a.n, b.n), d: 1 } : rational(Z.mul(a.n, b.n), Z.mul(a.d, b.d))),
-  neg: (a) => ({ n: Z.neg(a.n), d: a.d }),
-  isZero: (a) => Z.isZero(a.n),
-  isUnit: (a) => !Z.isZero(a.n),
-  inv: (a) => rational(a.d, a.n),
-  toText: (a) => (a.d === 1 ? Z.toText(a.n) : `${Z.toText(a.n)}/${Z.toText(a.d)}`),
+  fromInt: Z.norm,
+  add: (a, b) => (typeof a !== 'object' && typeof b !== 'object' ? Z.add(a, b) : rational(Z.add(Z.mul(num(a), den(b)), Z.mul(num(b), den(a))), Z.mul(den(a), den(b)))),
+  sub: (a, b) => (typeof a !== 'object' && typeof b !== 'object' ? Z.sub(a, b) : rational(Z.sub(Z.mul(num(a), den(b)), Z.mul(num(b), den(a))), Z.mul(den(a), den(b)))),
+  mul: (a, b) => (typeof a !== 'object' && typeof b !== 'object' ? Z.mul(a, b) : rational(Z.mul(num(a), num(b)), Z.mul(den(a), den(b)))),
+  neg: (a) => (typeof a === 'object' ? { n: Z.neg(a.n), d: a.d } : Z.neg(a)),
+  isZero: (a) => a === 0,
+  isUnit: (a) => a !== 0,
+  inv: (a) => rational(den(a), num(a)),
+  toText: (a) => (typeof a === 'object' ? `${Z.toText(a.n)}/${Z.toText(a.d)}` : Z.toText(a)),
 };
 
 /** Largest p for which products of residues stay exact in doubles. */
