@@ -45,21 +45,29 @@ export function assemble(pd: PDCode, heads: ReadonlyMap<number, Slot>, framed: r
     return h.crossing === crossing && h.position === 2 ? ([x[2], x[3], x[0], x[1]] as Crossing) : x;
   });
   const turnedHeads = new Map<number, Slot>();
+  const tailCrossing = (label: number) => {
+    const [p, q] = slots.get(label)!;
+    const h = head.get(label)!;
+    return (p.crossing === h.crossing && p.position === h.position ? q : p).crossing;
+  };
   for (const [label, h] of head) {
     const t = turned[h.crossing] !== pd[h.crossing];
     turnedHeads.set(label, t ? { crossing: h.crossing, position: (h.position + 2) % 4 } : h);
   }
   // Number along travel so that components passing only over read the intended direction.
   const fresh = new Map<number, number>();
-  const walked = new Set<number>();
-  for (const [start] of turnedHeads) {
-    let label = start;
-    while (!walked.has(label)) {
-      walked.add(label);
-      fresh.set(label, fresh.size + 1);
-      const h = turnedHeads.get(label)!;
-      label = turned[h.crossing][(h.position + 2) % 4];
-    }
+  const after = (label: number) => {
+    const h = turnedHeads.get(label)!;
+    return turned[h.crossing][(h.position + 2) % 4];
+  };
+  for (const [label] of turnedHeads) {
+    if (fresh.has(label)) continue;
+    const loop = [label];
+    for (let l = after(label); l !== label; l = after(l)) loop.push(l);
+    // A two-edge loop reads "increasing" both ways; orient() then leaves the lower-numbered
+    // crossing along the smaller label, so give that label to the edge leaving it.
+    if (loop.length === 2 && tailCrossing(loop[0]) > tailCrossing(loop[1])) loop.reverse();
+    for (const l of loop) fresh.set(l, fresh.size + 1);
   }
   const numbered = turned.map((x) => x.map((l) => fresh.get(l)!) as unknown as Crossing);
   const o = orient(numbered);

@@ -135,6 +135,14 @@ describe('families', () => {
     expect(jones(sublink(disjointUnion(fromBraid([1, 1, 1]), unknot), [1])).equals(Laurent.one)).toBe(true);
   });
 
+  it('reverses a two-edge component that passes only over', () => {
+    // R2 bigon of two circles: {1,2} passes under twice, {3,4} only over (see pd.test.ts).
+    const d = diagram([[1, 4, 2, 3], [2, 4, 1, 3]]);
+    expect(orient(d.pd).signs).toEqual([-1, 1]);
+    expect(orient(reverseComponent(d, 1).pd).signs).toEqual([1, -1]); // both crossings change sign
+    expect(orient(reverseComponent(reverseComponent(d, 1), 1).pd).signs).toEqual([-1, 1]);
+  });
+
   it('cables: follow the framing, copies link as the framing says', () => {
     // (r,0)-cable of the f-framed unknot is T(r, r f) (common practice).
     for (const [r, f] of [[2, 1], [2, -3], [3, 2], [3, -1]]) {
