@@ -60,6 +60,14 @@ export function parseRing(ring: KhRing): { name: string; ring: Ring<unknown> } {
   return { name: field.name, ring: field as Ring<unknown> };
 }
 
+/**
+ * Khovanov homology of the link with this PD code (validated first; PDError when invalid), by
+ * Bar-Natan's local algorithm. Degenerate inputs: the empty code is the unknot unless
+ * `unknots` says otherwise (unknots: 0 gives the empty link, Z at (0,0)); kinks (a label twice
+ * in one crossing) and split diagrams are fine. RangeError for an unknown ring, a missing
+ * component, or a diagram whose open boundary would pass 60 points in the crossing order.
+ * KhCancelled when `signal.aborted` becomes true.
+ */
 export function khovanov(pd: PDCode, options: KhOptions): KhResult {
   const { name, ring } = parseRing(options.ring);
   const reduced = options.reduced ?? false;
