@@ -6,8 +6,7 @@ import { useGlobalSearchParams, useRouter } from 'expo-router';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { canPost } from '@/shared/api/feed-rules';
 import { useGroups } from '@/hooks/queries/useGroups';
-import { useMembers } from '@/hooks/queries/useMembers';
-import { useFeed, type FeedFilters } from '@/hooks/queries/useFeed';
+import { useFeed, useGroupPeople, type FeedFilters } from '@/hooks/queries/useFeed';
 import { isApiError } from '@/lib/api';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { Banner } from '@/components/ui/Banner';
@@ -33,7 +32,7 @@ export function FeedList() {
     if (!groupId && first) setGroupId(first);
   }, [groups.data, params.groupId, groupId]);
   const group = groups.data?.find((g) => g.id === groupId);
-  const members = useMembers(groupId ?? '');
+  const members = useGroupPeople(groupId);
   const feed = useFeed(groupId, filters);
   const items = feed.data?.pages.flatMap((p) => p.items) ?? [];
   const open = (sketchId: string) => router.push(`/feed/${groupId}/${sketchId}`);

@@ -4,8 +4,10 @@ import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tansta
 import { Comment, commentPaths } from '@/shared/api/comments';
 import { FeedPage, ForkResponse, GroupSketch, ShareResponse, feedPaths } from '@/shared/api/feed';
 import { Photo, photoPaths } from '@/shared/api/photos';
+import { MemberList, groupPaths } from '@/shared/api/groups';
 import { SketchList, sketchPaths } from '@/shared/api/sketches';
 import { api } from '@/lib/api';
+import { keys } from './keys';
 
 export interface FeedFilters {
   tag?: string;
@@ -111,4 +113,9 @@ export function useShare() {
       groupId ? api('PUT', feedPaths.share(sketchId), ShareResponse, { groupId }) : api('DELETE', feedPaths.share(sketchId), ShareResponse),
     onSuccess: () => qc.invalidateQueries({ queryKey: ['feed'] }),
   });
+}
+
+/** The people of a group, for the feed's person filter (same cache as the group page's member list). */
+export function useGroupPeople(groupId: string | null) {
+  return useQuery({ queryKey: keys.groups.members(groupId ?? ''), enabled: !!groupId, queryFn: () => api('GET', groupPaths.members(groupId!), MemberList) });
 }
