@@ -31,7 +31,10 @@ export function fromGauss(code: GaussCode): Diagram {
   }
   const slots: number[][] = Array.from({ length: n }, () => [0, 0, 0, 0]);
   let next = 1;
-  for (const component of code.components) {
+  for (const given of code.components) {
+    // A two-edge loop passing only over reads "increasing" both ways; orient() leaves the
+    // lower-numbered crossing along its smaller label, so start the loop there.
+    const component = given.length === 2 && given.every((p) => p > 0) && given[1] > given[0] ? [given[1], given[0]] : given;
     const first = next;
     next += component.length;
     component.forEach((pass, j) => {

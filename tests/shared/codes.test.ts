@@ -31,6 +31,14 @@ describe('codes in and out', () => {
     );
   });
 
+  it('keeps the direction of a two-edge component passing only over', () => {
+    // Component 2 passes over crossings 1 then 2, or 2 then 1: opposite directions, opposite signs.
+    for (const [over, signs] of [[[1, 2], [1, -1]], [[2, 1], [-1, 1]]]) {
+      const d = fromGauss({ components: [[-1, -2], over], signs });
+      expect(orient(d.pd).signs).toEqual(signs);
+    }
+  });
+
   it('signed Gauss code errors are precise', () => {
     expect(() => fromGauss({ components: [[1, -2]], signs: [1, 1] })).toThrow('crossing 1 must be passed once over and once under; it is passed 1 times over and 0 times under');
     expect(() => fromGauss({ components: [[1, -3]], signs: [1] })).toThrow('pass -3 does not name a crossing 1..1');
