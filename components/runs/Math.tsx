@@ -1,0 +1,7 @@
+// Native: no KaTeX, so the plain-text form in the math face's place (Math.web.tsx typesets).
+import { Text } from 'react-native';
+import { colors, type } from '@/constants/theme';
+
+export function TeX({ text }: { tex: string; text: string; display?: boolean }) {
+  return <Text style={[type.code, { color: colors.ink }]}>{text}</Text>;
+}

@@ -1,0 +1,116 @@
+// A run's page: where it stands (status, progress, cancel), then its result: the bigraded
+// table, the Poincare polynomial, the Euler characteristic checked against the Jones
+// polynomial, thin or thick, and exports. A cable sweep shows a grid of small tables instead.
+import { useState } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import { isFinished, type KhResultJson, type RunDetail } from '@/shared/api/runs';
+import { toCsv, toJson, toLatexTable } from '@/shared/khovanov/export';
+import { poincareTeX } from '@/shared/khovanov/format';
+import { Laurent } from '@/shared/poly/laurent';
+import { useCancelRun } from '@/hooks/queries/useRuns';
+import { Banner } from '@/components/ui/Banner';
+import { Button } from '@/components/ui/Button';
+import { Section } from '@/components/ui/Section';
+import { colors, fonts, space, type } from '@/constants/theme';
+import { KhTable } from './KhTable';
+import { TeX } from './Math';
+import { ProgressBar } from './ProgressBar';
+import { SweepGrid } from './SweepGrid';
+import { duration, ringLabel, statusLabel } from './format';
+import { saveText } from './save';
+
+function Fact({ name, children }: { name: string; children: React.ReactNode }) {
+  return (
+    <View style={styles.fact}>
+      <Text style={styles.factName}>{name}</Text>
+      <View style={styles.factValue}>{typeof children === 'string' ? <Text style={styles.value}>{children}</Text> : children}</View>
+    </View>
+  );
+}
+
+function Exports({ result, base }: { result: KhResultJson; base: string }) {
+  const [note, setNote] = useState<string | null>(null);
+  const save = (ext: string, text: string, mime: string) => void saveText(`${base}.${ext}`, text, mime).then(setNote);
+  return (
+    <View style={styles.exports}>
+      <Button variant="secondary" label="LaTeX table" onPress={() => save('tex', toLatexTable(result), 'text/x-tex')} />
+      <Button variant="secondary" label="CSV" onPress={() => save('csv', toCsv(result), 'text/csv')} />
+      <Button variant="secondary" label="JSON" onPress={() => save('json', toJson(result), 'application/json')} />
+      {note ? <Text role="status" style={styles.muted}>{note}</Text> : null}
+    </View>
+  );
+}
+
+export function KhSummary({ result }: { result: KhResultJson }) {
+  const euler = result.euler;
+  const poly = (pairs: [number, string][]) => Laurent.fromJSON(pairs);
+  return (
+    <View style={styles.facts}>
+      <Fact name="Poincaré polynomial">
+        <TeX tex={poincareTeX(result.poincare)} text={result.poincareText} />
+      </Fact>
+      {euler ? (
+        <Fact name="Euler characteristic">
+          <View style={styles.euler}>
+            <TeX tex={poly(euler.computed).format('q', 'latex')} text={poly(euler.computed).format('q')} />
+            <Text style={[styles.value, { color: euler.ok ? colors.success : colors.danger }]}>
+              {euler.ok ? `= ${result.reduced ? 'V' : '(q + q⁻¹) V'}, as the Jones polynomial says ✓` : 'differs from the Jones polynomial'}
+            </Text>
+            {euler.ok ? null : <TeX tex={poly(euler.expected).format('q', 'latex')} text={poly(euler.expected).format('q')} />}
+          </View>
+        </Fact>
+      ) : null}
+      <Fact name="Width">{`${result.width} diagonal${result.width === 1 ? '' : 's'}: ${result.thin ? 'thin' : 'thick'}`}</Fact>
+    </View>
+  );
+}
+
+export function RunResult({ run }: { run: RunDetail }) {
+  const cancel = useCancelRun(run.id);
+  const live = !isFinished(run.status);
+  return (
+    <>
+      <View style={styles.status}>
+        <View style={styles.statusLine}>
+          <Text style={styles.statusText} testID="run-status">{statusLabel[run.status]}</Text>
+          <Text style={styles.muted}>{`${Math.round(run.progress.fraction * 100)}%${run.progress.objects ? ` · complex of ${run.progress.objects} objects` : ''} · ${duration(run)}`}</Text>
+        </View>
+        <ProgressBar fraction={run.progress.fraction} status={run.status} label="Run progress" />
+        <Text style={styles.muted}>
+          {`${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${ringLabel(run)} · ${run.crossings} crossings · started by ${run.startedBy.displayName}`}
+          {run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}
+        </Text>
+        {run.error ? <Banner tone={run.status === 'cancelled' ? 'info' : 'error'}>{run.error}</Banner> : null}
+        {cancel.error ? <Banner tone="error">{cancel.error.message}</Banner> : null}
+        {live ? <Button variant="danger" label="Cancel run" busy={cancel.isPending} busyLabel="Cancelling…" onPress={() => cancel.mutate()} /> : null}
+      </View>
+      {run.result ? (
+        <>
+          <Section title={`Khovanov homology over ${run.result.ring}${run.result.reduced ? ', reduced' : ''}`}>
+            <KhTable groups={run.result.groups} ring={run.result.ring} label="Khovanov homology" />
+          </Section>
+          <KhSummary result={run.result} />
+          <Section title="Export">
+            <Exports result={run.result} base={`kh-${run.id.slice(0, 8)}`} />
+          </Section>
+        </>
+      ) : null}
+      {run.kind === 'cable-sweep' ? <SweepGrid cells={run.children} /> : null}
+    </>
+  );
+}
+
+const styles = StyleSheet.create({
+  status: { gap: space.sm },
+  statusLine: { flexDirection: 'row', alignItems: 'baseline', gap: space.md, flexWrap: 'wrap' },
+  statusText: { ...type.title, color: colors.ink },
+  muted: { ...type.small, color: colors.inkMuted },
+  facts: { gap: space.md },
+  fact: { gap: space.xs },
+  factName: { ...type.caps, color: colors.inkMuted },
+  factValue: { flexDirection: 'row', flexWrap: 'wrap' },
+  value: { ...type.body, color: colors.ink },
+  euler: { gap: space.xs },
+  exports: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center' },
+  code: { fontFamily: fonts.mono },
+});

@@ -1,0 +1,120 @@
+// The Runs tab's table: status, progress, diagram, ring, started, time. Headers sort (press
+// again to reverse); the filter matches the diagram label, ring and status.
+import { useMemo, useState } from 'react';
+import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
+import { Link } from 'expo-router';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+  type VisibilityState,
+} from '@tanstack/react-table';
+import type { RunSummary } from '@/shared/api/runs';
+import { runPagePath } from '@/shared/api/runs';
+import { colors, fonts, radius, space, type } from '@/constants/theme';
+import { ProgressBar } from './ProgressBar';
+import { duration, ringLabel, started, statusLabel } from './format';
+
+const col = createColumnHelper<RunSummary>();
+
+const columns = [
+  col.accessor('status', { header: 'Status', cell: (c) => <Text style={styles.cell}>{statusLabel[c.getValue()]}</Text> }),
+  col.accessor((r) => r.progress.fraction, {
+    id: 'progress',
+    header: 'Progress',
+    cell: (c) => <ProgressBar fraction={c.getValue()} status={c.row.original.status} label={`Progress of ${c.row.original.label}`} />,
+  }),
+  col.accessor('label', {
+    header: 'Diagram',
+    cell: (c) => (
+      <Link href={runPagePath(c.row.original.id) as never} style={styles.link}>
+        {c.getValue()}
+        <Text style={styles.muted}>{`  ${c.row.original.kind === 'cable-sweep' ? 'cable sweep · ' : ''}${c.row.original.crossings} crossings`}</Text>
+      </Link>
+    ),
+  }),
+  col.accessor((r) => ringLabel(r), { id: 'ring', header: 'Ring', cell: (c) => <Text style={styles.code}>{c.getValue()}</Text> }),
+  col.accessor('createdAt', { header: 'Started', cell: (c) => <Text style={styles.cell}>{started(c.getValue())}</Text> }),
+  col.accessor((r) => (r.startedAt ? (r.finishedAt ? Date.parse(r.finishedAt) : Date.now()) - Date.parse(r.startedAt) : -1), {
+    id: 'time',
+    header: 'Time',
+    cell: (c) => <Text style={styles.cell}>{duration(c.row.original)}</Text>,
+  }),
+];
+
+const widths: Record<string, number> = { status: 0.9, progress: 1.1, label: 2.6, ring: 0.9, createdAt: 1.2, time: 0.8 };
+
+export function RunsTable({ runs, wide }: { runs: RunSummary[]; wide: boolean }) {
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
+  const [filter, setFilter] = useState('');
+  const visible = useMemo((): VisibilityState => (wide ? {} : { createdAt: false, time: false }), [wide]);
+  const table = useReactTable({
+    data: runs,
+    columns,
+    state: { sorting, globalFilter: filter, columnVisibility: visible },
+    onSortingChange: setSorting,
+    onGlobalFilterChange: setFilter,
+    globalFilterFn: (row, _id, value: string) =>
+      [row.original.label, row.original.ring, row.original.status, row.original.kind].join(' ').toLowerCase().includes(value.toLowerCase()),
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  });
+  return (
+    <View style={styles.wrap}>
+      <TextInput
+        value={filter}
+        onChangeText={setFilter}
+        placeholder="Filter by diagram, ring or status"
+        placeholderTextColor={colors.inkFaint}
+        aria-label="Filter runs"
+        style={styles.filter}
+      />
+      <View role="table" aria-label="Runs">
+        {table.getHeaderGroups().map((hg) => (
+          <View role="row" key={hg.id} style={[styles.row, styles.headRow]}>
+            {hg.headers.map((h) => {
+              const dir = h.column.getIsSorted();
+              return (
+                <Pressable key={h.id} role="columnheader" aria-sort={dir === 'asc' ? 'ascending' : dir === 'desc' ? 'descending' : 'none'}
+                  onPress={h.column.getToggleSortingHandler()} style={{ flex: widths[h.column.id] ?? 1 }}>
+                  <Text style={styles.head}>
+                    {flexRender(h.column.columnDef.header, h.getContext())}
+                    {dir === 'asc' ? ' ↑' : dir === 'desc' ? ' ↓' : ''}
+                  </Text>
+                </Pressable>
+              );
+            })}
+          </View>
+        ))}
+        {table.getRowModel().rows.map((row) => (
+          <View role="row" key={row.id} style={styles.row} testID={`run-row-${row.original.id}`}>
+            {row.getVisibleCells().map((c) => (
+              <View role="cell" key={c.id} style={[styles.cellBox, { flex: widths[c.column.id] ?? 1 }]}>
+                {flexRender(c.column.columnDef.cell, c.getContext())}
+              </View>
+            ))}
+          </View>
+        ))}
+        {table.getRowModel().rows.length === 0 ? <Text style={styles.muted}>No run matches “{filter}”.</Text> : null}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.md },
+  filter: { ...type.small, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.surface, color: colors.ink },
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
+  headRow: { borderBottomColor: colors.ink },
+  head: { ...type.caps, color: colors.inkMuted },
+  cellBox: { justifyContent: 'center' },
+  cell: { ...type.small, color: colors.ink },
+  code: { fontFamily: fonts.mono, fontSize: 13, color: colors.ink },
+  link: { ...type.small, color: colors.accent, fontFamily: fonts.medium },
+  muted: { ...type.small, color: colors.inkFaint, fontFamily: fonts.regular },
+});

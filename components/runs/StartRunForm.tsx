@@ -1,0 +1,96 @@
+// Start a run from a pasted PD code or braid word: the code is checked here with the knot
+// core (same messages as the server), then sent as a diagram; the result page opens.
+import { useState } from 'react';
+import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
+import { router } from 'expo-router';
+import { runPagePath, type StartRunRequest } from '@/shared/api/runs';
+import { fromBraid, parseBraid } from '@/shared/knot/braid';
+import { parsePD } from '@/shared/knot/pd';
+import { useStartRun } from '@/hooks/queries/useRuns';
+import { Banner } from '@/components/ui/Banner';
+import { Button } from '@/components/ui/Button';
+import { colors, fonts, radius, space, type } from '@/constants/theme';
+
+type Input = 'pd' | 'braid';
+const rings = ['Z', 'Q', 'F2', 'F3'] as const;
+
+function Choice<T extends string>({ label, options, value, onChange, names }: { label: string; options: readonly T[]; value: T; onChange: (v: T) => void; names?: Record<T, string> }) {
+  return (
+    <View style={styles.field}>
+      <Text style={styles.label}>{label}</Text>
+      <View role="radiogroup" aria-label={label} style={styles.choices}>
+        {options.map((o) => (
+          <Pressable key={o} role="radio" aria-checked={o === value} onPress={() => onChange(o)} style={[styles.choice, o === value && styles.chosen]}>
+            <Text style={[styles.choiceText, o === value && styles.chosenText]}>{names?.[o] ?? o}</Text>
+          </Pressable>
+        ))}
+      </View>
+    </View>
+  );
+}
+
+/** The request for the typed code, or the reason it is not a diagram. */
+function request(input: Input, code: string, ring: string, reduced: boolean, sweep: number): StartRunRequest | string {
+  try {
+    const diagram = input === 'pd' ? { pd: parsePD(code) as [number, number, number, number][] } : (() => {
+      const d = fromBraid(parseBraid(code));
+      return { pd: d.pd.map((x) => [...x] as [number, number, number, number]), unknots: d.unknots };
+    })();
+    const label = input === 'braid' ? `braid ${code.trim()}` : `PD code, ${diagram.pd.length} crossings`;
+    return sweep > 0 ? { kind: 'cable-sweep', diagram, ring, reduced, sweep: { maxStrands: sweep }, label } : { diagram, ring, reduced, label };
+  } catch (err) {
+    return err instanceof Error ? err.message : 'Not a diagram';
+  }
+}
+
+export function StartRunForm() {
+  const [input, setInput] = useState<Input>('pd');
+  const [code, setCode] = useState('');
+  const [ring, setRing] = useState<(typeof rings)[number]>('Z');
+  const [reduced, setReduced] = useState<'unreduced' | 'reduced'>('unreduced');
+  const [kind, setKind] = useState<'kh' | 'sweep'>('kh');
+  const [invalid, setInvalid] = useState<string | null>(null);
+  const start = useStartRun();
+  const submit = () => {
+    const body = request(input, code, ring, reduced === 'reduced', kind === 'sweep' ? 2 : 0);
+    if (typeof body === 'string') return setInvalid(body);
+    setInvalid(null);
+    start.mutate(body, { onSuccess: (run) => router.push(runPagePath(run.id) as never) });
+  };
+  return (
+    <View style={styles.form}>
+      <Choice label="Input" options={['pd', 'braid'] as const} value={input} onChange={setInput} names={{ pd: 'PD code', braid: 'Braid word' }} />
+      <View style={styles.field}>
+        <Text style={styles.label}>{input === 'pd' ? 'PD code' : 'Braid word'}</Text>
+        <TextInput
+          value={code}
+          onChangeText={setCode}
+          multiline
+          aria-label={input === 'pd' ? 'PD code' : 'Braid word'}
+          placeholder={input === 'pd' ? '[[4,2,5,1],[2,6,3,5],[6,4,1,3]]' : '1 1 1'}
+          placeholderTextColor={colors.inkFaint}
+          style={styles.code}
+        />
+        {invalid ? <Text role="alert" style={styles.error}>{invalid}</Text> : null}
+      </View>
+      <Choice label="Ring" options={rings} value={ring} onChange={setRing} />
+      <Choice label="Homology" options={['unreduced', 'reduced'] as const} value={reduced} onChange={setReduced} names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} />
+      <Choice label="Computation" options={['kh', 'sweep'] as const} value={kind} onChange={setKind} names={{ kh: 'Khovanov homology', sweep: 'Cable sweep, r+ + r- ≤ 2' }} />
+      {start.error ? <Banner tone="error">{start.error.message}</Banner> : null}
+      <Button label="Start run" busy={start.isPending} busyLabel="Starting…" onPress={submit} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  field: { gap: space.xs },
+  label: { ...type.label, color: colors.inkMuted },
+  choices: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  choice: { paddingHorizontal: space.md, paddingVertical: space.sm, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  chosen: { backgroundColor: colors.accent, borderColor: colors.accent },
+  choiceText: { ...type.small, color: colors.ink },
+  chosenText: { color: colors.onAccent, fontFamily: fonts.medium },
+  code: { fontFamily: fonts.mono, fontSize: 14, minHeight: 72, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, padding: space.md, backgroundColor: colors.surface, color: colors.ink },
+  error: { ...type.small, color: colors.danger },
+});

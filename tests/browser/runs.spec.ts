@@ -1,0 +1,83 @@
+// The runs journey in a real browser against the real server: start a run from a pasted braid
+// word, watch the progress bar move, open the result table; a second run from a PD code shows
+// the trefoil's torsion typeset. Screenshots at phone and wide size (tests/artifacts/runs-*).
+import type { Browser, Page } from 'playwright-core';
+import { PHONE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
+
+let browser: Browser;
+let page: Page;
+
+beforeAll(async () => {
+  browser = await launch();
+  page = await (await browser.newContext({ viewport: PHONE })).newPage();
+  await page.goto(baseUrl + '/');
+  await page.getByRole('heading', { name: 'Sign in', exact: true }).waitFor();
+  await page.getByRole('link', { name: 'Create an account' }).click();
+  await page.getByLabel('Name').fill('Runa Okafor');
+  await page.getByLabel('E-mail').fill(uniqueEmail('runa'));
+  await page.getByLabel('Password').fill('correct horse 3');
+  await page.getByRole('button', { name: 'Create account' }).click();
+  await page.getByRole('heading', { name: 'Sketches', exact: true }).waitFor();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+/** T(6,7) as a braid word: (1 2 3 4 5)^7, 35 crossings, a few seconds of work over Q. */
+const T67 = Array.from({ length: 7 }, () => '1 2 3 4 5').join(' ');
+
+test('start a run from a braid word, watch its progress, read the table', async () => {
+  await page.getByRole('tab', { name: 'Runs' }).click();
+  await page.getByRole('heading', { name: 'No runs yet' }).waitFor();
+  await page.getByRole('radio', { name: 'Braid word' }).click();
+  await page.getByLabel('Braid word').fill(T67);
+  await page.getByRole('radio', { name: 'Q' }).click();
+  await shoot(page, 'runs-01-form');
+  await page.getByRole('button', { name: 'Start run' }).click();
+
+  await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
+  const bar = page.getByRole('progressbar', { name: 'Run progress' });
+  await bar.waitFor();
+  // The bar moves while the server computes: some value strictly between 0 and 100 is seen.
+  let seen = 0;
+  for (let k = 0; k < 600 && !(seen > 0 && seen < 100); k++) {
+    seen = Number(await bar.getAttribute('aria-valuenow'));
+    if (seen > 0 && seen < 100) await shoot(page, 'runs-02-progress');
+    else await page.waitForTimeout(50);
+  }
+  expect(seen).toBeGreaterThan(0);
+  expect(seen).toBeLessThan(100);
+
+  await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 90_000 });
+  const table = page.getByRole('table', { name: 'Khovanov homology' });
+  await table.waitFor();
+  // T(6,7) is a positive braid knot: Kh^{0,*} over Q is Q at j = s -+ 1, s = (p-1)(q-1) = 30
+  // (Rasmussen 2004, math/0402131; Stosic 2006, math/0511529).
+  await expect(table.getByRole('rowheader', { name: '29', exact: true }).isVisible()).resolves.toBe(true);
+  await expect(page.getByText('as the Jones polynomial says ✓').isVisible()).resolves.toBe(true);
+  await shoot(page, 'runs-03-result');
+}, 150_000);
+
+test('a PD code run shows torsion typeset, and the runs table lists both', async () => {
+  await page.getByRole('link', { name: 'Runs', exact: true }).click();
+  await page.getByRole('heading', { name: 'Runs', exact: true }).waitFor();
+  await page.getByRole('radio', { name: 'PD code' }).click();
+  await page.getByLabel('PD code').fill('[[4,2,5,1],[2,6,3,5],[6,4,1,3]]');
+  await page.getByRole('radio', { name: 'Z', exact: true }).click();
+  await page.getByRole('button', { name: 'Start run' }).click();
+  await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 60_000 });
+  // The positive trefoil over Z has Z/2 at (3,7) (Bar-Natan 2002, math/0201043).
+  await expect(page.getByRole('math', { name: 'Z/2' }).isVisible()).resolves.toBe(true);
+  await expect(page.getByText('2 diagonals: thin').isVisible()).resolves.toBe(true);
+  await shoot(page, 'runs-04-trefoil');
+
+  await page.getByRole('link', { name: 'Runs', exact: true }).click();
+  const runs = page.getByRole('table', { name: 'Runs' });
+  await runs.waitFor();
+  await expect(runs.getByRole('row').count()).resolves.toBe(3); // header + two runs
+  await page.getByLabel('Filter runs').fill('braid');
+  await expect(runs.getByRole('row').count()).resolves.toBe(2);
+  await page.getByLabel('Filter runs').fill('');
+  await shoot(page, 'runs-05-table');
+}, 120_000);
