@@ -16,9 +16,12 @@ module.exports = {
     },
     {
       displayName: 'app',
-      preset: 'jest-expo/web',
+      // RNTL needs React Native host components, so component tests render the native (iOS)
+      // tree; web-only code paths are covered by the browser specs.
+      preset: 'jest-expo/ios',
       roots: ['<rootDir>/tests'],
       testMatch: ['<rootDir>/tests/app/**/*.test.tsx'],
+      setupFilesAfterEnv: ['<rootDir>/tests/app/setup.ts'],
       moduleNameMapper: alias,
     },
   ],

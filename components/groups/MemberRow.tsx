@@ -11,7 +11,13 @@ import { RolePicker } from '@/components/ui/RolePicker';
 import { colors, space, type } from '@/constants/theme';
 
 /** One member; owners and admins get role and removal controls where the rules allow them. */
-export function MemberRow({ groupId, member, myRole, isMe }: { groupId: string; member: Member; myRole: Role; isMe: boolean }) {
+export function MemberRow({ groupId, member, myRole, isMe, first }: {
+  groupId: string;
+  member: Member;
+  myRole: Role;
+  isMe: boolean;
+  first: boolean;
+}) {
   const [editing, setEditing] = useState(false);
   const [confirmRemove, setConfirmRemove] = useState(false);
   const changeRole = useChangeRole(groupId);
@@ -25,7 +31,7 @@ export function MemberRow({ groupId, member, myRole, isMe }: { groupId: string; 
   };
 
   return (
-    <View style={styles.row} testID={`member-${member.email}`}>
+    <View style={[styles.row, !first && styles.divided]} testID={`member-${member.email}`}>
       <View style={styles.head}>
         <View style={styles.who}>
           <Text style={styles.name}>
@@ -57,7 +63,8 @@ export function MemberRow({ groupId, member, myRole, isMe }: { groupId: string; 
 }
 
 const styles = StyleSheet.create({
-  row: { gap: space.sm, paddingVertical: space.md, borderTopWidth: 1, borderTopColor: colors.line },
+  row: { gap: space.sm, paddingVertical: space.sm },
+  divided: { borderTopWidth: 1, borderTopColor: colors.line, paddingTop: space.md },
   head: { flexDirection: 'row', alignItems: 'center', gap: space.md },
   who: { flex: 1, gap: 1 },
   name: { ...type.heading, color: colors.ink },

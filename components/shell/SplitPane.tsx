@@ -1,21 +1,20 @@
-// List + detail. Phone: a stack (the index route shows the list, details push over it).
-// Wide: the list stays on the left and the current child route fills the right pane.
-// Use it as a tab folder's _layout: `export default () => <SplitPane list={<MyList />} />`, and
-// in that folder's index.tsx render the list on phones and a "pick one" hint when wide.
+// List + detail inside a tab. Phone: one stack (the index route shows the list, details push
+// over it). Wide: the list stays on the left and the same stack fills the right pane, so
+// resizing keeps the open detail. Use it as a tab folder's _layout:
+// `export default () => <SplitPane list={<MyList />} />`, and in that folder's index.tsx render
+// the list on phones and a "pick one" hint when wide (see app/(tabs)/account/).
 import { StyleSheet, View } from 'react-native';
-import { Slot } from 'expo-router';
 import { colors } from '@/constants/theme';
 import { TabStack } from './TabStack';
 import { useIsWide } from './useIsWide';
 
 export function SplitPane({ list }: { list: React.ReactNode }) {
   const wide = useIsWide();
-  if (!wide) return <TabStack />;
   return (
     <View style={styles.row}>
-      <View style={styles.list}>{list}</View>
+      {wide ? <View style={styles.list}>{list}</View> : null}
       <View style={styles.detail}>
-        <Slot />
+        <TabStack />
       </View>
     </View>
   );

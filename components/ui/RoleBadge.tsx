@@ -12,7 +12,7 @@ export function RoleBadge({ role }: { role: Role }) {
 }
 
 const styles = StyleSheet.create({
-  badge: { borderRadius: radius.pill, paddingHorizontal: space.sm + 2, paddingVertical: 2, alignSelf: 'flex-start' },
+  badge: { borderRadius: radius.pill, paddingHorizontal: space.sm + 2, paddingVertical: 2 },
   strong: { backgroundColor: colors.accentSoft },
   plain: { backgroundColor: colors.sunken },
   text: { ...type.caps, fontSize: 11 },

@@ -79,9 +79,9 @@ export default function GroupScreen() {
       <Section title={members.data ? `Members · ${members.data.length}` : 'Members'}>
         {members.isError ? <Banner tone="error">{members.error.message}</Banner> : null}
         {manager ? <Button variant="secondary" label="Members table" onPress={() => router.push(`/account/members/${id}`)} /> : null}
-        <View style={styles.members}>
-          {members.data?.map((m) => (
-            <MemberRow key={m.userId} groupId={id} member={m} myRole={role} isMe={m.userId === me?.id} />
+        <View>
+          {members.data?.map((m, i) => (
+            <MemberRow key={m.userId} groupId={id} member={m} myRole={role} isMe={m.userId === me?.id} first={i === 0} />
           ))}
         </View>
       </Section>
@@ -103,6 +103,5 @@ const styles = StyleSheet.create({
   pendingTitle: { ...type.label, color: colors.inkMuted },
   pendingRow: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 36 },
   pendingEmail: { ...type.code, color: colors.ink, flex: 1 },
-  members: { marginTop: -space.md },
   leave: { gap: space.sm, alignItems: 'flex-start' },
 });

@@ -1,0 +1,54 @@
+// Paste a PD code, DT code or braid word: it is checked as typed, and drawn when accepted.
+import { useState } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import type { Diagram } from '@/shared/knot/diagram';
+import { codeKinds, parseCode, type CodeKind } from '@/lib/slate/codes';
+import { Button } from '@/components/ui/Button';
+import { Choice, Dialog } from '@/components/slate/Dialog';
+import { Field } from '@/components/slate/Field';
+import { colors, type } from '@/constants/theme';
+
+export function PasteCodeDialog({ visible, onClose, onDraw }: {
+  visible: boolean;
+  onClose: () => void;
+  onDraw: (d: Diagram, braid?: number[]) => void;
+}) {
+  const [kind, setKind] = useState<CodeKind>('pd');
+  const [text, setText] = useState('');
+  const [error, setError] = useState<string | null>(null);
+  const info = codeKinds.find((c) => c.kind === kind)!;
+  const submit = () => {
+    const r = parseCode(kind, text);
+    if (!r.ok) return setError(r.error);
+    setError(null);
+    setText('');
+    onDraw(r.diagram, r.braid);
+  };
+  return (
+    <Dialog title="Paste a code" visible={visible} onClose={onClose}>
+      <Choice label="Kind of code" value={kind} onChange={(k) => (setKind(k), setError(null))} options={codeKinds.map((c) => ({ value: c.kind, label: c.label }))} />
+      <Field
+        label={info.label}
+        mono
+        multiline
+        value={text}
+        onChangeText={(t) => (setText(t), setError(null))}
+        placeholder={info.example}
+        autoCapitalize="none"
+        autoCorrect={false}
+        error={error}
+        hint={kind === 'pd' ? 'Crossings X[a,b,c,d] or JSON, labels counterclockwise from the incoming under-strand.' : kind === 'braid' ? 'k is σₖ (a positive crossing), −k its inverse.' : 'Even numbers, one per crossing; a minus sign for an over-crossing.'}
+      />
+      <View style={styles.actions}>
+        <Button label="Draw it" onPress={submit} />
+        <Button variant="quiet" label="Cancel" onPress={onClose} />
+      </View>
+      <Text style={styles.note}>The drawing replaces the Slate; Undo brings the old one back.</Text>
+    </Dialog>
+  );
+}
+
+const styles = StyleSheet.create({
+  actions: { flexDirection: 'row', gap: 12, flexWrap: 'wrap' },
+  note: { ...type.small, color: colors.inkMuted },
+});

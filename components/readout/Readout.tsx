@@ -1,0 +1,142 @@
+// The Readout: the instant invariants of the diagram on the Slate, each marked while it is
+// being recomputed, with what to do when there is nothing to compute yet.
+import { StyleSheet, Text, View } from 'react-native';
+import type { Marker } from '@/shared/drawing/crossings';
+import type { ReadoutState } from '@/hooks/useReadout';
+import type { ReadoutKey } from '@/lib/slate/readout';
+import { nameTeX } from '@/lib/slate/readout';
+import { TeX } from '@/components/runs/Math';
+import { colors, fonts, radius, space, type } from '@/constants/theme';
+
+type Props = {
+  state: ReadoutState;
+  /** Why there is no diagram yet (null: there is one). */
+  empty: null | 'nothing' | 'open' | 'markers';
+  markers: readonly Marker[];
+  openStrands: number;
+};
+
+function Row({ label, k, state, children }: { label: string; k: ReadoutKey; state: ReadoutState; children: React.ReactNode }) {
+  const stale = state.stale.has(k);
+  const error = state.errors[k];
+  const has = state.values[k] !== undefined;
+  return (
+    <View style={styles.row} aria-busy={stale} testID={`readout-${k}`}>
+      <View style={styles.labelCol}>
+        <Text style={styles.label}>{label}</Text>
+        {stale ? <Text style={styles.updating} accessibilityLabel={`${label} updating`}>updating…</Text> : null}
+      </View>
+      <View style={[styles.value, stale && styles.staleValue]}>
+        {error ? <Text style={styles.error}>Could not compute: {error}</Text> : has ? children : <Text style={styles.pending}>…</Text>}
+      </View>
+    </View>
+  );
+}
+
+const signed = (n: number) => (n > 0 ? `+${n}` : n < 0 ? `−${-n}` : '0');
+
+export function Readout({ state, empty, markers, openStrands }: Props) {
+  const v = state.values;
+  if (empty) {
+    return (
+      <View style={styles.box} testID="readout">
+        <Text style={styles.kicker}>Readout</Text>
+        {empty === 'markers' ? (
+          <View style={styles.notice} role="alert">
+            <Text style={styles.noticeTitle}>{markers.length === 1 ? 'One spot needs attention' : `${markers.length} spots need attention`}</Text>
+            {[...new Set(markers.map((m) => m.message))].map((m) => (
+              <Text key={m} style={styles.noticeBody}>{m}</Text>
+            ))}
+            <Text style={styles.noticeBody}>The invariants return when the drawing is clean.</Text>
+          </View>
+        ) : (
+          <Text style={styles.hint}>
+            {empty === 'open'
+              ? 'Close the strand: end it near where it started. Unfinished strands are not counted.'
+              : 'Draw a closed strand on the Slate, or paste a code. The invariants appear here as you draw.'}
+          </Text>
+        )}
+      </View>
+    );
+  }
+  const name = v.name;
+  return (
+    <View style={styles.box} testID="readout">
+      <Text style={styles.kicker}>Readout</Text>
+      <View style={styles.headline}>
+        <Text style={styles.big} testID="readout-crossings-count">
+          {v.crossings ?? '…'} {v.crossings === 1 ? 'crossing' : 'crossings'}
+        </Text>
+        <Text style={styles.sub}>
+          {v.components ?? '…'} {v.components === 1 ? 'component' : 'components'} · writhe {v.writhe !== undefined ? signed(v.writhe) : '…'}
+          {openStrands ? ` · ${openStrands} unfinished` : ''}
+        </Text>
+        <View aria-busy={state.stale.has('name')} testID="readout-name" style={state.stale.has('name') && styles.staleValue}>
+          {name ? (
+            <View style={styles.nameRow}>
+              <TeX tex={nameTeX(name.name, name.mirror)} text={name.name + (name.mirror ? ' mirror' : '')} />
+              <Text style={styles.nameText}>{name.text}</Text>
+            </View>
+          ) : v.name === null ? (
+            <Text style={styles.nameText}>{v.components === 1 ? 'Not among the knots up to 8 crossings' : 'A link: no name guess'}</Text>
+          ) : null}
+        </View>
+      </View>
+
+      <Row label="Jones polynomial" k="jones" state={state}>
+        {v.jones ? <TeX tex={`V(t) = ${v.jones.format('t', 'latex')}`} text={`V(t) = ${v.jones.format('t', 'unicode')}`} /> : null}
+      </Row>
+      <Row label="Kauffman bracket" k="bracket" state={state}>
+        {v.bracket ? <TeX tex={`\\langle D\\rangle = ${v.bracket.format('A', 'latex')}`} text={`⟨D⟩ = ${v.bracket.format('A', 'unicode')}`} /> : null}
+      </Row>
+      <Row label="Alexander polynomial" k="alexander" state={state}>
+        {v.alexander ? (
+          <View>
+            <TeX tex={`\\Delta(t) = ${v.alexander.polynomial.format('t', 'latex')}`} text={`Δ(t) = ${v.alexander.polynomial.format('t', 'unicode')}`} />
+            {v.alexander.conwaySign ? null : <Text style={styles.note}>Sign by our convention (first Conway coefficient is 0).</Text>}
+          </View>
+        ) : null}
+      </Row>
+      <Row label="Determinant" k="determinant" state={state}>
+        <Text style={styles.num}>{v.determinant?.toString()}</Text>
+      </Row>
+      <Row label="Signature" k="signature" state={state}>
+        <Text style={styles.num}>{v.signature !== undefined ? signed(v.signature) : ''}</Text>
+      </Row>
+      <Row label="Framings" k="framings" state={state}>
+        <Text style={styles.num}>
+          {(v.framings ?? []).map((f, i) => `${i + 1}: ${signed(f.value)}${f.blackboard ? ' bb' : ''}`).join('   ')}
+        </Text>
+      </Row>
+      {v.linking && v.linking.length > 0 ? (
+        <Row label="Linking numbers" k="linking" state={state}>
+          <Text style={styles.num}>{v.linking.map((l) => `lk(${l.i + 1},${l.j + 1}) = ${signed(l.value)}`).join('   ')}</Text>
+        </Row>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: space.md },
+  kicker: { ...type.caps, color: colors.accent },
+  headline: { gap: 2, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
+  big: { ...type.display, color: colors.ink },
+  sub: { ...type.small, color: colors.inkMuted },
+  nameRow: { flexDirection: 'row', alignItems: 'baseline', gap: space.sm, marginTop: space.xs },
+  nameText: { ...type.small, color: colors.inkMuted, marginTop: space.xs },
+  row: { gap: 2 },
+  labelCol: { flexDirection: 'row', alignItems: 'baseline', justifyContent: 'space-between' },
+  label: { ...type.label, color: colors.inkMuted },
+  updating: { ...type.label, fontSize: 12, color: colors.accent },
+  value: { minHeight: 24, justifyContent: 'center' },
+  staleValue: { opacity: 0.4 },
+  num: { fontFamily: fonts.mono, fontSize: 15, lineHeight: 22, color: colors.ink },
+  pending: { ...type.body, color: colors.inkFaint },
+  error: { ...type.small, color: colors.danger },
+  note: { ...type.small, fontSize: 12, color: colors.inkFaint },
+  hint: { ...type.body, color: colors.inkMuted },
+  notice: { backgroundColor: colors.dangerSoft, borderRadius: radius.md, padding: space.md, gap: space.xs },
+  noticeTitle: { ...type.heading, color: colors.danger },
+  noticeBody: { ...type.small, color: colors.ink },
+});
