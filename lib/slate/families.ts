@@ -1,0 +1,99 @@
+// The Families builder's pure part: the families it offers, their parameters, and how a built
+// diagram is combined with the sketch already on the Slate (replace, connected sum, disjoint
+// union, each optionally mirrored).
+import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, torusLink, twistKnot } from '@/shared/knot/families';
+import { componentCount, type Diagram } from '@/shared/knot/diagram';
+import type { Parsed } from './codes';
+
+export type FamilyKind = 'torus' | 'twist' | 'pretzel' | 'rational' | 'cable';
+
+export interface FamilyField {
+  key: string;
+  label: string;
+  hint: string;
+  initial: string;
+}
+
+export interface Family {
+  kind: FamilyKind;
+  label: string;
+  /** Needs a diagram on the Slate (it transforms it). */
+  fromSketch: boolean;
+  fields: readonly FamilyField[];
+}
+
+export const familyList: readonly Family[] = [
+  { kind: 'torus', label: 'Torus link', fromSketch: false, fields: [
+    { key: 'p', label: 'p (strands)', hint: 'nonzero integer', initial: '2' },
+    { key: 'q', label: 'q (turns)', hint: 'integer; T(2,3) is the trefoil', initial: '3' },
+  ] },
+  { kind: 'twist', label: 'Twist knot', fromSketch: false, fields: [
+    { key: 'n', label: 'n (half-twists)', hint: 'integer; 2 gives the figure-eight', initial: '2' },
+  ] },
+  { kind: 'pretzel', label: 'Pretzel link', fromSketch: false, fields: [
+    { key: 'a', label: 'Columns a1 a2 …', hint: 'integers; -2 3 7 is a classic', initial: '-2 3 7' },
+  ] },
+  { kind: 'rational', label: 'Rational knot', fromSketch: false, fields: [
+    { key: 'a', label: 'Continued fraction a1 a2 …', hint: 'a1 + 1/(a2 + …); 2 2 is the figure-eight', initial: '2 2' },
+  ] },
+  { kind: 'cable', label: 'Cable of the sketch', fromSketch: true, fields: [
+    { key: 'component', label: 'Component', hint: 'number as in the Readout', initial: '1' },
+    { key: 'framing', label: 'Framing', hint: 'integer, or blank for its current framing', initial: '' },
+    { key: 'rPlus', label: 'r+ (parallel copies)', hint: 'integer >= 0', initial: '2' },
+    { key: 'rMinus', label: 'r- (reversed copies)', hint: 'integer >= 0', initial: '0' },
+  ] },
+];
+
+// Component k given an explicit framing (the cable follows it).
+const setFramingOf = (d: Diagram, k: number, framing: number): Diagram => ({
+  ...d,
+  framings: d.framings.map((f, i) => (i === k ? framing : f)),
+});
+
+export type Placement = 'replace' | 'sum' | 'union';
+
+const integer = (label: string, text: string): number => {
+  const t = text.trim();
+  if (!/^-?\d+$/.test(t)) throw new Error(`${label} must be an integer, got "${text}"`);
+  return Number(t);
+};
+
+const integers = (label: string, text: string): number[] => {
+  const parts = text.trim().split(/[\s,]+/).filter(Boolean);
+  if (parts.length === 0) throw new Error(`${label} needs at least one integer`);
+  return parts.map((p) => integer(label, p));
+};
+
+function build(kind: FamilyKind, v: Record<string, string>, current: Diagram | null): Diagram {
+  switch (kind) {
+    case 'torus':
+      return torusLink(integer('p', v.p), integer('q', v.q));
+    case 'twist':
+      return twistKnot(integer('n', v.n));
+    case 'pretzel':
+      return pretzelLink(integers('The columns', v.a));
+    case 'rational':
+      return rationalLink(integers('The continued fraction', v.a));
+    case 'cable': {
+      if (!current) throw new Error('Draw or paste a link first: the cable is taken of a component of the sketch');
+      const k = integer('The component', v.component) - 1;
+      if (k < 0 || k >= componentCount(current)) throw new Error(`There is no component ${k + 1}; the sketch has ${componentCount(current)}`);
+      const framed = v.framing.trim() === '' ? current : setFramingOf(current, k, integer('The framing', v.framing));
+      return cable(framed, k, integer('r+', v.rPlus), integer('r-', v.rMinus));
+    }
+  }
+}
+
+/** The family member, placed against the current diagram; errors as readable messages. */
+export function buildFamily(kind: FamilyKind, values: Record<string, string>, current: Diagram | null, placement: Placement, mirrored: boolean): Parsed {
+  try {
+    const made = build(kind, values, current);
+    const m = mirrored ? mirror(made) : made;
+    if (placement === 'replace' || kind === 'cable') return { ok: true, diagram: m };
+    if (!current) throw new Error('There is no sketch on the Slate to combine with; choose "Replace"');
+    return { ok: true, diagram: placement === 'sum' ? connectedSum(current, m) : disjointUnion(current, m) };
+  } catch (e) {
+    const text = e instanceof Error ? e.message : String(e);
+    return { ok: false, error: text.charAt(0).toUpperCase() + text.slice(1) + (text.endsWith('.') ? '' : '.') };
+  }
+}

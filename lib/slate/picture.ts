@@ -1,0 +1,83 @@
+// What the Slate canvas draws, computed from the document and its analysis: per component its
+// colour, its visible pieces (gaps cut at under-crossings) as SVG path data, its orientation
+// arrow and framing badge; the crossings (tap targets) and degeneracy markers. World units.
+import { arrowOf } from '@/shared/drawing/pick';
+import type { Analysis } from '@/shared/drawing/analyse';
+import type { Point } from '@/shared/drawing/point';
+import { gapsAround, visiblePieces } from '@/shared/drawing/pieces';
+import { chalkFor } from '@/constants/theme';
+import type { SlateDoc } from './record';
+import type { View } from './slate-store';
+
+export interface StrandPicture {
+  id: string;
+  colour: string;
+  /** 1-based number as in the Readout (diagram order), null for open strands. */
+  number: number | null;
+  closed: boolean;
+  /** SVG path data of the visible pieces, in screen coordinates. */
+  pieces: string[];
+  arrow: { at: Point; direction: Point } | null;
+  /** The framing badge beside the arrow: "bb" for the blackboard framing, else the integer. */
+  badge: { at: Point; text: string; blackboard: boolean } | null;
+  /** Open strands: their two ends, drawn as unfinished. */
+  ends: Point[];
+}
+
+/** Sizes on screen, whatever the zoom (pixels). */
+export const screenSizes = { stroke: 3.4, gap: 8, badgeOffset: 24 };
+
+const fixed = (x: number) => Math.round(x * 10) / 10;
+
+/** Component colour: chosen by hand, else by drawing rank. */
+export const colourOf = (doc: SlateDoc, id: string): string => {
+  const c = doc.sketch.components.find((x) => x.id === id);
+  return chalkFor(doc.colours[id] ?? (c ? c.seq - 1 : 0));
+};
+
+export const framingText = (framing: number | null): string => (framing === null ? 'bb' : framing > 0 ? `+${framing}` : `${framing}`);
+
+export function strandPictures(doc: SlateDoc, a: Analysis, view: View): StrandPicture[] {
+  const order = a.diagram?.componentIds ?? [];
+  const screen = (p: Point) => toScreen(view, p);
+  const pathData = (points: readonly Point[]) => points.map((p, i) => `${i ? 'L' : 'M'}${fixed(screen(p).x)} ${fixed(screen(p).y)}`).join(' ');
+  const gaps = gapsAround(a.crossings, new Map(a.paths.map((p) => [p.id, p.length])), screenSizes.gap / view.k);
+  return a.paths.map((path) => {
+    const c = doc.sketch.components.find((x) => x.id === path.id)!;
+    const arrow = path.closed && path.points.length > 2 ? arrowOf(a, path) : null;
+    const at = arrow && screen(arrow.at);
+    const d = screenSizes.badgeOffset;
+    const index = order.indexOf(path.id);
+    return {
+      id: path.id,
+      colour: colourOf(doc, path.id),
+      number: index >= 0 ? index + 1 : null,
+      closed: path.closed,
+      pieces: visiblePieces(path.points, path.closed, gaps.filter((g) => g.component === path.id)).map(pathData),
+      arrow: arrow && at ? { at, direction: arrow.direction } : null,
+      // Beside the arrow, off to its left as it travels.
+      badge: arrow && at ? { at: { x: at.x + arrow.direction.y * d, y: at.y - arrow.direction.x * d }, text: framingText(c.framing), blackboard: c.framing === null } : null,
+      ends: path.closed || path.points.length === 0 ? [] : [screen(path.points[0]), screen(path.points[path.points.length - 1])],
+    };
+  });
+}
+
+/** A view that fits every point into a box of the given size with a margin, at most 1.5x. */
+export function fitView(points: readonly Point[], width: number, height: number, margin = 36): View {
+  if (points.length === 0 || width <= 0 || height <= 0) return { k: 1, x: 0, y: 0 };
+  const xs = points.map((p) => p.x);
+  const ys = points.map((p) => p.y);
+  const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
+  const k = Math.min(1.5, (width - 2 * margin) / Math.max(x1 - x0, 1), (height - 2 * margin) / Math.max(y1 - y0, 1));
+  return { k, x: width / 2 - k * (x0 + x1) / 2, y: height / 2 - k * (y0 + y1) / 2 };
+}
+
+export const toScreen = (v: View, p: Point): Point => ({ x: p.x * v.k + v.x, y: p.y * v.k + v.y });
+export const toWorld = (v: View, p: Point): Point => ({ x: (p.x - v.x) / v.k, y: (p.y - v.y) / v.k });
+
+/** Zoom by factor f about the screen point c. */
+export const zoomAbout = (v: View, f: number, c: Point): View => {
+  const k = Math.min(8, Math.max(0.15, v.k * f));
+  const g = k / v.k;
+  return { k, x: c.x - g * (c.x - v.x), y: c.y - g * (c.y - v.y) };
+};

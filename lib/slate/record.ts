@@ -1,0 +1,64 @@
+// Between the Slate and the stored sketch record: the drawing (shared/drawing's Sketch plus the
+// chosen colours) is kept in diagram.geometry so it reopens exactly as left; the PD code,
+// unknots and framings read from the analysis are what other screens and the server use; the
+// smoothed paths go to diagram.strokes for thumbnails. A record with a PD code but no geometry
+// (typed on another device, or forked) is laid out afresh.
+import { z } from 'zod';
+import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
+import type { Analysis } from '@/shared/drawing/analyse';
+import { emptySketch, type Sketch } from '@/shared/drawing/sketch';
+import { layoutPD, layoutToSketch } from '@/shared/layout';
+import type { Diagram } from '@/shared/knot/diagram';
+
+/** What the undo stack holds: the drawing and any colour a component was given by hand. */
+export interface SlateDoc {
+  readonly sketch: Sketch;
+  /** Component id -> index into the chalk palette (absent: by drawing rank). */
+  readonly colours: Readonly<Record<string, number>>;
+}
+
+export const emptyDoc: SlateDoc = { sketch: emptySketch, colours: {} };
+
+const P = z.object({ x: z.number(), y: z.number() });
+const Geometry = z.object({
+  components: z.array(z.object({
+    id: z.string(),
+    seq: z.number(),
+    points: z.array(P),
+    closed: z.boolean(),
+    reversed: z.boolean(),
+    framing: z.number().int().nullable(),
+  })),
+  flips: z.array(z.object({ a: z.string(), b: z.string(), at: P })),
+  nextSeq: z.number(),
+  colours: z.record(z.string(), z.number().int()).optional(),
+});
+
+const round = (x: number) => Math.round(x * 10) / 10;
+
+export function toStoredDiagram(doc: SlateDoc, a: Analysis): StoredDiagram {
+  const d = a.diagram?.diagram;
+  const { sketch } = doc;
+  return {
+    pd: d ? d.pd.map((x) => [...x] as [number, number, number, number]) : [],
+    unknots: d?.unknots ?? 0,
+    framings: d ? [...d.framings] : [],
+    strokes: sketch.components.map((c) => ({ points: c.points.map((p) => [round(p.x), round(p.y)] as [number, number]), closed: c.closed })),
+    geometry: { components: sketch.components, flips: sketch.flips, nextSeq: sketch.nextSeq, colours: doc.colours } as unknown as StoredDiagram['geometry'],
+  };
+}
+
+/** A knot-core diagram as an editable drawing (its PD code read back is the same diagram). */
+export function docFromDiagram(d: Diagram): SlateDoc {
+  if (d.pd.length === 0 && d.unknots === 0) return emptyDoc;
+  return { sketch: layoutToSketch(layoutPD(d.pd, d.unknots), d.framings), colours: {} };
+}
+
+export function docFromStored(stored: StoredDiagram): SlateDoc {
+  const g = Geometry.safeParse(stored.geometry);
+  if (g.success) {
+    const { colours = {}, ...sketch } = g.data;
+    return { sketch, colours };
+  }
+  return docFromDiagram({ pd: stored.pd, unknots: stored.unknots, framings: stored.framings });
+}

@@ -1,0 +1,71 @@
+// The Slate's local UI state: the open sketch's undo/redo history, the tool, the selection, the
+// view (zoom and pan) and a drag preview. A drag changes only `preview`; lifting the finger
+// commits once, so one gesture is one undo step and nothing heavy runs mid-drag.
+import { create } from 'zustand';
+import { canRedo, canUndo, commit, historyOf, redo, undo, type History } from '@/shared/drawing/history';
+import { emptyDoc, type SlateDoc } from './record';
+
+export type Tool = 'draw' | 'flip' | 'move' | 'reshape';
+
+export interface View {
+  /** screen = world * k + (x, y) */
+  readonly k: number;
+  readonly x: number;
+  readonly y: number;
+}
+
+export const identityView: View = { k: 1, x: 0, y: 0 };
+
+export interface SlateState {
+  sketchId: string | null;
+  history: History<SlateDoc>;
+  /** The document while a drag is in progress (not yet in the history). */
+  preview: SlateDoc | null;
+  tool: Tool;
+  selected: string | null;
+  view: View;
+  /** The braid word the sketch came from, while it is unchanged since (for "copy braid word"). */
+  braid: { word: number[]; doc: SlateDoc } | null;
+  /** Bumped when a document arrives from outside (load, paste, family), to refit the view. */
+  fitRequest: number;
+  open(id: string | null, doc: SlateDoc): void;
+  /** Replace the drawing from a code or family (one undo step); the view refits. */
+  replace(doc: SlateDoc, braid?: number[]): void;
+  apply(doc: SlateDoc): void;
+  setPreview(doc: SlateDoc | null): void;
+  undo(): void;
+  redo(): void;
+  setTool(tool: Tool): void;
+  select(id: string | null): void;
+  setView(view: View): void;
+}
+
+export const useSlate = create<SlateState>((set, get) => ({
+  sketchId: null,
+  history: historyOf(emptyDoc),
+  preview: null,
+  tool: 'draw',
+  selected: null,
+  view: identityView,
+  braid: null,
+  fitRequest: 0,
+  open: (sketchId, doc) =>
+    set((s) => ({ sketchId, history: historyOf(doc), preview: null, selected: null, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
+  replace: (doc, braid) =>
+    set((s) => ({ history: commit(s.history, doc), preview: null, selected: null, braid: braid ? { word: braid, doc } : null, fitRequest: s.fitRequest + 1 })),
+  apply: (doc) => set((s) => ({ history: commit(s.history, doc), preview: null })),
+  setPreview: (preview) => set({ preview }),
+  undo: () => set((s) => ({ history: undo(s.history), preview: null })),
+  redo: () => set((s) => ({ history: redo(s.history), preview: null })),
+  setTool: (tool) => set({ tool }),
+  select: (selected) => set({ selected }),
+  setView: (view) => set({ view }),
+}));
+
+/** What the canvas draws: the drag preview if any, else the present. */
+export const currentDoc = (s: SlateState): SlateDoc => s.preview ?? s.history.present;
+export const undoable = (s: SlateState) => canUndo(s.history);
+export const redoable = (s: SlateState) => canRedo(s.history);
+/** The braid word is still the sketch's only while nothing was edited after it was pasted. */
+export const braidOf = (s: SlateState): number[] | null => (s.braid && s.braid.doc === s.history.present ? s.braid.word : null);
+export const getSlate = () => useSlate.getState();
