@@ -28,6 +28,12 @@ export interface LinkLayout {
   readonly paths: readonly (readonly Point[])[];
   /** PD crossing i is crossings[i]. */
   readonly crossings: readonly LayoutCrossing[];
+  /**
+   * Whether the picture was verified: its strands cross exactly at the crossings, with no
+   * degeneracy. When false (rare: no outer face and scale tried gave a clean picture) the
+   * picture is only a sketch of the diagram and must not be read back as its PD code.
+   */
+  readonly faithful: boolean;
 }
 
 export interface LayoutOptions {
@@ -56,92 +62,107 @@ function springsOf(pd: PDCode, sc: Scaffold): Spring[] {
   return springs;
 }
 
-/** Vertex positions of one connected piece (its crossings renumbered 0..k-1), unit scale. */
-function embedPiece(pd: PDCode, iterations: number) {
-  const sc = scaffold(pd);
+const area = (a: Point, b: Point, c: Point) => (b.x - a.x) * (c.y - a.y) - (b.y - a.y) * (c.x - a.x);
+
+/**
+ * Vertex positions of one connected piece (its crossings renumbered 0..k-1) with its
+ * `rank`-th largest face outside, at unit spacing.
+ */
+function embedPiece(pd: PDCode, iterations: number, rank: number) {
+  const sc = scaffold(pd, rank);
   const m = sc.outer.length;
-  const fixed = new Map(sc.outer.map((v, k) => [v, { x: Math.cos((2 * Math.PI * k) / m), y: Math.sin((2 * Math.PI * k) / m) }]));
-  const start = tutte(sc.vertexCount, sc.edges, fixed);
+  const radius = Math.sqrt(sc.triangles.length / Math.PI);
+  const fixed = new Map(sc.outer.map((v, k) => [v, { x: radius * Math.cos((2 * Math.PI * k) / m), y: radius * Math.sin((2 * Math.PI * k) / m) }]));
   let pos = relax({
-    positions: start,
+    positions: tutte(sc.vertexCount, sc.edges, fixed),
     springs: springsOf(pd, sc),
     triangles: sc.triangles,
     fixed: new Set(sc.outer),
     iterations,
   });
-  // Seen on screen, slots 0, 1, 2 of a crossing must turn counterclockwise (y down: cross < 0).
-  const [a, b, c] = [0, 1, 2].map((p) => pos[sc.slot(0, p)]);
-  if ((b.x - a.x) * (c.y - a.y) - (b.y - a.y) * (c.x - a.x) > 0) pos = pos.map((p) => ({ x: p.x, y: -p.y }));
+  // Seen on screen, slots 0, 1, 2 of a crossing must turn counterclockwise (y down: area < 0).
+  if (area(pos[sc.slot(0, 0)], pos[sc.slot(0, 1)], pos[sc.slot(0, 2)]) > 0) pos = pos.map((p) => ({ x: p.x, y: -p.y }));
   return { sc, pos };
 }
 
-// The strands cross exactly once near every crossing centre (within one spacing: neighbouring
-// centres are farther apart), between the right two components, nowhere else, and without any
-// degeneracy.
+// The strands cross exactly once at every crossing centre (each crossing found is matched to
+// its nearest centre, which must be within one spacing, between the right two components),
+// nowhere else, and without any degeneracy.
 function faithful(paths: readonly Point[][], centres: readonly { at: Point; pair: string }[], spacing: number): boolean {
   const found = findCrossings(paths.map((points, k) => ({ id: `${k}`, points })), defaultOptions);
   if (found.markers.length > 0 || found.crossings.length !== centres.length) return false;
-  const pairOf = (x: (typeof found.crossings)[number]) => [x.passages[0].path, x.passages[1].path].sort().join();
-  return centres.every(({ at, pair }) => {
-    const near = found.crossings.filter((x) => Math.hypot(x.at.x - at.x, x.at.y - at.y) < spacing);
-    return near.length === 1 && pairOf(near[0]) === pair;
-  });
+  const hit = new Set<number>();
+  for (const x of found.crossings) {
+    const d = centres.map((c) => Math.hypot(x.at.x - c.at.x, x.at.y - c.at.y));
+    const nearest = d.indexOf(Math.min(...d));
+    if (d[nearest] > spacing || hit.has(nearest)) return false;
+    if ([x.passages[0].path, x.passages[1].path].sort().join() !== centres[nearest].pair) return false;
+    hit.add(nearest);
+  }
+  return true;
 }
 
 export function layoutPD(pd: PDCode, unknots = 0, options: LayoutOptions = {}): LinkLayout {
-  const spacing = options.spacing ?? 24;
-  const rounds = options.rounds ?? 2;
   const o = orient(pd);
   const pieces = connectedPieces(pd);
   const where = new Map<number, { piece: number; local: number }>();
   pieces.forEach((crossings, piece) => crossings.forEach((x, local) => where.set(x, { piece, local })));
-
-  // Place every piece at pixel scale, side by side.
-  let offset = 0;
-  const placed = pieces.map((crossings) => {
-    const { sc, pos } = embedPiece(crossings.map((x) => pd[x]), options.iterations ?? 80);
-    const unit = Math.sqrt(sc.triangles.length / Math.PI); // spacing 1 on the unit disk
-    const k = spacing * unit;
-    const xs = pos.map((p) => p.x);
-    const shift = offset - Math.min(...xs) * k;
-    offset += (Math.max(...xs) - Math.min(...xs)) * k + 4 * spacing;
-    return { sc, pos: pos.map((p) => ({ x: p.x * k + shift, y: p.y * k })) };
-  });
-  const vertex = (x: number) => placed[where.get(x)!.piece];
-
-  const crossingPoint = (x: number) => vertex(x).pos[vertex(x).sc.centre(where.get(x)!.local)];
-  // Control polygons of the strands, smoothest first: through crossing centres and edge
-  // midpoints only; then also through the slot vertices (the planar scaffold itself).
-  const polygon = (labels: readonly number[], slots: boolean): Point[] =>
-    labels.flatMap((label) => {
-      const tail = o.tail.get(label)!;
-      const head = o.head.get(label)!;
-      const { sc, pos } = vertex(tail.crossing);
-      const local = (x: number) => where.get(x)!.local;
-      const mid = pos[sc.midpoint(label)];
-      // A kink's loop needs its slots, or it would run out to its midpoint and straight back.
-      if (!slots && tail.crossing !== head.crossing) return [crossingPoint(tail.crossing), mid];
-      return [crossingPoint(tail.crossing), pos[sc.slot(local(tail.crossing), tail.position)], mid, pos[sc.slot(local(head.crossing), head.position)]];
-    });
-  const attempts: [boolean, number][] = [[false, rounds + 1], [true, rounds], [true, 0]];
-  let paths: Point[][] = [];
-  for (const [slots, r] of attempts) {
-    paths = o.components.map((labels) => resample(chaikin(polygon(labels, slots), true, r), true, defaultOptions.spacing));
-    const centres = pd.map((x, i) => ({ at: crossingPoint(i), pair: [o.componentOf.get(x[0])!, o.componentOf.get(x[1])!].sort().join() }));
-    if (faithful(paths, centres, spacing)) break;
+  const base = options.spacing ?? 24;
+  const rounds = options.rounds ?? 2;
+  // Tried in turn until the picture is faithful: the largest face outside, then the next
+  // largest ones (Tutte embeddings squeeze regions far inside, e.g. behind nugatory crossings);
+  // for each, the requested spacing and larger (the drawing tolerances are in pixels), the
+  // smooth strands first, then the scaffold polylines.
+  let embedded = pieces.map((crossings) => embedPiece(crossings.map((x) => pd[x]), options.iterations ?? 80, 0));
+  const centreOf = (x: number) => embedded[where.get(x)!.piece].sc.centre(where.get(x)!.local);
+  const first = drawAt(base, true, rounds + 1);
+  for (let rank = 0; rank < 4; rank++) {
+    if (rank > 0) embedded = pieces.map((crossings) => embedPiece(crossings.map((x) => pd[x]), options.iterations ?? 80, rank));
+    for (const scale of [1, 2, 4]) {
+      for (const [smooth, r] of [[true, rounds + 1], [false, rounds], [false, 0]] as const) {
+        const picture = drawAt(base * scale, smooth, r);
+        if (picture.faithful) return picture;
+      }
+    }
   }
+  return first;
 
-  const crossings = pd.map((x, i): LayoutCrossing => ({
-    at: crossingPoint(i),
-    over: o.componentOf.get(x[1])!,
-    under: o.componentOf.get(x[0])!,
-    sign: o.signs[i],
-  }));
-
-  const circles = Array.from({ length: unknots }, (_, k) => {
-    const r = 2 * spacing;
-    const cx = offset + r + k * (2 * r + 2 * spacing);
-    return Array.from({ length: 48 }, (_, j) => ({ x: cx + r * Math.cos((2 * Math.PI * j) / 48), y: -r * Math.sin((2 * Math.PI * j) / 48) }));
-  });
-  return { paths: [...paths, ...circles], crossings };
+  function drawAt(spacing: number, smooth: boolean, r: number): LinkLayout {
+    let offset = 0;
+    const placed = embedded.map(({ pos }) => {
+      const xs = pos.map((p) => p.x);
+      const shift = offset - Math.min(...xs) * spacing;
+      offset += (Math.max(...xs) - Math.min(...xs)) * spacing + 4 * spacing;
+      return pos.map((p) => ({ x: p.x * spacing + shift, y: p.y * spacing }));
+    });
+    const at = (x: number, vertex: number) => placed[where.get(x)!.piece][vertex];
+    const centre = (x: number) => at(x, centreOf(x));
+    // Control polygons: through crossing centres and edge midpoints (smooth), or also through
+    // the slot vertices (the planar scaffold itself).
+    const polygon = (labels: readonly number[]): Point[] =>
+      labels.flatMap((label) => {
+        const tail = o.tail.get(label)!;
+        const head = o.head.get(label)!;
+        const sc = embedded[where.get(tail.crossing)!.piece].sc;
+        const local = (x: number) => where.get(x)!.local;
+        const mid = at(tail.crossing, sc.midpoint(label));
+        // A kink's loop needs its slots, or it would run out to its midpoint and straight back.
+        if (smooth && tail.crossing !== head.crossing) return [centre(tail.crossing), mid];
+        return [centre(tail.crossing), at(tail.crossing, sc.slot(local(tail.crossing), tail.position)), mid, at(head.crossing, sc.slot(local(head.crossing), head.position))];
+      });
+    const paths = o.components.map((labels) => resample(chaikin(polygon(labels), true, r), true, defaultOptions.spacing));
+    const crossings = pd.map((x, i): LayoutCrossing => ({
+      at: centre(i),
+      over: o.componentOf.get(x[1])!,
+      under: o.componentOf.get(x[0])!,
+      sign: o.signs[i],
+    }));
+    const circles = Array.from({ length: unknots }, (_, k) => {
+      const radius = 2 * base;
+      const cx = offset + radius + k * (2 * radius + 2 * base);
+      return Array.from({ length: 48 }, (_, j) => ({ x: cx + radius * Math.cos((2 * Math.PI * j) / 48), y: -radius * Math.sin((2 * Math.PI * j) / 48) }));
+    });
+    const pairs = crossings.map((c) => [c.over, c.under].sort().join());
+    return { paths: [...paths, ...circles], crossings, faithful: faithful(paths, crossings.map((c, i) => ({ at: c.at, pair: pairs[i] })), spacing) };
+  }
 }

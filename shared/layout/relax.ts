@@ -68,7 +68,10 @@ export function relax(input: RelaxInput): Point[] {
       }
       const f = Math.hypot(fx, fy);
       if (f === 0) continue;
-      const step = Math.min(f, heat) / f;
+      // Steps are also bounded by the vertex's own neighbourhood, so that a squeezed region
+      // (Tutte embeddings shrink some regions exponentially) can still move and grow.
+      const local = Math.min(...around[v].map(([a, b, c]) => Math.min(Math.hypot(pos[a].x - pos[b].x, pos[a].y - pos[b].y), Math.hypot(pos[b].x - pos[c].x, pos[b].y - pos[c].y), Math.hypot(pos[c].x - pos[a].x, pos[c].y - pos[a].y))));
+      const step = Math.min(f, heat, 0.3 * local) / f;
       const old = pos[v];
       const before = areas(v);
       for (let k = step; k > step / 8; k /= 2) {

@@ -4,7 +4,7 @@
 // each edge gets a midpoint, and every face but the outer one gets a centre joined to its
 // boundary. The truncated 4-valent map is cubic and bridgeless, hence 2-connected, so face
 // boundaries are simple cycles and the refinement is a simple triangulation (loops/kinks and
-// bigons included). Outer face: the largest face of the diagram.
+// bigons included). Outer face: any face of the diagram, by default the largest.
 
 import { PDCode, Slot, slotsOf } from '@/shared/knot/pd';
 
@@ -15,6 +15,8 @@ export interface Scaffold {
   readonly triangles: readonly (readonly [number, number, number])[];
   /** The outer face boundary, in order. */
   readonly outer: readonly number[];
+  /** Faces of the diagram from largest to smallest (ties in order), to choose another outer face. */
+  readonly bySize: readonly number[];
   /** Vertex of slot p of crossing x (x in the piece's own numbering). */
   slot(x: number, p: number): number;
   /** Vertex at the centre of crossing x: where the two strands cross. */
@@ -48,7 +50,8 @@ function faces(pd: PDCode): { from: Slot; label: number; to: Slot }[][] {
   return out;
 }
 
-export function scaffold(pd: PDCode): Scaffold {
+/** The refinement with the `rank`-th largest face outside (0: the largest, the first of them). */
+export function scaffold(pd: PDCode, rank = 0): Scaffold {
   const n = pd.length;
   const labels = [...new Set(pd.flat())];
   const midIndex = new Map(labels.map((l, i) => [l, 4 * n + n + i]));
@@ -74,7 +77,8 @@ export function scaffold(pd: PDCode): Scaffold {
   });
 
   const all = faces(pd).map((f) => f.flatMap(({ from, label, to }) => [slot(from.crossing, from.position), midpoint(label), slot(to.crossing, to.position)]));
-  const outerIndex = all.reduce((best, f, i) => (f.length > all[best].length ? i : best), 0);
+  const bySize = all.map((_, i) => i).sort((i, j) => all[j].length - all[i].length || i - j);
+  const outerIndex = bySize[rank % bySize.length];
   all.forEach((cycle, i) => {
     if (i === outerIndex) return;
     const c = vertexCount++;
@@ -84,5 +88,5 @@ export function scaffold(pd: PDCode): Scaffold {
       triangles.push([c, cycle[(k + 1) % cycle.length], v]);
     });
   });
-  return { vertexCount, edges, triangles, outer: all[outerIndex], slot, centre, midpoint, kind };
+  return { vertexCount, edges, triangles, outer: all[outerIndex], bySize, slot, centre, midpoint, kind };
 }

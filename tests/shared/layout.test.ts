@@ -15,6 +15,7 @@ import { random } from './drawing-fixtures';
 
 function readBack(d: Diagram): Diagram {
   const layout = layoutPD(d.pd, d.unknots);
+  expect(layout.faithful).toBe(true);
   const a = analyse(layoutToSketch(layout, d.framings));
   expect(a.markers).toEqual([]);
   expect(a.crossings).toHaveLength(d.pd.length);
@@ -74,6 +75,8 @@ describe('families', () => {
 
 describe('random braid closures up to 30 crossings', () => {
   const rnd = random(2026);
+  // Braid words on up to 6 strands: many letters occur once, giving nugatory crossings and
+  // crossingless strands, the hardest cases for a Tutte embedding.
   const cases = Array.from({ length: 24 }, (_, i) => {
     const strands = 2 + Math.floor(rnd() * 4);
     const length = 1 + Math.floor(rnd() * 30);
@@ -81,4 +84,26 @@ describe('random braid closures up to 30 crossings', () => {
     return [i, strands, word] as const;
   });
   test.each(cases)('case %i: %i strands, %j', (_, strands, word) => expectSameDiagram(fromBraid(word, strands)));
+});
+
+describe('never a wrong picture', () => {
+  // A layout either says it is not faithful, or its picture reads back as the same diagram.
+  const rnd = random(77);
+  test('40 random braid closures on 2 to 6 strands', () => {
+    let faithful = 0;
+    for (let i = 0; i < 40; i++) {
+      const strands = 2 + Math.floor(rnd() * 5);
+      const word = Array.from({ length: 1 + Math.floor(rnd() * 30) }, () => (1 + Math.floor(rnd() * (strands - 1))) * (rnd() < 0.5 ? -1 : 1));
+      const d = fromBraid(word, strands);
+      const layout = layoutPD(d.pd, d.unknots);
+      if (!layout.faithful) continue;
+      faithful++;
+      const a = analyse(layoutToSketch(layout));
+      expect(a.markers).toEqual([]);
+      expect(a.crossings).toHaveLength(d.pd.length);
+      expect(writhe(orient(a.diagram!.diagram.pd))).toBe(writhe(orient(d.pd)));
+      expect(jones(a.diagram!.diagram).equals(jones(d))).toBe(true);
+    }
+    expect(faithful).toBeGreaterThan(32);
+  });
 });
