@@ -27,6 +27,8 @@ interface Gluing {
   /** Component of every bottom loop and every top loop. */
   readonly bottomLoops: number[];
   readonly topLoops: number[];
+  /** Reduced surfaces already met, by (disc dots, bottom summands, top summands). */
+  readonly memo: Map<number, [number, number][]>;
 }
 
 /**
@@ -126,6 +128,7 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
       compX: comp.slice(pq.count),
       bottomLoops,
       topLoops,
+      memo: new Map(),
     };
     gluings.set(key, result);
     return result;
@@ -152,11 +155,8 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
     from.forEach((source, sigma) => {
       to.forEach((target, tau) => {
         for (const [mask, c] of f) {
-          const dots = dotsOf(g.pieces.length, [g.compPQ], [mask]);
-          g.bottomLoops.forEach((piece, l) => (dots[piece] += (sigma >> l) & 1));
-          g.topLoops.forEach((piece, l) => (dots[piece] += 1 - ((tau >> l) & 1)));
           const sc = ring.mul(sign, c);
-          for (const [m, k] of reduce(g.pieces, dots)) cx.addTerm(source, target, m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
+          for (const [m, k] of surface(g, mask, sigma, tau)) cx.addTerm(source, target, m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
         }
       });
     });
@@ -173,4 +173,18 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
     connect(zero, one, gluing(o.mat, o.mat, 0, 1), identity, o.height % 2 ? ring.neg(ring.one) : ring.one);
   }
   return cx;
+}
+
+// The glued surface with dots `mask` on the old discs, capped as the summands say, reduced.
+function surface(g: Gluing, mask: number, sigma: number, tau: number): [number, number][] {
+  const key = (mask * 2 ** g.bottomLoops.length + sigma) * 2 ** g.topLoops.length + tau;
+  let terms = g.memo.get(key);
+  if (!terms) {
+    const dots = dotsOf(g.pieces.length, [g.compPQ], [mask]);
+    g.bottomLoops.forEach((piece, l) => (dots[piece] += (sigma >> l) & 1));
+    g.topLoops.forEach((piece, l) => (dots[piece] += 1 - ((tau >> l) & 1)));
+    terms = reduce(g.pieces, dots);
+    g.memo.set(key, terms);
+  }
+  return terms;
 }
