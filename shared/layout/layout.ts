@@ -1,9 +1,10 @@
 // A clean planar picture of any PD code: each connected piece is refined to a triangulated
-// disk (scaffold.ts), embedded by Tutte's method with its largest face outside, relaxed by a
-// planarity-preserving force model, and its strands are drawn through the crossing centres,
-// slot vertices and edge midpoints, then rounded by Chaikin corner cutting. Pieces are set
-// side by side, crossingless unknots as circles after them. Coordinates are on screen (y down)
-// and the counterclockwise order of every PD crossing is counterclockwise as seen.
+// disk (scaffold.ts), embedded by Tutte's method with a large face outside, relaxed by a
+// planarity-preserving force model, and its strands are drawn through the crossing centres
+// and edge midpoints (or the scaffold's slot vertices too), rounded by Chaikin corner cutting.
+// Every picture is checked by the drawing analysis before it is returned. Pieces are set side
+// by side, crossingless unknots as circles after them. Coordinates are on screen (y down) and
+// the counterclockwise order of every PD crossing is counterclockwise as seen.
 
 import { findCrossings } from '@/shared/drawing/crossings';
 import { defaultOptions } from '@/shared/drawing/options';
@@ -115,17 +116,18 @@ export function layoutPD(pd: PDCode, unknots = 0, options: LayoutOptions = {}): 
   // smooth strands first, then the scaffold polylines.
   let embedded = pieces.map((crossings) => embedPiece(crossings.map((x) => pd[x]), options.iterations ?? 80, 0));
   const centreOf = (x: number) => embedded[where.get(x)!.piece].sc.centre(where.get(x)!.local);
-  const first = drawAt(base, true, rounds + 1);
+  let fallback: LinkLayout | null = null;
   for (let rank = 0; rank < 4; rank++) {
     if (rank > 0) embedded = pieces.map((crossings) => embedPiece(crossings.map((x) => pd[x]), options.iterations ?? 80, rank));
     for (const scale of [1, 2, 4]) {
       for (const [smooth, r] of [[true, rounds + 1], [false, rounds], [false, 0]] as const) {
         const picture = drawAt(base * scale, smooth, r);
         if (picture.faithful) return picture;
+        fallback ??= picture;
       }
     }
   }
-  return first;
+  return fallback!;
 
   function drawAt(spacing: number, smooth: boolean, r: number): LinkLayout {
     let offset = 0;

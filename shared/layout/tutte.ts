@@ -1,33 +1,26 @@
 // Tutte's barycentric embedding (Tutte 1963, "How to draw a graph"): the boundary is fixed on a
 // convex polygon and every other vertex sits at the average of its neighbours. The linear
 // system (a graph Laplacian, symmetric positive definite on the free vertices) is solved by
-// conjugate gradients (Hestenes and Stiefel 1952). Positive edge weights (a weighted average)
-// keep Tutte's guarantee.
+// conjugate gradients (Hestenes and Stiefel 1952).
 
 import { Point } from '@/shared/drawing/point';
 
-export function tutte(
-  vertexCount: number,
-  edges: readonly (readonly [number, number])[],
-  fixed: ReadonlyMap<number, Point>,
-  weights: readonly number[] = edges.map(() => 1),
-): Point[] {
-  const neighbours: { u: number; w: number }[][] = Array.from({ length: vertexCount }, () => []);
-  edges.forEach(([a, b], i) => {
-    neighbours[a].push({ u: b, w: weights[i] });
-    neighbours[b].push({ u: a, w: weights[i] });
-  });
+export function tutte(vertexCount: number, edges: readonly (readonly [number, number])[], fixed: ReadonlyMap<number, Point>): Point[] {
+  const neighbours: number[][] = Array.from({ length: vertexCount }, () => []);
+  for (const [a, b] of edges) {
+    neighbours[a].push(b);
+    neighbours[b].push(a);
+  }
   const free = [...Array(vertexCount).keys()].filter((v) => !fixed.has(v));
   const index = new Map(free.map((v, i) => [v, i]));
   // L x = rhs restricted to the free vertices.
   const apply = (x: Float64Array): Float64Array => {
     const out = new Float64Array(free.length);
     free.forEach((v, i) => {
-      let s = 0;
-      for (const { u, w } of neighbours[v]) {
-        s += w * x[i];
+      let s = neighbours[v].length * x[i];
+      for (const u of neighbours[v]) {
         const j = index.get(u);
-        if (j !== undefined) s -= w * x[j];
+        if (j !== undefined) s -= x[j];
       }
       out[i] = s;
     });
@@ -36,7 +29,7 @@ export function tutte(
   const solve = (coord: (p: Point) => number): Float64Array => {
     const b = new Float64Array(free.length);
     free.forEach((v, i) => {
-      for (const { u, w } of neighbours[v]) if (fixed.has(u)) b[i] += w * coord(fixed.get(u)!);
+      for (const u of neighbours[v]) if (fixed.has(u)) b[i] += coord(fixed.get(u)!);
     });
     const x = new Float64Array(free.length);
     const r = Float64Array.from(b);
