@@ -20,6 +20,8 @@ interface Line {
 
 const word = (n: number) => Array.from({ length: n }, (_, i) => (i % 2 === 0 ? 1 : -2));
 
+const round = (x: number) => Math.round(x * 100) / 100;
+
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
   return s[Math.floor(s.length / 2)];
@@ -34,7 +36,24 @@ function drawingOf(crossings: number): { before: Sketch; points: { x: number; y:
   return { before: { ...s, components: s.components.slice(0, -1), flips: [] }, points: [...last.points, last.points[0]], flips: s.flips };
 }
 
+// Pasting a code: PD code to a verified picture and an editable sketch.
+function layoutLines(runs: number): Line[] {
+  return [15, 30].map((n) => {
+    const d = fromBraid(word(n));
+    const times = Array.from({ length: runs }, () => {
+      const t0 = performance.now();
+      layoutToSketch(layoutPD(d.pd, d.unknots));
+      return performance.now() - t0;
+    });
+    return { name: `layout: PD code -> picture -> sketch, ${n} crossings (median of ${runs})`, value: round(median(times)), unit: 'ms' };
+  });
+}
+
 export function drawingBench(runs = 30): Line[] {
+  return [...strokeLines(runs), ...layoutLines(5)];
+}
+
+function strokeLines(runs: number): Line[] {
   return [5, 15, 30].flatMap((n) => {
     const { before, points, flips } = drawingOf(n);
     const times: number[] = [];
@@ -53,10 +72,8 @@ export function drawingBench(runs = 30): Line[] {
       if (!a.diagram || found !== n) throw new Error(`bench drawing of ${n} crossings read back as ${found}`);
     }
     return [
-      { name: `drawing: stroke end -> diagram, ${found} crossings (median of ${runs})`, value: median(analysis), unit: 'ms' },
-      { name: `drawing: stroke end -> diagram + Jones, ${found} crossings (median of ${runs})`, value: median(times), unit: 'ms', goal: n === 15 ? '<= 16 ms' : undefined },
+      { name: `drawing: stroke end -> diagram, ${found} crossings (median of ${runs})`, value: round(median(analysis)), unit: 'ms' },
+      { name: `drawing: stroke end -> diagram + Jones, ${found} crossings (median of ${runs})`, value: round(median(times)), unit: 'ms', goal: n === 15 ? '<= 16 ms' : undefined },
     ];
   });
 }
-
-if (require.main === module) for (const line of drawingBench()) console.log(`${line.name}: ${line.value.toFixed(2)} ${line.unit}${line.goal ? ` (goal ${line.goal})` : ''}`);

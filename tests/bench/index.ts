@@ -12,6 +12,7 @@ interface Line {
 const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['jones', jonesBench],
   ['khovanov', khovanovBench],
+  ['drawing', () => import('./drawing.bench').then((m) => m.drawingBench())],
 ];
 
 async function main(): Promise<void> {
