@@ -1,7 +1,7 @@
 // The sync status every screen can read (sync/SPEC.md S31), as a zustand store outside React
 // so the engine (no React) writes it and hooks/useSyncStatus reads it.
 import { createStore } from 'zustand/vanilla';
-import { statusOf, type StatusInput } from '@/sync/status';
+import type { StatusInput } from '@/sync/status';
 
 export interface SyncState extends StatusInput {
   rejected: number;
@@ -21,5 +21,3 @@ export const initialSyncState: SyncState = {
 
 export const createSyncStatusStore = () => createStore<SyncState>(() => ({ ...initialSyncState }));
 export type SyncStatusStore = ReturnType<typeof createSyncStatusStore>;
-
-export const selectStatus = (s: SyncState) => statusOf(s);

@@ -1,0 +1,54 @@
+// The hooks the Sketches screens use: sketches come from the device store (here its memory
+// tables), a write shows at once and counts as waiting (sync/SPEC.md S8, S31).
+import { Pressable, Text, View } from 'react-native';
+import { act, fireEvent, render, screen, waitFor } from '@testing-library/react-native';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { queryClient } from '@/lib/query-client';
+import { useSession } from '@/hooks/useSession';
+import { useLocalSketches, useSketchWrites } from '@/hooks/queries/useLocalSketches';
+import { useDeviceSync, useSyncStatus } from '@/hooks/useDevice';
+
+jest.mock('@/lib/store/device', () => {
+  const { LocalStore } = jest.requireActual('@/lib/store/local-store');
+  const { memoryTables } = jest.requireActual('@/lib/store/memory');
+  const { createSyncStatusStore } = jest.requireActual('@/lib/sync/status-store');
+  let n = 0;
+  const store = new LocalStore(memoryTables(), { newId: () => `00000000-0000-4000-8000-${String(++n).padStart(12, '0')}` });
+  const engine = { start: jest.fn(), stop: jest.fn(), setOnline: jest.fn(), syncNow: jest.fn(async () => undefined) };
+  const opened = Promise.resolve({ userId: 'u1', store, engine });
+  return { __esModule: true, syncStatus: createSyncStatusStore(), openDevice: () => opened };
+});
+
+function Sketchbook() {
+  useDeviceSync();
+  const list = useLocalSketches();
+  const { create } = useSketchWrites();
+  const { label } = useSyncStatus();
+  return (
+    <View>
+      <Text>{label}</Text>
+      {list.isSuccess ? <Text>{`${list.data.length} sketches`}</Text> : null}
+      {(list.data ?? []).map((s) => (
+        <Text key={s.id}>{s.title}</Text>
+      ))}
+      <Pressable accessibilityRole="button" onPress={() => create.mutate({ title: 'Trefoil from the talk' })}>
+        <Text>New sketch</Text>
+      </Pressable>
+    </View>
+  );
+}
+
+test('S8, S31: a new sketch appears from the device store and is counted as waiting', async () => {
+  useSession.setState({ status: 'signedIn', token: 't', user: { id: 'u1', email: 'a@b.example', displayName: 'A' } });
+  render(
+    <QueryClientProvider client={queryClient}>
+      <Sketchbook />
+    </QueryClientProvider>,
+  );
+  expect(await screen.findByText('0 sketches')).toBeOnTheScreen(); // the store is open
+  expect(screen.getByText('Up to date')).toBeOnTheScreen();
+  await act(async () => fireEvent.press(await screen.findByRole('button', { name: 'New sketch' })));
+  expect(await screen.findByText('Trefoil from the talk')).toBeOnTheScreen();
+  expect(screen.getByText('1 sketches')).toBeOnTheScreen();
+  await waitFor(() => expect(screen.getByText('1 change waiting')).toBeOnTheScreen());
+});
