@@ -13,6 +13,7 @@ const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['jones', jonesBench],
   ['khovanov', khovanovBench],
   ['drawing', () => import('./drawing.bench').then((m) => m.drawingBench())],
+  ['sync', () => import('./sync.bench').then((m) => m.syncBench())],
 ];
 
 async function main(): Promise<void> {
