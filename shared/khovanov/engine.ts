@@ -17,9 +17,10 @@ export interface Progress {
   readonly merged: number;
   readonly total: number;
   readonly fraction: number;
-  /** Objects and nonzero differential entries of the current complex. */
+  /** Objects and nonzero differential entries of the current complex, and its open ends. */
   readonly objects: number;
   readonly entries: number;
+  readonly boundary: number;
 }
 
 export interface EngineOptions {
@@ -68,7 +69,7 @@ export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
     check();
     cx = addCrossing(cx, code[k]);
     simplify(cx, check);
-    options.onProgress?.({ merged: step + 1, total: order.length, fraction: (step + 1) / order.length, objects: cx.live, entries: cx.entries() });
+    options.onProgress?.({ merged: step + 1, total: order.length, fraction: (step + 1) / order.length, objects: cx.live, entries: cx.entries(), boundary: cx.boundary.length });
   });
 
   // Closed up (or one open arc when reduced): objects are free modules of rank one; the

@@ -29,17 +29,3 @@ export function crossingOrder(pd: PDCode, first = 0): number[] {
   }
   return order;
 }
-
-/** The largest open boundary met along an order (a measure of the work it costs). */
-export function maxBoundary(pd: PDCode, order: readonly number[]): number {
-  const open = new Set<number>();
-  let max = 0;
-  for (const k of order) {
-    for (const l of pd[k]) {
-      if (open.has(l)) open.delete(l);
-      else open.add(l);
-    }
-    max = Math.max(max, open.size);
-  }
-  return max;
-}
