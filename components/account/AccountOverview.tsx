@@ -2,6 +2,7 @@
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { useRouter, useGlobalSearchParams } from 'expo-router';
 import { useSession } from '@/hooks/useSession';
+import { useMe } from '@/hooks/queries/useMe';
 import { useGroups } from '@/hooks/queries/useGroups';
 import { useNotifications } from '@/hooks/queries/useNotifications';
 import { isApiError } from '@/lib/api';
@@ -17,7 +18,9 @@ import type { PressState } from '@/components/ui/press-state';
 
 export function AccountOverview() {
   const router = useRouter();
-  const user = useSession((s) => s.user);
+  // The stored user shows at once; /api/me refreshes it (and signs out if the token is dead).
+  const stored = useSession((s) => s.user);
+  const user = useMe().data ?? stored;
   const groups = useGroups();
   const { id: openId } = useGlobalSearchParams<{ id?: string }>();
   const open = (id: string) => router.push(`/account/groups/${id}`);
