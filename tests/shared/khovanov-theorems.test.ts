@@ -36,13 +36,19 @@ describe('fast engine = reference cube', () => {
     ['F2', primeField(2) as Ring<unknown>, 'F2'],
     ['F3', primeField(3) as Ring<unknown>, 'F3'],
   ];
-  it.each(small.map((w) => [w.join(' '), w]))('braid %s', (_, word) => {
+  // Links with 2 and 3 components (T(2,4), the Borromean rings, a 3-component braid) besides the random words.
+  const links = [[1, 1, 1, 1], [1, -2, 1, -2, 1, -2], [1, 1, -2, -2, 1, 2, 2, -1]];
+  it.each([...small, ...links].map((w) => [w.join(' '), w]))('braid %s', (_, word) => {
     const pd = pdOf(word as number[]);
-    const marked = orient(pd).components[0][0];
+    const components = orient(pd).components;
     for (const [name, ring, khRing] of rings) {
       expect([name, table(kh(pd, khRing))]).toEqual([name, table(cubeKhovanov(pd, ring))]);
-      expect([name, 'reduced', table(kh(pd, khRing, true))]).toEqual([name, 'reduced', table(cubeKhovanov(pd, ring, marked))]);
+      expect([name, 'reduced', table(kh(pd, khRing, true))]).toEqual([name, 'reduced', table(cubeKhovanov(pd, ring, components[0][0]))]);
     }
+    // Reduced at every other component, over Z.
+    components.slice(1).forEach((labels, c) => {
+      expect([c + 1, table(kh(pd, 'Z', true, c + 1))]).toEqual([c + 1, table(cubeKhovanov(pd, integers, labels[0]))]);
+    });
   });
 });
 
