@@ -1,5 +1,6 @@
-// Sparse Gaussian elimination on unit pivots with a Markowitz-style choice (shortest row, then
-// shortest column) to limit fill-in. Over a field it computes the rank; over Z it removes every
+// Sparse Gaussian elimination on unit pivots with a Markowitz-style choice (Markowitz, "The
+// elimination form of the inverse", Management Science 3, 1957: shortest row, then shortest
+// column) to limit fill-in. Over a field it computes the rank; over Z it removes every
 // unit pivot and leaves the rest (entries that are not units) for the Smith form.
 
 import { Ring } from './ring';
