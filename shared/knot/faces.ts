@@ -1,6 +1,6 @@
 // The checkerboard colouring of the faces of a PD code. Corner p of a crossing is the sector
 // between positions p and p+1 (counterclockwise), where a face walk (moves/faces.ts) arrives
-// through p. Planarity itself is checked by diagram() (checkPlanar in pd.ts); a failed
+// through p. Planarity itself is checked by diagram() (checkPlanar in moves/faces.ts); a failed
 // colouring is reported too.
 import { faces } from './moves/faces';
 import { connectedPieces, PDCode, PDError } from './pd';
