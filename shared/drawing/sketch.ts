@@ -96,17 +96,12 @@ export function addStroke(s: Sketch, raw: readonly Point[], options: Partial<Dra
   return { ...s, components: [...components, component], nextSeq: s.nextSeq + (before ? 0 : 1) };
 }
 
-/** Adds an already smooth path as one component (used by the layout and by tests). */
-export function addPath(s: Sketch, points: readonly Point[], closed: boolean, options: Partial<DrawingOptions> = {}): Sketch {
-  const o = withDefaults(options);
-  const component: SketchComponent = {
-    id: `c${s.nextSeq}`,
-    seq: s.nextSeq,
-    points: resample(points, closed, o.spacing),
-    closed,
-    reversed: false,
-    framing: null,
-  };
+/**
+ * Adds a path as one component exactly as given: already smooth and evenly spaced (the layout
+ * makes its paths so, and checks them as they will be analysed).
+ */
+export function addPath(s: Sketch, points: readonly Point[], closed: boolean): Sketch {
+  const component: SketchComponent = { id: `c${s.nextSeq}`, seq: s.nextSeq, points, closed, reversed: false, framing: null };
   return { ...s, components: [...s.components, component], nextSeq: s.nextSeq + 1 };
 }
 

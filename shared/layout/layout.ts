@@ -86,21 +86,26 @@ function embedPiece(pd: PDCode, iterations: number, rank: number) {
   return { sc, pos };
 }
 
-// The strands cross exactly once at every crossing centre (each crossing found is matched to
-// its nearest centre, which must be within one spacing, between the right two components),
-// nowhere else, and without any degeneracy.
-function faithful(paths: readonly Point[][], centres: readonly { at: Point; pair: string }[], spacing: number): boolean {
+const cyclicEqual = (xs: readonly number[], ys: readonly number[]) =>
+  xs.length === ys.length && (xs.length === 0 || xs.some((_, k) => xs.every((x, i) => x === ys[(i + k) % ys.length])));
+
+// The strands cross exactly at the crossing centres: every crossing found is matched to its
+// nearest centre (within one spacing, a different one each time), there is no degeneracy, and
+// along every component the crossings come in the PD code's order (so the picture has the
+// same Gauss code; the signs are then set by layoutToSketch).
+function faithful(paths: readonly Point[][], centres: readonly Point[], order: readonly (readonly number[])[], spacing: number): boolean {
   const found = findCrossings(paths.map((points, k) => ({ id: `${k}`, points })), defaultOptions);
   if (found.markers.length > 0 || found.crossings.length !== centres.length) return false;
   const hit = new Set<number>();
+  const along: { arc: number; centre: number }[][] = paths.map(() => []);
   for (const x of found.crossings) {
-    const d = centres.map((c) => Math.hypot(x.at.x - c.at.x, x.at.y - c.at.y));
+    const d = centres.map((c) => Math.hypot(x.at.x - c.x, x.at.y - c.y));
     const nearest = d.indexOf(Math.min(...d));
     if (d[nearest] > spacing || hit.has(nearest)) return false;
-    if ([x.passages[0].path, x.passages[1].path].sort().join() !== centres[nearest].pair) return false;
     hit.add(nearest);
+    for (const p of x.passages) along[p.path].push({ arc: p.arc, centre: nearest });
   }
-  return true;
+  return along.every((list, k) => cyclicEqual(list.sort((p, q) => p.arc - q.arc).map((p) => p.centre), order[k]));
 }
 
 export function layoutPD(pd: PDCode, unknots = 0, options: LayoutOptions = {}): LinkLayout {
@@ -162,9 +167,10 @@ export function layoutPD(pd: PDCode, unknots = 0, options: LayoutOptions = {}): 
     const circles = Array.from({ length: unknots }, (_, k) => {
       const radius = 2 * base;
       const cx = offset + radius + k * (2 * radius + 2 * base);
-      return Array.from({ length: 48 }, (_, j) => ({ x: cx + radius * Math.cos((2 * Math.PI * j) / 48), y: -radius * Math.sin((2 * Math.PI * j) / 48) }));
+      const polygon = Array.from({ length: 48 }, (_, j) => ({ x: cx + radius * Math.cos((2 * Math.PI * j) / 48), y: -radius * Math.sin((2 * Math.PI * j) / 48) }));
+      return resample(polygon, true, defaultOptions.spacing);
     });
-    const pairs = crossings.map((c) => [c.over, c.under].sort().join());
-    return { paths: [...paths, ...circles], crossings, faithful: faithful(paths, crossings.map((c, i) => ({ at: c.at, pair: pairs[i] })), spacing) };
+    const order = o.components.map((labels) => labels.map((label) => o.head.get(label)!.crossing));
+    return { paths: [...paths, ...circles], crossings, faithful: faithful(paths, crossings.map((c) => c.at), order, spacing) };
   }
 }

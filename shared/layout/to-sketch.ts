@@ -4,22 +4,22 @@
 // a crossing is right exactly when its sign is. Framings follow the diagram's components.
 
 import { analyse } from '@/shared/drawing/analyse';
-import { DrawingOptions } from '@/shared/drawing/options';
 import { dist } from '@/shared/drawing/point';
 import { addPath, emptySketch, flipCrossing, setFraming, Sketch } from '@/shared/drawing/sketch';
 import { LinkLayout } from './layout';
 
-export function layoutToSketch(layout: LinkLayout, framings: readonly (number | null)[] = [], options: Partial<DrawingOptions> = {}): Sketch {
-  let s = layout.paths.reduce((acc, path) => addPath(acc, path, true, options), emptySketch);
+/** The layout as a Sketch, analysed with the default drawing options (those the layout was checked with). */
+export function layoutToSketch(layout: LinkLayout, framings: readonly (number | null)[] = []): Sketch {
+  let s = layout.paths.reduce((acc, path) => addPath(acc, path, true), emptySketch);
   const ids = s.components.map((c) => c.id);
   framings.forEach((f, k) => {
     if (f !== null && k < ids.length) s = setFraming(s, ids[k], f);
   });
-  const a = analyse(s, options);
+  const a = analyse(s);
   // The strands meet as in the PD code, so the sign alone says which one is over.
   for (const c of a.crossings) {
     const target = layout.crossings.reduce((best, x) => (dist(x.at, c.at) < dist(best.at, c.at) ? x : best));
-    if (c.sign !== target.sign) s = flipCrossing(s, { a: c.over, b: c.under, at: c.at }, options);
+    if (c.sign !== target.sign) s = flipCrossing(s, { a: c.over, b: c.under, at: c.at });
   }
   return s;
 }

@@ -10,6 +10,7 @@ import { Diagram } from '@/shared/knot/diagram';
 import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, torusLink, twistKnot } from '@/shared/knot/families';
 import { jones } from '@/shared/knot/jones';
 import { linkingMatrix } from '@/shared/knot/linking';
+import { randomMoves } from '@/shared/knot/moves';
 import { orient, PDCode, writhe } from '@/shared/knot/pd';
 import { random } from './drawing-fixtures';
 
@@ -84,6 +85,23 @@ describe('random braid closures up to 30 crossings', () => {
     return [i, strands, word] as const;
   });
   test.each(cases)('case %i: %i strands, %j', (_, strands, word) => expectSameDiagram(fromBraid(word, strands)));
+});
+
+describe('diagrams from random Reidemeister moves (kinks, bigons, R3 triangles)', () => {
+  const starts: [string, Diagram][] = [
+    ['trefoil', torusLink(2, 3)],
+    ['figure-eight', twistKnot(2)],
+    ['Hopf link', torusLink(2, 2)],
+    ['T(3,4)', torusLink(3, 4)],
+  ];
+  const cases = starts.flatMap(([name, d]) => [4, 9, 14].map((moves) => [name, moves, d] as const));
+  test.each(cases)('%s after %i random moves', (_, moves, d) => {
+    const moved = randomMoves(d, moves, 1000 + moves);
+    expect(moved.pd.length).toBeLessThanOrEqual(30);
+    expectSameDiagram(moved);
+    // Reidemeister moves change no Jones polynomial (Jones 1985): the picture still shows d.
+    expect(jones(readBack(moved)).equals(jones(d))).toBe(true);
+  });
 });
 
 describe('never a wrong picture', () => {
