@@ -63,8 +63,7 @@ export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
   for (let bits = 0; bits < 1 << unknots; bits++) {
     cx.addObject({ mat: empty, shift: unknots - 2 * popcount(bits), height: 0 });
   }
-  const start = options.marked === undefined ? 0 : o.head.get(options.marked)!.crossing;
-  const order = crossingOrder(code, start);
+  const order = crossingOrder(code);
   order.forEach((k, step) => {
     check();
     cx = addCrossing(cx, code[k]);

@@ -1,13 +1,16 @@
 // The order in which the local algorithm adds crossings: greedily the crossing that closes the
 // most open ends, so the tangle's boundary (and with it the complex) stays small (the heuristic
-// of Bar-Natan, math/0606318, Sect. 6). Ties go to the lowest index; `first` starts the order.
+// of Bar-Natan, math/0606318, Sect. 6). The greedy walk is tried from several first crossings
+// and the order whose boundaries cost least (sum of 2^width over the steps) is kept.
 
 import { PDCode } from '../knot/pd';
 
-export function crossingOrder(pd: PDCode, first = 0): number[] {
+/** Greedy order from `first`, ties to the lowest index, with its cost. */
+function greedy(pd: PDCode, first: number): { order: number[]; cost: number } {
   const open = new Set<number>();
   const used = new Array<boolean>(pd.length).fill(false);
   const order: number[] = [];
+  let cost = 0;
   const take = (k: number): void => {
     used[k] = true;
     order.push(k);
@@ -15,8 +18,9 @@ export function crossingOrder(pd: PDCode, first = 0): number[] {
       if (open.has(l)) open.delete(l);
       else open.add(l);
     }
+    cost += 2 ** open.size;
   };
-  if (pd.length > 0) take(first);
+  take(first);
   while (order.length < pd.length) {
     let best = -1;
     let bestScore = -1;
@@ -27,5 +31,19 @@ export function crossingOrder(pd: PDCode, first = 0): number[] {
     });
     take(best);
   }
-  return order;
+  return { order, cost };
+}
+
+/** At most this many first crossings are tried (evenly spread), to keep large codes quick. */
+const STARTS = 64;
+
+export function crossingOrder(pd: PDCode): number[] {
+  if (pd.length === 0) return [];
+  const step = Math.max(1, Math.floor(pd.length / STARTS));
+  let best = greedy(pd, 0);
+  for (let first = step; first < pd.length; first += step) {
+    const g = greedy(pd, first);
+    if (g.cost < best.cost) best = g;
+  }
+  return best.order;
 }
