@@ -19,6 +19,8 @@ export const identityView: View = { k: 1, x: 0, y: 0 };
 export interface SlateState {
   sketchId: string | null;
   history: History<SlateDoc>;
+  /** The document as it was opened (what the store already holds). */
+  opened: SlateDoc;
   /** The document while a drag is in progress (not yet in the history). */
   preview: SlateDoc | null;
   tool: Tool;
@@ -38,11 +40,14 @@ export interface SlateState {
   setTool(tool: Tool): void;
   select(id: string | null): void;
   setView(view: View): void;
+  /** Refit the view to the drawing. */
+  fit(): void;
 }
 
 export const useSlate = create<SlateState>((set, get) => ({
   sketchId: null,
   history: historyOf(emptyDoc),
+  opened: emptyDoc,
   preview: null,
   tool: 'draw',
   selected: null,
@@ -50,7 +55,7 @@ export const useSlate = create<SlateState>((set, get) => ({
   braid: null,
   fitRequest: 0,
   open: (sketchId, doc) =>
-    set((s) => ({ sketchId, history: historyOf(doc), preview: null, selected: null, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
+    set((s) => ({ sketchId, history: historyOf(doc), opened: doc, preview: null, selected: null, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
   replace: (doc, braid) =>
     set((s) => ({ history: commit(s.history, doc), preview: null, selected: null, braid: braid ? { word: braid, doc } : null, fitRequest: s.fitRequest + 1 })),
   apply: (doc) => set((s) => ({ history: commit(s.history, doc), preview: null })),
@@ -60,6 +65,7 @@ export const useSlate = create<SlateState>((set, get) => ({
   setTool: (tool) => set({ tool }),
   select: (selected) => set({ selected }),
   setView: (view) => set({ view }),
+  fit: () => set((s) => ({ fitRequest: s.fitRequest + 1 })),
 }));
 
 /** What the canvas draws: the drag preview if any, else the present. */
@@ -68,4 +74,3 @@ export const undoable = (s: SlateState) => canUndo(s.history);
 export const redoable = (s: SlateState) => canRedo(s.history);
 /** The braid word is still the sketch's only while nothing was edited after it was pasted. */
 export const braidOf = (s: SlateState): number[] | null => (s.braid && s.braid.doc === s.history.present ? s.braid.word : null);
-export const getSlate = () => useSlate.getState();

@@ -1,18 +1,26 @@
-// The sketchbook. Later: the list of my sketches (wide: a SplitPane with the Slate beside it;
-// the Slate itself is app/(tabs)/sketches/[id].tsx).
-import { Screen } from '@/components/ui/Screen';
-import { PageTitle } from '@/components/ui/PageTitle';
-import { EmptyState } from '@/components/ui/EmptyState';
-import { SlateArt } from '@/components/shell/SlateArt';
+// The sketchbook. Phone: the list. Wide: the list is already on the left; this pane says what to do.
+import { StyleSheet, Text, View } from 'react-native';
+import { router } from 'expo-router';
+import { SketchList } from '@/components/slate/SketchList';
+import { useIsWide } from '@/components/shell/useIsWide';
+import { Button } from '@/components/ui/Button';
+import { colors, slate, space, type } from '@/constants/theme';
 
-export default function SketchesScreen() {
+export default function SketchesIndex() {
+  const wide = useIsWide();
+  if (!wide) return <SketchList />;
   return (
-    <Screen>
-      <PageTitle kicker="Sketchbook" title="Sketches" />
-      <EmptyState art={<SlateArt />} title="Your sketchbook is empty">
-        Start a new sketch and draw the strands with a finger; crossings appear where they meet and the
-        invariants update as you draw. Sketches are kept on this device and work without a network.
-      </EmptyState>
-    </Screen>
+    <View style={styles.pane}>
+      <View style={styles.board}>
+        <Text style={styles.text}>Open a sketch from the list, or start a new one: draw, paste a code or build one from a family.</Text>
+        <Button label="New sketch" onPress={() => router.push('/sketches/new' as never)} />
+      </View>
+    </View>
   );
 }
+
+const styles = StyleSheet.create({
+  pane: { flex: 1, padding: space.xl, backgroundColor: colors.paper },
+  board: { flex: 1, borderRadius: 18, backgroundColor: slate.surface, alignItems: 'center', justifyContent: 'center', gap: space.xl, padding: space.xxl },
+  text: { ...type.body, color: slate.chalkDim, textAlign: 'center', maxWidth: 380 },
+});

@@ -1,0 +1,77 @@
+// My sketchbook: every sketch on this device, newest edit first, with its picture, crossings,
+// Jones polynomial and when it was edited. Used as the list pane (wide) and the Sketches page.
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { router, usePathname } from 'expo-router';
+import { useLocalSketches } from '@/hooks/queries/useLocalSketches';
+import type { LocalSketch } from '@/lib/store/types';
+import { summaryOf } from '@/lib/slate/summary';
+import { StrokeThumb } from '@/components/feed/StrokeThumb';
+import { when } from '@/components/feed/when';
+import { TeX } from '@/components/runs/Math';
+import { Screen } from '@/components/ui/Screen';
+import { PageTitle } from '@/components/ui/PageTitle';
+import { EmptyState } from '@/components/ui/EmptyState';
+import { Button } from '@/components/ui/Button';
+import { Banner } from '@/components/ui/Banner';
+import { SlateArt } from '@/components/shell/SlateArt';
+import { colors, radius, space, type } from '@/constants/theme';
+
+function Row({ sketch, active }: { sketch: LocalSketch; active: boolean }) {
+  const s = summaryOf(sketch.diagram);
+  const drawn = s.crossings > 0 || s.components > 0;
+  return (
+    <Pressable role="link" accessibilityLabel={`Open ${sketch.title || 'Untitled sketch'}`} onPress={() => router.push(`/sketches/${sketch.id}` as never)}
+      style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [styles.row, active && styles.active, (pressed || hovered) && !active && styles.hover]}>
+      <StrokeThumb strokes={sketch.diagram.strokes} size={64} crossings={s.crossings} />
+      <View style={styles.text}>
+        <Text style={styles.title} numberOfLines={1}>{sketch.title || 'Untitled sketch'}</Text>
+        <Text style={styles.meta} numberOfLines={1}>
+          {drawn ? `${s.crossings} crossing${s.crossings === 1 ? '' : 's'}` : 'Nothing drawn yet'} · {when(sketch.updatedAt)}
+          {sketch.pending ? ' · not synced' : ''}
+        </Text>
+        {s.jones ? (
+          <View style={styles.jones}>
+            <TeX tex={`V = ${s.jones.format('t', 'latex')}`} text={`V = ${s.jones.format('t', 'unicode')}`} />
+          </View>
+        ) : null}
+      </View>
+    </Pressable>
+  );
+}
+
+export function SketchList() {
+  const list = useLocalSketches();
+  const path = usePathname();
+  const sketches = list.data ?? [];
+  return (
+    <Screen>
+      <View style={styles.head}>
+        <PageTitle kicker="Sketchbook" title="Sketches" />
+        {sketches.length ? <Button label="New sketch" onPress={() => router.push('/sketches/new' as never)} /> : null}
+      </View>
+      {list.isError ? <Banner tone="error">{list.error.message}</Banner> : null}
+      {list.data && sketches.length === 0 ? (
+        <EmptyState art={<SlateArt />} title="Draw your first link"
+          action={<Button label="New sketch" onPress={() => router.push('/sketches/new' as never)} />}>
+          Draw the strands with a finger or the mouse; crossings appear where they meet and the invariants update as you draw.
+          Sketches stay on this device and work without a network.
+        </EmptyState>
+      ) : null}
+      <View style={styles.list}>
+        {sketches.map((s) => <Row key={s.id} sketch={s} active={path === `/sketches/${s.id}`} />)}
+      </View>
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  head: { flexDirection: 'row', alignItems: 'flex-end', justifyContent: 'space-between', gap: space.md, flexWrap: 'wrap' },
+  list: { gap: space.xs },
+  row: { flexDirection: 'row', gap: space.md, padding: space.sm, borderRadius: radius.lg, alignItems: 'center' },
+  active: { backgroundColor: colors.accentSoft },
+  hover: { backgroundColor: colors.sunken },
+  text: { flex: 1, minWidth: 0, gap: 2 },
+  title: { ...type.heading, color: colors.ink },
+  meta: { ...type.small, color: colors.inkMuted },
+  jones: { overflow: 'hidden' },
+});

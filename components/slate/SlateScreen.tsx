@@ -1,0 +1,211 @@
+// One sketch on the Slate: toolbar, canvas and Readout (below the canvas on a phone, a side
+// pane on a wide screen), the dialogs, keyboard shortcuts, and saving to the device store.
+import { useCallback, useEffect, useMemo, useState } from 'react';
+import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { router } from 'expo-router';
+import * as Clipboard from 'expo-clipboard';
+import { analyse } from '@/shared/drawing/analyse';
+import { setFraming } from '@/shared/drawing/sketch';
+import { simplify } from '@/shared/knot/moves/simplify';
+import type { Diagram } from '@/shared/knot/diagram';
+import type { LocalSketch } from '@/lib/store/types';
+import { braidToText, pdToText } from '@/lib/slate/codes';
+import { exportFiles } from '@/lib/slate/exports';
+import { savePng } from '@/lib/slate/png';
+import { docFromDiagram, docFromStored } from '@/lib/slate/record';
+import { braidOf, currentDoc, useSlate } from '@/lib/slate/slate-store';
+import { useReadout } from '@/hooks/useReadout';
+import { useSlateAutosave } from '@/hooks/useSlateAutosave';
+import { shortcutList, useSlateShortcuts } from '@/hooks/useSlateShortcuts';
+import { saveText } from '@/components/runs/save';
+import { useIsWide } from '@/components/shell/useIsWide';
+import { Readout } from '@/components/readout/Readout';
+import { ReadoutActions, type ExportKind } from '@/components/readout/ReadoutActions';
+import { PasteCodeDialog } from '@/components/readout/PasteCodeDialog';
+import { FamiliesDialog } from '@/components/readout/FamiliesDialog';
+import { SlateCanvas } from './SlateCanvas';
+import { SelectionBar, Toolbar } from './Toolbar';
+import { FramingDialog } from './FramingDialog';
+import { SketchDetails } from './SketchDetails';
+import { Dialog } from './Dialog';
+import { colors, fonts, space, type } from '@/constants/theme';
+
+type Open = null | 'paste' | 'families' | 'details' | 'help' | { framing: string };
+
+export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
+  const wide = useIsWide();
+  const { height } = useWindowDimensions();
+  const ready = useSlate((s) => s.sketchId === sketch.id);
+  useEffect(() => {
+    if (useSlate.getState().sketchId !== sketch.id) useSlate.getState().open(sketch.id, docFromStored(sketch.diagram));
+  }, [sketch.id]); // eslint-disable-line react-hooks/exhaustive-deps
+  useSlateAutosave(ready ? sketch.id : null);
+
+  const doc = useSlate(currentDoc);
+  const dragging = useSlate((s) => s.preview !== null);
+  const braid = useSlate(braidOf);
+  const analysis = useMemo(() => analyse(doc.sketch), [doc.sketch]);
+  const diagram = analysis.diagram?.diagram ?? null;
+  const readout = useReadout(ready ? diagram : null, dragging);
+  const [open, setOpen] = useState<Open>(null);
+  const [message, setMessage] = useState<string | null>(null);
+  useEffect(() => {
+    if (!message) return;
+    const t = setTimeout(() => setMessage(null), 4000);
+    return () => clearTimeout(t);
+  }, [message]);
+
+  const shortcuts = useMemo(() => ({ help: () => setOpen('help'), paste: () => setOpen('paste') }), []);
+  useSlateShortcuts(shortcuts);
+
+  const numberOf = useCallback((id: string) => {
+    const k = analysis.diagram?.componentIds.indexOf(id) ?? -1;
+    return k >= 0 ? k + 1 : null;
+  }, [analysis]);
+
+  const draw = (d: Diagram, word?: number[]) => {
+    useSlate.getState().replace(docFromDiagram(d), word);
+    setOpen(null);
+  };
+  const simplifyNow = () => {
+    if (!diagram) return;
+    const s = simplify(diagram);
+    if (s.pd.length === diagram.pd.length) return setMessage('Nothing to simplify: no R1 kink or R2 bigon.');
+    draw(s);
+    setMessage(`Simplified from ${diagram.pd.length} to ${s.pd.length} crossings.`);
+  };
+  const copy = async (text: string, what: string) => {
+    await Clipboard.setStringAsync(text);
+    setMessage(`Copied the ${what}.`);
+  };
+  const exportAs = async (kind: ExportKind) => {
+    const files = exportFiles(doc, analysis, sketch.title);
+    try {
+      if (kind === 'png') setMessage(await savePng(files.pngName, files.svg.text));
+      else setMessage(await saveText(files[kind].name, files[kind].text, files[kind].mime));
+    } catch (e) {
+      setMessage(e instanceof Error ? e.message : String(e));
+    }
+  };
+  const startRun = () => diagram && router.push({ pathname: '/runs', params: { pd: pdToText(diagram.pd), sketchId: sketch.id } } as never);
+
+  const framingId = open && typeof open === 'object' ? open.framing : null;
+  const framingComponent = framingId ? doc.sketch.components.find((c) => c.id === framingId) : undefined;
+  const framingNumber = framingId ? numberOf(framingId) : null;
+  const blackboard = framingNumber && readout.values.framings && !readout.stale.has('framings') && framingComponent?.framing === null
+    ? readout.values.framings[framingNumber - 1]?.value ?? null : null;
+
+  const empty = diagram ? null : analysis.markers.length ? 'markers' : analysis.open.length ? 'open' : 'nothing';
+  const readoutPane = (
+    <>
+      <Readout state={readout} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} />
+      <ReadoutActions
+        hasDiagram={!!diagram}
+        hasBraid={!!braid}
+        message={message}
+        onCopyPD={() => diagram && void copy(pdToText(diagram.pd), 'PD code')}
+        onCopyBraid={() => braid && void copy(braidToText(braid), 'braid word')}
+        onPaste={() => setOpen('paste')}
+        onFamilies={() => setOpen('families')}
+        onSimplify={simplifyNow}
+        onRun={startRun}
+        onExport={(k) => void exportAs(k)}
+      />
+    </>
+  );
+
+  const header = (
+    <View style={styles.header}>
+      {!wide ? (
+        <Pressable role="link" accessibilityLabel="Sketches" onPress={() => (router.canGoBack() ? router.back() : router.replace('/sketches'))} style={styles.back}>
+          <Text style={styles.backText}>‹ Sketches</Text>
+        </Pressable>
+      ) : null}
+      <Pressable role="button" accessibilityLabel="Sketch details" onPress={() => setOpen('details')} style={styles.titleBox}>
+        <Text role="heading" aria-level={1} style={styles.title} numberOfLines={1}>{sketch.title || 'Untitled sketch'}</Text>
+        <Text style={styles.meta} numberOfLines={1}>{[sketch.seenAt, sketch.tags.map((t) => `#${t}`).join(' ')].filter(Boolean).join(' · ') || 'Add a title, where it was seen, notes, a photo'}</Text>
+      </Pressable>
+      <View style={styles.headerActions}>
+        {wide ? <Pressable role="button" accessibilityLabel="Keyboard shortcuts" onPress={() => setOpen('help')} style={styles.quiet}><Text style={styles.quietText}>?</Text></Pressable> : null}
+        <Pressable role="button" accessibilityLabel="Details" onPress={() => setOpen('details')} style={styles.quiet}><Text style={styles.quietText}>Details</Text></Pressable>
+      </View>
+    </View>
+  );
+
+  const board = (
+    <>
+      <Toolbar showKeys={wide} />
+      <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: Math.max(320, Math.round(height * 0.5)) }]}>
+        {ready ? <SlateCanvas analysis={analysis} onFraming={(id) => setOpen({ framing: id })} /> : null}
+      </View>
+      <SelectionBar numberOf={numberOf} onFraming={(id) => setOpen({ framing: id })} />
+    </>
+  );
+
+  return (
+    <View style={styles.root}>
+      {wide ? (
+        <View style={styles.split}>
+          <View style={styles.main}>
+            {header}
+            {board}
+          </View>
+          <ScrollView style={styles.side} contentContainerStyle={styles.sideContent}>{readoutPane}</ScrollView>
+        </View>
+      ) : (
+        <ScrollView contentContainerStyle={styles.phone} keyboardShouldPersistTaps="handled">
+          {header}
+          {board}
+          <View style={styles.phoneReadout}>{readoutPane}</View>
+        </ScrollView>
+      )}
+      <PasteCodeDialog visible={open === 'paste'} onClose={() => setOpen(null)} onDraw={draw} />
+      <FamiliesDialog visible={open === 'families'} onClose={() => setOpen(null)} current={diagram} onDraw={(d) => draw(d)} />
+      <SketchDetails sketch={sketch} visible={open === 'details'} onClose={() => setOpen(null)} />
+      <FramingDialog
+        visible={!!framingComponent}
+        number={framingNumber}
+        framing={framingComponent?.framing ?? null}
+        blackboard={blackboard}
+        onClose={() => setOpen(null)}
+        onSet={(f) => {
+          const s = useSlate.getState();
+          s.apply({ ...s.history.present, sketch: setFraming(s.history.present.sketch, framingId!, f) });
+          setOpen(null);
+        }}
+      />
+      <Dialog title="Keyboard shortcuts" visible={open === 'help'} onClose={() => setOpen(null)}>
+        {shortcutList.map(([keys, what]) => (
+          <View key={keys} style={styles.keyRow}>
+            <Text style={styles.keys}>{keys}</Text>
+            <Text style={styles.keyWhat}>{what}</Text>
+          </View>
+        ))}
+      </Dialog>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { flex: 1, backgroundColor: colors.paper },
+  split: { flex: 1, flexDirection: 'row' },
+  main: { flex: 1 },
+  side: { width: 360, flexGrow: 0, borderLeftWidth: 1, borderLeftColor: colors.line, backgroundColor: colors.surface },
+  sideContent: { padding: space.xl, gap: space.lg },
+  phone: { paddingBottom: space.xxxl },
+  phoneReadout: { padding: space.lg + 4, gap: space.lg },
+  header: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingHorizontal: space.lg, paddingTop: space.lg, paddingBottom: space.xs, flexWrap: 'wrap' },
+  back: { minHeight: 40, justifyContent: 'center', width: '100%' },
+  backText: { ...type.label, color: colors.accent, fontSize: 15 },
+  titleBox: { flex: 1, minWidth: 0 },
+  title: { ...type.title, color: colors.ink },
+  meta: { ...type.small, color: colors.inkMuted },
+  headerActions: { flexDirection: 'row', gap: space.xs },
+  quiet: { minHeight: 40, minWidth: 40, paddingHorizontal: space.md, alignItems: 'center', justifyContent: 'center', borderRadius: 10 },
+  quietText: { ...type.label, color: colors.accent, fontSize: 15 },
+  canvasWide: { flex: 1 },
+  canvasPhone: { marginHorizontal: 0 },
+  keyRow: { flexDirection: 'row', gap: space.lg, alignItems: 'baseline' },
+  keys: { fontFamily: fonts.mono, fontSize: 14, color: colors.ink, width: 170 },
+  keyWhat: { ...type.body, color: colors.inkMuted },
+});

@@ -1,0 +1,89 @@
+// Above the Slate: the tool, undo / redo, fit; and, when a component is selected, what can be
+// done to it (reverse, framing, colour, delete).
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { deleteComponent, reverseComponent } from '@/shared/drawing/sketch';
+import { colourOf } from '@/lib/slate/picture';
+import { redoable, undoable, useSlate, type Tool } from '@/lib/slate/slate-store';
+import { chalk, colors, fonts, radius, space, type } from '@/constants/theme';
+
+const tools: { tool: Tool; label: string; key: string }[] = [
+  { tool: 'draw', label: 'Draw', key: 'D' },
+  { tool: 'flip', label: 'Flip', key: 'F' },
+  { tool: 'move', label: 'Move', key: 'M' },
+  { tool: 'reshape', label: 'Reshape', key: 'R' },
+];
+
+function Chip({ label, onPress, on = false, disabled = false, hint }: { label: string; onPress: () => void; on?: boolean; disabled?: boolean; hint?: string }) {
+  return (
+    <Pressable role="button" accessibilityLabel={label} aria-pressed={on} aria-disabled={disabled} disabled={disabled} onPress={onPress}
+      style={({ pressed }) => [styles.chip, on && styles.chipOn, pressed && styles.chipPressed, disabled && styles.disabled]}>
+      <Text style={[styles.chipText, on && styles.chipTextOn]}>{label}</Text>
+      {hint ? <Text style={[styles.key, on && styles.chipTextOn]}>{hint}</Text> : null}
+    </Pressable>
+  );
+}
+
+export function Toolbar({ showKeys }: { showKeys: boolean }) {
+  const tool = useSlate((s) => s.tool);
+  const canUndo = useSlate(undoable);
+  const canRedo = useSlate(redoable);
+  const s = useSlate.getState();
+  return (
+    <View style={styles.bar}>
+      <View style={styles.group} role="radiogroup" aria-label="Tool">
+        {tools.map((t) => (
+          <Chip key={t.tool} label={t.label} on={tool === t.tool} onPress={() => s.setTool(t.tool)} hint={showKeys ? t.key : undefined} />
+        ))}
+      </View>
+      <View style={styles.group}>
+        <Chip label="Undo" onPress={s.undo} disabled={!canUndo} />
+        <Chip label="Redo" onPress={s.redo} disabled={!canRedo} />
+        <Chip label="Fit" onPress={s.fit} />
+      </View>
+    </View>
+  );
+}
+
+export function SelectionBar({ numberOf, onFraming }: { numberOf: (id: string) => number | null; onFraming: (id: string) => void }) {
+  const selected = useSlate((s) => s.selected);
+  const doc = useSlate((s) => s.history.present);
+  if (!selected || !doc.sketch.components.some((c) => c.id === selected)) return null;
+  const s = useSlate.getState();
+  const edit = (sketch: typeof doc.sketch) => s.apply({ ...doc, sketch });
+  const current = colourOf(doc, selected);
+  const number = numberOf(selected);
+  return (
+    <View style={styles.selection} testID="selection-bar">
+      <Text style={styles.selText}>{number ? `Component ${number}` : 'Unfinished strand'}</Text>
+      <View style={styles.swatches} role="radiogroup" aria-label="Colour">
+        {chalk.map((c, i) => (
+          <Pressable key={c} role="radio" aria-checked={c === current} accessibilityLabel={`Colour ${i + 1}`}
+            onPress={() => s.apply({ ...doc, colours: { ...doc.colours, [selected]: i } })}
+            style={[styles.swatch, { backgroundColor: c }, c === current && styles.swatchOn]} />
+        ))}
+      </View>
+      <View style={styles.group}>
+        <Chip label="Reverse" onPress={() => edit(reverseComponent(doc.sketch, selected))} />
+        <Chip label="Framing" onPress={() => onFraming(selected)} />
+        <Chip label="Delete" onPress={() => (edit(deleteComponent(doc.sketch, selected)), s.select(null))} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  bar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.paper },
+  group: { flexDirection: 'row', flexWrap: 'wrap', gap: 4 },
+  chip: { flexDirection: 'row', alignItems: 'center', gap: 6, minHeight: 40, paddingHorizontal: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  chipOn: { backgroundColor: colors.ink, borderColor: colors.ink },
+  chipPressed: { backgroundColor: colors.accentSoft },
+  chipText: { ...type.label, color: colors.ink },
+  chipTextOn: { color: colors.paper },
+  key: { fontFamily: fonts.mono, fontSize: 11, color: colors.inkFaint },
+  disabled: { opacity: 0.4 },
+  selection: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.sunken, borderTopWidth: 1, borderTopColor: colors.line },
+  selText: { ...type.label, color: colors.ink },
+  swatches: { flexDirection: 'row', gap: 6 },
+  swatch: { width: 24, height: 24, borderRadius: 12, borderWidth: 2, borderColor: 'transparent' },
+  swatchOn: { borderColor: colors.ink },
+});

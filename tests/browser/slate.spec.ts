@@ -1,0 +1,143 @@
+// The Slate in a real browser (DESIGN.md journeys 1 and 2): a new sketch, a trefoil drawn with
+// the mouse along a parametric curve, its Readout; a crossing flipped; a PD code pasted and
+// drawn; screenshots at phone and wide size.
+import type { Browser, Page } from 'playwright-core';
+import { PHONE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
+
+const who = { name: 'Sofia Slate', email: uniqueEmail('sofia.slate'), password: 'chalk and board 5' };
+
+let browser: Browser;
+let page: Page;
+
+type P = { x: number; y: number };
+
+/** The trefoil curve (sin t + 2 sin 2t, cos t - 2 cos 2t), a common parametrisation, as mouse points. */
+function trefoil(centre: P, scale: number, samples = 240): P[] {
+  return Array.from({ length: samples + 1 }, (_, i) => {
+    const t = (2 * Math.PI * i) / samples;
+    return { x: centre.x + scale * (Math.sin(t) + 2 * Math.sin(2 * t)), y: centre.y + scale * (Math.cos(t) - 2 * Math.cos(2 * t)) };
+  });
+}
+
+/** Where a polyline crosses itself, with the two segment indices (drawing order) there. */
+function selfCrossings(pts: P[]): { at: P; first: number; second: number }[] {
+  const out: { at: P; first: number; second: number }[] = [];
+  for (let i = 0; i + 1 < pts.length; i++) {
+    for (let j = i + 2; j + 1 < pts.length; j++) {
+      if (i === 0 && j === pts.length - 2) continue;
+      const [a, b, c, d] = [pts[i], pts[i + 1], pts[j], pts[j + 1]];
+      const den = (b.x - a.x) * (d.y - c.y) - (b.y - a.y) * (d.x - c.x);
+      if (den === 0) continue;
+      const s = ((c.x - a.x) * (d.y - c.y) - (c.y - a.y) * (d.x - c.x)) / den;
+      const u = ((c.x - a.x) * (b.y - a.y) - (c.y - a.y) * (b.x - a.x)) / den;
+      if (s >= 0 && s < 1 && u >= 0 && u < 1) out.push({ at: { x: a.x + s * (b.x - a.x), y: a.y + s * (b.y - a.y) }, first: i, second: j });
+    }
+  }
+  return out;
+}
+
+/**
+ * The Slate puts the later passage under, so a single stroke is a descending diagram. The one
+ * crossing where that disagrees with an alternating choice (over, under, over, ... along the
+ * curve) is the one whose flip makes the diagram alternating.
+ */
+function crossingToAlternate(crossings: { first: number; second: number }[]): number {
+  const passes = crossings.flatMap((c) => [c.first, c.second]).sort((a, b) => a - b);
+  const differs = crossings.map((c) => passes.indexOf(c.first) % 2 === 1);
+  const minority = differs.filter(Boolean).length === 1;
+  return differs.findIndex((d) => d === minority);
+}
+
+const jonesText = (p: Page) => p.getByTestId('readout-jones').locator('[role="math"]').getAttribute('aria-label');
+
+async function settled(p: Page) {
+  // Every Readout row has finished recomputing.
+  await p.waitForFunction(() => document.querySelectorAll('[data-testid^="readout-"][aria-busy="true"]').length === 0);
+}
+
+beforeAll(async () => {
+  const res = await fetch(baseUrl + '/api/auth/register', {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email: who.email, password: who.password, displayName: who.name }),
+  });
+  if (!res.ok) throw new Error(`register: ${res.status}`);
+  browser = await launch();
+  const context = await browser.newContext({ viewport: PHONE });
+  context.setDefaultTimeout(15_000);
+  page = await context.newPage();
+  await page.goto(baseUrl + '/sign-in');
+  await page.getByLabel('E-mail').fill(who.email);
+  await page.getByLabel('Password').fill(who.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Sketches', exact: true }).waitFor();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+let drawn: P[] = [];
+
+test('an empty sketchbook invites the first drawing', async () => {
+  await page.getByText('Draw your first link').waitFor();
+  await shoot(page, 'slate-empty-sketchbook');
+  await page.getByRole('button', { name: 'New sketch' }).first().click();
+  await page.getByTestId('slate-canvas').waitFor();
+  await page.getByText('Draw a strand. End it where it began to close it.').waitFor();
+});
+
+test('a trefoil drawn with the mouse shows 3 crossings; flipping one changes its Jones polynomial', async () => {
+  const box = (await page.getByTestId('slate-canvas').boundingBox())!;
+  const scale = Math.min(box.width, box.height) / 7.5;
+  drawn = trefoil({ x: box.x + box.width / 2, y: box.y + box.height / 2 }, scale);
+  await page.mouse.move(drawn[0].x, drawn[0].y);
+  await page.mouse.down();
+  for (const p of drawn.slice(1)) await page.mouse.move(p.x, p.y);
+  await page.mouse.up();
+  await page.getByTestId('readout-crossings-count').getByText('3 crossings').waitFor();
+  await settled(page);
+  // A descending diagram (every crossing first met over) is the unknot (common practice): V = 1.
+  expect(await jonesText(page)).toBe('V(t) = 1');
+  await page.getByText(/invariants match 0_1/).waitFor();
+
+  const crossings = selfCrossings(drawn);
+  expect(crossings).toHaveLength(3);
+  await page.mouse.click(crossings[crossingToAlternate(crossings)].at.x, crossings[crossingToAlternate(crossings)].at.y);
+  await settled(page);
+  // Now alternating: one of the two trefoils, V = t + t^3 - t^4 or its mirror (DESIGN.md: the
+  // closure of [1,1,1]; mirror V(t) -> V(1/t), Jones 1985).
+  expect(['V(t) = t + t³ − t⁴', 'V(t) = −t⁻⁴ + t⁻³ + t⁻¹']).toContain(await jonesText(page));
+  await page.getByText(/invariants match 3_1/).waitFor();
+  await page.getByTestId('readout-crossings-count').getByText('3 crossings').waitFor();
+  await shoot(page, 'slate-trefoil');
+});
+
+test('undo brings the unflipped crossing back', async () => {
+  await page.getByRole('button', { name: 'Undo' }).click();
+  await settled(page);
+  expect(await jonesText(page)).toBe('V(t) = 1');
+  await page.getByRole('button', { name: 'Redo' }).click();
+  await settled(page);
+  await page.getByText(/invariants match 3_1/).waitFor();
+});
+
+test('a pasted PD code is drawn on the Slate', async () => {
+  await page.getByRole('button', { name: 'Paste a code' }).click();
+  const field = page.getByRole('textbox', { name: 'PD code' });
+  await field.fill('[[1,2,3]]');
+  await page.getByRole('button', { name: 'Draw it' }).click();
+  await page.getByText('Crossing 1 must have exactly 4 labels, got [1,2,3].').waitFor();
+  // The figure-eight knot (PD code from memory; its Jones polynomial t^-2 - t^-1 + 1 - t + t^2,
+  // Jones 1985).
+  await field.fill('[[4,2,5,1],[8,6,1,5],[6,3,7,4],[2,7,3,8]]');
+  await page.getByRole('button', { name: 'Draw it' }).click();
+  await page.getByTestId('readout-crossings-count').getByText('4 crossings').waitFor();
+  await settled(page);
+  expect(await jonesText(page)).toBe('V(t) = t⁻² − t⁻¹ + 1 − t + t²');
+  await page.getByText(/invariants match 4_1/).waitFor();
+  // Drawn: the canvas holds the strand's visible pieces (one per under-crossing gap).
+  expect(await page.getByTestId('slate-canvas').locator('path[stroke-dasharray]').count()).toBe(0);
+  expect(await page.getByTestId('slate-canvas').locator('path').count()).toBeGreaterThanOrEqual(4);
+  await shoot(page, 'slate-figure-eight');
+});
