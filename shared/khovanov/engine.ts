@@ -73,6 +73,7 @@ export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
 
   // Closed up (or one open arc when reduced): objects are free modules of rank one; the
   // reduced quotient by x keeps the undotted coefficient.
+  if (cx.boundary.length !== (options.marked === undefined ? 0 : 2)) throw new Error(`internal: ${cx.boundary.length} open ends after the last crossing`);
   const gens: Generator[] = [];
   const index = new Map<number, number>();
   cx.objs.forEach((obj, k) => {
