@@ -3,7 +3,8 @@
 
 import { analyse } from '@/shared/drawing/analyse';
 import { Point } from '@/shared/drawing/point';
-import { addStroke, emptySketch, flipCrossing, reverseComponent, Sketch } from '@/shared/drawing/sketch';
+import { addStroke, emptySketch, flipCrossing, reverseComponent, setFraming, Sketch } from '@/shared/drawing/sketch';
+import { toPD } from '@/shared/drawing/to-pd';
 import { Diagram } from '@/shared/knot/diagram';
 import { jones } from '@/shared/knot/jones';
 import { orient, writhe } from '@/shared/knot/pd';
@@ -77,6 +78,31 @@ describe('knots drawn as curves', () => {
 });
 
 describe('PD code from strokes', () => {
+  test('screen orientation: the right-handed crossing as seen on screen (y down) reads X[a, b, c, d] with b the outgoing over-strand', () => {
+    // Seen on screen: the under-strand runs from bottom right to top left, (-1, -1) in y-down
+    // coordinates, the over-strand from bottom left to top right, (1, -1). That is the positive
+    // crossing (right-hand rule, Lickorish ch. 1). Counterclockwise as seen from the incoming
+    // under ray (pointing to the bottom right) comes the outgoing over ray (top right).
+    // Two such crossings on two components make a positive Hopf link.
+    const over = { path: 0, arc: 0, direction: { x: 1, y: -1 } };
+    const under = { path: 1, arc: 0, direction: { x: -1, y: -1 } };
+    const second = { over: { path: 1, arc: 5, direction: { x: 1, y: -1 } }, under: { path: 0, arc: 5, direction: { x: -1, y: -1 } } };
+    const pd = toPD([{ over, under }, second], 2, [false, false]);
+    // Labels along the travel: component 0 has 1 (crossing 1 to 2) and 2, component 1 has 3 and 4.
+    expect(pd[0]).toEqual([4, 1, 3, 2]); // a = into under, b = out of over, c = out of under, d = into over
+    expect(pd[1]).toEqual([1, 4, 2, 3]);
+    expect(orient(pd).signs).toEqual([1, 1]);
+  });
+
+  test('framings follow the components into the diagram', () => {
+    let s = drawCurves([circleCurve(200, 200, 50), circleCurve(260, 200, 50), circleCurve(500, 200, 40)]);
+    s = setFraming(setFraming(s, s.components[1].id, 4), s.components[2].id, -1);
+    const a = analyse(s);
+    const d = a.diagram!;
+    expect(d.diagram.unknots).toBe(1);
+    d.componentIds.forEach((id, i) => expect(d.diagram.framings[i]).toBe(s.components.find((c) => c.id === id)!.framing));
+  });
+
   test('components are oriented along the drawing direction, and reversible', () => {
     const s = makeAlternating(addStroke(emptySketch, touches(trefoilCurve, 400, 0.5, 9)));
     const a = analyse(s);
