@@ -7,6 +7,8 @@ import { queryClient } from '@/lib/query-client';
 import { useSession } from '@/hooks/useSession';
 import { useLocalSketches, useSketchWrites } from '@/hooks/queries/useLocalSketches';
 import { useDeviceSync, useSyncStatus } from '@/hooks/useDevice';
+import { SyncStatus } from '@/components/sync/SyncStatus';
+import { openDevice } from '@/lib/store/device';
 
 jest.mock('@/lib/store/device', () => {
   const { LocalStore } = jest.requireActual('@/lib/store/local-store');
@@ -51,4 +53,18 @@ test('S8, S31: a new sketch appears from the device store and is counted as wait
   expect(await screen.findByText('Trefoil from the talk')).toBeOnTheScreen();
   expect(screen.getByText('1 sketches')).toBeOnTheScreen();
   await waitFor(() => expect(screen.getByText('1 change waiting')).toBeOnTheScreen());
+});
+
+test('S29, S31: the status pill shows the state and "Sync now" starts a round', async () => {
+  const { engine } = (await openDevice('u1', () => 't')) as unknown as { engine: { syncNow: jest.Mock } };
+  engine.syncNow.mockClear();
+  render(
+    <QueryClientProvider client={queryClient}>
+      <SyncStatus />
+    </QueryClientProvider>,
+  );
+  expect(await screen.findByTestId('sync-status')).toBeOnTheScreen();
+  await waitFor(() => expect(screen.getByRole('button', { name: 'Sync now' })).toBeOnTheScreen());
+  await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Sync now' })));
+  expect(engine.syncNow).toHaveBeenCalledTimes(1);
 });

@@ -1,0 +1,43 @@
+// The visible sync status (sync/SPEC.md S31) with "Sync now", and DeviceSync, which runs the
+// engine while someone is signed in (mount it once in the signed-in layout).
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { colors, radius, space, type } from '@/constants/theme';
+import { useDeviceSync, useSyncStatus } from '@/hooks/useDevice';
+import type { SyncStatus as Status } from '@/sync/status';
+
+export function DeviceSync() {
+  useDeviceSync();
+  return null;
+}
+
+const tone = (s: Status) =>
+  s.kind === 'conflict'
+    ? { fg: colors.danger, bg: colors.dangerSoft }
+    : s.kind === 'upToDate'
+      ? { fg: colors.success, bg: colors.successSoft }
+      : { fg: colors.inkMuted, bg: colors.sunken };
+
+export function SyncStatus() {
+  const { status, label, syncNow } = useSyncStatus();
+  const t = tone(status);
+  return (
+    <View style={styles.row} accessibilityLiveRegion="polite">
+      <View style={[styles.pill, { backgroundColor: t.bg }]} testID="sync-status">
+        <Text style={[styles.text, { color: t.fg }]}>{label}</Text>
+      </View>
+      {status.kind !== 'syncing' ? (
+        <Pressable role="button" accessibilityLabel="Sync now" onPress={() => void syncNow()} style={styles.action}>
+          <Text style={styles.actionText}>Sync now</Text>
+        </Pressable>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  pill: { borderRadius: radius.pill, paddingHorizontal: space.md, paddingVertical: 4 },
+  text: { ...type.label },
+  action: { paddingHorizontal: space.sm, paddingVertical: 4 },
+  actionText: { ...type.label, color: colors.accent },
+});
