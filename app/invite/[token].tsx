@@ -42,8 +42,10 @@ function Offer({ token, invitation }: { token: string; invitation: InvitationPre
   return (
     <AuthFrame title={`Join ${invitation.groupName}`} lead={`${invitation.invitedBy} invited ${invitation.email} to this group on Overstrand.`}>
       <View style={styles.role}>
-        <Text style={styles.label}>Role</Text>
-        <RoleBadge role={invitation.role} />
+        <View style={styles.roleLine}>
+          <Text style={styles.label}>Role</Text>
+          <RoleBadge role={invitation.role} />
+        </View>
         <Text style={styles.muted}>{roleDescriptions[invitation.role]}</Text>
       </View>
 
@@ -91,6 +93,7 @@ function AcceptError({ error }: { error: Error }) {
 
 const styles = StyleSheet.create({
   role: { gap: space.xs + 2 },
+  roleLine: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   label: { ...type.label, color: colors.ink },
   muted: { ...type.small, color: colors.inkMuted },
   actions: { gap: space.md },
