@@ -13,11 +13,11 @@ const tools: { tool: Tool; label: string; key: string }[] = [
   { tool: 'reshape', label: 'Reshape', key: 'R' },
 ];
 
-function Chip({ label, onPress, on = false, disabled = false, hint }: { label: string; onPress: () => void; on?: boolean; disabled?: boolean; hint?: string }) {
+function Chip({ label, text, onPress, on = false, disabled = false, hint }: { label: string; text?: string; onPress: () => void; on?: boolean; disabled?: boolean; hint?: string }) {
   return (
     <Pressable role="button" accessibilityLabel={label} aria-pressed={on} aria-disabled={disabled} disabled={disabled} onPress={onPress}
       style={({ pressed }) => [styles.chip, on && styles.chipOn, pressed && styles.chipPressed, disabled && styles.disabled]}>
-      <Text style={[styles.chipText, on && styles.chipTextOn]}>{label}</Text>
+      <Text style={[styles.chipText, on && styles.chipTextOn, text !== undefined && styles.symbol]}>{text ?? label}</Text>
       {hint ? <Text style={[styles.key, on && styles.chipTextOn]}>{hint}</Text> : null}
     </Pressable>
   );
@@ -36,9 +36,9 @@ export function Toolbar({ showKeys }: { showKeys: boolean }) {
         ))}
       </View>
       <View style={styles.group}>
-        <Chip label="Undo" onPress={s.undo} disabled={!canUndo} />
-        <Chip label="Redo" onPress={s.redo} disabled={!canRedo} />
-        <Chip label="Fit" onPress={s.fit} />
+        <Chip label="Undo" text="↶" onPress={s.undo} disabled={!canUndo} />
+        <Chip label="Redo" text="↷" onPress={s.redo} disabled={!canRedo} />
+        <Chip label="Fit" text="⤢" onPress={s.fit} />
       </View>
     </View>
   );
@@ -72,13 +72,14 @@ export function SelectionBar({ numberOf, onFraming }: { numberOf: (id: string) =
 }
 
 const styles = StyleSheet.create({
-  bar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.paper },
+  bar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm, paddingHorizontal: space.sm + 2, paddingVertical: space.sm, backgroundColor: colors.paper },
   group: { flexDirection: 'row', flexWrap: 'wrap', gap: 4 },
-  chip: { flexDirection: 'row', alignItems: 'center', gap: 6, minHeight: 40, paddingHorizontal: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  chip: { flexDirection: 'row', alignItems: 'center', gap: 5, minHeight: 40, minWidth: 40, justifyContent: 'center', paddingHorizontal: 10, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
   chipOn: { backgroundColor: colors.ink, borderColor: colors.ink },
   chipPressed: { backgroundColor: colors.accentSoft },
   chipText: { ...type.label, color: colors.ink },
   chipTextOn: { color: colors.paper },
+  symbol: { fontSize: 18, lineHeight: 22 },
   key: { fontFamily: fonts.mono, fontSize: 11, color: colors.inkFaint },
   disabled: { opacity: 0.4 },
   selection: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.sunken, borderTopWidth: 1, borderTopColor: colors.line },

@@ -62,13 +62,13 @@ export function strandPictures(doc: SlateDoc, a: Analysis, view: View): StrandPi
   });
 }
 
-/** A view that fits every point into a box of the given size with a margin, at most 1.5x. */
+/** A view that fits every point into a box of the given size with a margin, at most 4x. */
 export function fitView(points: readonly Point[], width: number, height: number, margin = 36): View {
   if (points.length === 0 || width <= 0 || height <= 0) return { k: 1, x: 0, y: 0 };
   const xs = points.map((p) => p.x);
   const ys = points.map((p) => p.y);
   const [x0, x1, y0, y1] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
-  const k = Math.min(1.5, (width - 2 * margin) / Math.max(x1 - x0, 1), (height - 2 * margin) / Math.max(y1 - y0, 1));
+  const k = Math.min(4, (width - 2 * margin) / Math.max(x1 - x0, 1), (height - 2 * margin) / Math.max(y1 - y0, 1));
   return { k, x: width / 2 - k * (x0 + x1) / 2, y: height / 2 - k * (y0 + y1) / 2 };
 }
 

@@ -55,7 +55,7 @@ export const useSlate = create<SlateState>((set, get) => ({
   braid: null,
   fitRequest: 0,
   open: (sketchId, doc) =>
-    set((s) => ({ sketchId, history: historyOf(doc), opened: doc, preview: null, selected: null, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
+    set((s) => ({ sketchId, history: historyOf(doc), opened: doc, view: identityView, preview: null, selected: null, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
   replace: (doc, braid) =>
     set((s) => ({ history: commit(s.history, doc), preview: null, selected: null, braid: braid ? { word: braid, doc } : null, fitRequest: s.fitRequest + 1 })),
   apply: (doc) => set((s) => ({ history: commit(s.history, doc), preview: null })),
