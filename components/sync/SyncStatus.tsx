@@ -1,14 +1,8 @@
-// The visible sync status (sync/SPEC.md S31) with "Sync now", and DeviceSync, which runs the
-// engine while someone is signed in (mount it once in the signed-in layout).
+// The visible sync status (sync/SPEC.md S31) with "Sync now".
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '@/constants/theme';
-import { useDeviceSync, useSyncStatus } from '@/hooks/useDevice';
+import { useSyncStatus } from '@/hooks/useDevice';
 import type { SyncStatus as Status } from '@/sync/status';
-
-export function DeviceSync() {
-  useDeviceSync();
-  return null;
-}
 
 const tone = (s: Status) =>
   s.kind === 'conflict'

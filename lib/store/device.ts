@@ -1,6 +1,7 @@
 // The app's device store and sync engine, one per signed-in account (a shared browser never
-// mixes two people's sketchbooks), opened on first use.
+// mixes two people's sketchbooks), opened on first use and kept in sync from then on.
 import { openDatabaseAsync } from 'expo-sqlite';
+import { autoSync } from '@/lib/sync/autosync';
 import { SyncEngine } from '@/lib/sync/engine';
 import { createSyncStatusStore } from '@/lib/sync/status-store';
 import { httpTransport } from '@/lib/sync/transport';
@@ -16,6 +17,7 @@ export interface OpenDevice {
 export const syncStatus = createSyncStatusStore();
 
 const opened = new Map<string, Promise<OpenDevice>>();
+const stops = new Map<string, () => void>();
 
 /** Web: same origin as the page; native: EXPO_PUBLIC_API_URL (as lib/api.ts). */
 const baseUrl = () => process.env.EXPO_PUBLIC_API_URL ?? '';
@@ -28,9 +30,17 @@ export function openDevice(userId: string, token: () => string | null): Promise<
       await migrate(db);
       const store = new LocalStore(sqliteTables(db));
       const engine = new SyncEngine({ store, transport: httpTransport({ baseUrl, token }), status: syncStatus });
+      stops.set(userId, autoSync(store, engine, syncStatus));
       return { userId, store, engine };
     })();
     opened.set(userId, d);
   }
   return d;
+}
+
+/** Sign-out: stop syncing every open account (their data stays on the device). */
+export function stopDevices(): void {
+  for (const stop of stops.values()) stop();
+  stops.clear();
+  opened.clear();
 }

@@ -1,12 +1,13 @@
 // The hooks the Sketches screens use: sketches come from the device store (here its memory
-// tables), a write shows at once and counts as waiting (sync/SPEC.md S8, S31).
+// tables and a stand-in engine), a write shows at once and counts as waiting, and a push
+// follows shortly (sync/SPEC.md S8, S29, S31).
 import { Pressable, Text, View } from 'react-native';
 import { act, fireEvent, render, screen, waitFor } from '@testing-library/react-native';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { queryClient } from '@/lib/query-client';
 import { useSession } from '@/hooks/useSession';
 import { useLocalSketches, useSketchWrites } from '@/hooks/queries/useLocalSketches';
-import { useDeviceSync, useSyncStatus } from '@/hooks/useDevice';
+import { useSyncStatus } from '@/hooks/useDevice';
 import { SyncStatus } from '@/components/sync/SyncStatus';
 import { openDevice } from '@/lib/store/device';
 
@@ -14,15 +15,22 @@ jest.mock('@/lib/store/device', () => {
   const { LocalStore } = jest.requireActual('@/lib/store/local-store');
   const { memoryTables } = jest.requireActual('@/lib/store/memory');
   const { createSyncStatusStore } = jest.requireActual('@/lib/sync/status-store');
+  const { autoSync } = jest.requireActual('@/lib/sync/autosync');
   let n = 0;
   const store = new LocalStore(memoryTables(), { newId: () => `00000000-0000-4000-8000-${String(++n).padStart(12, '0')}` });
   const engine = { start: jest.fn(), stop: jest.fn(), setOnline: jest.fn(), syncNow: jest.fn(async () => undefined) };
+  const syncStatus = createSyncStatusStore();
   const opened = Promise.resolve({ userId: 'u1', store, engine });
-  return { __esModule: true, syncStatus: createSyncStatusStore(), openDevice: () => opened };
+  let started = false;
+  const openDevice = () => {
+    if (!started) autoSync(store, engine, syncStatus); // as the real openDevice does
+    started = true;
+    return opened;
+  };
+  return { __esModule: true, syncStatus, openDevice, stopDevices: () => undefined };
 });
 
 function Sketchbook() {
-  useDeviceSync();
   const list = useLocalSketches();
   const { create } = useSketchWrites();
   const { label } = useSyncStatus();
@@ -40,7 +48,7 @@ function Sketchbook() {
   );
 }
 
-test('S8, S31: a new sketch appears from the device store and is counted as waiting', async () => {
+test('S8, S29, S31: a new sketch appears from the device store, counts as waiting, and is pushed soon', async () => {
   useSession.setState({ status: 'signedIn', token: 't', user: { id: 'u1', email: 'a@b.example', displayName: 'A' } });
   render(
     <QueryClientProvider client={queryClient}>
@@ -53,6 +61,9 @@ test('S8, S31: a new sketch appears from the device store and is counted as wait
   expect(await screen.findByText('Trefoil from the talk')).toBeOnTheScreen();
   expect(screen.getByText('1 sketches')).toBeOnTheScreen();
   await waitFor(() => expect(screen.getByText('1 change waiting')).toBeOnTheScreen());
+  const { engine } = (await openDevice('u1', () => 't')) as unknown as { engine: { start: jest.Mock; syncNow: jest.Mock } };
+  expect(engine.start).toHaveBeenCalledTimes(1); // S29: on start
+  await waitFor(() => expect(engine.syncNow).toHaveBeenCalled(), { timeout: 4000 }); // soon after the write
 });
 
 test('S29, S31: the status pill shows the state and "Sync now" starts a round', async () => {
