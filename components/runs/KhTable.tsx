@@ -2,13 +2,15 @@
 import { ScrollView, StyleSheet, Text, View } from 'react-native';
 import type { KhGroupJson } from '@/shared/api/runs';
 import { grid, groupText } from '@/shared/khovanov/format';
+import { useIsWide } from '@/components/shell/useIsWide';
 import { colors, fonts, space, type } from '@/constants/theme';
 import { TeX } from './Math';
 
 export function KhTable({ groups, ring, compact = false, label }: { groups: KhGroupJson[]; ring: string; compact?: boolean; label: string }) {
+  const wide = useIsWide();
   const g = grid(groups);
   if (g.is.length === 0) return <Text style={styles.muted}>All groups are zero.</Text>;
-  const cell = compact ? styles.cellCompact : styles.cell;
+  const cell = compact ? styles.cellCompact : [styles.cell, !wide && styles.cellPhone];
   return (
     <ScrollView horizontal>
       <View role="table" aria-label={label}>
@@ -39,6 +41,7 @@ export function KhTable({ groups, ring, compact = false, label }: { groups: KhGr
 const styles = StyleSheet.create({
   row: { flexDirection: 'row' },
   cell: { width: 88, minHeight: 36, padding: space.xs, borderWidth: StyleSheet.hairlineWidth, borderColor: colors.line, alignItems: 'center', justifyContent: 'center', textAlign: 'center' },
+  cellPhone: { width: 60 },
   cellCompact: { width: 52, minHeight: 26, padding: 2, borderWidth: StyleSheet.hairlineWidth, borderColor: colors.line, alignItems: 'center', justifyContent: 'center', textAlign: 'center', fontSize: 11 },
   head: { fontFamily: fonts.mono, color: colors.inkMuted, backgroundColor: colors.sunken },
   corner: { fontFamily: fonts.mono, color: colors.inkFaint, backgroundColor: colors.sunken },

@@ -111,7 +111,7 @@ const styles = StyleSheet.create({
   filter: { ...type.small, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.surface, color: colors.ink },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
   headRow: { borderBottomColor: colors.ink },
-  head: { ...type.caps, color: colors.inkMuted },
+  head: { ...type.label, color: colors.inkMuted },
   cellBox: { justifyContent: 'center' },
   cell: { ...type.small, color: colors.ink },
   code: { fontFamily: fonts.mono, fontSize: 13, color: colors.ink },

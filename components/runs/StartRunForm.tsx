@@ -36,7 +36,8 @@ function request(input: Input, code: string, ring: string, reduced: boolean, swe
       const d = fromBraid(parseBraid(code));
       return { pd: d.pd.map((x) => [...x] as [number, number, number, number]), unknots: d.unknots };
     })();
-    const label = input === 'braid' ? `braid ${code.trim()}` : `PD code, ${diagram.pd.length} crossings`;
+    const text = input === 'braid' ? `braid ${code.trim().replace(/\s+/g, ' ')}` : `PD ${JSON.stringify(diagram.pd)}`;
+    const label = text.length > 44 ? text.slice(0, 42) + '…' : text;
     return sweep > 0 ? { kind: 'cable-sweep', diagram, ring, reduced, sweep: { maxStrands: sweep }, label } : { diagram, ring, reduced, label };
   } catch (err) {
     return err instanceof Error ? err.message : 'Not a diagram';

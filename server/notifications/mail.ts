@@ -11,7 +11,7 @@ const texts: Texts = {
   }),
   run_finished: (p, base) => ({
     subject: `Run ${p.status} on "${p.sketchTitle || 'Untitled sketch'}"`,
-    lines: [`Your run on "${p.sketchTitle || 'Untitled sketch'}" ${p.status}.`, '', p.summary, '', `Open the runs: ${base}/runs`],
+    lines: [`Your run on "${p.sketchTitle || 'Untitled sketch'}" ${p.status}.`, '', p.summary, '', `Open the result: ${base}/runs/${p.runId}`],
   }),
   invitation_accepted: (p, base) => ({
     subject: `${p.who} joined ${p.groupName}`,

@@ -13,6 +13,15 @@ export function sweepCells(components: number, maxStrands: number): CableCell[] 
   return cells;
 }
 
+/** The order of sweepCells: per component, by r+ + r-, then by r-. */
+export function compareCells(a: CableCell, b: CableCell): number {
+  for (let c = 0; c < Math.min(a.length, b.length); c++) {
+    const d = a[c][0] + a[c][1] - (b[c][0] + b[c][1]) || a[c][1] - b[c][1];
+    if (d !== 0) return d;
+  }
+  return a.length - b.length;
+}
+
 /** Number of cells sweepCells would give, without building them. */
 export const sweepSize = (components: number, maxStrands: number): number =>
   Math.pow((maxStrands * (maxStrands + 3)) / 2, components);

@@ -1,11 +1,11 @@
 // How a run ends: its row gets the outcome (only if it has not ended already), a cable sweep
 // recomputes its overall progress from its cells and ends with the last one, and the starter
-// of a top-level run gets an e-mail with a link to the result.
-import { isFinished, runPagePath, type KhResultJson, type RunStatus } from '@/shared/api/runs';
-import { findUserById } from '../auth/repository';
+// of a top-level run is notified (in the app, and by e-mail with a link to the result page
+// unless they turned run e-mails off: server/notifications).
+import { isFinished, type KhResultJson, type RunStatus } from '@/shared/api/runs';
 import type { Run } from '../db/entities';
 import type { Deps } from '../deps';
-import { runFinishedMail } from './mail';
+import { notify } from '../notifications/use-cases';
 import { childrenOf, findRun, updateIf } from './repository';
 
 const live: RunStatus[] = ['queued', 'running'];
@@ -56,11 +56,18 @@ export async function refreshSweep(deps: Deps, sweepId: string): Promise<void> {
   }
 }
 
-/** Mail goes out after the row is written and never holds up the run; a failure is logged. */
+/** What the notification says about the outcome, in one line. */
+function summaryOf(run: Run): string {
+  const what = `${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${run.ring}${run.reduced ? ' (reduced)' : ''}`;
+  if (run.status !== 'done') return `${what}: ${run.error ?? run.status}`.slice(0, 500);
+  const kh = run.result ? `, Poincare polynomial ${run.result.poincareText}, ${run.result.thin ? 'thin' : 'thick'}` : '';
+  return `${what}${kh}${run.reusedFrom ? ' (a stored result of the same diagram, reused)' : ''}`.slice(0, 500);
+}
+
+/** Sent after the row is written and never holds up the run; a failure is logged. */
 function notifyStarter(deps: Deps, run: Run): void {
-  void (async () => {
-    const user = await findUserById(deps.db, run.startedBy);
-    if (!user) return;
-    await deps.mailer.send(runFinishedMail({ to: user.email, run, link: deps.config.publicUrl + runPagePath(run.id) }));
-  })().catch((err: unknown) => deps.log.error({ err, runId: run.id }, 'run e-mail failed'));
+  const status = run.status === 'done' ? 'succeeded' : run.status === 'cancelled' ? 'cancelled' : 'failed';
+  notify(deps, run.startedBy, 'run_finished', { runId: run.id, sketchId: run.sketchId ?? '', sketchTitle: run.label, status, summary: summaryOf(run) }).catch(
+    (err: unknown) => deps.log.error({ err, runId: run.id }, 'run notification failed'),
+  );
 }

@@ -13,7 +13,7 @@ import { requireMember } from '../groups/access';
 import { AppError, forbidden, notFound } from '../http/errors';
 import { findSketch } from '../sketches/repository';
 import { viewerOf } from '../sync/repository';
-import { cableOf, sweepCells, sweepSize } from './cables';
+import { cableOf, compareCells, sweepCells, sweepSize } from './cables';
 import { afterChange, finishRun, refreshSweep } from './lifecycle';
 import { childrenOf, displayNames, findReusable, findRun, insertRun, listTopLevel, updateIf } from './repository';
 import { schedulerOf } from './scheduler';
@@ -101,19 +101,23 @@ function row(deps: Deps, user: User, n: NewRun, key: string): Run {
   } satisfies Run);
 }
 
-/** A Khovanov computation: reused when a stored result fits, failed at once when over the limit, else queued. */
-async function startComputation(deps: Deps, user: User, n: NewRun): Promise<Run> {
+/**
+ * A Khovanov computation's row, and how it ends at once when it does: reused when a stored
+ * result fits, failed when over the crossing limit; otherwise it stays queued. Rows are inserted
+ * before any of them ends, so a sweep never sees some of its cells missing.
+ */
+async function planComputation(deps: Deps, user: User, n: NewRun): Promise<{ run: Run; settle: () => Promise<unknown> }> {
   const key = diagramKey(n.diagram, n.reduced);
   const run = row(deps, user, n, key);
   const max = deps.config.runs.maxCrossings;
-  const tooBig = run.crossings > max;
-  const stored = tooBig ? null : await findReusable(deps.db, key, n.ring, n.reduced);
-  if (stored) Object.assign(run, { status: 'running', startedAt: run.createdAt, reusedFrom: stored.reusedFrom ?? stored.id });
-  if (tooBig) run.status = 'running';
-  await insertRun(deps.db, run);
-  if (stored) await finishRun(deps, run.id, { status: 'done', result: stored.result! });
-  else if (tooBig) await finishRun(deps, run.id, { status: 'failed', error: `The diagram has ${run.crossings} crossings; this server computes at most ${max} per run.` });
-  return run;
+  if (run.crossings > max) {
+    run.status = 'running';
+    return { run, settle: () => finishRun(deps, run.id, { status: 'failed', error: `The diagram has ${run.crossings} crossings; this server computes at most ${max} per run.` }) };
+  }
+  const stored = await findReusable(deps.db, key, n.ring, n.reduced);
+  if (!stored) return { run, settle: async () => undefined };
+  Object.assign(run, { status: 'running', startedAt: run.createdAt, reusedFrom: stored.reusedFrom ?? stored.id });
+  return { run, settle: () => finishRun(deps, run.id, { status: 'done', result: stored.result! }) };
 }
 
 export async function startRun(deps: Deps, user: User, req: Start): Promise<RunDetail> {
@@ -124,7 +128,10 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   let id: string;
   if (req.kind === 'khovanov') {
     if (d.pd.length > max) throw badDiagram(`The diagram has ${d.pd.length} crossings; this server computes at most ${max} per run.`);
-    id = (await startComputation(deps, user, { ...base, kind: 'khovanov' })).id;
+    const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov' });
+    await insertRun(deps.db, run);
+    await settle();
+    id = run.id;
   } else {
     id = await startSweep(deps, user, { ...base, kind: 'cable-sweep', sweep: req.sweep! }, d);
   }
@@ -149,11 +156,15 @@ async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promis
   const sweep = row(deps, user, n, diagramKey(n.diagram, false));
   Object.assign(sweep, { status: 'running', startedAt: sweep.createdAt });
   await insertRun(deps.db, sweep);
+  const planned = [];
   for (const [k, cell] of cells.entries()) {
     const c = cables[k];
     const label = `${n.label} (${cell.map(([p, m]) => `${p},${m}`).join(' | ')})`;
-    await startComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label, diagram: { pd: c.pd.map((x) => [...x] as [number, number, number, number]), unknots: c.unknots, framings: [...c.framings] }, parentRunId: sweep.id, cable: cell });
+    const diagram = { pd: c.pd.map((x) => [...x] as [number, number, number, number]), unknots: c.unknots, framings: [...c.framings] };
+    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label, diagram, parentRunId: sweep.id, cable: cell }));
   }
+  for (const { run } of planned) await insertRun(deps.db, run);
+  for (const { settle } of planned) await settle();
   await refreshSweep(deps, sweep.id);
   return sweep.id;
 }
@@ -192,7 +203,7 @@ function summary(r: Run, names: Map<string, string>): RunSummary {
 
 export async function getRun(deps: Deps, user: User, id: string): Promise<RunDetail> {
   const run = await visibleRun(deps, user, id);
-  const children = run.kind === 'cable-sweep' ? await childrenOf(deps.db, run.id) : [];
+  const children = run.kind === 'cable-sweep' ? (await childrenOf(deps.db, run.id)).sort((a, b) => compareCells(a.cable!, b.cable!)) : [];
   const names = await displayNames(deps.db, [run.startedBy]);
   return {
     ...summary(run, names),

@@ -81,3 +81,16 @@ test('a PD code run shows torsion typeset, and the runs table lists both', async
   await page.getByLabel('Filter runs').fill('');
   await shoot(page, 'runs-05-table');
 }, 120_000);
+
+test('a cable sweep shows a grid of small tables', async () => {
+  await page.getByRole('radio', { name: 'PD code' }).click();
+  await page.getByLabel('PD code').fill('[[4,2,5,1],[2,6,3,5],[6,4,1,3]]');
+  await page.getByRole('radio', { name: 'Cable sweep, r+ + r- ≤ 2' }).click();
+  await page.getByRole('button', { name: 'Start run' }).click();
+  await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 90_000 });
+  await shoot(page, 'runs-06-cable-sweep');
+  for (const [p, m] of [[1, 0], [0, 1], [2, 0], [1, 1], [0, 2]]) {
+    await page.getByRole('table', { name: `Khovanov homology of the (${p}, ${m}) cable` }).waitFor();
+  }
+  await shoot(page, 'runs-06-cable-sweep');
+}, 120_000);
