@@ -1,5 +1,5 @@
 // Everything the server reads from the environment, in one place, with development defaults.
-import { defaultRunLimits, type RunLimits } from './runs/limits';
+import { defaultRunLimits, runLimitsFromEnv, type RunLimits } from './runs/limits';
 import { photoStorageFromEnv, type PhotoStorage } from './photos/store';
 
 export interface Config {
@@ -56,6 +56,7 @@ export function configFromEnv(env: NodeJS.ProcessEnv): Partial<Config> {
     ...(env.JWT_SECRET && { jwtSecret: env.JWT_SECRET }),
     ...(env.MAIL_FROM && { mailFrom: env.MAIL_FROM }),
     photos: photoStorageFromEnv(env),
+    runs: runLimitsFromEnv(env),
     ...(env.AUTH_RATE_LIMIT && { authRateLimit: { windowMs: 15 * 60 * 1000, limit: Number(env.AUTH_RATE_LIMIT) } }),
   };
 }
