@@ -104,8 +104,6 @@ export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): 
     const firstUnder = laterFirst !== flipped.has(i);
     return firstUnder ? { over: travel(second), under: travel(first) } : { over: travel(first), under: travel(second) };
   });
-  const pd = toPD(overUnder, closed.length, closed.map((c) => c.reversed));
-
   const crossings: DrawnCrossing[] = found.map((c, i) => ({
     at: c.at,
     over: ids[overUnder[i].over.path],
@@ -130,7 +128,7 @@ export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): 
     gaps: gapsAround(crossings, new Map(paths.map((p) => [p.id, p.length])), o.gapRadius),
     markers,
     open: sketch.components.filter((c) => !c.closed).map((c) => c.id),
-    diagram: markers.length === 0 && closed.length > 0 ? diagramOf(pd, closed, overUnder) : null,
+    diagram: markers.length === 0 && closed.length > 0 ? diagramOf(toPD(overUnder, closed.length, closed.map((c) => c.reversed)), closed, overUnder) : null,
   };
 }
 
