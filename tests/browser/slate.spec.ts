@@ -141,3 +141,35 @@ test('a pasted PD code is drawn on the Slate', async () => {
   expect(await page.getByTestId('slate-canvas').locator('path').count()).toBeGreaterThanOrEqual(4);
   await shoot(page, 'slate-figure-eight');
 });
+
+test('the Families builder draws a torus link with its linking number', async () => {
+  await page.getByRole('button', { name: 'Families' }).click();
+  await page.getByRole('textbox', { name: 'q (turns)' }).fill('4');
+  await shoot(page, 'slate-families');
+  await page.getByRole('button', { name: 'Draw it' }).click();
+  await page.getByTestId('readout-crossings-count').getByText('4 crossings').waitFor();
+  await settled(page);
+  // T(2,4): two components with linking number 2 (half the 4 positive crossings; Rolfsen 5.D).
+  await page.getByText('lk(1,2) = +2').waitFor();
+  await shoot(page, 'slate-torus-link');
+});
+
+test('details are saved and shown in the sketchbook; shortcuts undo on a wide screen', async () => {
+  await page.getByRole('button', { name: 'Details', exact: true }).click();
+  await page.getByRole('textbox', { name: 'Title' }).fill('T(2,4) from the seminar');
+  await page.getByRole('textbox', { name: 'Where it was seen' }).fill('Topology seminar, room 2');
+  await page.getByRole('textbox', { name: 'Tags' }).fill('torus, link');
+  await shoot(page, 'slate-details');
+  await page.getByRole('button', { name: 'Save details' }).click();
+  await page.getByRole('heading', { name: 'T(2,4) from the seminar' }).waitFor();
+  await page.setViewportSize({ width: 1440, height: 900 });
+  await page.getByRole('link', { name: 'Open T(2,4) from the seminar' }).waitFor();
+  await page.keyboard.press('Control+z');
+  // Back to the pasted figure-eight knot.
+  await page.getByText(/invariants match 4_1/).waitFor();
+  await page.keyboard.press('Control+Shift+z');
+  await page.getByText('lk(1,2) = +2').waitFor();
+  await page.keyboard.press('?');
+  await page.getByText('Delete the selected component').waitFor();
+  await page.keyboard.press('Escape');
+});
