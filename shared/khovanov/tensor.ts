@@ -22,8 +22,8 @@ interface Side {
 
 interface Gluing {
   readonly pieces: Piece[];
+  /** Component of every disc of the old morphism (the crossing's own morphisms carry no dots). */
   readonly compPQ: number[];
-  readonly compX: number[];
   /** Component of every bottom loop and every top loop. */
   readonly bottomLoops: number[];
   readonly topLoops: number[];
@@ -125,7 +125,6 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
     const result: Gluing = {
       pieces: euler.map((e, c) => ({ genus: genus(e, circles[c]), boundary: boundary[c] })),
       compPQ: comp.slice(0, pq.count),
-      compX: comp.slice(pq.count),
       bottomLoops,
       topLoops,
       memo: new Map(),
