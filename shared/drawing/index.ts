@@ -27,3 +27,4 @@ export { visiblePieces, gapsAround } from './pieces';
 export { toSVG, toTikZ, chalkPalette } from './export';
 export type { ExportOptions } from './export';
 export { crossingNear, componentNear, arrowOf } from './pick';
+export { carryFlips } from './carry';

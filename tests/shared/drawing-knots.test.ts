@@ -3,7 +3,8 @@
 
 import { analyse } from '@/shared/drawing/analyse';
 import { Point } from '@/shared/drawing/point';
-import { addStroke, emptySketch, flipCrossing, reverseComponent, setFraming, Sketch } from '@/shared/drawing/sketch';
+import { carryFlips } from '@/shared/drawing/carry';
+import { addStroke, emptySketch, flipCrossing, moveComponent, reshapeComponent, reverseComponent, setFraming, Sketch } from '@/shared/drawing/sketch';
 import { toPD } from '@/shared/drawing/to-pd';
 import { Diagram } from '@/shared/knot/diagram';
 import { jones } from '@/shared/knot/jones';
@@ -39,6 +40,32 @@ describe('knots drawn as curves', () => {
     expect(jones(d).equals(w > 0 ? positiveTrefoil : mirror(positiveTrefoil))).toBe(true);
     // Flipping every crossing gives the mirror image: V(t) -> V(1/t) (Jones 1985, Thm. on mirror images).
     expect(jones(diagramOf(flipAll(s))).equals(mirror(jones(d)))).toBe(true);
+  });
+
+  test('carryFlips: dragging a strand through a flipped crossing far keeps the knot', () => {
+    const s = makeAlternating(addStroke(emptySketch, touches(trefoilCurve, 400, 0.5, 5)));
+    const before = analyse(s);
+    const c = before.crossings.find((x) => x.flipped)!;
+    // Drag the strand by 40 px (beyond the flip radius) across its direction: the crossing
+    // slides along the other strand.
+    const i = Math.round(c.overArc / (before.paths[0].length / s.components[0].points.length)); // the over passage
+    const push = { x: -40 * c.overDirection.y, y: 40 * c.overDirection.x };
+    const dragged = carryFlips(s, reshapeComponent(s, s.components[0].id, i, push, 120));
+    const after = analyse(dragged);
+    expect(after.crossings).toHaveLength(3);
+    // The crossing did move beyond the flip radius (else this would test nothing).
+    expect(Math.min(...after.crossings.map((x) => Math.hypot(x.at.x - c.at.x, x.at.y - c.at.y)))).toBeGreaterThan(24);
+    expect(after.crossings.filter((x) => x.flipped)).toHaveLength(before.crossings.filter((x) => x.flipped).length);
+    expect(jones(after.diagram!.diagram).equals(jones(before.diagram!.diagram))).toBe(true);
+  });
+
+  test('carryFlips: moving one circle of a Hopf link keeps it linked', () => {
+    const s = drawCurves([circleCurve(200, 200, 50), circleCurve(260, 200, 50)], 400, 0.5);
+    const bottom = analyse(s).crossings.find((c) => c.at.y > 200)!;
+    const hopf = flipCrossing(s, { a: bottom.over, b: bottom.under, at: bottom.at });
+    // Moving the right circle 35 px to the right slides both crossings 30 px along the left one.
+    const moved = carryFlips(hopf, moveComponent(hopf, hopf.components[1].id, { x: 35, y: 0 }));
+    expect(jones(diagramOf(moved)).equals(positiveHopf)).toBe(true);
   });
 
   test('a trefoil drawn in one stroke with the default rule is descending, hence an unknot', () => {
