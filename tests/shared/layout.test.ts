@@ -45,6 +45,11 @@ describe('hand-written PD codes', () => {
     ['a kink', [[1, 1, 2, 2]]], // one R1 curl: an unknot (common practice)
     ['two kinks', [[1, 4, 2, 1], [2, 4, 3, 3]]], // two curls on one unknot
   ])('%s', (_, code) => expectSameDiagram(pd(code as number[][])));
+
+  test('no crossings: unknots only', () => {
+    expectSameDiagram({ pd: [], unknots: 1, framings: [null] });
+    expectSameDiagram({ pd: [], unknots: 3, framings: [null, null, null] });
+  });
 });
 
 describe('families', () => {
