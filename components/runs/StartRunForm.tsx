@@ -1,15 +1,21 @@
 // Start a run from a pasted PD code or braid word: the code is checked here with the knot
-// core (same messages as the server), then sent as a diagram; the result page opens.
-import { useState } from 'react';
+// core (same messages as the server), then sent as a diagram; the result page opens. Small
+// diagrams can also be computed on this device, offline (a web worker on web).
+import { useEffect, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { router } from 'expo-router';
-import { runPagePath, type StartRunRequest } from '@/shared/api/runs';
+import { runPagePath, type KhResultJson, type StartRunRequest } from '@/shared/api/runs';
 import { fromBraid, parseBraid } from '@/shared/knot/braid';
 import { parsePD } from '@/shared/knot/pd';
 import { useStartRun } from '@/hooks/queries/useRuns';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
+import { Section } from '@/components/ui/Section';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
+import { computeLocally, warmUpLocal } from './computeLocally';
+import { KhTable } from './KhTable';
+import { LOCAL_MAX_CROSSINGS } from './local-kh';
+import { KhSummary } from './RunResult';
 
 type Input = 'pd' | 'braid';
 const rings = ['Z', 'Q', 'F2', 'F3'] as const;
@@ -51,7 +57,22 @@ export function StartRunForm() {
   const [reduced, setReduced] = useState<'unreduced' | 'reduced'>('unreduced');
   const [kind, setKind] = useState<'kh' | 'sweep'>('kh');
   const [invalid, setInvalid] = useState<string | null>(null);
+  const [local, setLocal] = useState<{ fraction: number; result?: KhResultJson; error?: string } | null>(null);
   const start = useStartRun();
+  useEffect(warmUpLocal, []);
+  const computeHere = () => {
+    const body = request(input, code, ring, reduced === 'reduced', 0);
+    if (typeof body === 'string') return setInvalid(body);
+    const d = body.diagram!;
+    if (d.pd.length > LOCAL_MAX_CROSSINGS) {
+      return setInvalid(`On this device: at most ${LOCAL_MAX_CROSSINGS} crossings (this diagram has ${d.pd.length}); start a run on the server instead.`);
+    }
+    setInvalid(null);
+    setLocal({ fraction: 0 });
+    computeLocally({ pd: d.pd, unknots: d.unknots ?? 0, ring, reduced: reduced === 'reduced' }, (fraction) => setLocal((l) => (l && !l.result ? { ...l, fraction } : l)))
+      .then((result) => setLocal({ fraction: 1, result }))
+      .catch((err: Error) => setLocal({ fraction: 1, error: err.message }));
+  };
   const submit = () => {
     const body = request(input, code, ring, reduced === 'reduced', kind === 'sweep' ? 2 : 0);
     if (typeof body === 'string') return setInvalid(body);
@@ -79,6 +100,16 @@ export function StartRunForm() {
       <Choice label="Computation" options={['kh', 'sweep'] as const} value={kind} onChange={setKind} names={{ kh: 'Khovanov homology', sweep: 'Cable sweep, r+ + r- ≤ 2' }} />
       {start.error ? <Banner tone="error">{start.error.message}</Banner> : null}
       <Button label="Start run" busy={start.isPending} busyLabel="Starting…" onPress={submit} />
+      {kind === 'kh' ? (
+        <Button variant="secondary" label={`Compute on this device (up to ${LOCAL_MAX_CROSSINGS} crossings)`} busy={!!local && !local.result && !local.error} busyLabel="Computing on this device…" onPress={computeHere} />
+      ) : null}
+      {local?.error ? <Banner tone="error">{local.error}</Banner> : null}
+      {local?.result ? (
+        <Section title={`On this device: Khovanov homology over ${local.result.ring}${local.result.reduced ? ', reduced' : ''}`}>
+          <KhTable groups={local.result.groups} ring={local.result.ring} label="Khovanov homology on this device" />
+          <KhSummary result={local.result} />
+        </Section>
+      ) : null}
     </View>
   );
 }

@@ -94,3 +94,26 @@ test('a cable sweep shows a grid of small tables', async () => {
   }
   await shoot(page, 'runs-06-cable-sweep');
 }, 120_000);
+
+test('offline, a small diagram is computed on the device in a web worker', async () => {
+  await page.getByRole('link', { name: 'Runs', exact: true }).click();
+  await page.getByRole('heading', { name: 'Runs', exact: true }).waitFor();
+  await page.context().setOffline(true);
+  try {
+    await page.getByRole('radio', { name: 'Braid word' }).click();
+    await page.getByLabel('Braid word').fill('-1 -1 -1');
+    await page.getByRole('radio', { name: 'Z', exact: true }).click();
+    await page.getByRole('radio', { name: 'Khovanov homology' }).click();
+    await page.getByRole('button', { name: /Compute on this device/ }).click();
+    const table = page.getByRole('table', { name: 'Khovanov homology on this device' });
+    await table.waitFor({ timeout: 30_000 });
+    expect(page.workers().length).toBeGreaterThan(0); // the engine runs in a web worker, not on the page
+    // The negative trefoil is the mirror: torsion Z/2 moves from (3,7) to (1-3,-7) = (-2,-7)
+    // (mirror duality for Kh over Z, Khovanov 2000, math/9908171, Cor. 11).
+    await expect(table.getByRole('math', { name: 'Z/2' }).isVisible()).resolves.toBe(true);
+    await expect(table.getByRole('rowheader', { name: '-7', exact: true }).isVisible()).resolves.toBe(true);
+    await shoot(page, 'runs-07-on-device');
+  } finally {
+    await page.context().setOffline(false);
+  }
+}, 90_000);
