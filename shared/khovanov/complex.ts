@@ -78,7 +78,9 @@ export class TangleComplex<T> {
 
   /** d(a -> c) += factor (y o x) for x: a -> b and y: b -> c. */
   addComposite(a: number, b: number, c: number, x: Mor<T>, y: Mor<T>, factor: T): void {
-    const [ma, mb, mc] = [this.objs[a].mat, this.objs[b].mat, this.objs[c].mat];
+    const ma = this.objs[a].mat;
+    const mb = this.objs[b].mat;
+    const mc = this.objs[c].mat;
     const bySource = this.compositions.get(ma) ?? this.compositions.set(ma, new Map()).get(ma)!;
     const key = mc * this.matchings.length + mb;
     let comp = bySource.get(key);
@@ -87,14 +89,16 @@ export class TangleComplex<T> {
       bySource.set(key, comp);
     }
     const { ring } = this;
-    for (const [m1, c1] of x) {
-      for (const [m2, c2] of y) {
+    const { pieces, compPQ, compQR } = comp;
+    // forEach rather than for-of: no [key, value] pair is allocated per entry.
+    x.forEach((c1, m1) => {
+      y.forEach((c2, m2) => {
         const c12 = ring.mul(factor, ring.mul(c1, c2));
-        for (const [mask, k] of reduce(comp.pieces, dotsOf(comp.pieces.length, [comp.compPQ, comp.compQR], [m1, m2]))) {
+        for (const [mask, k] of reduce(pieces, dotsOf(pieces.length, [compPQ, compQR], [m1, m2]))) {
           this.addTerm(a, c, mask, k === 1 ? c12 : ring.mul(ring.fromInt(k), c12));
         }
-      }
-    }
+      });
+    });
   }
 
   entries(): number {

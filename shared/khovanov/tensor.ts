@@ -153,10 +153,10 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
   const connect = (from: number[], to: number[], g: Gluing, f: Mor<T>, sign: T): void => {
     from.forEach((source, sigma) => {
       to.forEach((target, tau) => {
-        for (const [mask, c] of f) {
+        f.forEach((c, mask) => {
           const sc = ring.mul(sign, c);
           for (const [m, k] of surface(g, mask, sigma, tau)) cx.addTerm(source, target, m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
-        }
+        });
       });
     });
   };
