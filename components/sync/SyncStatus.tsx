@@ -1,5 +1,6 @@
-// The visible sync status (sync/SPEC.md S31) with "Sync now".
+// The visible sync status (sync/SPEC.md S31) with "Sync now"; in conflict it opens them.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { router } from 'expo-router';
 import { colors, radius, space, type } from '@/constants/theme';
 import { useSyncStatus } from '@/hooks/useDevice';
 import type { SyncStatus as Status } from '@/sync/status';
@@ -16,9 +17,16 @@ export function SyncStatus() {
   const t = tone(status);
   return (
     <View style={styles.row} accessibilityLiveRegion="polite">
-      <View style={[styles.pill, { backgroundColor: t.bg }]} testID="sync-status">
+      <Pressable
+        testID="sync-status"
+        role={status.kind === 'conflict' ? 'link' : undefined}
+        accessibilityLabel={status.kind === 'conflict' ? `${label}: open them` : label}
+        disabled={status.kind !== 'conflict'}
+        onPress={() => router.push('/sketches/conflicts' as never)}
+        style={[styles.pill, { backgroundColor: t.bg }]}
+      >
         <Text style={[styles.text, { color: t.fg }]}>{label}</Text>
-      </View>
+      </Pressable>
       {status.kind !== 'syncing' ? (
         <Pressable role="button" accessibilityLabel="Sync now" onPress={() => void syncNow()} style={styles.action}>
           <Text style={styles.actionText}>Sync now</Text>

@@ -11,24 +11,7 @@ import { useSyncStatus } from '@/hooks/useDevice';
 import { SyncStatus } from '@/components/sync/SyncStatus';
 import { openDevice } from '@/lib/store/device';
 
-jest.mock('@/lib/store/device', () => {
-  const { LocalStore } = jest.requireActual('@/lib/store/local-store');
-  const { memoryTables } = jest.requireActual('@/lib/store/memory');
-  const { createSyncStatusStore } = jest.requireActual('@/lib/sync/status-store');
-  const { autoSync } = jest.requireActual('@/lib/sync/autosync');
-  let n = 0;
-  const store = new LocalStore(memoryTables(), { newId: () => `00000000-0000-4000-8000-${String(++n).padStart(12, '0')}` });
-  const engine = { start: jest.fn(), stop: jest.fn(), setOnline: jest.fn(), syncNow: jest.fn(async () => undefined) };
-  const syncStatus = createSyncStatusStore();
-  const opened = Promise.resolve({ userId: 'u1', store, engine });
-  let started = false;
-  const openDevice = () => {
-    if (!started) autoSync(store, engine, syncStatus); // as the real openDevice does
-    started = true;
-    return opened;
-  };
-  return { __esModule: true, syncStatus, openDevice, stopDevices: () => undefined };
-});
+jest.mock('@/lib/store/device', () => jest.requireActual('./device-mock').deviceMock());
 
 function Sketchbook() {
   const list = useLocalSketches();
