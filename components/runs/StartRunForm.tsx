@@ -4,6 +4,7 @@
 import { useEffect, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { router } from 'expo-router';
+import { isApiError } from '@/lib/api';
 import { runPagePath, type KhResultJson, type StartRunRequest } from '@/shared/api/runs';
 import { fromBraid, parseBraid } from '@/shared/knot/braid';
 import { parsePD } from '@/shared/knot/pd';
@@ -50,9 +51,11 @@ function request(input: Input, code: string, ring: string, reduced: boolean, swe
   }
 }
 
-export function StartRunForm() {
+/** `sketchId` (from the Slate's "Start run"): the run is on that sketch as the server has it. */
+export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sketchId?: string }) {
   const [input, setInput] = useState<Input>('pd');
-  const [code, setCode] = useState('');
+  const [code, setCode] = useState(initialPD ?? '');
+  const [onSketch, setOnSketch] = useState(!!sketchId);
   const [ring, setRing] = useState<(typeof rings)[number]>('Z');
   const [reduced, setReduced] = useState<'unreduced' | 'reduced'>('unreduced');
   const [kind, setKind] = useState<'kh' | 'sweep'>('kh');
@@ -77,10 +80,18 @@ export function StartRunForm() {
     const body = request(input, code, ring, reduced === 'reduced', kind === 'sweep' ? 2 : 0);
     if (typeof body === 'string') return setInvalid(body);
     setInvalid(null);
-    start.mutate(body, { onSuccess: (run) => router.push(runPagePath(run.id) as never) });
+    const open = { onSuccess: (run: { id: string }) => router.push(runPagePath(run.id) as never) };
+    if (!onSketch || !sketchId) return start.mutate(body, open);
+    const { diagram: _d, label: _l, ...rest } = body;
+    start.mutate({ ...rest, sketchId }, {
+      ...open,
+      // Not synced to the server yet: run the code as pasted instead.
+      onError: (err) => isApiError(err, 'not_found') && (setOnSketch(false), start.mutate(body, open)),
+    });
   };
   return (
     <View style={styles.form}>
+      {onSketch ? <Banner tone="info">On the sketch as it was last synced to the server; its PD code is below.</Banner> : null}
       <Choice label="Input" options={['pd', 'braid'] as const} value={input} onChange={setInput} names={{ pd: 'PD code', braid: 'Braid word' }} />
       <View style={styles.field}>
         <Text style={styles.label}>{input === 'pd' ? 'PD code' : 'Braid word'}</Text>
@@ -98,7 +109,7 @@ export function StartRunForm() {
       <Choice label="Ring" options={rings} value={ring} onChange={setRing} />
       <Choice label="Homology" options={['unreduced', 'reduced'] as const} value={reduced} onChange={setReduced} names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} />
       <Choice label="Computation" options={['kh', 'sweep'] as const} value={kind} onChange={setKind} names={{ kh: 'Khovanov homology', sweep: 'Cable sweep, r+ + r- ≤ 2' }} />
-      {start.error ? <Banner tone="error">{start.error.message}</Banner> : null}
+      {start.error && !(onSketch && isApiError(start.error, 'not_found')) ? <Banner tone="error">{start.error.message}</Banner> : null}
       <Button label="Start run" busy={start.isPending} busyLabel="Starting…" onPress={submit} />
       {kind === 'kh' ? (
         <Button variant="secondary" label={`Compute on this device (up to ${LOCAL_MAX_CROSSINGS} crossings)`} busy={!!local && !local.result && !local.error} busyLabel="Computing on this device…" onPress={computeHere} />

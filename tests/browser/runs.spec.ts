@@ -2,10 +2,12 @@
 // word, watch the progress bar move, open the result table; a second run from a PD code shows
 // the trefoil's torsion typeset. Screenshots at phone and wide size (tests/artifacts/runs-*).
 import type { Browser, Page } from 'playwright-core';
+import { fromBraid } from '@/shared/knot/braid';
 import { PHONE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
 
 let browser: Browser;
 let page: Page;
+const me = { email: uniqueEmail('runa'), password: 'correct horse 3' };
 
 beforeAll(async () => {
   browser = await launch();
@@ -14,8 +16,8 @@ beforeAll(async () => {
   await page.getByRole('heading', { name: 'Sign in', exact: true }).waitFor();
   await page.getByRole('link', { name: 'Create an account' }).click();
   await page.getByLabel('Name').fill('Runa Okafor');
-  await page.getByLabel('E-mail').fill(uniqueEmail('runa'));
-  await page.getByLabel('Password').fill('correct horse 3');
+  await page.getByLabel('E-mail').fill(me.email);
+  await page.getByLabel('Password').fill(me.password);
   await page.getByRole('button', { name: 'Create account' }).click();
   await page.getByRole('heading', { name: 'Sketches', exact: true }).waitFor();
 });
@@ -116,4 +118,25 @@ test('offline, a small diagram is computed on the device in a web worker', async
   } finally {
     await page.context().setOffline(false);
   }
+}, 90_000);
+
+test('from a sketch on the server: the Slate opens Runs with the sketch, the run carries its title', async () => {
+  const post = (path: string, body: unknown, token?: string) =>
+    fetch(baseUrl + path, { method: 'POST', headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) }, body: JSON.stringify(body) });
+  const { token } = await (await post('/api/auth/login', me)).json();
+  const id = `sketch-${Date.now().toString(36)}`;
+  const now = new Date().toISOString();
+  const pd = fromBraid([1, -2, 1, -2]).pd; // the figure-eight knot as a closed braid (common practice)
+  const fields = { title: 'Figure-eight from the board', seenAt: '', notes: '', tags: [], diagram: { pd, unknots: 0, framings: [null], strokes: [] }, attachments: [], createdAt: now, updatedAt: now, groupId: null, deleted: false };
+  const pushed = await post('/api/sync/push', { deviceId: 'browser-spec', mutations: [{ mutationId: crypto.randomUUID(), deviceId: 'browser-spec', clock: 1, recordId: id, type: 'sketch', op: 'add', baseVersion: 0, fields }] }, token);
+  expect(pushed.status).toBe(200);
+
+  await page.goto(`${baseUrl}/runs?sketchId=${id}&pd=${encodeURIComponent(JSON.stringify(pd))}`);
+  await page.getByText('On the sketch as it was last synced to the server').waitFor();
+  await expect(page.getByLabel('PD code').inputValue()).resolves.toBe(JSON.stringify(pd));
+  await page.getByRole('button', { name: 'Start run' }).click();
+  await page.getByRole('heading', { name: 'Figure-eight from the board' }).waitFor();
+  await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 60_000 });
+  await page.getByRole('table', { name: 'Khovanov homology' }).waitFor();
+  await shoot(page, 'runs-08-from-sketch');
 }, 90_000);

@@ -1,5 +1,7 @@
 // Runs: my heavy computations on the group server (polled while any is running), and a form
-// to start one from a pasted PD code or braid word.
+// to start one from a pasted PD code or braid word, or from a sketch (?sketchId=&pd=, the Slate's
+// "Start run").
+import { useLocalSearchParams } from 'expo-router';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { EmptyState } from '@/components/ui/EmptyState';
@@ -13,6 +15,7 @@ import { useMyRuns } from '@/hooks/queries/useRuns';
 import { colors } from '@/constants/theme';
 
 export default function RunsScreen() {
+  const { pd, sketchId } = useLocalSearchParams<{ pd?: string; sketchId?: string }>();
   const runs = useMyRuns();
   const wide = useIsWide();
   return (
@@ -27,7 +30,7 @@ export default function RunsScreen() {
       ) : null}
       {runs.data && runs.data.length > 0 ? <RunsTable runs={runs.data} wide={wide} /> : null}
       <Section title="Start a run" note="Paste a PD code or a braid word; the server computes it and mails you when it is done.">
-        <StartRunForm />
+        <StartRunForm key={sketchId ?? ''} initialPD={pd} sketchId={sketchId} />
       </Section>
     </Screen>
   );
