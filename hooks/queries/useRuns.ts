@@ -6,16 +6,20 @@ import { api } from '@/lib/api';
 
 export const runKeys = {
   all: () => ['runs'] as const,
-  mine: () => [...runKeys.all(), 'mine'] as const,
+  list: (scope: RunScope) => [...runKeys.all(), 'list', scope] as const,
   detail: (id: string) => [...runKeys.all(), 'detail', id] as const,
 };
 
 const POLL_MS = 1000;
 
-export function useMyRuns() {
+/** 'mine', or a group's id: that group's runs. */
+export type RunScope = 'mine' | { groupId: string };
+
+export function useRunList(scope: RunScope) {
+  const query = scope === 'mine' ? 'mine=1' : `groupId=${encodeURIComponent(scope.groupId)}`;
   return useQuery({
-    queryKey: runKeys.mine(),
-    queryFn: () => api('GET', `${runPaths.runs}?mine=1`, RunList),
+    queryKey: runKeys.list(scope),
+    queryFn: () => api('GET', `${runPaths.runs}?${query}`, RunList),
     refetchInterval: (q) => (q.state.data?.some((r) => !isFinished(r.status)) ? POLL_MS : false),
   });
 }
@@ -34,7 +38,7 @@ export function useStartRun() {
     mutationFn: (body: StartRunRequest) => api('POST', runPaths.runs, RunDetail, body),
     onSuccess: (run) => {
       qc.setQueryData(runKeys.detail(run.id), run);
-      return qc.invalidateQueries({ queryKey: runKeys.mine() });
+      return qc.invalidateQueries({ queryKey: [...runKeys.all(), 'list'] });
     },
   });
 }
@@ -45,7 +49,7 @@ export function useCancelRun(id: string) {
     mutationFn: () => api('POST', runPaths.cancel(id), RunDetail),
     onSuccess: (run) => {
       qc.setQueryData(runKeys.detail(id), run);
-      return qc.invalidateQueries({ queryKey: runKeys.mine() });
+      return qc.invalidateQueries({ queryKey: [...runKeys.all(), 'list'] });
     },
   });
 }
