@@ -69,7 +69,16 @@ export async function appendChange(db: Db, seq: number, record: SyncRecord, grou
     groupId,
     prevGroupId: prevGroupId === groupId ? null : prevGroupId,
     snapshot: record,
+    superseded: false,
   };
+  // S15a: older changes of this record that moved no scope are no longer worth pulling.
+  await db
+    .getRepository(SyncChange)
+    .createQueryBuilder()
+    .update()
+    .set({ superseded: true })
+    .where('recordType = :t AND recordId = :id AND prevGroupId IS NULL AND superseded = :no', { t: record.type, id: record.id, no: false })
+    .execute();
   // TypeORM's deep-partial type cannot map the snapshot's unknown-valued fields; the row is whole.
   await db.getRepository(SyncChange).insert(row as object);
 }
@@ -83,7 +92,10 @@ export function whereVisible<T extends ObjectLiteral>(qb: SelectQueryBuilder<T>,
 
 const visibleChanges = (db: Db, v: Viewer, after: number, upTo: number) =>
   whereVisible(
-    db.getRepository(SyncChange).createQueryBuilder('c').where('c.seq > :after AND c.seq <= :upTo', { after, upTo }),
+    db
+      .getRepository(SyncChange)
+      .createQueryBuilder('c')
+      .where('c.seq > :after AND c.seq <= :upTo AND c.superseded = :no', { after, upTo, no: false }),
     'c',
     v,
     ['groupId', 'prevGroupId'],

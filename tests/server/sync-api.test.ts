@@ -55,6 +55,15 @@ describe('push and pull', () => {
     expect(new Set(seqs).size).toBe(seqs.length);
   });
 
+  test('S15a: a record edited many times is pulled once, in its last state', async () => {
+    const id = randomUUID();
+    await push(server, ann.token, 'ann-phone', [mutation('ann-phone', 20, id, 'add', sketchFields({ notes: 'v0' }))]);
+    for (let i = 1; i <= 4; i++) await push(server, ann.token, 'ann-phone', [mutation('ann-phone', 20 + i, id, 'update', { notes: `v${i}` })]);
+    const mine = (await pullAll(server, ann.token)).changes.filter((c) => 'record' in c && c.record.id === id);
+    expect(mine).toHaveLength(1);
+    expect(mine[0]).toMatchObject({ record: { fields: { notes: 'v4' } } });
+  });
+
   test('S15: an up-to-date pull is empty, hasMore false, cursor unchanged', async () => {
     const { cursor } = await pullAll(server, bob.token);
     const res = await request(server.url).get(`/api/sync/pull?cursor=${cursor}`).set(bearer(bob.token));
@@ -130,14 +139,16 @@ describe('authorisation (S22-S24)', () => {
     await push(server, bob.token, 'bob-laptop', [mutation('bob-laptop', 2, id, 'add', sketchFields({ groupId: group, title: 'secret later' }))]);
     const { cursor } = await pullAll(server, eve.token);
     await push(server, bob.token, 'bob-laptop', [mutation('bob-laptop', 3, id, 'update', { groupId: null, notes: 'private now' })]);
+    await push(server, bob.token, 'bob-laptop', [mutation('bob-laptop', 4, id, 'update', { notes: 'and edited after' })]); // S15a keeps the revoke
     const res = await request(server.url).get(`/api/sync/pull?cursor=${cursor}`).set(bearer(eve.token));
     const page = PullResponse.parse(res.body);
     expect(page.changes).toEqual([{ seq: expect.any(Number), revoked: { id, type: 'sketch' } }]);
     expect(JSON.stringify(page)).not.toContain('private now');
+    expect(JSON.stringify(page)).not.toContain('and edited after');
   });
 
   test('S12: a mutation id of another user is rejected, not answered with their result', async () => {
-    const m = mutation('bob-laptop', 4, randomUUID(), 'add', sketchFields());
+    const m = mutation('bob-laptop', 5, randomUUID(), 'add', sketchFields());
     await push(server, bob.token, 'bob-laptop', [m]);
     const [r] = await push(server, eve.token, 'bob-laptop', [{ ...m }]);
     expect(r).toMatchObject({ status: 'rejected', reason: 'forbidden' });

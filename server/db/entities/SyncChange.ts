@@ -3,6 +3,7 @@ import type { RecordType, SyncRecord } from '@/shared/api/sync';
 
 /** The changes log (sync/SPEC.md S9, S10): one row per accepted change, in seq order. */
 @Entity('sync_changes')
+@Index(['recordType', 'recordId'])
 export class SyncChange {
   @PrimaryColumn({ type: 'integer' })
   seq: number;
@@ -28,4 +29,8 @@ export class SyncChange {
 
   @Column({ type: 'simple-json' })
   snapshot: SyncRecord;
+
+  /** A later change of the same record exists and this one moved no scope: pulls skip it. */
+  @Column({ type: 'boolean', default: false })
+  superseded: boolean;
 }

@@ -4,5 +4,6 @@ import { Foundation1796145751477 } from './1796145751477-Foundation';
 import { Sync1796145952708 } from './1796145952708-Sync';
 import { Feed1796146642029 } from './1796146642029-Feed';
 import { Runs1796147000000 } from './1796147000000-Runs';
+import { SyncCompaction1796148686557 } from './1796148686557-SyncCompaction';
 
-export const migrations = [Foundation1796145751477, Sync1796145952708, Feed1796146642029, Runs1796147000000];
+export const migrations = [Foundation1796145751477, Sync1796145952708, Feed1796146642029, Runs1796147000000, SyncCompaction1796148686557];
