@@ -54,8 +54,8 @@ test('start a run from a braid word, watch its progress, read the table', async 
   await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 90_000 });
   const table = page.getByRole('table', { name: 'Khovanov homology' });
   await table.waitFor();
-  // T(6,7) is a positive braid knot: Kh^{0,*} over Q is Q at j = s -+ 1, s = (p-1)(q-1) = 30
-  // (Rasmussen 2004, math/0402131; Stosic 2006, math/0511529).
+  // T(6,7) is a positive braid knot: Kh^{0,*} over Q is Q at j = s -+ 1 (from memory, Stosic on
+  // positive braid knots), s = (p-1)(q-1) = 30 (Rasmussen 2004, math/0402131).
   await expect(table.getByRole('rowheader', { name: '29', exact: true }).isVisible()).resolves.toBe(true);
   await expect(page.getByText('as the Jones polynomial says ✓').isVisible()).resolves.toBe(true);
   await shoot(page, 'runs-03-result');
@@ -111,7 +111,7 @@ test('offline, a small diagram is computed on the device in a web worker', async
     await table.waitFor({ timeout: 30_000 });
     expect(page.workers().length).toBeGreaterThan(0); // the engine runs in a web worker, not on the page
     // The negative trefoil is the mirror: torsion Z/2 moves from (3,7) to (1-3,-7) = (-2,-7)
-    // (mirror duality for Kh over Z, Khovanov 2000, math/9908171, Cor. 11).
+    // (mirror duality of Kh over Z, Khovanov 2000, math/9908171, as stated in issue 4).
     await expect(table.getByRole('math', { name: 'Z/2' }).isVisible()).resolves.toBe(true);
     await expect(table.getByRole('rowheader', { name: '-7', exact: true }).isVisible()).resolves.toBe(true);
     await shoot(page, 'runs-07-on-device');

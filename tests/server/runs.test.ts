@@ -163,9 +163,9 @@ describe('a restart', () => {
     server = await testServer({ dbPath, config: { runs: limits({}) } });
     const [ra, rb] = [await waitFor(server, token, a.id, ended, 120_000), await waitFor(server, token, b.id, ended)];
     expect([ra.status, rb.status]).toEqual(['done', 'done']);
-    // T(6,7) is a positive braid closure: Kh^{0,*} is Z at j = s - 1 and s + 1 with s = (p-1)(q-1)
-    // = 30 (Stosic, "Positivity of Khovanov homology of positive braid knots", 2006, math/0511529;
-    // Rasmussen s of positive knots: Rasmussen 2004, math/0402131).
+    // T(6,7) is a positive braid knot: Kh^{0,*} is Z at j = s - 1 and s + 1 (from memory: a
+    // result of Stosic on positive braid knots) with s = (p-1)(q-1) = 30, Rasmussen's invariant
+    // of the torus knot (Rasmussen, "Khovanov homology and the slice genus", 2004, math/0402131).
     expect(ra.result!.groups.filter((g) => g.i === 0)).toEqual([
       { i: 0, j: 29, free: 1, torsion: [] },
       { i: 0, j: 31, free: 1, torsion: [] },
