@@ -19,9 +19,10 @@ export const shortcutList: readonly [string, string][] = [
   ['?', 'Show this list'],
 ];
 
-export function useSlateShortcuts(on: { help: () => void; paste: () => void }) {
+/** `enabled` is false while a dialog is open: its keys are its own (Escape closes it). */
+export function useSlateShortcuts(on: { help: () => void; paste: () => void }, enabled: boolean) {
   useEffect(() => {
-    if (Platform.OS !== 'web' || typeof window === 'undefined') return;
+    if (!enabled || Platform.OS !== 'web' || typeof window === 'undefined') return;
     const onKey = (e: KeyboardEvent) => {
       const t = e.target as HTMLElement | null;
       if (t && (t.tagName === 'INPUT' || t.tagName === 'TEXTAREA' || t.isContentEditable)) return;
@@ -49,5 +50,5 @@ export function useSlateShortcuts(on: { help: () => void; paste: () => void }) {
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [on]);
+  }, [on, enabled]);
 }

@@ -1,5 +1,6 @@
 // A centred card over a dimmed screen (Modal): the paste, families, framing and details forms.
-import { Modal, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { useEffect } from 'react';
+import { Modal, Platform, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '@/constants/theme';
 
 export function Dialog({ title, visible, onClose, children, wide = false }: {
@@ -9,6 +10,13 @@ export function Dialog({ title, visible, onClose, children, wide = false }: {
   children: React.ReactNode;
   wide?: boolean;
 }) {
+  // Web: Escape closes (react-native-web's Modal does not listen for it).
+  useEffect(() => {
+    if (!visible || Platform.OS !== 'web' || typeof window === 'undefined') return;
+    const onKey = (e: KeyboardEvent) => e.key === 'Escape' && onClose();
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [visible, onClose]);
   return (
     <Modal transparent visible={visible} animationType="fade" onRequestClose={onClose}>
       <View style={styles.scrim}>
@@ -49,8 +57,8 @@ export function Choice<T extends string>({ label, options, value, onChange }: {
 }
 
 const styles = StyleSheet.create({
-  scrim: { flex: 1, backgroundColor: 'rgba(28,34,39,0.45)', alignItems: 'center', justifyContent: 'center', padding: space.lg },
-  card: { width: '100%', maxHeight: '90%', backgroundColor: colors.surface, borderRadius: radius.lg, overflow: 'hidden', boxShadow: '0 12px 40px rgba(28,34,39,0.25)' } as object,
+  scrim: { flex: 1, backgroundColor: 'rgba(28,34,39,0.45)', alignItems: 'center', justifyContent: 'center', paddingHorizontal: space.lg, paddingVertical: 64 },
+  card: { width: '100%', maxHeight: '100%', backgroundColor: colors.surface, borderRadius: radius.lg, overflow: 'hidden', boxShadow: '0 12px 40px rgba(28,34,39,0.25)' } as object,
   head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', paddingLeft: space.xl, paddingRight: space.sm, paddingTop: space.md, borderBottomWidth: 1, borderBottomColor: colors.line, paddingBottom: space.sm },
   title: { ...type.title, color: colors.ink },
   close: { width: 44, height: 44, alignItems: 'center', justifyContent: 'center' },

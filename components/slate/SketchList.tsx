@@ -26,7 +26,7 @@ function Row({ sketch, active }: { sketch: LocalSketch; active: boolean }) {
       <View style={styles.text}>
         <Text style={styles.title} numberOfLines={1}>{sketch.title || 'Untitled sketch'}</Text>
         <Text style={styles.meta} numberOfLines={1}>
-          {drawn ? `${s.crossings} crossing${s.crossings === 1 ? '' : 's'}` : 'Nothing drawn yet'} · {when(sketch.updatedAt)}
+          {drawn ? `${s.crossings} crossing${s.crossings === 1 ? '' : 's'}` : sketch.diagram.strokes.length ? 'Unfinished drawing' : 'Nothing drawn yet'} · {when(sketch.updatedAt)}
           {sketch.pending ? ' · not synced' : ''}
         </Text>
         {s.jones ? (

@@ -43,10 +43,11 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
 
   // A document from outside (opened, pasted, built) is fitted into the board once it has a size.
   useEffect(() => {
-    if (size.width === 0) return;
-    const points = useSlate.getState().history.present.sketch.components.flatMap((c) => c.points);
-    if (points.length) useSlate.getState().setView(fitView(points, size.width, size.height));
-  }, [fitRequest, size.width > 0]); // eslint-disable-line react-hooks/exhaustive-deps
+    const s = useSlate.getState();
+    if (size.width === 0 || s.fitted === fitRequest) return;
+    const points = s.history.present.sketch.components.flatMap((c) => c.points);
+    s.markFitted(fitRequest, points.length ? fitView(points, size.width, size.height) : s.view);
+  }, [fitRequest, size]);
 
   const begin = (screen: Point) => {
     const s = useSlate.getState();

@@ -2,7 +2,7 @@
 // pane on a wide screen), the dialogs, keyboard shortcuts, and saving to the device store.
 import { useCallback, useEffect, useMemo, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
-import { router } from 'expo-router';
+import { router, useFocusEffect } from 'expo-router';
 import * as Clipboard from 'expo-clipboard';
 import { analyse } from '@/shared/drawing/analyse';
 import { setFraming } from '@/shared/drawing/sketch';
@@ -36,9 +36,12 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const wide = useIsWide();
   const { height } = useWindowDimensions();
   const ready = useSlate((s) => s.sketchId === sketch.id);
-  useEffect(() => {
-    if (useSlate.getState().sketchId !== sketch.id) useSlate.getState().open(sketch.id, docFromStored(sketch.diagram));
-  }, [sketch.id]); // eslint-disable-line react-hooks/exhaustive-deps
+  // The Slate's state is one store: the screen in focus owns it (a stack may hold several).
+  useFocusEffect(
+    useCallback(() => {
+      if (useSlate.getState().sketchId !== sketch.id) useSlate.getState().open(sketch.id, docFromStored(sketch.diagram));
+    }, [sketch.id]), // eslint-disable-line react-hooks/exhaustive-deps
+  );
   useSlateAutosave(ready ? sketch.id : null);
 
   const doc = useSlate(currentDoc);
@@ -56,7 +59,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   }, [message]);
 
   const shortcuts = useMemo(() => ({ help: () => setOpen('help'), paste: () => setOpen('paste') }), []);
-  useSlateShortcuts(shortcuts);
+  useSlateShortcuts(shortcuts, ready && open === null);
 
   const numberOf = useCallback((id: string) => {
     const k = analysis.diagram?.componentIds.indexOf(id) ?? -1;
@@ -134,14 +137,15 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
 
   const board = (
     <>
-      <Toolbar showKeys={wide} />
+      <Toolbar />
       <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: Math.max(320, Math.round(height * 0.5)) }]}>
-        {ready ? <SlateCanvas analysis={analysis} onFraming={(id) => setOpen({ framing: id })} /> : null}
+        <SlateCanvas analysis={analysis} onFraming={(id) => setOpen({ framing: id })} />
       </View>
       <SelectionBar numberOf={numberOf} onFraming={(id) => setOpen({ framing: id })} />
     </>
   );
 
+  if (!ready) return <View style={styles.root} />;
   return (
     <View style={styles.root}>
       {wide ? (
@@ -190,7 +194,7 @@ const styles = StyleSheet.create({
   root: { flex: 1, backgroundColor: colors.paper },
   split: { flex: 1, flexDirection: 'row' },
   main: { flex: 1 },
-  side: { width: 360, flexGrow: 0, borderLeftWidth: 1, borderLeftColor: colors.line, backgroundColor: colors.surface },
+  side: { width: 330, flexGrow: 0, borderLeftWidth: 1, borderLeftColor: colors.line, backgroundColor: colors.surface },
   sideContent: { padding: space.xl, gap: space.lg },
   phone: { paddingBottom: space.xxxl },
   phoneReadout: { padding: space.lg + 4, gap: space.lg },

@@ -4,26 +4,25 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { deleteComponent, reverseComponent } from '@/shared/drawing/sketch';
 import { colourOf } from '@/lib/slate/picture';
 import { redoable, undoable, useSlate, type Tool } from '@/lib/slate/slate-store';
-import { chalk, colors, fonts, radius, space, type } from '@/constants/theme';
+import { chalk, colors, radius, space, type } from '@/constants/theme';
 
-const tools: { tool: Tool; label: string; key: string }[] = [
-  { tool: 'draw', label: 'Draw', key: 'D' },
-  { tool: 'flip', label: 'Flip', key: 'F' },
-  { tool: 'move', label: 'Move', key: 'M' },
-  { tool: 'reshape', label: 'Reshape', key: 'R' },
+const tools: { tool: Tool; label: string }[] = [
+  { tool: 'draw', label: 'Draw' },
+  { tool: 'flip', label: 'Flip' },
+  { tool: 'move', label: 'Move' },
+  { tool: 'reshape', label: 'Reshape' },
 ];
 
-function Chip({ label, text, onPress, on = false, disabled = false, hint }: { label: string; text?: string; onPress: () => void; on?: boolean; disabled?: boolean; hint?: string }) {
+function Chip({ label, text, onPress, on = false, disabled = false }: { label: string; text?: string; onPress: () => void; on?: boolean; disabled?: boolean }) {
   return (
     <Pressable role="button" accessibilityLabel={label} aria-pressed={on} aria-disabled={disabled} disabled={disabled} onPress={onPress}
       style={({ pressed }) => [styles.chip, on && styles.chipOn, pressed && styles.chipPressed, disabled && styles.disabled]}>
       <Text style={[styles.chipText, on && styles.chipTextOn, text !== undefined && styles.symbol]}>{text ?? label}</Text>
-      {hint ? <Text style={[styles.key, on && styles.chipTextOn]}>{hint}</Text> : null}
     </Pressable>
   );
 }
 
-export function Toolbar({ showKeys }: { showKeys: boolean }) {
+export function Toolbar() {
   const tool = useSlate((s) => s.tool);
   const canUndo = useSlate(undoable);
   const canRedo = useSlate(redoable);
@@ -32,7 +31,7 @@ export function Toolbar({ showKeys }: { showKeys: boolean }) {
     <View style={styles.bar}>
       <View style={styles.group} role="radiogroup" aria-label="Tool">
         {tools.map((t) => (
-          <Chip key={t.tool} label={t.label} on={tool === t.tool} onPress={() => s.setTool(t.tool)} hint={showKeys ? t.key : undefined} />
+          <Chip key={t.tool} label={t.label} on={tool === t.tool} onPress={() => s.setTool(t.tool)} />
         ))}
       </View>
       <View style={styles.group}>
@@ -72,15 +71,14 @@ export function SelectionBar({ numberOf, onFraming }: { numberOf: (id: string) =
 }
 
 const styles = StyleSheet.create({
-  bar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm, paddingHorizontal: space.sm + 2, paddingVertical: space.sm, backgroundColor: colors.paper },
+  bar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm, paddingHorizontal: space.sm, paddingVertical: space.sm, backgroundColor: colors.paper },
   group: { flexDirection: 'row', flexWrap: 'wrap', gap: 4 },
-  chip: { flexDirection: 'row', alignItems: 'center', gap: 5, minHeight: 40, minWidth: 40, justifyContent: 'center', paddingHorizontal: 10, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  chip: { flexDirection: 'row', alignItems: 'center', gap: 5, minHeight: 40, minWidth: 38, justifyContent: 'center', paddingHorizontal: 9, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
   chipOn: { backgroundColor: colors.ink, borderColor: colors.ink },
   chipPressed: { backgroundColor: colors.accentSoft },
   chipText: { ...type.label, color: colors.ink },
   chipTextOn: { color: colors.paper },
   symbol: { fontSize: 18, lineHeight: 22 },
-  key: { fontFamily: fonts.mono, fontSize: 11, color: colors.inkFaint },
   disabled: { opacity: 0.4 },
   selection: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.sunken, borderTopWidth: 1, borderTopColor: colors.line },
   selText: { ...type.label, color: colors.ink },

@@ -30,6 +30,8 @@ export interface SlateState {
   braid: { word: number[]; doc: SlateDoc } | null;
   /** Bumped when a document arrives from outside (load, paste, family), to refit the view. */
   fitRequest: number;
+  /** The last fitRequest the canvas honoured (a remounted canvas keeps the view). */
+  fitted: number;
   open(id: string | null, doc: SlateDoc): void;
   /** Replace the drawing from a code or family (one undo step); the view refits. */
   replace(doc: SlateDoc, braid?: number[]): void;
@@ -42,6 +44,8 @@ export interface SlateState {
   setView(view: View): void;
   /** Refit the view to the drawing. */
   fit(): void;
+  /** The canvas fitted the view for this request. */
+  markFitted(request: number, view: View): void;
 }
 
 export const useSlate = create<SlateState>((set, get) => ({
@@ -54,6 +58,7 @@ export const useSlate = create<SlateState>((set, get) => ({
   view: identityView,
   braid: null,
   fitRequest: 0,
+  fitted: -1,
   open: (sketchId, doc) =>
     set((s) => ({ sketchId, history: historyOf(doc), opened: doc, view: identityView, preview: null, selected: null, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
   replace: (doc, braid) =>
@@ -66,6 +71,7 @@ export const useSlate = create<SlateState>((set, get) => ({
   select: (selected) => set({ selected }),
   setView: (view) => set({ view }),
   fit: () => set((s) => ({ fitRequest: s.fitRequest + 1 })),
+  markFitted: (fitted, view) => set({ fitted, view }),
 }));
 
 /** What the canvas draws: the drag preview if any, else the present. */

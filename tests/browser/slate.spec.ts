@@ -172,4 +172,52 @@ test('details are saved and shown in the sketchbook; shortcuts undo on a wide sc
   await page.keyboard.press('?');
   await page.getByText('Delete the selected component').waitFor();
   await page.keyboard.press('Escape');
+  await page.getByText('Delete the selected component').waitFor({ state: 'detached' });
+});
+
+async function stroke(p: Page, pts: P[]) {
+  await p.mouse.move(pts[0].x, pts[0].y);
+  await p.mouse.down();
+  for (const q of pts.slice(1)) await p.mouse.move(q.x, q.y);
+  await p.mouse.up();
+}
+
+const circle = (c: P, r: number, samples = 120): P[] =>
+  Array.from({ length: samples + 1 }, (_, i) => ({ x: c.x + r * Math.cos((2 * Math.PI * i) / samples), y: c.y + r * Math.sin((2 * Math.PI * i) / samples) }));
+
+test('touching strands get a marker; two circles make a link; a component is selected and deleted', async () => {
+  await page.getByRole('button', { name: 'New sketch' }).first().click();
+  await page.getByText('Draw a strand. End it where it began to close it.').waitFor();
+  const box = (await page.getByTestId('slate-canvas').boundingBox())!;
+  const c = { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+  await stroke(page, circle({ x: c.x - 50, y: c.y }, 60));
+  await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
+  // A second circle tangent to the first: no clean crossing, so a marker and no values.
+  await stroke(page, circle({ x: c.x + 70, y: c.y }, 60));
+  await page.getByText(/spots? needs? attention/).waitFor();
+  await shoot(page, 'slate-marker');
+  await page.keyboard.press('Control+z');
+  await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
+
+  // Overlapping circles: two crossings, the second circle under at both: a split unlink.
+  await stroke(page, circle({ x: c.x + 30, y: c.y }, 60));
+  await page.getByTestId('readout-crossings-count').getByText('2 crossings').waitFor();
+  await settled(page);
+  // Linking number = half the sum of the signs between the components (Rolfsen 5.D): 0 here.
+  await page.getByText('lk(1,2) = 0').waitFor();
+  // Flip one crossing (circles of radius 60 at distance 80 meet at x = -10, y = +-sqrt(3600 - 1600)):
+  // the Hopf link, linking number +-1.
+  await page.getByRole('button', { name: 'Flip' }).click();
+  await page.mouse.click(c.x - 10, c.y - Math.sqrt(3600 - 1600));
+  await page.getByText(/lk\(1,2\) = [+−]1/).waitFor();
+  await shoot(page, 'slate-hopf');
+
+  // Select the second circle at its lowest point, then delete it with the Delete key.
+  await page.getByRole('button', { name: 'Draw' }).click();
+  await page.mouse.click(c.x + 30, c.y + 60);
+  await page.getByTestId('selection-bar').getByText(/Component [12]/).waitFor();
+  await page.getByRole('radio', { name: 'Colour 3' }).click();
+  await page.keyboard.press('Delete');
+  await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
+  await page.getByText('1 component · writhe 0').waitFor();
 });
