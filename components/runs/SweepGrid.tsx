@@ -1,4 +1,5 @@
-// A cable sweep's cells: r+ across, r- down, each cell its own small Khovanov table.
+// A cable sweep's cells, each its own small Khovanov table: for a knot r+ across and r- down,
+// for a link one cell per combination of (r+, r-) per component.
 import { StyleSheet, Text, View } from 'react-native';
 import type { RunDetail } from '@/shared/api/runs';
 import { Section } from '@/components/ui/Section';
@@ -9,35 +10,46 @@ import { statusLabel } from './format';
 
 type Cell = RunDetail['children'][number];
 
+const pairs = (c: Cell) => c.cable!.map(([p, m]) => `${p}, ${m}`).join(' | ');
+
+function CellCard({ c }: { c: Cell }) {
+  const name = `(${pairs(c)})`;
+  return (
+    <View style={styles.cell} testID={`cable-${c.cable!.flat().join('-')}`}>
+      <Text style={styles.title}>{`${name} · ${c.crossings} crossings`}</Text>
+      {c.result ? (
+        <KhTable groups={c.result.groups} ring={c.result.ring} compact label={`Khovanov homology of the ${name} cable`} />
+      ) : (
+        <>
+          <Text style={styles.muted}>{statusLabel[c.status]}{c.error ? `: ${c.error}` : ''}</Text>
+          <ProgressBar fraction={c.progress.fraction} status={c.status} label={`Progress of the ${name} cable`} />
+        </>
+      )}
+    </View>
+  );
+}
+
 export function SweepGrid({ cells }: { cells: Cell[] }) {
-  const at = new Map(cells.map((c) => [`${c.cable![0][0]},${c.cable![0][1]}`, c]));
+  const knot = cells.every((c) => c.cable!.length === 1);
   const max = Math.max(0, ...cells.map((c) => c.cable![0][0] + c.cable![0][1]));
   const rows = Array.from({ length: max + 1 }, (_, m) => m);
+  const at = new Map(cells.map((c) => [pairs(c), c]));
   return (
     <Section title="Cables" note="(r+, r-): r+ parallel and r- reversed copies, following the framing.">
-      <View style={styles.grid}>
-        {rows.map((minus) => (
-          <View key={minus} style={styles.row}>
-            {rows.map((plus) => {
-              const c = at.get(`${plus},${minus}`);
-              if (!c) return null;
-              return (
-                <View key={plus} style={styles.cell} testID={`cable-${plus}-${minus}`}>
-                  <Text style={styles.title}>{`(${plus}, ${minus}) · ${c.crossings} crossings`}</Text>
-                  {c.result ? (
-                    <KhTable groups={c.result.groups} ring={c.result.ring} compact label={`Khovanov homology of the (${plus}, ${minus}) cable`} />
-                  ) : (
-                    <>
-                      <Text style={styles.muted}>{statusLabel[c.status]}{c.error ? `: ${c.error}` : ''}</Text>
-                      <ProgressBar fraction={c.progress.fraction} status={c.status} label={`Progress of the (${plus}, ${minus}) cable`} />
-                    </>
-                  )}
-                </View>
-              );
-            })}
-          </View>
-        ))}
-      </View>
+      {knot ? (
+        <View style={styles.grid}>
+          {rows.map((minus) => (
+            <View key={minus} style={styles.row}>
+              {rows.map((plus) => {
+                const c = at.get(`${plus}, ${minus}`);
+                return c ? <CellCard key={plus} c={c} /> : null;
+              })}
+            </View>
+          ))}
+        </View>
+      ) : (
+        <View style={styles.row}>{cells.map((c) => <CellCard key={c.id} c={c} />)}</View>
+      )}
     </Section>
   );
 }

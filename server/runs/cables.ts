@@ -26,12 +26,21 @@ export function compareCells(a: CableCell, b: CableCell): number {
 export const sweepSize = (components: number, maxStrands: number): number =>
   Math.pow((maxStrands * (maxStrands + 3)) / 2, components);
 
+/** Framings no real component has, marking each original component through the cablings. */
+const MARK = 900_000_000;
+
 /**
- * The cable of a framed knot for a one-entry cell (the knot core's cable family). Links are
- * refused by startRun: cabling one component renumbers the others, so cells of several
- * components cannot be built one component at a time yet.
+ * The cable of a framed link for a cell, one component at a time with the knot core's cable
+ * family. Cabling renumbers the components, so each original component carries a marker
+ * framing (cable() keeps the framings of the components it does not touch) that finds it
+ * again; its own framing is put back just before it is cabled, since that sets the twists.
  */
 export function cableOf(d: Diagram, cell: CableCell): Diagram {
-  const [[rPlus, rMinus]] = cell;
-  return cable(d, 0, rPlus, rMinus);
+  let cur: Diagram = { ...d, framings: d.framings.map((_, k) => MARK + k) };
+  cell.forEach(([rPlus, rMinus], k) => {
+    const at = cur.framings.indexOf(MARK + k);
+    const framings = cur.framings.map((f, i) => (i === at ? d.framings[k] : f));
+    cur = cable({ ...cur, framings }, at, rPlus, rMinus);
+  });
+  return cur;
 }

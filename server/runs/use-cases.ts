@@ -141,15 +141,11 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
 
 async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promise<string> {
   const components = componentCount(d);
-  if (components !== 1) {
-    const why = `Cable sweeps are available for knots only; this diagram has ${components} components`;
-    throw new AppError('invalid_input', 400, why, { kind: why });
-  }
   const { maxStrands } = n.sweep!;
   const size = sweepSize(components, maxStrands);
   const maxCells = deps.config.runs.maxSweepCells;
   if (size > maxCells) {
-    throw new AppError('invalid_input', 400, `A sweep up to ${maxStrands} strands of a ${components}-component link has ${size} cables; this server allows at most ${maxCells}. Lower maxStrands.`, { sweep: `At most ${maxCells} cables` });
+    throw new AppError('invalid_input', 400, `A sweep up to ${maxStrands} strands per component of ${components === 1 ? 'a knot' : `a ${components}-component link`} has ${size} cables; this server allows at most ${maxCells}. Lower maxStrands.`, { sweep: `At most ${maxCells} cables` });
   }
   const cells = sweepCells(components, maxStrands);
   const cables = cells.map((cell) => cableOf(d, cell));

@@ -26,9 +26,10 @@ const TREFOIL_Z = [
 
 const limits = (l: Partial<RunLimits>): RunLimits => ({ ...defaultRunLimits(), threads: 1, progressEveryMs: 20, ...l });
 
-let server: RunningServer;
+let server: RunningServer | undefined;
 afterEach(async () => {
   await server?.stop();
+  server = undefined;
 });
 
 describe('the worker pool', () => {
@@ -236,13 +237,33 @@ describe('a cable sweep', () => {
     expect(listed.map((r) => r.kind)).toEqual(['cable-sweep', 'khovanov']); // cells are not listed
   }, 90_000);
 
-  it('refuses links and sweeps over the cell limit', async () => {
+  it('sweeps every component of a link, and refuses sweeps over the cell limit', async () => {
     server = await testServer({ config: { runs: limits({ maxSweepCells: 5 }) } });
     const { token } = await signUp(server);
     const hopf = torus(2, 2);
-    expect((await start(server, token, { kind: 'cable-sweep', diagram: { pd: hopf }, sweep: { maxStrands: 1 } })).body.error.message).toMatch(/knots only; this diagram has 2 components/);
-    expect((await start(server, token, { kind: 'cable-sweep', diagram: { pd: trefoil() }, sweep: { maxStrands: 3 } })).status).toBe(400);
-  });
+    const direct = await waitFor(server, token, (await start(server, token, { diagram: { pd: hopf } })).body.id, ended);
+    const res = await start(server, token, { kind: 'cable-sweep', diagram: { pd: hopf }, sweep: { maxStrands: 1 } });
+    expect(res.status).toBe(201);
+    const sweep = await waitFor(server, token, res.body.id, ended, 60_000);
+    expect(sweep.status).toBe('done');
+    expect(sweep.children.map((c) => c.cable)).toEqual([[[1, 0], [1, 0]], [[1, 0], [0, 1]], [[0, 1], [1, 0]], [[0, 1], [0, 1]]]);
+    for (const cell of sweep.children) {
+      expect(cell.crossings).toBe(2);
+      expect(cell.result!.euler!.ok).toBe(true); // (q + q^-1) V, Bar-Natan 2002 (math/0201043)
+    }
+    // (1,0) on both components is the link itself; reversing both is a global reversal, which Kh
+    // does not see (from memory; Khovanov 2000, math/9908171, defines Kh for oriented links
+    // through crossing signs, which a global reversal keeps).
+    expect(sweep.children[0].reusedFrom).toBe(direct.id);
+    expect(sweep.children[3].result!.groups).toEqual(direct.result!.groups);
+    // Reversing one component of the Hopf link changes the linking number, hence the Jones
+    // polynomial and Kh (from memory: Lickorish 1997, ch. 3, V changes by t^(-3 lk) on reversal).
+    expect(sweep.children[1].result!.groups).not.toEqual(direct.result!.groups);
+
+    const tooMany = await start(server, token, { kind: 'cable-sweep', diagram: { pd: trefoil() }, sweep: { maxStrands: 3 } });
+    expect(tooMany.status).toBe(400);
+    expect(tooMany.body.error.message).toBe('A sweep up to 3 strands per component of a knot has 9 cables; this server allows at most 5. Lower maxStrands.');
+  }, 90_000);
 });
 
 describe('roles', () => {
