@@ -237,6 +237,20 @@ describe('a cable sweep', () => {
     expect(listed.map((r) => r.kind)).toEqual(['cable-sweep', 'khovanov']); // cells are not listed
   }, 90_000);
 
+  it('cancels with all its unfinished cells', async () => {
+    server = await testServer({ config: { runs: limits({}) } });
+    const { token, user } = await signUp(server);
+    const { id } = (await start(server, token, { kind: 'cable-sweep', diagram: { pd: torus(3, 4) }, ring: 'Q', sweep: { maxStrands: 3 } })).body;
+    const res = await request(server.url).post(`/api/runs/${id}/cancel`).set(bearer(token));
+    expect(res.status).toBe(200);
+    expect(res.body.status).toBe('cancelled');
+    const sweep = await read(server, token, id);
+    expect(sweep.children.length).toBe(9);
+    expect(sweep.children.every((c) => c.status === 'cancelled' || c.status === 'done')).toBe(true);
+    expect(sweep.children.some((c) => c.status === 'cancelled')).toBe(true);
+    await mailFor(server, (m) => m.to.includes(user.email) && m.text.includes(`/runs/${id}`) && /cancelled/.test(m.subject));
+  });
+
   it('sweeps every component of a link, and refuses sweeps over the cell limit', async () => {
     server = await testServer({ config: { runs: limits({ maxSweepCells: 5 }) } });
     const { token } = await signUp(server);
