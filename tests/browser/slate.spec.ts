@@ -221,3 +221,42 @@ test('touching strands get a marker; two circles make a link; a component is sel
   await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
   await page.getByText('1 component · writhe 0').waitFor();
 });
+
+test('framing badge, move and reshape drags, and the exports', async () => {
+  const canvas = page.getByTestId('slate-canvas');
+  await canvas.getByText('bb', { exact: true }).click();
+  await page.getByRole('textbox', { name: 'Framing' }).fill('2');
+  await page.getByRole('button', { name: 'Set framing' }).click();
+  await canvas.getByText('+2', { exact: true }).waitFor();
+  await settled(page);
+  await page.getByTestId('readout-framings').getByText('1: +2').waitFor();
+
+  // The strand itself is drawn after the halo a selected component gets.
+  const strand = canvas.locator('path[stroke="#F3F0E8"]').last();
+  const before = (await strand.boundingBox())!;
+  await page.getByRole('button', { name: 'Move' }).click();
+  const bottom = { x: before.x + before.width / 2, y: before.y + before.height };
+  await stroke(page, Array.from({ length: 21 }, (_, i) => ({ x: bottom.x + 5 * i, y: bottom.y })));
+  const moved = (await strand.boundingBox())!;
+  expect(moved.x - before.x).toBeGreaterThan(80);
+  expect(Math.abs(moved.width - before.width)).toBeLessThan(4);
+
+  await page.getByRole('button', { name: 'Reshape' }).click();
+  const top = { x: moved.x + moved.width / 2, y: moved.y };
+  await stroke(page, Array.from({ length: 11 }, (_, i) => ({ x: top.x, y: top.y - 4 * i })));
+  const reshaped = (await strand.boundingBox())!;
+  expect(moved.y - reshaped.y).toBeGreaterThan(30);
+  expect(reshaped.height - moved.height).toBeGreaterThan(30);
+  await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
+
+  for (const [label, ext, start] of [['Export SVG', '.svg', '<svg'], ['Export TikZ', '.tex', '\\begin{tikzpicture}']] as const) {
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: label }).click()]);
+    expect(download.suggestedFilename()).toBe(`sketch${ext}`);
+    const chunks: Buffer[] = [];
+    for await (const chunk of (await download.createReadStream())!) chunks.push(chunk as Buffer);
+    expect(Buffer.concat(chunks).toString('utf8').startsWith(start)).toBe(true);
+  }
+  const [png] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export PNG' }).click()]);
+  expect(png.suggestedFilename()).toBe('sketch.png');
+  await shoot(page, 'slate-framed');
+});
