@@ -35,5 +35,16 @@ export function settle(outbox: readonly Mutation[], results: readonly PushResult
   return { done, rejected };
 }
 
+/**
+ * S8a: a write that follows an unsent write of the same record joins it (one mutation, the
+ * later values winning, the later clock), so a drawing session does not queue one whole
+ * diagram per stroke. Null when `last` was already handed out for sending, or is another record.
+ */
+export function coalesce(last: Mutation | undefined, next: Mutation, sentUpTo: number): Mutation | null {
+  if (!last || last.clock <= sentUpTo || last.recordId !== next.recordId || last.type !== next.type) return null;
+  const op = last.op === 'add' ? 'add' : next.op;
+  return { ...last, clock: next.clock, op, fields: { ...last.fields, ...next.fields } };
+}
+
 /** S8: the order mutations are sent in. */
 export const byClock = (a: Mutation, b: Mutation): number => a.clock - b.clock;

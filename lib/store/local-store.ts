@@ -2,7 +2,7 @@
 // outbox (sync/SPEC.md S8); pulls rebase records on their server snapshots (S16, S17).
 import { SketchFields, SketchFieldsPatch, sketchDefaults } from '@/shared/api/sketches';
 import type { ConflictFields, Fields, Mutation, Op, PullResponse, PullViewer, PushResult, RecordType } from '@/shared/api/sync';
-import { byClock, mutationFor, settle, type Rejected } from '@/sync/outbox';
+import { byClock, coalesce, mutationFor, settle, type Rejected } from '@/sync/outbox';
 import { applyPulled, outOfScope, sameViewer, type LocalRecord } from '@/sync/rebase';
 import { numberKey, type Tables } from './tables';
 import type { LocalComment, LocalConflict, LocalSketch, PendingUpload, Revision, SketchRepository, SyncCounts, SyncStore } from './types';
@@ -72,8 +72,11 @@ export class LocalStore implements SketchRepository, SyncStore {
       const m = mutationFor({ recordId: id, type, op, fields, baseVersion: existing?.base?.version ?? 0 }, deviceId, clock, this.newId());
       const start = existing?.fields ?? (type === 'sketch' ? sketchDefaults(this.now().toISOString()) : {});
       const record: LocalRecord = { id, type, base: existing?.base ?? null, fields: { ...start, ...m.fields } };
+      const last = await t.get<Mutation>('outbox', numberKey(clock - 1));
+      const joined = coalesce(last, m, (await t.get<number>('meta', 'sentUpTo')) ?? 0); // S8a
+      if (joined) await t.remove('outbox', numberKey(clock - 1));
       await t.put('meta', 'clock', clock);
-      await t.put('outbox', numberKey(clock), m);
+      await t.put('outbox', numberKey(clock), joined ?? m);
       await t.put('records', recordKey(type, id), record);
       const revision: Revision = { recordId: id, clock, at: this.now().toISOString(), fields: record.fields };
       await t.put('revisions', `${id}:${numberKey(clock)}`, revision);
@@ -174,8 +177,14 @@ export class LocalStore implements SketchRepository, SyncStore {
     return this.tx(async (t) => (await t.get<number>('meta', 'cursor')) ?? 0);
   }
 
-  async outbox(limit: number): Promise<Mutation[]> {
-    return (await this.tx((t) => t.list<Mutation>('outbox', '', limit))).sort(byClock);
+  /** The oldest waiting mutations; from now on they count as sent and no write joins them (S8a). */
+  outbox(limit: number): Promise<Mutation[]> {
+    return this.tx(async (t) => {
+      const box = (await t.list<Mutation>('outbox', '', limit)).sort(byClock);
+      const sentUpTo = (await t.get<number>('meta', 'sentUpTo')) ?? 0;
+      if (box.length > 0 && box[box.length - 1].clock > sentUpTo) await t.put('meta', 'sentUpTo', box[box.length - 1].clock);
+      return box;
+    });
   }
 
   settle(sent: readonly Mutation[], results: readonly PushResult[]): Promise<void> {

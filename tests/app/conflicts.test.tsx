@@ -43,6 +43,7 @@ test('S20, S21: both versions side by side; choosing the other version writes it
   expect(await screen.findByText('No conflicts')).toBeOnTheScreen();
   expect((await store.get(s.id))?.title).toBe('Whitehead link');
   const box = await store.outbox(10);
-  expect(box.map((m) => [m.type, m.op])).toEqual([['sketch', 'add'], ['sketch', 'update'], ['conflict', 'update']]);
+  // The sketch was never sent, so the chosen title joins its add (S8a); then the resolution.
+  expect(box.map((m) => [m.type, m.op, m.fields.title])).toEqual([['sketch', 'add', 'Whitehead link'], ['conflict', 'update', undefined]]);
   expect(box.at(-1)?.fields).toEqual({ resolved: true, deleted: false });
 });

@@ -50,7 +50,9 @@ test('S12: every push sent twice: one change per mutation, same data', async () 
   const d = new Device(url, token);
   d.faults.duplicatePushes = true;
   const s = await d.store.create({ title: 'dup' });
+  expect(await d.sync()).toBeNull();
   await d.store.update(s.id, { notes: 'n1' });
+  expect(await d.sync()).toBeNull();
   await d.store.update(s.id, { notes: 'n2' });
   expect(await d.sync()).toBeNull();
   expect(await changeCount(s.id)).toBe(3);
@@ -60,10 +62,14 @@ test('S12: every push sent twice: one change per mutation, same data', async () 
 
 test('S14: pushes delivered in reverse order end with the device\'s last write, no conflict', async () => {
   const d = new Device(url, token);
+  // Each write handed out before the next (as three pushes would be), so none join (S8a).
   const s = await d.store.create({ title: 'v1' });
+  await d.store.outbox(10);
   await d.store.update(s.id, { title: 'v2', notes: 'first note' });
+  await d.store.outbox(10);
   await d.store.update(s.id, { title: 'v3' });
   const box = await d.store.outbox(10);
+  expect(box).toHaveLength(3);
   const deviceId = await d.store.deviceId();
   for (const m of [...box].reverse()) await push(server, token, deviceId, [m]); // the network reordered them
   expect((await serverSketches()).get(s.id)).toMatchObject({ title: 'v3', notes: 'first note' });

@@ -1,6 +1,6 @@
 // Device side of the protocol: outbox (S5-S8), rebase on pull (S16, S17), cursor pages (S15),
 // scope (S22-S24), back-off (S30) and status (S31).
-import { mutationFor, settle } from '@/sync/outbox';
+import { coalesce, mutationFor, settle } from '@/sync/outbox';
 import { applyPulled, localOnly, outOfScope, rebase, sameViewer } from '@/sync/rebase';
 import { pageOf } from '@/sync/cursor';
 import { canSee, canWrite, type Viewer } from '@/sync/scope';
@@ -26,6 +26,14 @@ describe('outbox', () => {
     ]);
     expect(out.done).toEqual(['id-1']);
     expect(out.rejected.map((r) => [r.mutation.mutationId, r.reason])).toEqual([['id-2', 'forbidden']]);
+  });
+
+  test('S8a: only an unsent write of the same record joins; add stays add, a delete wins the op', () => {
+    const add = m(1, { title: 'a' }, 'add');
+    expect(coalesce(add, m(2, { notes: 'n' }), 0)).toEqual({ ...add, clock: 2, fields: { title: 'a', notes: 'n', deleted: false } });
+    expect(coalesce(add, m(2, {}), 1)).toBeNull(); // already handed out
+    expect(coalesce(add, { ...m(2, {}), recordId: 'other' }, 0)).toBeNull();
+    expect(coalesce(m(1, { title: 'a' }), m(2, {}, 'delete'), 0)).toMatchObject({ op: 'delete', fields: { deleted: true } });
   });
 
   test('S12: a duplicate answer also acknowledges', () => {

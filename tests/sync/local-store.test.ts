@@ -47,14 +47,32 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
     store = new LocalStore(await open(), { newId: ids, now: () => new Date('2026-12-01T12:00:00Z') });
   });
 
-  test('S8: a write shows at once and queues one mutation per write, in clock order', async () => {
+  test('S8: a write shows at once and queues a mutation, in clock order', async () => {
     const s = await store.create({ title: 'first' });
+    expect((await store.outbox(10)).map((m) => [m.op, m.clock])).toEqual([['add', 1]]); // handed out
     await store.update(s.id, { notes: 'more' });
     expect(await store.get(s.id)).toMatchObject({ title: 'first', notes: 'more', pending: 2, version: 0 });
     const box = await store.outbox(10);
     expect(box.map((m) => [m.op, m.clock])).toEqual([['add', 1], ['update', 2]]);
     expect(new Set(box.map((m) => m.deviceId)).size).toBe(1);
     expect((await store.revisions(s.id)).map((r) => r.fields.notes)).toEqual(['', 'more']);
+  });
+
+  test('S8a: writes to a record not yet handed out join one mutation; revisions keep each', async () => {
+    const s = await store.create({ title: 'first' });
+    await store.update(s.id, { notes: 'a' });
+    await store.update(s.id, { notes: 'b', title: 'second' });
+    const [only, ...rest] = await store.outbox(10);
+    expect(rest).toEqual([]);
+    expect(only).toMatchObject({ op: 'add', clock: 3, fields: { title: 'second', notes: 'b', deleted: false } });
+    expect((await store.revisions(s.id)).map((r) => r.fields.notes)).toEqual(['', 'a', 'b']);
+    // Handed out (maybe sent): the next write must not change it.
+    await store.update(s.id, { notes: 'c' });
+    expect((await store.outbox(10)).map((m) => [m.mutationId === only.mutationId, m.fields.notes])).toEqual([[true, 'b'], [false, 'c']]);
+    // A write to another record never joins.
+    const t = await store.create({ title: 'other' });
+    await store.update(s.id, { notes: 'd' });
+    expect((await store.outbox(10)).map((m) => m.recordId)).toEqual([s.id, s.id, t.id, s.id]);
   });
 
   test('S4: remove is a tombstone: hidden from the list, kept with its content', async () => {
