@@ -27,7 +27,7 @@ function describe(n: Notification): { text: string; href: string } {
     case 'comment':
       return { text: `${n.payload.author} commented on “${n.payload.sketchTitle || 'Untitled sketch'}”: ${plain(n.payload.excerpt)}`, href: `/feed/${n.payload.groupId}/${n.payload.sketchId}` };
     case 'run_finished':
-      return { text: `Your run on “${n.payload.sketchTitle || 'Untitled sketch'}” ${n.payload.status}. ${n.payload.summary}`, href: '/runs' };
+      return { text: `Your run on “${n.payload.sketchTitle || 'Untitled sketch'}” ${n.payload.status}. ${n.payload.summary}`, href: `/runs/${n.payload.runId}` };
     case 'invitation_accepted':
       return { text: `${n.payload.who} joined ${n.payload.groupName} as ${n.payload.role}.`, href: `/account/groups/${n.payload.groupId}` };
   }
