@@ -3,6 +3,7 @@ export type SyncStatus =
   | { kind: 'offline'; waiting: number }
   | { kind: 'syncing'; waiting: number }
   | { kind: 'conflict'; conflicts: number; waiting: number }
+  | { kind: 'rejected'; rejected: number; waiting: number }
   | { kind: 'waiting'; waiting: number }
   | { kind: 'upToDate' };
 
@@ -11,12 +12,15 @@ export interface StatusInput {
   syncing: boolean;
   waiting: number;
   conflicts: number;
+  /** S8: mutations the server refused, kept aside on the device. */
+  rejected: number;
 }
 
 export function statusOf(s: StatusInput): SyncStatus {
   if (!s.online) return { kind: 'offline', waiting: s.waiting };
   if (s.syncing) return { kind: 'syncing', waiting: s.waiting };
   if (s.conflicts > 0) return { kind: 'conflict', conflicts: s.conflicts, waiting: s.waiting };
+  if (s.rejected > 0) return { kind: 'rejected', rejected: s.rejected, waiting: s.waiting };
   if (s.waiting > 0) return { kind: 'waiting', waiting: s.waiting };
   return { kind: 'upToDate' };
 }
@@ -29,6 +33,8 @@ export function statusLabel(s: SyncStatus): string {
       return 'Syncing';
     case 'conflict':
       return `${s.conflicts} conflict${s.conflicts === 1 ? '' : 's'} to resolve`;
+    case 'rejected':
+      return `${s.rejected} change${s.rejected === 1 ? '' : 's'} refused by the server`;
     case 'waiting':
       return `${s.waiting} change${s.waiting === 1 ? '' : 's'} waiting`;
     case 'upToDate':

@@ -6,7 +6,7 @@ import { useSyncStatus } from '@/hooks/useDevice';
 import type { SyncStatus as Status } from '@/sync/status';
 
 const tone = (s: Status) =>
-  s.kind === 'conflict'
+  s.kind === 'conflict' || s.kind === 'rejected'
     ? { fg: colors.danger, bg: colors.dangerSoft }
     : s.kind === 'upToDate'
       ? { fg: colors.success, bg: colors.successSoft }

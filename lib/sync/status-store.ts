@@ -4,7 +4,6 @@ import { createStore } from 'zustand/vanilla';
 import type { StatusInput } from '@/sync/status';
 
 export interface SyncState extends StatusInput {
-  rejected: number;
   lastError: string | null;
   lastSyncedAt: string | null;
 }

@@ -129,11 +129,12 @@ describe('backoff and status', () => {
     expect(backoffDelay(4, 0)).toBe(4000);
     expect(backoffDelay(40, 0.999)).toBeLessThanOrEqual(backoffMaxMs);
   });
-  test('S31: offline first, then syncing, conflict, waiting, up to date', () => {
-    expect(statusLabel(statusOf({ online: false, syncing: false, waiting: 2, conflicts: 1 }))).toBe('Offline, 2 changes waiting');
-    expect(statusOf({ online: true, syncing: true, waiting: 0, conflicts: 1 }).kind).toBe('syncing');
-    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 1, conflicts: 1 }))).toBe('1 conflict to resolve');
-    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 1, conflicts: 0 }))).toBe('1 change waiting');
-    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 0, conflicts: 0 }))).toBe('Up to date');
+  test('S8, S31: offline first, then syncing, conflict, refused, waiting, up to date', () => {
+    expect(statusLabel(statusOf({ online: false, syncing: false, waiting: 2, conflicts: 1, rejected: 0 }))).toBe('Offline, 2 changes waiting');
+    expect(statusOf({ online: true, syncing: true, waiting: 0, conflicts: 1, rejected: 0 }).kind).toBe('syncing');
+    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 1, conflicts: 1, rejected: 1 }))).toBe('1 conflict to resolve');
+    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 0, conflicts: 0, rejected: 2 }))).toBe('2 changes refused by the server');
+    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 1, conflicts: 0, rejected: 0 }))).toBe('1 change waiting');
+    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 0, conflicts: 0, rejected: 0 }))).toBe('Up to date');
   });
 });
