@@ -1,5 +1,6 @@
 // The demo scenario (invented people at an invented university): one seminar group with an
-// owner, an admin, two members and a viewer. Safe to run on every start.
+// owner, an admin, two members and a viewer, and its story (story.ts): shared sketches,
+// comments, runs. Safe to run on every start.
 import bcrypt from 'bcryptjs';
 import type { Role } from '@/shared/api/groups';
 import { findUserByEmail, insertUser } from '../auth/repository';
@@ -7,6 +8,7 @@ import { inTransaction } from '../db/transaction';
 import type { Deps } from '../deps';
 import { addMembership, findGroup } from '../groups/repository';
 import { Group } from '../db/entities';
+import { seedStory } from './story';
 
 export const DEMO_GROUP = {
   id: '4f6c2a9e-1d3b-4c8e-9a7f-0b5d3e2c1a60',
@@ -22,10 +24,17 @@ export const DEMO_USERS: { id: string; email: string; displayName: string; passw
 ];
 
 /**
- * Seeds the scenario once: when the demo group exists nothing is touched, so what people do
- * in the demo (roles changed, members removed) survives restarts. Returns rows added.
+ * Seeds the scenario once: when the demo group exists its people are not touched, so what
+ * people do in the demo (roles changed, members removed) survives restarts; the story adds
+ * only the sketches that were never added. Returns rows added.
  */
-export async function seedDemo({ db, config }: Deps): Promise<number> {
+export async function seedDemo(deps: Deps): Promise<number> {
+  const people = await seedPeople(deps);
+  const [ilse, tomas, priya, jonah] = DEMO_USERS.map((u) => u.id);
+  return people + (await seedStory(deps, DEMO_GROUP.id, { ilse, tomas, priya, jonah }));
+}
+
+async function seedPeople({ db, config }: Deps): Promise<number> {
   if (await findGroup(db, DEMO_GROUP.id)) return 0;
   const hashes = await Promise.all(DEMO_USERS.map((u) => bcrypt.hash(u.password, config.bcryptRounds)));
   return inTransaction(db, async (m) => {

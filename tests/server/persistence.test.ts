@@ -2,8 +2,10 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
+import { FeedPage, GroupSketch, feedPaths } from '@/shared/api/feed';
 import { GroupList, MemberList } from '@/shared/api/groups';
 import { DEMO_GROUP, DEMO_USERS } from '@/server/demo/seed';
+import { DEMO_SKETCHES } from '@/server/demo/story';
 import { bearer, signUp, testServer } from './helpers';
 
 let dir: string;
@@ -15,7 +17,7 @@ afterEach(() => rmSync(dir, { recursive: true, force: true }));
 const counts = async (db: import('typeorm').DataSource) =>
   Object.fromEntries(
     await Promise.all(
-      ['users', 'groups', 'memberships', 'invitations', 'migrations'].map(async (t) => [t, (await db.query(`SELECT COUNT(*) AS n FROM "${t}"`))[0].n]),
+      ['users', 'groups', 'memberships', 'invitations', 'migrations', 'sketches', 'comments', 'runs'].map(async (t) => [t, (await db.query(`SELECT COUNT(*) AS n FROM "${t}"`))[0].n]),
     ),
   );
 
@@ -57,9 +59,13 @@ describe('the demo scenario', () => {
   it('is loaded once: a second start adds nothing and keeps changes made in the demo', async () => {
     const dbPath = join(dir, 'demo.sqlite');
     const first = await testServer({ dbPath, demo: true });
-    expect(first.demoRowsAdded).toBe(1 + 2 * DEMO_USERS.length);
+    const comments = DEMO_SKETCHES.reduce((n, s) => n + s.comments.length, 0);
+    const runs = DEMO_SKETCHES.reduce((n, s) => n + s.runs.length, 0);
+    expect(first.demoRowsAdded).toBe(1 + 2 * DEMO_USERS.length + DEMO_SKETCHES.length + comments + runs);
     const loaded = await counts(first.deps.db);
-    expect(loaded).toMatchObject({ users: 5, groups: 1, memberships: 5 });
+    expect(loaded).toMatchObject({ users: 5, groups: 1, memberships: 5, sketches: DEMO_SKETCHES.length, comments });
+    // A cable sweep adds a row per cable beside its own: at least one row per run started.
+    expect(loaded.runs).toBeGreaterThanOrEqual(runs);
     // Someone changes the demo; a restart must not undo it.
     const owner = DEMO_USERS.find((u) => u.role === 'owner')!;
     const viewer = DEMO_USERS.find((u) => u.role === 'viewer')!;
@@ -89,6 +95,24 @@ describe('the demo scenario', () => {
         (await request(server.url).get(`/api/groups/${DEMO_GROUP.id}/members`).set(bearer((await request(server.url).post('/api/auth/login').send(DEMO_USERS[0])).body.token))).body,
       ).map((m) => m.role);
       expect(roles.sort()).toEqual(['admin', 'member', 'member', 'owner', 'viewer']);
+    } finally {
+      await server.stop();
+    }
+  });
+
+  it('tells a story in the feed: shared sketches newest first, their comments, and a pair with the same invariants', async () => {
+    const server = await testServer({ demo: true });
+    try {
+      const viewer = DEMO_USERS.find((u) => u.role === 'viewer')!;
+      const { token } = (await request(server.url).post('/api/auth/login').send(viewer)).body;
+      const page = FeedPage.parse((await request(server.url).get(feedPaths.feed(DEMO_GROUP.id)).set(bearer(token))).body);
+      const byAge = [...DEMO_SKETCHES].sort((a, b) => a.daysAgo - b.daysAgo);
+      expect(page.items.map((i) => i.id)).toEqual(byAge.map((s) => s.id));
+      expect(page.items.map((i) => i.commentCount)).toEqual(byAge.map((s) => s.comments.length));
+      expect(page.items.every((i) => i.strokes.length > 0)).toBe(true); // the feed can draw each one
+      const [week1, week3] = ['demo-sketch-trefoil-opening', 'demo-sketch-trefoil-handles'];
+      const sketch = GroupSketch.parse((await request(server.url).get(feedPaths.groupSketch(DEMO_GROUP.id, week3)).set(bearer(token))).body);
+      expect(sketch.sameInvariants.map((r) => r.id)).toContain(week1);
     } finally {
       await server.stop();
     }
