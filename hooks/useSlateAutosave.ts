@@ -26,10 +26,15 @@ export function useSlateAutosave(id: string | null) {
   };
 
   useEffect(() => {
-    if (pending.current && pending.current.id !== id) flush();
+    // Another sketch took the Slate (or this one lost it): what waits is saved now.
+    if (pending.current && (pending.current.id !== id || !present)) flush();
     if (!id || !present) return;
     if (saved.current?.id !== id) saved.current = { id, doc: useSlate.getState().opened };
-    if (present === saved.current.doc) return;
+    if (present === saved.current.doc) {
+      // Undone back to what the store holds: nothing is waiting any more.
+      pending.current = null;
+      return;
+    }
     pending.current = { id, doc: present };
     const t = setTimeout(flush, saveDelayMs);
     return () => clearTimeout(t);

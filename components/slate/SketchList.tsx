@@ -20,7 +20,7 @@ function Row({ sketch, active }: { sketch: LocalSketch; active: boolean }) {
   const s = summaryOf(sketch.diagram);
   const drawn = s.crossings > 0 || s.components > 0;
   return (
-    <Pressable role="link" accessibilityLabel={`Open ${sketch.title || 'Untitled sketch'}`} onPress={() => router.push(`/sketches/${sketch.id}` as never)}
+    <Pressable role="link" accessibilityLabel={`Open ${sketch.title || 'Untitled sketch'}`} onPress={() => router.navigate(`/sketches/${sketch.id}` as never)}
       style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [styles.row, active && styles.active, (pressed || hovered) && !active && styles.hover]}>
       <StrokeThumb strokes={sketch.diagram.strokes} size={64} crossings={s.crossings} />
       <View style={styles.text}>

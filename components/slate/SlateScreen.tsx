@@ -2,7 +2,7 @@
 // pane on a wide screen), the dialogs, keyboard shortcuts, and saving to the device store.
 import { useCallback, useEffect, useMemo, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
-import { router, useFocusEffect } from 'expo-router';
+import { router, useFocusEffect, useIsFocused } from 'expo-router';
 import * as Clipboard from 'expo-clipboard';
 import { analyse } from '@/shared/drawing/analyse';
 import { setFraming } from '@/shared/drawing/sketch';
@@ -35,7 +35,8 @@ type Open = null | 'paste' | 'families' | 'details' | 'help' | { framing: string
 export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const wide = useIsWide();
   const { height } = useWindowDimensions();
-  const ready = useSlate((s) => s.sketchId === sketch.id);
+  const focused = useIsFocused();
+  const ready = useSlate((s) => s.sketchId === sketch.id) && focused;
   // The Slate's state is one store: the screen in focus owns it (a stack may hold several).
   useFocusEffect(
     useCallback(() => {

@@ -104,17 +104,19 @@ test('a trefoil drawn with the mouse shows 3 crossings; flipping one changes its
   const crossings = selfCrossings(drawn);
   expect(crossings).toHaveLength(3);
   await page.mouse.click(crossings[crossingToAlternate(crossings)].at.x, crossings[crossingToAlternate(crossings)].at.y);
+  // (The crossing count stays 3, so wait for the name before reading the settled values.)
+  await page.getByText(/invariants match 3_1/).waitFor();
   await settled(page);
   // Now alternating: one of the two trefoils, V = t + t^3 - t^4 or its mirror (DESIGN.md: the
   // closure of [1,1,1]; mirror V(t) -> V(1/t), Jones 1985).
   expect(['V(t) = t + t³ − t⁴', 'V(t) = −t⁻⁴ + t⁻³ + t⁻¹']).toContain(await jonesText(page));
-  await page.getByText(/invariants match 3_1/).waitFor();
   await page.getByTestId('readout-crossings-count').getByText('3 crossings').waitFor();
   await shoot(page, 'slate-trefoil');
 });
 
 test('undo brings the unflipped crossing back', async () => {
   await page.getByRole('button', { name: 'Undo' }).click();
+  await page.getByText(/invariants match 0_1/).waitFor();
   await settled(page);
   expect(await jonesText(page)).toBe('V(t) = 1');
   await page.getByRole('button', { name: 'Redo' }).click();
@@ -249,6 +251,12 @@ test('framing badge, move and reshape drags, and the exports', async () => {
   expect(reshaped.height - moved.height).toBeGreaterThan(30);
   await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
 
+  // The wheel zooms in about the pointer.
+  await page.mouse.move(reshaped.x + reshaped.width / 2, reshaped.y + reshaped.height / 2);
+  await page.mouse.wheel(0, -300);
+  await page.waitForTimeout(300);
+  expect((await strand.boundingBox())!.width).toBeGreaterThan(reshaped.width * 1.5);
+
   for (const [label, ext, start] of [['Export SVG', '.svg', '<svg'], ['Export TikZ', '.tex', '\\begin{tikzpicture}']] as const) {
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: label }).click()]);
     expect(download.suggestedFilename()).toBe(`sketch${ext}`);
@@ -259,4 +267,14 @@ test('framing badge, move and reshape drags, and the exports', async () => {
   const [png] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export PNG' }).click()]);
   expect(png.suggestedFilename()).toBe('sketch.png');
   await shoot(page, 'slate-framed');
+});
+
+test('a sketch reopens as it was left, also after a reload', async () => {
+  await page.getByRole('link', { name: 'Open T(2,4) from the seminar' }).click();
+  await page.getByRole('heading', { name: 'T(2,4) from the seminar' }).waitFor();
+  await page.getByText('lk(1,2) = +2').waitFor();
+  await page.reload();
+  await page.getByRole('heading', { name: 'T(2,4) from the seminar' }).waitFor();
+  await page.getByText('lk(1,2) = +2').waitFor();
+  await page.getByTestId('readout-crossings-count').getByText('4 crossings').waitFor();
 });
