@@ -6,15 +6,14 @@ import { Diagram, fromBraid } from '@/shared/knot';
 import { alexander } from '@/shared/knot/alexander';
 import { colourings } from '@/shared/knot/colourings';
 import { linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
-import { linkingMatrix } from '@/shared/knot/linking';
 import { Braid, randomMarkovMove, randomMoves, seededRng } from '@/shared/knot/moves';
 import { guessName } from '@/shared/knot/names';
 import { arbBraid, arbDiagram } from './arbitraries';
+import { pairwiseLinking } from './linking-numbers';
 
 // Everything that must not change; linking numbers as a sorted list, since moves may renumber
 // components, and without the diagonal (the blackboard framing changes under R1).
 function invariants(d: Diagram) {
-  const lk = linkingMatrix(d);
   const a = alexander(d);
   return {
     alexander: a.polynomial.toJSON(),
@@ -23,7 +22,7 @@ function invariants(d: Diagram) {
     signature: linkSignature(d),
     colourings3: colourings(d, 3),
     colourings5: colourings(d, 5),
-    linking: lk.flatMap((row, i) => row.filter((_, j) => j > i)).sort((x, y) => x - y),
+    linking: pairwiseLinking(d),
     name: guessName(d)?.text,
   };
 }

@@ -9,17 +9,29 @@ import { goeritzForms, linkDeterminant, linkSignature } from '@/shared/knot/goer
 import { linkingMatrix } from '@/shared/knot/linking';
 import { orient, writhe } from '@/shared/knot/pd';
 import { arbBraid } from './arbitraries';
+import { determinantOf } from './roots';
 
 const L = (pairs: [number, number][]) => Laurent.fromPairs(pairs);
 const components = (d: Diagram) => orient(d.pd).components.length + d.unknots;
 const mirrorBraid = (w: number[]) => w.map((k) => -k);
-// |p(-1)| for a polynomial whose exponents are all integers or all halves.
-const absAtMinusOne = (p: Laurent): bigint => {
-  if (p.isZero()) return 0n;
-  const q = Number.isInteger(p.span()!.min) ? p : p.shift(0.5);
-  const v = q.evaluate(-1).num;
-  return v < 0n ? -v : v;
-};
+
+// Fox colourings by brute force: every labelling of the arcs by Z/n, checked at every crossing
+// (2 over = in + out mod n; Fox 1962). Arcs are the classes of edges joined by the over-strands
+// (b and d of X[a,b,c,d]); it checks the Smith-form count and the values from memory below.
+function colouringsByEnumeration(d: Diagram, n: number): bigint {
+  const parent = new Map(d.pd.flat().map((l) => [l, l]));
+  const find = (l: number): number => (parent.get(l) === l ? l : find(parent.get(l)!));
+  for (const [, b, , e] of d.pd) parent.set(find(b), find(e));
+  const arcs = [...new Set(d.pd.flat().map(find))];
+  const arcOf = (l: number) => arcs.indexOf(find(l));
+  const relations = d.pd.map(([a, b, c]) => [arcOf(b), arcOf(a), arcOf(c)]);
+  let count = 0n;
+  for (let k = 0; k < n ** arcs.length; k++) {
+    const colour = arcs.map((_, i) => Math.floor(k / n ** i) % n);
+    if (relations.every(([over, into, out]) => (2 * colour[over] - colour[into] - colour[out]) % n === 0)) count++;
+  }
+  return count * BigInt(n) ** BigInt(d.unknots);
+}
 
 const trefoil = fromBraid([1, 1, 1]); // positive (right-handed) trefoil, DESIGN.md conventions
 const figureEight = fromBraid([1, -2, 1, -2]);
@@ -127,8 +139,9 @@ describe('skein relations at a crossing (random braids)', () => {
 
 describe('determinant and signature', () => {
   it('match the tables for small knots and links', () => {
-    // Rolfsen, Appendix C, and Lickorish, ch. 6 (from memory); signature convention: the
-    // positive trefoil has sigma = -2 (signature of V + V^T).
+    // Rolfsen, Appendix C, and Lickorish, ch. 8 (from memory); signature convention: the
+    // positive trefoil has sigma = -2 (signature of V + V^T). Whitehead and Borromean values
+    // from memory; their determinants also follow from |V(-1)| of jones.test.ts's polynomials.
     const cases: [Diagram, bigint, number][] = [
       [trefoil, 3n, -2],
       [fromBraid([-1, -1, -1]), 3n, 2],
@@ -151,13 +164,13 @@ describe('determinant and signature', () => {
     for (let n = 2; n <= 9; n++) expect(linkSignature(fromBraid(new Array(n).fill(1)))).toBe(1 - n);
   });
 
-  it('|V(-1)| = det = |Delta(-1)| (Lickorish, ch. 6 and Theorem 3.x: both equal |det Goeritz|), random braids', () => {
+  it('|V(-1)| = det = |Delta(-1)| (from memory: both equal |det| of a Goeritz matrix; Lickorish, ch. 9), random braids', () => {
     fc.assert(
       fc.property(arbBraid(10, 4), (w) => {
         const d = fromBraid(w);
         const det = linkDeterminant(d);
-        expect(absAtMinusOne(jones(d))).toBe(det);
-        expect(absAtMinusOne(alexander(d).polynomial)).toBe(det);
+        expect(determinantOf(jones(d))).toBe(det);
+        expect(determinantOf(alexander(d).polynomial)).toBe(det);
       }),
       { numRuns: 150 },
     );
@@ -172,8 +185,8 @@ describe('determinant and signature', () => {
     fc.assert(
       fc.property(arbFamily, (d) => {
         const det = linkDeterminant(d);
-        expect(absAtMinusOne(jones(d))).toBe(det);
-        expect(absAtMinusOne(alexander(d).polynomial)).toBe(det);
+        expect(determinantOf(jones(d))).toBe(det);
+        expect(determinantOf(alexander(d).polynomial)).toBe(det);
         expect(linkSignature(d, 1)).toBe(linkSignature(d, 0));
       }),
       { numRuns: 150 },
@@ -229,6 +242,20 @@ describe('Fox colourings', () => {
     expect(colourings(fromBraid([1, 1, 1], 3), 3)).toBe(27n); // trefoil + a free unknot
     // Mod 2 the relation says in = out: one colour per component, 2^c colourings (common practice).
     expect(colourings(borromean, 2)).toBe(8n);
+    // The same counts by enumerating all labellings, independently of the values above.
+    for (const [d, n, count] of [[trefoil, 3, 9n], [figureEight, 3, 3n], [figureEight, 5, 25n], [borromean, 2, 8n]] as const) {
+      expect(colouringsByEnumeration(d, n)).toBe(count);
+    }
+  });
+
+  it('the Smith-form count equals enumeration of all labellings (random braids)', () => {
+    fc.assert(
+      fc.property(arbBraid(7, 3), fc.constantFrom(2, 3, 4, 5), (w, n) => {
+        const d = fromBraid(w);
+        expect(colourings(d, n)).toBe(colouringsByEnumeration(d, n));
+      }),
+      { numRuns: 60 },
+    );
   });
 
   it('equal n * |Hom(coker Goeritz, Z/n)| (the Goeritz matrix presents H_1 of the double branched cover; Lickorish ch. 9)', () => {

@@ -4,22 +4,14 @@
 import { analyse } from '@/shared/drawing/analyse';
 import { Point } from '@/shared/drawing/point';
 import { addStroke, flipCrossing, Sketch } from '@/shared/drawing/sketch';
-
-/** Deterministic jitter in [0, 1): the usual fract(sin(x) * 43758.5453) hash. */
-export function random(seed: number): () => number {
-  let i = 0;
-  return () => {
-    const v = Math.sin(++i * 12.9898 + seed * 78.233) * 43758.5453;
-    return v - Math.floor(v);
-  };
-}
+import { seededRng } from '@/shared/knot/moves/random';
 
 /**
  * Touch points along a closed parametric curve over [0, 2 pi), ending just short of the start
  * as a finger would, with up to `noise` pixels of jitter.
  */
 export function touches(curve: (t: number) => Point, samples: number, noise = 0.6, seed = 1, from = 0): Point[] {
-  const rnd = random(seed);
+  const rnd = seededRng(seed); // deterministic jitter
   const out: Point[] = [];
   for (let i = 0; i <= samples * 0.995; i++) {
     const p = curve(from + (2 * Math.PI * i) / samples);

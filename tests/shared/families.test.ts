@@ -3,6 +3,7 @@ import { fromBraid } from '@/shared/knot/braid';
 import { componentCount, diagram, unknot } from '@/shared/knot/diagram';
 import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, reverseComponent, sublink, torusLink, twistKnot } from '@/shared/knot/families';
 import { jones } from '@/shared/knot/jones';
+import { linkingMatrix } from '@/shared/knot/linking';
 import { orient } from '@/shared/knot/pd';
 import { Laurent } from '@/shared/poly/laurent';
 import { arbBraid } from './arbitraries';
@@ -10,17 +11,6 @@ import { determinantOf } from './roots';
 
 const V = (pairs: [number, number][]) => Laurent.fromPairs(pairs);
 const loop = V([[0.5, -1], [-0.5, -1]]); // -t^(1/2) - t^(-1/2), the two-component unlink
-
-// Linking number of components i and j: half the signs of the crossings between them.
-function linking(d: ReturnType<typeof fromBraid>, i: number, j: number): number {
-  const o = orient(d.pd);
-  let s = 0;
-  d.pd.forEach((x, k) => {
-    const [p, q] = [o.componentOf.get(x[0]), o.componentOf.get(x[1])];
-    if ((p === i && q === j) || (p === j && q === i)) s += o.signs[k];
-  });
-  return s / 2;
-}
 
 // Jones' torus knot formula (V. F. R. Jones, "Hecke algebra representations of braid groups and
 // link polynomials", Ann. of Math. 126, 1987; stated from memory), p, q coprime and positive:
@@ -60,7 +50,7 @@ describe('families', () => {
   });
 
   it('twist knots: trefoil, figure-eight, 5_2, 6_1', () => {
-    // Jones polynomials from memory (Lickorish, ch. 3 tables); twist(2) is amphichiral.
+    // Jones polynomials from memory, as in jones.test.ts; twist(2) is amphichiral.
     expect(jones(twistKnot(0)).equals(Laurent.one)).toBe(true);
     expect(determinantOf(jones(twistKnot(1)))).toBe(3n);
     expect(jones(twistKnot(2)).equals(V([[-2, 1], [-1, -1], [0, 1], [1, -1], [2, 1]]))).toBe(true);
@@ -119,7 +109,7 @@ describe('families', () => {
         const d = fromBraid(w);
         const c = componentCount(d);
         const i = k % c;
-        const lambda = Array.from({ length: c }, (_, j) => (j === i ? 0 : linking(d, i, j))).reduce((a, b) => a + b, 0);
+        const lambda = linkingMatrix(d)[i].reduce((sum, lk, j) => (j === i ? sum : sum + lk), 0); // off the diagonal
         expect(jones(reverseComponent(d, i)).equals(jones(d).shift(-3 * lambda))).toBe(true);
       }),
       { numRuns: 50 },
@@ -169,7 +159,7 @@ describe('families', () => {
         }
         // Two copies link f times, times -1 when one is reversed (framing = pushoff linking).
         if (rp + rm === 2) {
-          expect(linking(c, copies[0], copies[1])).toBe((rm === 1 ? -f : f) + 0); // + 0 folds -0
+          expect(linkingMatrix(c)[copies[0]][copies[1]]).toBe((rm === 1 ? -f : f) + 0); // + 0 folds -0
         }
       }),
       { numRuns: 40 },

@@ -7,6 +7,7 @@ import { primeField, rationals } from '@/shared/linalg/ring';
 import { rank } from '@/shared/linalg/eliminate';
 import { primePowers, smith } from '@/shared/linalg/smith';
 import { sparse } from '@/shared/linalg/sparse';
+import { seededRng } from '@/shared/knot/moves/random';
 
 const MAX = Number.MAX_SAFE_INTEGER; // 2^53 - 1
 
@@ -107,8 +108,7 @@ describe('rank and Smith form', () => {
   });
 
   it('agrees with ranks over Q and F_p on random matrices (rank_Q - rank_Fp = number of invariant factors divisible by p)', () => {
-    let seed = 7;
-    const rnd = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+    const rnd = seededRng(7);
     for (let t = 0; t < 400; t++) {
       const [rows, cols] = [1 + Math.floor(rnd() * 6), 1 + Math.floor(rnd() * 6)];
       const triples: [number, number, number][] = [];

@@ -8,20 +8,10 @@ import { orient, relabel, writhe } from '@/shared/knot/pd';
 import { stateSumBracket } from '@/shared/knot/statesum';
 import { Laurent } from '@/shared/poly/laurent';
 import { arbBraid, arbDiagram } from './arbitraries';
+import { pairwiseLinking } from './linking-numbers';
 import { atOmega } from './roots';
 
-// Linking numbers between all pairs of components, sorted: an invariant that ignores the order of components.
-function linkingNumbers(d: Diagram): number[] {
-  const o = orient(d.pd);
-  const sums = new Map<string, number>();
-  d.pd.forEach((x, k) => {
-    const [p, q] = [o.componentOf.get(x[0])!, o.componentOf.get(x[1])!];
-    if (p !== q) sums.set([p, q].sort().join(), (sums.get([p, q].sort().join()) ?? 0) + o.signs[k]);
-  });
-  return [...sums.values()].map((s) => s / 2).filter((s) => s !== 0).sort();
-}
-
-const invariants = (d: Diagram) => ({ jones: jones(d).toJSON(), components: componentCount(d), linking: linkingNumbers(d) });
+const invariants = (d: Diagram) => ({ jones: jones(d).toJSON(), components: componentCount(d), linking: pairwiseLinking(d) });
 
 describe('Reidemeister moves', () => {
   const trefoil = fromBraid([1, 1, 1]);
