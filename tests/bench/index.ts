@@ -13,6 +13,7 @@ const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['jones', jonesBench],
   ['khovanov', khovanovBench],
   ['drawing', () => import('./drawing.bench').then((m) => m.drawingBench())],
+  ['readout', () => import('./readout.bench').then((m) => m.readoutBench())],
   ['sync', () => import('./sync.bench').then((m) => m.syncBench())],
 ];
 
