@@ -54,13 +54,13 @@ export type Placement = 'replace' | 'sum' | 'union';
 
 const integer = (label: string, text: string): number => {
   const t = text.trim();
-  if (!/^-?\d+$/.test(t)) throw new Error(`${label} must be an integer, got "${text}"`);
+  if (!/^-?\d+$/.test(t)) throw new Error(`Expected an integer for ${label}, got "${text}"`);
   return Number(t);
 };
 
 const integers = (label: string, text: string): number[] => {
   const parts = text.trim().split(/[\s,]+/).filter(Boolean);
-  if (parts.length === 0) throw new Error(`${label} needs at least one integer`);
+  if (parts.length === 0) throw new Error(`Expected at least one integer for ${label}`);
   return parts.map((p) => integer(label, p));
 };
 
@@ -71,14 +71,14 @@ function build(kind: FamilyKind, v: Record<string, string>, current: Diagram | n
     case 'twist':
       return twistKnot(integer('n', v.n));
     case 'pretzel':
-      return pretzelLink(integers('The columns', v.a));
+      return pretzelLink(integers('the columns', v.a));
     case 'rational':
-      return rationalLink(integers('The continued fraction', v.a));
+      return rationalLink(integers('the continued fraction', v.a));
     case 'cable': {
       if (!current) throw new Error('Draw or paste a link first: the cable is taken of a component of the sketch');
-      const k = integer('The component', v.component) - 1;
+      const k = integer('the component', v.component) - 1;
       if (k < 0 || k >= componentCount(current)) throw new Error(`There is no component ${k + 1}; the sketch has ${componentCount(current)}`);
-      const framed = v.framing.trim() === '' ? current : setFramingOf(current, k, integer('The framing', v.framing));
+      const framed = v.framing.trim() === '' ? current : setFramingOf(current, k, integer('the framing', v.framing));
       return cable(framed, k, integer('r+', v.rPlus), integer('r-', v.rMinus));
     }
   }

@@ -1,0 +1,69 @@
+// The Families builder: each family drawn with its parameters, combined with the sketch on the
+// Slate (connected sum, disjoint union), mirrored, and cables following a chosen framing.
+import { fireEvent, render, screen } from '@testing-library/react-native';
+import { FamiliesDialog } from '@/components/readout/FamiliesDialog';
+import { fromBraid } from '@/shared/knot/braid';
+import type { Diagram } from '@/shared/knot/diagram';
+import { unknot } from '@/shared/knot/diagram';
+import { jones } from '@/shared/knot/jones';
+import { linkingMatrix } from '@/shared/knot/linking';
+
+const field = (label: string) => screen.getAllByLabelText(label).find((e) => e.props.onChangeText)!;
+const press = (name: string, role: 'button' | 'radio' = 'radio') => fireEvent.press(screen.getByRole(role, { name }));
+
+function setup(current: Diagram | null) {
+  const onDraw = jest.fn();
+  render(<FamiliesDialog visible onClose={() => undefined} current={current} onDraw={onDraw} />);
+  return onDraw;
+}
+
+// DESIGN.md: the closure of [1,1,1] is the positive trefoil, V = t + t^3 - t^4.
+const trefoil = fromBraid([1, 1, 1]);
+const V = (d: Diagram) => jones(d).format('t', 'plain');
+
+test('a twist knot with 2 half-twists is the figure-eight knot', () => {
+  const onDraw = setup(null);
+  press('Twist knot');
+  fireEvent.changeText(field('n (half-twists)'), '2');
+  press('Draw it', 'button');
+  // Figure-eight: V = t^-2 - t^-1 + 1 - t + t^2 (Jones 1985; from memory).
+  expect(V(onDraw.mock.calls[0][0])).toBe('t^-2 - t^-1 + 1 - t + t^2');
+});
+
+test('connected sum multiplies Jones polynomials; the mirror inverts t', () => {
+  const onDraw = setup(trefoil);
+  press('Connected sum');
+  press('Mirror image');
+  press('Draw it', 'button');
+  const sum: Diagram = onDraw.mock.calls[0][0];
+  // V(K1 # K2) = V(K1) V(K2) and V(mirror K)(t) = V(K)(1/t) (Jones 1985): the square knot here.
+  const torus = jones(fromBraid([1, 1, 1]));
+  expect(jones(sum).equals(torus.mul(torus.substitute(-1)))).toBe(true);
+  expect(sum.pd).toHaveLength(6);
+});
+
+test('the (2,0)-cable of an unknot framed 1 is a two-component link with linking number 1', () => {
+  const onDraw = setup(unknot);
+  press('Cable of the sketch');
+  fireEvent.changeText(field('Framing'), '1');
+  press('Draw it', 'button');
+  // Parallel copies along a framing n link n times (common practice; Gompf and Stipsicz ch. 5).
+  const m = linkingMatrix(onDraw.mock.calls[0][0]);
+  expect(m).toHaveLength(2);
+  expect(m[0][1]).toBe(1);
+});
+
+test('bad parameters and a missing sketch are explained', () => {
+  const onDraw = setup(null);
+  fireEvent.changeText(field('q (turns)'), 'three');
+  press('Draw it', 'button');
+  expect(screen.getByText('Expected an integer for q, got "three".')).toBeOnTheScreen();
+  fireEvent.changeText(field('q (turns)'), '3');
+  press('Disjoint union');
+  press('Draw it', 'button');
+  expect(screen.getByText('There is no sketch on the Slate to combine with; choose "Replace".')).toBeOnTheScreen();
+  press('Cable of the sketch');
+  press('Draw it', 'button');
+  expect(screen.getByText(/Draw or paste a link first/)).toBeOnTheScreen();
+  expect(onDraw).not.toHaveBeenCalled();
+});
