@@ -1,6 +1,7 @@
 // The `overstrand` command line as a user runs it: through the package bin (server/cli/bin.mjs),
 // as a child process. Values: DESIGN.md conventions (positive trefoil Jones t + t^3 - t^4, Kh
-// with Z/2 at (3,7)); determinant 3 and signature -2 of the positive trefoil (Lickorish ch. 6).
+// with Z/2 at (3,7), Bar-Natan 2002, arXiv math/0201043); determinant 3 and signature -2 of the
+// positive trefoil (Lickorish, An Introduction to Knot Theory, ch. 6 and 8; from memory).
 import { spawn, spawnSync } from 'node:child_process';
 import path from 'node:path';
 import { answerLine, jsonInteger } from '@/server/cli/requests';
@@ -16,8 +17,8 @@ describe('overstrand invariants', () => {
     const a = JSON.parse(r.stdout);
     expect(a).toMatchObject({ crossings: 3, components: 1, writhe: 3, determinant: 3, signature: -2, linking: [[3]] });
     expect(a.jones).toEqual([[1, 1], [3, 1], [4, -1]]);
-    expect(a.alexander).toEqual([[-1, 1], [0, -1], [1, 1]]);
-    expect(a.colourings).toEqual({ n: 3, count: 9 });
+    expect(a.alexander).toEqual([[-1, 1], [0, -1], [1, 1]]); // t^-1 - 1 + t (Rolfsen, Appendix C; from memory)
+    expect(a.colourings).toEqual({ n: 3, count: 9 }); // 9 three-colourings, 3 constant (Fox 1962; from memory)
   });
 
   it('takes negative braid letters as values, not options (the negative trefoil)', () => {
@@ -31,7 +32,7 @@ describe('overstrand invariants', () => {
     expect(pd.status).toBe(0);
     expect(pd.stdout).toMatch(/determinant\s+3\n/);
     expect(pd.stdout).toMatch(/name\s+invariants match 3_1/);
-    const dt = run(['invariants', '--dt', '4 6 8 2']); // figure-eight
+    const dt = run(['invariants', '--dt', '4 6 8 2']); // figure-eight (DT code from memory; Jones from Lickorish, ch. 3)
     expect(dt.stdout).toMatch(/Jones polynomial\s+t\^-2 - t\^-1 \+ 1 - t \+ t\^2\n/);
   });
 
@@ -82,7 +83,7 @@ describe('overstrand batch', () => {
     const child = spawn(process.execPath, [bin, 'batch'], { stdio: ['pipe', 'pipe', 'inherit'] });
     const first = new Promise<string>((resolve) => child.stdout.once('data', (chunk: Buffer) => resolve(chunk.toString())));
     child.stdin.write('{"id": "early", "braid": [1, -2, 1, -2], "compute": ["determinant"]}\n');
-    expect(JSON.parse(await first)).toEqual({ id: 'early', determinant: 5 }); // figure-eight, det 5
+    expect(JSON.parse(await first)).toEqual({ id: 'early', determinant: 5 }); // figure-eight, det 5 (Rolfsen, Appendix C; from memory)
     child.stdin.end();
     const code = await new Promise<number | null>((resolve) => child.on('exit', resolve));
     expect(code).toBe(0);
@@ -112,7 +113,7 @@ describe('request answers in process', () => {
     const all = JSON.parse(answerLine('{"id":0,"braid":[1,-1,1],"unknots":1}'));
     expect(all.components).toBe(2);
     expect(all.kh).toBeUndefined();
-    expect(all.determinant).toBe(0); // split link (unknot + unknot)
+    expect(all.determinant).toBe(0); // split link (unknot + unknot): det 0 (common practice)
   });
 
   it('reads an empty PD code as the unknot, and "unknots" as free components', () => {

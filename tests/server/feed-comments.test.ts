@@ -1,10 +1,11 @@
 // Comments on a shared sketch (role x action matrix) and the notifications they cause: in-app,
 // by e-mail through the SMTP fake, and the per-user setting that turns the e-mail off.
+import { randomUUID } from 'node:crypto';
 import { Comment, CommentList } from '@/shared/api/comments';
 import { NotificationList, UserSettings } from '@/shared/api/notifications';
 import type { RunningServer } from '@/server/server';
 import { testServer } from './helpers';
-import { api, auth, cast, everyone, sketchOf, type Cast, type Who } from './feed-fixtures';
+import { api, auth, cast, everyone, memberWrite, sketchOf, type Cast, type Who } from './feed-fixtures';
 
 let server: RunningServer;
 let c: Cast;
@@ -23,13 +24,7 @@ const remove = (who: Who, commentId: string) => api(server).delete(`/api/comment
 const count = async () => (await server.deps.db.query('SELECT COUNT(*) AS n FROM comments'))[0].n as number;
 
 describe('who may read and write comments', () => {
-  it.each([
-    ['owner', 201],
-    ['admin', 201],
-    ['member', 201],
-    ['viewer', 403],
-    ['outsider', 404],
-  ] as [Who, number][])('%s comments -> %d', async (who, status) => {
+  it.each(memberWrite(201))('%s comments -> %d', async (who, status) => {
     const before = await count();
     const res = await post(who, { body: `From the ${who}` });
     expect(res.status).toBe(status);
@@ -95,6 +90,53 @@ describe('who may read and write comments', () => {
     expect((await api(server).put(`/api/sketches/${s}/share`).set(auth(c.as.admin)).send({ groupId: g2 })).status).toBe(200);
     expect((await list('admin', s)).body).toEqual([]);
     expect((await list('member', s)).status).toBe(404); // no longer shared with the member
+  });
+});
+
+describe('S34: comment ids made on the device', () => {
+  const commentNotes = async (id: string) =>
+    Number((await server.deps.db.query(`SELECT COUNT(*) AS n FROM notifications WHERE payload LIKE ?`, [`%${id}%`]))[0].n);
+
+  it('a repeat with the same id and author answers the stored comment and changes nothing', async () => {
+    const s = await sketchOf(server, c.as.owner, { title: 'Retried', groupId: c.group });
+    const id = randomUUID();
+    const [rows, mails] = [await count(), server.mailbox!.list().length];
+    const first = await post('member', { id, body: 'first try' }, s);
+    expect(first.status).toBe(201);
+    expect(Comment.parse(first.body)).toMatchObject({ id, sketchId: s, body: 'first try', author: { id: c.as.member.id } });
+    const again = await post('member', { id, body: 'first try' }, s);
+    expect(again.status).toBe(200);
+    expect(again.body).toEqual(first.body);
+    // A later body under the same id is still the same comment: the first body stands (edits are PATCH).
+    expect((await post('member', { id, body: 'changed on the way' }, s)).body).toEqual(first.body);
+    expect(await count()).toBe(rows + 1);
+    expect(CommentList.parse((await list('owner', s)).body).map((x) => x.id)).toEqual([id]);
+    expect(await commentNotes(id)).toBe(1); // the owner is told once
+    expect(server.mailbox!.list()).toHaveLength(mails + 1);
+  });
+
+  it('the same id from another author or on another sketch is 409 and stores nothing', async () => {
+    const s = await sketchOf(server, c.as.owner, { title: 'Clash', groupId: c.group });
+    const other = await sketchOf(server, c.as.owner, { title: 'Clash two', groupId: c.group });
+    const id = randomUUID();
+    expect((await post('member', { id, body: 'mine' }, s)).status).toBe(201);
+    const rows = await count();
+    const byAdmin = await post('admin', { id, body: 'also mine?' }, s);
+    expect(byAdmin.status).toBe(409);
+    expect(byAdmin.body.error.code).toBe('id_taken');
+    expect((await post('member', { id, body: 'mine' }, other)).status).toBe(409);
+    expect(await count()).toBe(rows);
+    expect((await list('member', other)).body).toEqual([]);
+    expect(CommentList.parse((await list('member', s)).body)).toMatchObject([{ id, body: 'mine', author: { id: c.as.member.id } }]);
+  });
+
+  it('the permission checks come first: a viewer or outsider reusing an id learns nothing', async () => {
+    const s = await sketchOf(server, c.as.owner, { title: 'Gated', groupId: c.group });
+    const id = randomUUID();
+    await post('member', { id, body: 'here' }, s);
+    expect((await post('viewer', { id, body: 'here' }, s)).status).toBe(403);
+    expect((await post('outsider', { id, body: 'here' }, s)).status).toBe(404);
+    expect((await post('member', { id: 'not-a-uuid', body: 'x' }, s)).status).toBe(400);
   });
 });
 

@@ -18,6 +18,8 @@ export interface Account {
 export const roleNames = ['owner', 'admin', 'member', 'viewer'] as const satisfies readonly Role[];
 export type Who = Role | 'outsider';
 export const everyone: readonly Who[] = [...roleNames, 'outsider'];
+/** Statuses of a write any member may make: `ok` for owner, admin and member, 403 for a viewer, 404 for an outsider (who does not see the group). */
+export const memberWrite = (ok: number): [Who, number][] => [['owner', ok], ['admin', ok], ['member', ok], ['viewer', 403], ['outsider', 404]];
 
 export interface Cast {
   group: string;

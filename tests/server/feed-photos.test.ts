@@ -9,7 +9,7 @@ import S3rver from 's3rver';
 import { Photo, PhotoList } from '@/shared/api/photos';
 import type { RunningServer } from '@/server/server';
 import { testServer } from './helpers';
-import { api, auth, cameraJpeg, cast, everyone, gifImage, pngImage, sketchOf, webpImage, type Cast, type Who } from './feed-fixtures';
+import { api, auth, cameraJpeg, cast, everyone, gifImage, memberWrite, pngImage, sketchOf, webpImage, type Cast, type Who } from './feed-fixtures';
 
 const files = (dir: string): string[] => readdirSync(dir, { recursive: true, withFileTypes: true }).filter((d) => d.isFile()).map((d) => d.name);
 const photoRows = async (s: RunningServer) => (await s.deps.db.query('SELECT COUNT(*) AS n FROM photos'))[0].n as number;
@@ -36,13 +36,7 @@ describe('photos on local disk', () => {
   });
   const upload = (who: Who, bytes: Buffer, sketchId = shared, filename?: string, type?: string) => uploadTo(server, c.as[who], sketchId, bytes, filename, type);
 
-  it.each([
-    ['owner', 201],
-    ['admin', 201],
-    ['member', 201],
-    ['viewer', 403],
-    ['outsider', 404],
-  ] as [Who, number][])('%s adds a photo to a shared sketch -> %d', async (who, status) => {
+  it.each(memberWrite(201))('%s adds a photo to a shared sketch -> %d', async (who, status) => {
     const before = files(dir).length;
     const res = await upload(who, await cameraJpeg());
     expect(res.status).toBe(status);

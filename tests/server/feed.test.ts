@@ -4,7 +4,7 @@
 import { FeedPage, ForkResponse, GroupSketch, ShareResponse } from '@/shared/api/feed';
 import type { RunningServer } from '@/server/server';
 import { testServer } from './helpers';
-import { api, auth, cast, everyone, sketchOf, type Cast, type Who } from './feed-fixtures';
+import { api, auth, cast, everyone, memberWrite, sketchOf, type Cast, type Who } from './feed-fixtures';
 import { pullAll } from './sync-fixtures';
 
 let server: RunningServer;
@@ -27,13 +27,7 @@ const share = (who: Who, sketchId: string, groupId = c.group) => api(server).put
 const unshare = (who: Who, sketchId: string) => api(server).delete(`/api/sketches/${sketchId}/share`).set(auth(c.as[who]));
 
 describe('share and stop sharing', () => {
-  it.each([
-    ['owner', 200],
-    ['admin', 200],
-    ['member', 200],
-    ['viewer', 403],
-    ['outsider', 404],
-  ] as [Who, number][])('%s shares their own private sketch to the group -> %d', async (who, status) => {
+  it.each(memberWrite(200))('%s shares their own private sketch to the group -> %d', async (who, status) => {
     const id = await sketchOf(server, c.as[who], { title: `${who}'s sketch` });
     const res = await share(who, id);
     expect(res.status).toBe(status);
