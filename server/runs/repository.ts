@@ -29,10 +29,12 @@ export function nextQueued(db: Db, taken: readonly string[]): Promise<Run | null
   return qb.orderBy('r.createdAt', 'ASC').addOrderBy('r.id', 'ASC').getOne();
 }
 
-/** At start: computations a previous process left running go back to the queue. */
-export async function requeueInterrupted(db: Db): Promise<number> {
-  const r = await repo(db).update({ status: 'running', kind: 'khovanov' }, { status: 'queued', startedAt: null, progress: 0, complexSize: 0 });
-  return r.affected ?? 0;
+/** At start: computations a previous process left running go back to the queue; `taken` are this process's own. */
+export async function requeueInterrupted(db: Db, taken: readonly string[]): Promise<number> {
+  const qb = repo(db).createQueryBuilder().update().set({ status: 'queued', startedAt: null, progress: 0, complexSize: 0 })
+    .where('status = :r AND kind = :k', { r: 'running', k: 'khovanov' });
+  if (taken.length) qb.andWhere('id NOT IN (:...taken)', { taken });
+  return (await qb.execute()).affected ?? 0;
 }
 
 /** A finished computation of the same diagram (up to relabelling), ring and reduced flag. */

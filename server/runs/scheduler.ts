@@ -22,9 +22,15 @@ export class Scheduler {
     this.pool = createRunPool(deps.config.runs);
   }
 
-  /** Queued runs and runs a previous process left running start again. */
+  /**
+   * Queued runs and runs a previous process left running start again. Runs this process already
+   * took (started before start(), e.g. by the demo seed) are not interrupted: the requeue waits
+   * its turn in the chain, so no fill is between marking a run running and tracking it.
+   */
   async start(): Promise<void> {
-    const n = await requeueInterrupted(this.deps.db);
+    const requeue = this.chain.then(() => requeueInterrupted(this.deps.db, [...this.active.keys()]));
+    this.chain = requeue.then(() => undefined, () => undefined);
+    const n = await requeue;
     if (n > 0) this.deps.log.info({ runs: n }, 'interrupted runs queued again');
     this.poke();
   }

@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import request from 'supertest';
 import { FeedPage, GroupSketch, feedPaths } from '@/shared/api/feed';
 import { GroupList, MemberList } from '@/shared/api/groups';
+import { RunList } from '@/shared/api/runs';
 import { DEMO_GROUP, DEMO_USERS } from '@/server/demo/seed';
 import { DEMO_SKETCHES } from '@/server/demo/story';
 import { bearer, signUp, testServer } from './helpers';
@@ -113,6 +114,11 @@ describe('the demo scenario', () => {
       const [week1, week3] = ['demo-sketch-trefoil-opening', 'demo-sketch-trefoil-handles'];
       const sketch = GroupSketch.parse((await request(server.url).get(feedPaths.groupSketch(DEMO_GROUP.id, week3)).set(bearer(token))).body);
       expect(sketch.sameInvariants.map((r) => r.id)).toContain(week1);
+      // Runs the seed starts before the run pool's own start are not requeued by it: each one
+      // that ends keeps the time it started.
+      const runs = RunList.parse((await request(server.url).get(`/api/runs?groupId=${DEMO_GROUP.id}`).set(bearer(token))).body);
+      expect(runs.length).toBe(DEMO_SKETCHES.reduce((n, s) => n + s.runs.length, 0));
+      expect(runs.filter((r) => r.status !== 'queued' && r.startedAt === null)).toEqual([]);
     } finally {
       await server.stop();
     }
