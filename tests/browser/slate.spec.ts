@@ -278,3 +278,24 @@ test('a sketch reopens as it was left, also after a reload', async () => {
   await page.getByText('lk(1,2) = +2').waitFor();
   await page.getByTestId('readout-crossings-count').getByText('4 crossings').waitFor();
 });
+
+test('an open strand is shown unfinished and not counted; a heavy run starts from the sketch', async () => {
+  await page.setViewportSize(PHONE);
+  await page.getByRole('link', { name: 'Sketches' }).click();
+  await page.getByRole('button', { name: 'New sketch' }).first().click();
+  await page.getByText('Draw a strand. End it where it began to close it.').waitFor();
+  const box = (await page.getByTestId('slate-canvas').boundingBox())!;
+  const c = { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+  // Three quarters of a circle: it does not come back to its start.
+  await stroke(page, circle(c, 80).slice(0, 91));
+  await page.getByText('Close the strand: end it near where it started. Unfinished strands are not counted.').waitFor();
+  expect(await page.getByTestId('slate-canvas').locator('path[stroke-dasharray]').count()).toBeGreaterThan(0);
+  await shoot(page, 'slate-open-strand');
+  // Finishing it: a stroke from its end back to its start closes the component.
+  await stroke(page, circle(c, 80).slice(90));
+  await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
+  await page.getByTestId('readout').scrollIntoViewIfNeeded();
+  await page.getByRole('button', { name: 'Start a heavy run' }).click();
+  await page.waitForURL(/\/runs\?/);
+  expect(new URL(page.url()).searchParams.get('pd')).toBe('[]');
+});
