@@ -13,6 +13,9 @@ export interface StoreOptions {
 }
 
 const recordKey = (type: RecordType, id: string) => `${type}:${id}`;
+const commentKey = (c: LocalComment) => `${c.sketchId}:${c.createdAt}:${c.id}`;
+/** Comments stored before S34 carry no state: they were never sent. */
+const waiting = (c: LocalComment) => (c.state ?? 'waiting') === 'waiting';
 
 function toBase64(bytes: Uint8Array): string {
   let s = '';
@@ -138,13 +141,14 @@ export class LocalStore implements SketchRepository, SyncStore {
   }
 
   async addComment(sketchId: string, body: string): Promise<LocalComment> {
-    const comment: LocalComment = { id: this.newId(), sketchId, body, createdAt: this.now().toISOString() };
-    await this.tx((t) => t.put('comments', `${sketchId}:${comment.createdAt}:${comment.id}`, comment), true);
+    const comment: LocalComment = { id: this.newId(), sketchId, body, createdAt: this.now().toISOString(), state: 'waiting' };
+    await this.tx((t) => t.put('comments', commentKey(comment), comment), true);
     return comment;
   }
 
-  comments(sketchId: string): Promise<LocalComment[]> {
-    return this.tx((t) => t.list<LocalComment>('comments', `${sketchId}:`));
+  async comments(sketchId: string): Promise<LocalComment[]> {
+    const list = await this.tx((t) => t.list<LocalComment>('comments', `${sketchId}:`));
+    return list.map((c) => ({ ...c, state: c.state ?? 'waiting' }));
   }
 
   async queueUpload(bytes: Uint8Array, mimeType: string): Promise<string> {
@@ -228,8 +232,23 @@ export class LocalStore implements SketchRepository, SyncStore {
     return this.tx((t) => t.remove('uploads', sha256));
   }
 
+  commentsToSend(): Promise<LocalComment[]> {
+    return this.tx(async (t) => {
+      const blocked = new Set((await t.list<Mutation>('outbox')).map((m) => m.recordId));
+      const list = (await t.list<LocalComment>('comments')).filter((c) => waiting(c) && !blocked.has(c.sketchId));
+      return list.map((c) => ({ ...c, state: 'waiting' as const })).sort((a, b) => a.createdAt.localeCompare(b.createdAt));
+    });
+  }
+
+  commentSettled(comment: LocalComment, refused?: string): Promise<void> {
+    const settled: LocalComment = refused === undefined ? { ...comment, state: 'sent' } : { ...comment, state: 'rejected', reason: refused };
+    return this.tx((t) => t.put('comments', commentKey(comment), settled), true);
+  }
+
   async counts(): Promise<SyncCounts> {
-    const [waiting, rejected, uploads] = await this.tx((t) => Promise.all([t.count('outbox'), t.count('rejected'), t.count('uploads')]));
-    return { waiting, rejected, uploads, conflicts: (await this.conflicts()).length };
+    const [waitingCount, rejected, uploads, comments] = await this.tx((t) =>
+      Promise.all([t.count('outbox'), t.count('rejected'), t.count('uploads'), t.list<LocalComment>('comments')]),
+    );
+    return { waiting: waitingCount, rejected, uploads, comments: comments.filter(waiting).length, conflicts: (await this.conflicts()).length };
   }
 }

@@ -23,10 +23,14 @@ export interface Revision {
 }
 
 export interface LocalComment {
+  /** Made on the device and sent with the comment, so a retried post is not a second one (S34). */
   id: string;
   sketchId: string;
   body: string;
   createdAt: string;
+  /** S34: waiting to be posted, posted, or refused by the server (kept, with the reason). */
+  state: 'waiting' | 'sent' | 'rejected';
+  reason?: string;
 }
 
 export interface PendingUpload {
@@ -61,6 +65,8 @@ export interface SyncCounts {
   conflicts: number;
   rejected: number;
   uploads: number;
+  /** Comments written offline still waiting to be posted (S34). */
+  comments: number;
 }
 
 export interface SyncStore {
@@ -76,5 +82,9 @@ export interface SyncStore {
   storePage(page: PullResponse): Promise<boolean>;
   pendingUploads(): Promise<PendingUpload[]>;
   uploaded(sha256: string): Promise<void>;
+  /** S34: waiting comments, oldest first, leaving out those whose sketch still has outbox writes. */
+  commentsToSend(): Promise<LocalComment[]>;
+  /** S34: posted (no reason) or refused by the server (the reason). */
+  commentSettled(comment: LocalComment, refused?: string): Promise<void>;
   counts(): Promise<SyncCounts>;
 }

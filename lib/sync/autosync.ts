@@ -20,7 +20,7 @@ export function autoSync(store: LocalStore, engine: Pick<SyncEngine, 'start' | '
   const unsubscribe = store.subscribe(() => {
     void store.counts().then((counts) => {
       status.setState(counts);
-      if (counts.waiting > 0 && status.getState().online && !soon) {
+      if (counts.waiting + counts.comments > 0 && status.getState().online && !soon) {
         soon = setTimeout(() => {
           soon = null;
           void engine.syncNow().catch(() => undefined);

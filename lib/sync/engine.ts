@@ -1,5 +1,6 @@
-// The device's sync engine (sync/SPEC.md S8, S12, S16, S26, S29-S31): push the outbox in clock
-// order, upload waiting photos, then pull pages until up to date. One round at a time; failed
+// The device's sync engine (sync/SPEC.md S8, S12, S16, S26, S29-S31, S34): push the outbox in
+// clock order, upload waiting photos, post comments written offline, then pull pages until up
+// to date. One round at a time; failed
 // rounds retry with exponential back-off.
 import { maxPushMutations, pushBatchBytes } from '@/shared/api/sync';
 import { backoffDelay } from '@/sync/backoff';
@@ -88,6 +89,7 @@ export class SyncEngine {
     try {
       await this.pushAll();
       await this.uploadAll();
+      await this.sendComments();
       await this.pullAll();
       this.failures = 0;
       this.o.status.setState({ lastError: null, lastSyncedAt: new Date().toISOString(), online: true });
@@ -128,6 +130,22 @@ export class SyncEngine {
     for (const u of await this.o.store.pendingUploads()) {
       if (!(await this.o.transport.hasUpload(u.sha256))) await this.o.transport.upload(u.sha256, u.mimeType, fromBase64(u.base64));
       await this.o.store.uploaded(u.sha256);
+    }
+  }
+
+  /**
+   * S34: after the push, since a comment needs its sketch shared on the server. A lost answer
+   * fails the round (back-off, S30) and the retry's same id is answered with the comment made.
+   */
+  private async sendComments(): Promise<void> {
+    for (const c of await this.o.store.commentsToSend()) {
+      try {
+        await this.o.transport.postComment(c.sketchId, { id: c.id, body: c.body });
+        await this.o.store.commentSettled(c);
+      } catch (e) {
+        if (!(e instanceof TransportError && e.kind === 'client')) throw e;
+        await this.o.store.commentSettled(c, e.message); // refused: kept on the device, not retried
+      }
     }
   }
 

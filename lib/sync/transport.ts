@@ -1,6 +1,7 @@
 // The engine's view of the server: push, pull and uploads over fetch, answers checked with the
 // shared zod contract. Failures become TransportError so the engine can tell "try later"
 // (network, 5xx) from "stop" (401) and "our bug" (other 4xx).
+import { Comment, commentPaths, type NewCommentRequest } from '@/shared/api/comments';
 import { PullResponse, PushResponse, syncPaths, type PushRequest } from '@/shared/api/sync';
 
 export type TransportFailure = 'network' | 'unauthorized' | 'server' | 'client';
@@ -21,6 +22,8 @@ export interface SyncTransport {
   pull(cursor: number, limit: number): Promise<PullResponse>;
   hasUpload(sha256: string): Promise<boolean>;
   upload(sha256: string, mimeType: string, bytes: Uint8Array): Promise<void>;
+  /** S34: 201 new or 200 already made (same id); refusals (4xx, 404 too) are `client` errors. */
+  postComment(sketchId: string, req: NewCommentRequest): Promise<Comment>;
 }
 
 export interface HttpOptions {
@@ -72,6 +75,12 @@ export function httpTransport(opts: HttpOptions): SyncTransport {
       form.append('sha256', sha256);
       form.append('file', new Blob([new Uint8Array(bytes)], { type: mimeType }), `${sha256}.${mimeType.split('/')[1]}`);
       await call(syncPaths.uploads, { method: 'POST', body: form });
+    },
+    async postComment(sketchId, req) {
+      const path = commentPaths.comments(sketchId);
+      const res = await call(path, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(req) });
+      if (res.status === 404) throw new TransportError('client', `POST ${path} answered 404`, 404);
+      return Comment.parse(await json(res));
     },
   };
 }

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { CommentRequest, commentPaths } from '@/shared/api/comments';
+import { CommentRequest, NewCommentRequest, commentPaths } from '@/shared/api/comments';
 import { RecordId } from '@/shared/api/sketches';
 import { currentUser, requireAuth } from '../auth/middleware';
 import type { Deps } from '../deps';
@@ -19,8 +19,9 @@ export function routes(deps: Deps): Router {
   });
   router.post(commentPaths.comments(':id'), auth, async (req, res) => {
     const { id } = parse(SketchParams, req.params, 'path');
-    const { body } = parse(CommentRequest, req.body);
-    res.status(201).json(await comments.add(deps, currentUser(req), id, body));
+    const { body, id: commentId } = parse(NewCommentRequest, req.body);
+    const { comment, created } = await comments.add(deps, currentUser(req), id, body, commentId);
+    res.status(created ? 201 : 200).json(comment);
   });
   router.patch(commentPaths.comment(':commentId'), auth, async (req, res) => {
     const { commentId } = parse(CommentParams, req.params, 'path');

@@ -9,7 +9,7 @@ import { inTransaction } from '../db/transaction';
 import type { Deps } from '../deps';
 import { sharedSketchAccess } from '../feed/access';
 import { usersById } from '../feed/repository';
-import { forbidden, notFound } from '../http/errors';
+import { AppError, forbidden, notFound } from '../http/errors';
 import { notify } from '../notifications/use-cases';
 import * as repo from './repository';
 
@@ -32,11 +32,19 @@ export async function list(deps: Deps, caller: User, sketchId: string): Promise<
 
 const excerpt = (body: string) => (body.length > 280 ? `${body.slice(0, 277)}...` : body);
 
-export async function add(deps: Deps, caller: User, sketchId: string, body: string): Promise<CommentDto> {
+/**
+ * S34: `id` made on the device makes a retry harmless: the same id from the same author on the
+ * same sketch answers the comment already made (created: false); anyone or anything else, 409.
+ */
+export async function add(deps: Deps, caller: User, sketchId: string, body: string, id: string = randomUUID()): Promise<{ comment: CommentDto; created: boolean }> {
   const { sketch, role } = await sharedSketchAccess(deps.db, caller.id, sketchId);
   if (!canPost(role)) throw forbidden('Viewers can read the discussion but not comment');
-  const row: Comment = { id: randomUUID(), sketchId, groupId: sketch.groupId, authorId: caller.id, body, createdAt: deps.now(), editedAt: null };
-  await inTransaction(deps.db, (m) => repo.insertComment(m, row));
+  const fresh: Comment = { id, sketchId, groupId: sketch.groupId, authorId: caller.id, body, createdAt: deps.now(), editedAt: null };
+  const row = await inTransaction(deps.db, async (m) => (await repo.findComment(m, id)) ?? (await repo.insertComment(m, fresh), fresh));
+  if (row !== fresh) {
+    if (row.authorId !== caller.id || row.sketchId !== sketchId) throw new AppError('id_taken', 409, 'That comment id is already used by another comment');
+    return { comment: (await toDtos(deps, [row]))[0], created: false };
+  }
   if (sketch.ownerId !== caller.id) {
     await notify(deps, sketch.ownerId, 'comment', {
       groupId: sketch.groupId,
@@ -47,7 +55,7 @@ export async function add(deps: Deps, caller: User, sketchId: string, body: stri
       excerpt: excerpt(body),
     });
   }
-  return (await toDtos(deps, [row]))[0];
+  return { comment: (await toDtos(deps, [row]))[0], created: true };
 }
 
 /** The comment and the caller's role, when the comment's sketch is still shared where it was written. */

@@ -15,6 +15,12 @@ export const CommentBody = z
 
 export const CommentRequest = z.object({ body: CommentBody });
 export type CommentRequest = z.infer<typeof CommentRequest>;
+/**
+ * A new comment may carry an id made on the device (sync/SPEC.md S34), so a retried post is
+ * answered with the comment it already made (200) instead of a second one (201).
+ */
+export const NewCommentRequest = CommentRequest.extend({ id: z.uuid({ message: 'Comment id must be a UUID' }).optional() });
+export type NewCommentRequest = z.infer<typeof NewCommentRequest>;
 
 export const Comment = z.object({
   id: z.string(),

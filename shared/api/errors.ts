@@ -14,6 +14,7 @@ export const errorCodes = [
   'invitation_used', // 409: the invitation link was already accepted
   'last_owner', // 409: the change would leave the group without an owner
   'run_finished', // 409: cancelling a run that has already ended
+  'id_taken', // 409: a client-made id (e.g. a comment's) already names another author's or sketch's item
   'invitation_expired', // 410: the invitation link is past its expiry
   'payload_too_large', // 413: body over the size limit
   'unsupported_type', // 415: an upload that is not one of the accepted kinds (checked by content)

@@ -9,6 +9,8 @@ import { httpTransport, TransportError, type SyncTransport } from '@/lib/sync/tr
 export interface Faults {
   /** Let the server apply the next n pushes, then lose their answers. */
   dropPushAnswers: number;
+  /** Let the server make the next n comments, then lose their answers. */
+  dropCommentAnswers: number;
   /** Send every push twice. */
   duplicatePushes: boolean;
   /** Lose the network after this many more pulls (Infinity: never). */
@@ -18,12 +20,13 @@ export interface Faults {
 
 export class Device {
   readonly disk: MemoryDisk = memoryDisk();
-  faults: Faults = { dropPushAnswers: 0, duplicatePushes: false, pullsBeforeOutage: Infinity, offline: false };
+  faults: Faults = { dropPushAnswers: 0, dropCommentAnswers: 0, duplicatePushes: false, pullsBeforeOutage: Infinity, offline: false };
   store!: LocalStore;
   engine!: SyncEngine;
   status = createSyncStatusStore();
   pushes = 0;
   pulls = 0;
+  commentPosts = 0;
 
   constructor(
     private readonly url: () => string,
@@ -65,6 +68,16 @@ export class Device {
       },
       hasUpload: async (h) => (gate(), real.hasUpload(h)),
       upload: async (h, m, b) => (gate(), real.upload(h, m, b)),
+      postComment: async (sketchId, req) => {
+        gate();
+        this.commentPosts++;
+        const answer = await real.postComment(sketchId, req);
+        if (this.faults.dropCommentAnswers > 0) {
+          this.faults.dropCommentAnswers--;
+          throw new TransportError('network', 'answer lost (test)');
+        }
+        return answer;
+      },
     };
   }
 

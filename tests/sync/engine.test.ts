@@ -22,6 +22,9 @@ function setup(failures: TransportError[]) {
     pull: async (cursor) => (calls.push('pull'), { changes: [], cursor, hasMore: false, viewer: { userId: 'u', groupIds: [] } }),
     hasUpload: async () => true,
     upload: async () => undefined,
+    postComment: async () => {
+      throw new Error('no comments in these tests');
+    },
   };
   const timers = {
     setTimeout: ((fn: () => void, ms: number) => (delays.push(ms), pending.push(fn), pending.length)) as unknown as typeof setTimeout,
