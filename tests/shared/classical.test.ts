@@ -4,10 +4,12 @@
 import fc from 'fast-check';
 import { diagram, Diagram, fromBraid, fromDT, jones, Laurent, pretzelLink, rationalLink } from '@/shared/knot';
 import { alexander } from '@/shared/knot/alexander';
+import { determinant, integers } from '@/shared/knot/bareiss';
 import { colourings, solutionsModN } from '@/shared/knot/colourings';
 import { goeritzForms, linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
 import { linkingMatrix } from '@/shared/knot/linking';
 import { orient, writhe } from '@/shared/knot/pd';
+import { signature } from '@/shared/knot/symmetric';
 import { arbBraid } from './arbitraries';
 import { determinantOf } from './roots';
 
@@ -160,8 +162,20 @@ describe('determinant and signature', () => {
     expect(Math.abs(linkSignature(threeTwist))).toBe(2);
   });
 
-  it('T(2,n) has signature -(n-1) (Rolfsen 6.D, from memory)', () => {
-    for (let n = 2; n <= 9; n++) expect(linkSignature(fromBraid(new Array(n).fill(1)))).toBe(1 - n);
+  it('T(2,n) has signature -(n-1) (Rolfsen 6.D, from memory) and determinant n, as its Seifert matrix says', () => {
+    for (let n = 2; n <= 9; n++) {
+      const d = fromBraid(new Array(n).fill(1));
+      expect(linkSignature(d)).toBe(1 - n);
+      // Independently of the Goeritz route: the Seifert surface of the closed 2-braid (two discs,
+      // n bands) has Seifert matrix -1 on the diagonal and 1 just below it, (n-1) x (n-1), the
+      // trefoil's being [[-1, 0], [1, -1]] (from memory; Lickorish, ch. 6).
+      const v = Array.from({ length: n - 1 }, (_, i) => Array.from({ length: n - 1 }, (_, j) => (i === j ? -1n : i === j + 1 ? 1n : 0n)));
+      const sym = v.map((row, i) => row.map((x, j) => x + v[j][i]));
+      expect(signature(sym)).toBe(1 - n);
+      const det = determinant(integers, sym);
+      expect(linkDeterminant(d)).toBe(det < 0n ? -det : det);
+      expect(det < 0n ? -det : det).toBe(BigInt(n));
+    }
   });
 
   it('|V(-1)| = det = |Delta(-1)| (from memory: both equal |det| of a Goeritz matrix; Lickorish, ch. 9), random braids', () => {
