@@ -22,6 +22,7 @@ type Drag =
 
 /** Hit radius of taps, in screen pixels. */
 const HIT = 18;
+/** How far along the strand a reshaping drag reaches, in screen pixels. */
 const reshapeRadius = 60;
 
 const pathOf = (pts: readonly Point[]) => pts.map((p, i) => `${i ? 'L' : 'M'}${p.x.toFixed(1)} ${p.y.toFixed(1)}`).join(' ');
@@ -79,7 +80,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
       const delta = { x: p.x - d.origin.x, y: p.y - d.origin.y };
       const sketch = d.kind === 'move'
         ? moveComponent(d.from.sketch, d.id, delta)
-        : reshapeComponent(d.from.sketch, d.id, d.index, delta, reshapeRadius);
+        : reshapeComponent(d.from.sketch, d.id, d.index, delta, reshapeRadius / s.view.k);
       s.setPreview({ ...d.from, sketch });
     }
   };

@@ -139,7 +139,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const board = (
     <>
       <Toolbar />
-      <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: Math.max(320, Math.round(height * 0.5)) }]}>
+      <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: Math.max(280, Math.round(height * 0.46)) }]}>
         <SlateCanvas analysis={analysis} onFraming={(id) => setOpen({ framing: id })} />
       </View>
       <SelectionBar numberOf={numberOf} onFraming={(id) => setOpen({ framing: id })} />
@@ -158,11 +158,12 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
           <ScrollView style={styles.side} contentContainerStyle={styles.sideContent}>{readoutPane}</ScrollView>
         </View>
       ) : (
-        <ScrollView contentContainerStyle={styles.phone} keyboardShouldPersistTaps="handled">
+        // The board stays put (a page that scrolls would fight the drawing finger); the Readout scrolls below it.
+        <View style={styles.main}>
           {header}
           {board}
-          <View style={styles.phoneReadout}>{readoutPane}</View>
-        </ScrollView>
+          <ScrollView style={styles.main} contentContainerStyle={styles.phoneReadout} keyboardShouldPersistTaps="handled">{readoutPane}</ScrollView>
+        </View>
       )}
       <PasteCodeDialog visible={open === 'paste'} onClose={() => setOpen(null)} onDraw={draw} />
       <FamiliesDialog visible={open === 'families'} onClose={() => setOpen(null)} current={diagram} onDraw={(d) => draw(d)} />
@@ -197,8 +198,7 @@ const styles = StyleSheet.create({
   main: { flex: 1 },
   side: { width: 330, flexGrow: 0, borderLeftWidth: 1, borderLeftColor: colors.line, backgroundColor: colors.surface },
   sideContent: { padding: space.xl, gap: space.lg },
-  phone: { paddingBottom: space.xxxl },
-  phoneReadout: { padding: space.lg + 4, gap: space.lg },
+  phoneReadout: { padding: space.lg + 4, paddingBottom: space.xxxl, gap: space.lg },
   header: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingHorizontal: space.lg, paddingTop: space.lg, paddingBottom: space.xs, flexWrap: 'wrap' },
   back: { minHeight: 40, justifyContent: 'center', width: '100%' },
   backText: { ...type.label, color: colors.accent, fontSize: 15 },
