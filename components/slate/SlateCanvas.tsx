@@ -161,7 +161,11 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
     return () => node.removeEventListener('wheel', onWheel);
   }, []);
 
-  const onLayout = (e: LayoutChangeEvent) => setSize({ width: e.nativeEvent.layout.width, height: e.nativeEvent.layout.height });
+  const onLayout = (e: LayoutChangeEvent) => {
+    const { width, height } = e.nativeEvent.layout;
+    useSlate.getState().resize(width, height);
+    setSize({ width, height });
+  };
   const selectedPicture = pictures.find((p) => p.id === selected);
   const empty = doc.sketch.components.length === 0 && !live;
 

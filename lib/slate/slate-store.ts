@@ -26,6 +26,8 @@ export interface SlateState {
   tool: Tool;
   selected: string | null;
   view: View;
+  /** The canvas size last seen (a resize keeps the drawing's centre where it was). */
+  size: { width: number; height: number };
   /** The braid word the sketch came from, while it is unchanged since (for "copy braid word"). */
   braid: { word: number[]; doc: SlateDoc } | null;
   /** Bumped when a document arrives from outside (load, paste, family), to refit the view. */
@@ -42,6 +44,7 @@ export interface SlateState {
   setTool(tool: Tool): void;
   select(id: string | null): void;
   setView(view: View): void;
+  resize(width: number, height: number): void;
   /** Refit the view to the drawing. */
   fit(): void;
   /** The canvas fitted the view for this request. */
@@ -56,6 +59,7 @@ export const useSlate = create<SlateState>((set, get) => ({
   tool: 'draw',
   selected: null,
   view: identityView,
+  size: { width: 0, height: 0 },
   braid: null,
   fitRequest: 0,
   fitted: -1,
@@ -70,6 +74,13 @@ export const useSlate = create<SlateState>((set, get) => ({
   setTool: (tool) => set({ tool }),
   select: (selected) => set({ selected }),
   setView: (view) => set({ view }),
+  resize: (width, height) =>
+    set((s) => {
+      if (s.size.width === 0) return { size: { width, height } };
+      const dx = (width - s.size.width) / 2;
+      const dy = (height - s.size.height) / 2;
+      return { size: { width, height }, view: { ...s.view, x: s.view.x + dx, y: s.view.y + dy } };
+    }),
   fit: () => set((s) => ({ fitRequest: s.fitRequest + 1 })),
   markFitted: (fitted, view) => set({ fitted, view }),
 }));
