@@ -299,3 +299,11 @@ test('an open strand is shown unfinished and not counted; a heavy run starts fro
   await page.waitForURL(/\/runs\?/);
   expect(new URL(page.url()).searchParams.get('pd')).toBe('[]');
 });
+
+test('the sketchbook lists every sketch with its picture, crossings and Jones polynomial', async () => {
+  await page.goto(baseUrl + '/sketches');
+  await page.getByRole('link', { name: 'Open T(2,4) from the seminar' }).waitFor();
+  // The trefoil (then pasted over and titled), the circles, the open strand.
+  expect(await page.getByRole('link', { name: /^Open / }).count()).toBe(3);
+  await shoot(page, 'slate-sketchbook');
+});
