@@ -4,15 +4,13 @@ import { randomUUID } from 'node:crypto';
 import { Comment, CommentList } from '@/shared/api/comments';
 import { NotificationList, UserSettings } from '@/shared/api/notifications';
 import type { RunningServer } from '@/server/server';
-import { testServer } from './helpers';
-import { api, auth, cast, everyone, memberWrite, sketchOf, type Cast, type Who } from './feed-fixtures';
+import { api, auth, castServer, everyone, memberWrite, sketchOf, type Cast, type Who } from './feed-fixtures';
 
 let server: RunningServer;
 let c: Cast;
 let sketch: string;
 beforeAll(async () => {
-  server = await testServer();
-  c = await cast(server);
+  ({ server, c } = await castServer());
   sketch = await sketchOf(server, c.as.member, { title: 'Whitehead link?', groupId: c.group });
 });
 afterAll(() => server.stop());

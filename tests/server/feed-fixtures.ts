@@ -6,7 +6,7 @@ import sharp from 'sharp';
 import type { SketchFields } from '@/shared/api/sketches';
 import type { Role } from '@/shared/api/groups';
 import type { RunningServer } from '@/server/server';
-import { bearer, groupWith, signUp } from './helpers';
+import { bearer, groupWith, signUp, testServer } from './helpers';
 import { mutation, push, sketchFields } from './sync-fixtures';
 
 export interface Account {
@@ -39,6 +39,12 @@ export async function cast(server: RunningServer): Promise<Cast> {
   const group = await groupWith(server, [[as.owner.id, 'owner'], [as.admin.id, 'admin'], [as.member.id, 'member'], [as.viewer.id, 'viewer']]);
   const otherGroup = await groupWith(server, [[as.outsider.id, 'owner']]);
   return { group, otherGroup, as };
+}
+
+/** A fresh server with a cast in it: the set-up of most feed test files. */
+export async function castServer(options?: Parameters<typeof testServer>[0]): Promise<{ server: RunningServer; c: Cast }> {
+  const server = await testServer(options);
+  return { server, c: await cast(server) };
 }
 
 let clock = 1;

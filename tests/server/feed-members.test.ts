@@ -7,16 +7,13 @@ import { Invitation } from '@/shared/api/groups';
 import { Roster } from '@/shared/api/members';
 import { NotificationList } from '@/shared/api/notifications';
 import type { RunningServer } from '@/server/server';
-import { bearer, signUp, testServer } from './helpers';
-import { api, auth, cast, type Cast, type Who } from './feed-fixtures';
+import { bearer, signUp } from './helpers';
+import { api, auth, castServer, type Cast, type Who } from './feed-fixtures';
 
 let server: RunningServer;
 let c: Cast;
 let clock = Date.parse('2026-12-01T09:00:00Z');
-beforeAll(async () => {
-  server = await testServer({ now: () => new Date(clock) });
-  c = await cast(server);
-});
+beforeAll(async () => ({ server, c } = await castServer({ now: () => new Date(clock) })));
 afterAll(() => server.stop());
 
 const manageStatus = (who: Who, ok: number) => (who === 'owner' || who === 'admin' ? ok : who === 'outsider' ? 404 : 403);

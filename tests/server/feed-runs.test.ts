@@ -5,15 +5,11 @@ import { randomUUID } from 'node:crypto';
 import { khovanov } from '@/shared/khovanov';
 import { FeedPage, GroupSketch } from '@/shared/api/feed';
 import type { RunningServer } from '@/server/server';
-import { testServer } from './helpers';
-import { api, auth, cast, sketchOf, type Cast } from './feed-fixtures';
+import { api, auth, castServer, sketchOf, type Cast } from './feed-fixtures';
 
 let server: RunningServer;
 let c: Cast;
-beforeAll(async () => {
-  server = await testServer();
-  c = await cast(server);
-});
+beforeAll(async () => ({ server, c } = await castServer()));
 afterAll(() => server.stop());
 
 // Positive trefoil, DESIGN.md conventions (from memory).

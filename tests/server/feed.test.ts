@@ -3,16 +3,12 @@
 // role x action matrix with a non-member who never sees the group's data.
 import { FeedPage, ForkResponse, GroupSketch, ShareResponse } from '@/shared/api/feed';
 import type { RunningServer } from '@/server/server';
-import { testServer } from './helpers';
-import { api, auth, cast, everyone, memberWrite, sketchOf, type Cast, type Who } from './feed-fixtures';
+import { api, auth, castServer, everyone, memberWrite, sketchOf, type Cast, type Who } from './feed-fixtures';
 import { pullAll } from './sync-fixtures';
 
 let server: RunningServer;
 let c: Cast;
-beforeAll(async () => {
-  server = await testServer();
-  c = await cast(server);
-});
+beforeAll(async () => ({ server, c } = await castServer()));
 afterAll(() => server.stop());
 
 // Positive trefoil (DESIGN.md conventions; PD from tests/server/sync-fixtures.ts, from memory)

@@ -11,7 +11,7 @@ import { mirror } from '@/shared/knot/families';
 import { createRunPool } from '@/server/runs/pool';
 import { defaultRunLimits, runLimitsFromEnv, type RunLimits } from '@/server/runs/limits';
 import type { RunningServer } from '@/server/server';
-import { bearer, signUp, testServer } from './helpers';
+import { bearer, groupWith, signUp, testServer } from './helpers';
 import { ended, mailFor, read, slow, start, torus, trefoil, waitFor } from './runs-fixtures';
 
 // The positive trefoil over Z: Z at (0,1), (0,3), (2,5), (3,9) and Z/2 at (3,7)
@@ -282,14 +282,17 @@ describe('a cable sweep', () => {
 });
 
 describe('roles', () => {
+  /** A fresh server (stopped by afterEach) and a group of an owner, a member and a viewer. */
+  async function serverWithGroup() {
+    const s = (server = await testServer({ config: { runs: limits({}) } }));
+    const [owner, member, viewer] = [await signUp(s, 'Owner'), await signUp(s, 'Member'), await signUp(s, 'Viewer')];
+    const groupId = await groupWith(s, [[owner.user.id, 'owner'], [member.user.id, 'member'], [viewer.user.id, 'viewer']]);
+    return { server: s, owner, member, viewer, groupId };
+  }
+
   it('lets members start and cancel in their group, viewers only read, outsiders nothing', async () => {
-    server = await testServer({ config: { runs: limits({}) } });
-    const owner = await signUp(server, 'Owner');
-    const member = await signUp(server, 'Member');
-    const viewer = await signUp(server, 'Viewer');
+    const { server, owner, member, viewer, groupId } = await serverWithGroup();
     const outsider = await signUp(server, 'Outsider');
-    const { groupWith } = await import('./helpers');
-    const groupId = await groupWith(server, [[owner.user.id, 'owner'], [member.user.id, 'member'], [viewer.user.id, 'viewer']]);
     const body = { diagram: { pd: slow() }, ring: 'Q', groupId };
 
     expect((await start(server, viewer.token, body)).status).toBe(403);
@@ -311,12 +314,7 @@ describe('roles', () => {
   });
 
   it("on a sketch: its owner and the group's members may start runs, its group's viewers may not", async () => {
-    server = await testServer({ config: { runs: limits({}) } });
-    const owner = await signUp(server, 'Owner');
-    const member = await signUp(server, 'Member');
-    const viewer = await signUp(server, 'Viewer');
-    const { groupWith } = await import('./helpers');
-    const groupId = await groupWith(server, [[owner.user.id, 'owner'], [member.user.id, 'member'], [viewer.user.id, 'viewer']]);
+    const { server, owner, member, viewer, groupId } = await serverWithGroup();
     const { Sketch } = await import('@/server/db/entities');
     const now = new Date().toISOString();
     await server.deps.db.getRepository(Sketch).save({
