@@ -18,6 +18,7 @@ import { AppError, forbidden, notFound } from '../http/errors';
 import { photosOf } from '../photos/repository';
 import { thumbUrl, toDtos as photoDtos } from '../photos/use-cases';
 import { findSketch } from '../sketches/repository';
+import { attachmentPhotos } from '../uploads/use-cases';
 import { viewerOf } from '../sync/repository';
 import { push } from '../sync/use-cases';
 import { sketchAccess } from './access';
@@ -45,9 +46,10 @@ const summaryOf = (inv: SketchInvariant | undefined, s: Sketch): InvariantSummar
 
 async function feedItems(deps: Deps, groupId: string, rows: Sketch[]): Promise<FeedItem[]> {
   const ids = rows.map((s) => s.id);
-  const [users, counts, photos, invariants, runs] = [
+  const [users, counts, attached, photos, invariants, runs] = [
     await repo.usersById(deps.db, rows.map((s) => s.ownerId)),
     await repo.commentCounts(deps.db, groupId, ids),
+    await attachmentPhotos(deps, rows),
     await repo.firstPhotos(deps.db, ids),
     await repo.invariantsOf(deps.db, rows),
     await latestRuns(deps.db, ids),
@@ -60,7 +62,7 @@ async function feedItems(deps: Deps, groupId: string, rows: Sketch[]): Promise<F
     owner: { id: s.ownerId, displayName: users.get(s.ownerId)?.displayName ?? 'Former member' },
     updatedAt: s.updatedAt,
     strokes: thinStrokes(s.diagram.strokes),
-    photoThumbUrl: photos.has(s.id) ? thumbUrl(deps, photos.get(s.id)!.id) : null,
+    photoThumbUrl: attached.get(s.id)?.[0]?.thumbUrl ?? (photos.has(s.id) ? thumbUrl(deps, photos.get(s.id)!.id) : null),
     invariants: summaryOf(invariants.get(s.id), s),
     latestRun: runs.get(s.id) ?? null,
     commentCount: counts.get(s.id) ?? 0,
@@ -111,7 +113,8 @@ export async function groupSketch(deps: Deps, caller: User, groupId: string, ske
     seenAt: s.seenAt,
     notes: s.notes,
     pd: s.diagram.pd,
-    photos: await photoDtos(deps, await photosOf(deps.db, s.id)),
+    // The sketch's own photos (attached on the owner's device) first, then those added in the feed.
+    photos: [...((await attachmentPhotos(deps, [s])).get(s.id) ?? []), ...(await photoDtos(deps, await photosOf(deps.db, s.id)))],
     comments: await commentDtos(deps, await commentsOn(deps.db, s.id, groupId)),
     forkedFrom: await forkedFrom(deps, caller, s.id),
     sameInvariants: await sameInvariants(deps, groupId, s, key),

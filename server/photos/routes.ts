@@ -2,7 +2,7 @@ import { Router, type Request, type RequestHandler } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
 import { PhotoVariant, maxPhotoBytes, photoPaths } from '@/shared/api/photos';
-import { RecordId } from '@/shared/api/sketches';
+import { RecordId, Sha256 } from '@/shared/api/sketches';
 import { currentUser, requireAuth } from '../auth/middleware';
 import type { Deps } from '../deps';
 import { AppError } from '../http/errors';
@@ -10,7 +10,8 @@ import { parse } from '../http/validate';
 import * as photos from './use-cases';
 
 const SketchParams = z.object({ id: RecordId });
-const PhotoParams = z.object({ photoId: z.uuid({ message: 'Photo id must be a UUID' }) });
+/** A photo added in the feed (UUID) or one a device attached to the sketch (its hash, S25). */
+const PhotoParams = z.object({ photoId: z.union([z.uuid(), Sha256], { message: 'Photo id must be a UUID or a SHA-256 hash' }) });
 const FileParams = PhotoParams.extend({ variant: PhotoVariant });
 const FileQuery = z.object({ exp: z.coerce.number().int(), sig: z.string().min(1).max(100) });
 

@@ -40,9 +40,9 @@ export function photoStorageFromEnv(env: NodeJS.ProcessEnv): PhotoStorage {
   };
 }
 
-/** Keys are made by the server (uuid/variant); anything else is refused so no path escapes the folder. */
+/** Keys are made by the server (uuid or sha256/variant); anything else is refused so no path escapes the folder. */
 const checkKey = (key: string) => {
-  if (!/^[0-9a-f-]{36}\/[a-z]+$/.test(key)) throw new Error(`bad photo key ${JSON.stringify(key)}`);
+  if (!/^([0-9a-f-]{36}|[0-9a-f]{64})\/[a-z]+$/.test(key)) throw new Error(`bad photo key ${JSON.stringify(key)}`);
   return key;
 };
 

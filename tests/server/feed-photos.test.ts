@@ -6,9 +6,11 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import S3rver from 's3rver';
+import { GroupSketch } from '@/shared/api/feed';
 import { Photo, PhotoList } from '@/shared/api/photos';
 import type { RunningServer } from '@/server/server';
-import { testServer } from './helpers';
+import { bearer, testServer } from './helpers';
+import { Device } from './sync-device';
 import { api, auth, cameraJpeg, cast, everyone, gifImage, memberWrite, pngImage, sketchOf, webpImage, type Cast, type Who } from './feed-fixtures';
 
 const files = (dir: string): string[] => readdirSync(dir, { recursive: true, withFileTypes: true }).filter((d) => d.isFile()).map((d) => d.name);
@@ -164,10 +166,85 @@ describe('photos in an S3-compatible bucket (s3rver)', () => {
     expect(await photoStoreFor(server.deps.config.photos).get(`${p.id}/thumb`)).toBeNull();
   });
 
+  it('a device attachment (/api/uploads) goes to the same bucket, re-encoded', async () => {
+    const before = files(s3dir).filter((f) => !f.startsWith('.')).length;
+    const res = await api(server).post('/api/uploads').set(auth(c.as.member)).attach('file', await cameraJpeg(), { filename: 'b.jpg', contentType: 'image/jpeg' });
+    expect(res.status).toBe(201);
+    expect(files(s3dir).filter((f) => !f.startsWith('.')).length).toBeGreaterThanOrEqual(before + 2);
+    const back = await api(server).get(`/api/uploads/${res.body.sha256}`).set(auth(c.as.member)).buffer(true);
+    expect(back.status).toBe(200);
+    expect((await sharp(back.body).metadata()).exif).toBeUndefined();
+  });
+
   it('refuses a bad upload before anything reaches the bucket', async () => {
     const sketch = await sketchOf(server, c.as.member, { groupId: c.group });
     const before = files(s3dir).length;
     expect((await uploadTo(server, c.as.member, sketch, Buffer.from('GIF89a nope'), 'x.png', 'image/png')).status).toBe(415);
     expect(files(s3dir).length).toBe(before);
+  });
+});
+
+describe('a board photo attached on a device is a photo of the shared sketch (S25, S26, one pipeline)', () => {
+  let server: RunningServer;
+  let c: Cast;
+  let dir: string;
+  beforeAll(async () => {
+    dir = mkdtempSync(join(tmpdir(), 'overstrand-device-photos-'));
+    server = await testServer({ config: { photos: { kind: 'disk', dir } } });
+    c = await cast(server);
+  });
+  afterAll(async () => {
+    await server.stop();
+    rmSync(dir, { recursive: true, force: true });
+  });
+
+  it('attached offline and synced, it shows on the group feed item and the sketch page, with no EXIF GPS in any served bytes', async () => {
+    const d = new Device(() => server.url, c.as.member.token);
+    d.faults.offline = true;
+    const input = await cameraJpeg(1600, 1200);
+    expect((await sharp(input).metadata()).exif).toBeDefined(); // the camera's EXIF with GPS is there going in
+    const h = await d.store.queueUpload(new Uint8Array(input), 'image/jpeg');
+    const s = await d.store.create({ title: 'From the seminar board', groupId: c.group, attachments: [h] });
+    expect(await d.sync()).toBeTruthy(); // offline: nothing left the device
+    d.faults.offline = false;
+    expect(await d.sync()).toBeNull();
+    expect((await d.store.counts()).uploads).toBe(0);
+
+    const item = (await api(server).get(`/api/groups/${c.group}/feed`).set(auth(c.as.viewer))).body.items.find((i: { id: string }) => i.id === s.id);
+    expect(item.photoThumbUrl).toMatch(new RegExp(`^/api/photos/${h}/thumb\\?exp=\\d+&sig=`));
+    const page = GroupSketch.parse((await api(server).get(`/api/groups/${c.group}/feed/${s.id}`).set(auth(c.as.viewer))).body);
+    expect(page.photos).toHaveLength(1);
+    expect(page.photos[0]).toMatchObject({ id: h, sketchId: s.id, uploader: { id: c.as.member.id }, width: 1600, height: 1200 });
+    expect(files(dir)).toHaveLength(2); // full + thumbnail in the PhotoStore, as for feed photos
+
+    const served = [
+      api(server).get(item.photoThumbUrl),
+      api(server).get(page.photos[0].url),
+      api(server).get(page.photos[0].thumbUrl),
+      api(server).get(`/api/uploads/${h}`).set(bearer(c.as.viewer.token)), // S27, read through the shared sketch
+    ];
+    for (const res of await Promise.all(served.map((r) => r.buffer(true)))) {
+      expect(res.status).toBe(200);
+      expect(res.headers['content-type']).toBe('image/jpeg');
+      const meta = await sharp(res.body).metadata();
+      expect(meta.format).toBe('jpeg');
+      expect(meta.exif).toBeUndefined(); // no EXIF block, so no GPS IFD
+      expect(Buffer.from(res.body).includes(Buffer.from('TestCam'))).toBe(false);
+    }
+    expect(await sharp((await api(server).get(page.photos[0].url).buffer(true)).body).metadata()).toMatchObject({ width: 1600, height: 1200 });
+  });
+
+  it('a device photo is removed from its sketch by the owner on the device; the feed route says so and keeps it', async () => {
+    const d = new Device(() => server.url, c.as.member.token);
+    const h = await d.store.queueUpload(new Uint8Array(await pngImage()), 'image/png');
+    const s = await d.store.create({ title: 'Two photos', groupId: c.group, attachments: [h] });
+    expect(await d.sync()).toBeNull();
+    const res = await api(server).delete(`/api/photos/${h}`).set(auth(c.as.member));
+    expect(res.status).toBe(403);
+    expect(res.body.error.message).toMatch(/removes it from the sketch/);
+    await d.store.update(s.id, { attachments: [] });
+    expect(await d.sync()).toBeNull();
+    const page = GroupSketch.parse((await api(server).get(`/api/groups/${c.group}/feed/${s.id}`).set(auth(c.as.viewer))).body);
+    expect(page.photos).toEqual([]);
   });
 });

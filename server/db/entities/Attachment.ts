@@ -1,6 +1,10 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
 
-/** Uploaded bytes, named by their SHA-256 (sync/SPEC.md S25, S26): stored once. */
+/**
+ * A board photo uploaded from a device, named by the SHA-256 of the bytes it sent (sync/SPEC.md
+ * S25, S26), stored once, through the photo pipeline: the re-encoded image and its thumbnail
+ * are in the PhotoStore under `${sha256}/full` and `${sha256}/thumb`; size and type are theirs.
+ */
 @Entity('attachments')
 export class Attachment {
   @PrimaryColumn({ type: 'varchar', length: 64 })
@@ -12,8 +16,16 @@ export class Attachment {
   @Column({ type: 'varchar', length: 50 })
   mimeType: string;
 
-  @Column({ type: 'blob' })
-  data: Buffer;
+  /** Only rows from before the pipeline: the bytes as sent, re-encoded on first use (then null). */
+  @Column({ type: 'blob', nullable: true })
+  data: Buffer | null;
+
+  /** Null only while `data` still waits for the pipeline. */
+  @Column({ type: 'integer', nullable: true })
+  width: number | null;
+
+  @Column({ type: 'integer', nullable: true })
+  height: number | null;
 
   @CreateDateColumn({ type: 'datetime' })
   createdAt: Date;
