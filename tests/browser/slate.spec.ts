@@ -301,8 +301,12 @@ test('an open strand is shown unfinished and not counted; a heavy run starts fro
 });
 
 test('the sketchbook lists every sketch with its picture, crossings and Jones polynomial', async () => {
+  // The closed strand was saved when the Slate lost focus; give the device store a moment to
+  // write before the reload.
+  await page.waitForTimeout(1000);
   await page.goto(baseUrl + '/sketches');
   await page.getByRole('link', { name: 'Open T(2,4) from the seminar' }).waitFor();
+  await page.getByText('Unfinished drawing').waitFor({ state: 'detached' });
   // The trefoil (then pasted over and titled), the circles, the open strand.
   expect(await page.getByRole('link', { name: /^Open / }).count()).toBe(3);
   await shoot(page, 'slate-sketchbook');
