@@ -110,6 +110,27 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
     expect((await store.pendingUploads()).length).toBe(1);
   });
 
+  test('S34: a comment waits for its sketch\'s outbox writes, then is marked sent or rejected', async () => {
+    const s = await store.create({ title: 'shared later' });
+    const c = await store.addComment(s.id, 'first');
+    expect(c.state).toBe('waiting');
+    expect(await store.commentsToSend()).toEqual([]); // its sketch is not on the server yet
+    const box = await store.outbox(10);
+    await store.settle(box, box.map((m) => ({ mutationId: m.mutationId, status: 'applied' as const, seq: 1 })));
+    expect(await store.commentsToSend()).toEqual([c]);
+    expect((await store.counts()).comments).toBe(1);
+    await store.commentSettled(c);
+    const d = await store.addComment(s.id, 'second');
+    await store.commentSettled(d, 'answered 403');
+    expect(await store.commentsToSend()).toEqual([]);
+    expect((await store.counts()).comments).toBe(0);
+    const byBody = (await store.comments(s.id)).sort((x, y) => x.body.localeCompare(y.body)); // same millisecond: key order is by id
+    expect(byBody).toEqual([
+      { ...c, state: 'sent' },
+      { ...d, state: 'rejected', reason: 'answered 403' },
+    ]);
+  });
+
   test('S8: a write that fails halfway leaves neither record nor outbox entry', async () => {
     const tables = await open();
     let failRecords = false;
