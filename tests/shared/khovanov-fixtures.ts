@@ -1,5 +1,5 @@
 // Diagrams for the Khovanov tests: torus links and random braids as PD codes (through the knot
-// core's braid closure), a seeded random source, and small helpers to compare tables.
+// core's braid closure), random braid words, and small helpers to compare tables.
 
 import { fromBraid } from '@/shared/knot/braid';
 import { PDCode } from '@/shared/knot/pd';
@@ -16,18 +16,6 @@ export function pdOf(word: readonly number[]): PDCode {
   return d.pd;
 }
 
-/** mulberry32: a small seeded generator, so failures can be replayed. */
-export function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /** A random braid word on `strands` strands using every generator (so no strand is left out). */
 export function randomWord(rnd: () => number, strands: number, length: number, alternating = false): number[] {
   const word = Array.from({ length: strands - 1 }, (_, k) => k + 1);
@@ -38,23 +26,6 @@ export function randomWord(rnd: () => number, strands: number, length: number, a
   }
   // Alternating closure: sigma_i always with sign (-1)^(i+1).
   return word.map((g) => (alternating ? (g % 2 ? g : -g) : rnd() < 0.5 ? g : -g));
-}
-
-/** The same diagram with labels renamed and crossings listed in a shuffled order. */
-export function relabel(pd: PDCode, rnd: () => number): PDCode {
-  const labels = [...new Set(pd.flat())];
-  const names = labels.map((_, k) => 100 + 3 * k);
-  for (let k = names.length - 1; k > 0; k--) {
-    const j = Math.floor(rnd() * (k + 1));
-    [names[k], names[j]] = [names[j], names[k]];
-  }
-  const rename = new Map(labels.map((l, k) => [l, names[k]]));
-  const crossings = pd.map((x) => x.map((l) => rename.get(l)!) as unknown as PDCode[number]);
-  for (let k = crossings.length - 1; k > 0; k--) {
-    const j = Math.floor(rnd() * (k + 1));
-    [crossings[k], crossings[j]] = [crossings[j], crossings[k]];
-  }
-  return crossings;
 }
 
 /** A table as text "i,j:free+torsion" for readable comparisons in failure messages. */
