@@ -89,8 +89,14 @@ describe('the result record', () => {
     expect(r.poincare).toEqual([[0, 1, 1], [0, 3, 1], [2, 5, 1], [3, 9, 1]]);
     // Jones of the right trefoil t + t^3 - t^4 (DESIGN.md): (q + q^-1)(q^2 + q^6 - q^8).
     expect(r.euler).toEqual({ computed: [[1, '1'], [3, '1'], [5, '1'], [9, '-1']], expected: [[1, '1'], [3, '1'], [5, '1'], [9, '-1']], ok: true });
+    // Thin: Lee 2005, "An endomorphism of the Khovanov invariant", arXiv math/0210213: Kh of an
+    // alternating knot lies on the two diagonals j - 2i = -sigma +- 1; the table above (Bar-Natan
+    // 2002) has groups on both (j - 2i = 1 and 3), so the width is exactly 2.
     expect([r.width, r.thin]).toEqual([2, true]);
     const red = kh([1, 1, 1], true);
+    // Reduced Kh of an alternating knot lies on one diagonal (Manolescu, Ozsvath, "On the
+    // Khovanov and knot Floer homologies of quasi-alternating links", 2007, arXiv 0708.3249);
+    // the reduced table above (Khovanov 2003) is all on j - 2i = 2, so the width is 1.
     expect([red.reduced, red.width, red.thin]).toEqual([true, 1, true]);
   });
 
