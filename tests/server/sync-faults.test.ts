@@ -5,6 +5,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
 import { SketchList } from '@/shared/api/sketches';
+import { seededRng } from '@/shared/knot/moves/random';
+import { TransportError } from '@/lib/sync/transport';
 import type { RunningServer } from '@/server/server';
 import { bearer, signUp, testServer } from './helpers';
 import { Device } from './sync-device';
@@ -32,11 +34,17 @@ const serverSketches = async (tk = token) =>
 const changeCount = async (id: string) =>
   Number((await server.deps.db.query('SELECT COUNT(*) AS n FROM sync_changes WHERE "recordId" = ?', [id]))[0].n);
 
+/** The round failed with the network error the injected fault throws (tests/server/sync-device.ts), not any error. */
+const expectFault = (failure: unknown, message: 'answer lost (test)' | 'outage (test)' | 'offline (test)') => {
+  expect(failure).toBeInstanceOf(TransportError);
+  expect(failure).toMatchObject({ kind: 'network', message });
+};
+
 test('S12, S8: answers lost after the server applied a push: retry applies nothing twice', async () => {
   const d = new Device(url, token);
   const made = [await d.store.create({ title: 'a' }), await d.store.create({ title: 'b' }), await d.store.create({ title: 'c' })];
   d.faults.dropPushAnswers = 1;
-  expect(await d.sync()).toBeTruthy();
+  expectFault(await d.sync(), 'answer lost (test)');
   expect((await d.store.counts()).waiting).toBe(3); // S8: not acknowledged, still waiting
   const onServer = await serverSketches();
   for (const s of made) expect(onServer.get(s.id)?.title).toBe(s.title); // applied before the answer was lost
@@ -87,7 +95,7 @@ test('S16: server restarted mid-pull (same db file): the device resumes from its
 
   const reader = new Device(url, token, 7);
   reader.faults.pullsBeforeOutage = 2;
-  expect(await reader.sync()).toBeTruthy();
+  expectFault(await reader.sync(), 'outage (test)');
   const cursorMid = await reader.store.cursor();
   expect(cursorMid).toBeGreaterThan(0);
 
@@ -109,11 +117,11 @@ test('S8, S16: device reloaded mid-sync keeps its outbox and cursor, and finishe
   const d = new Device(url, token, 5);
   const s = await d.store.create({ title: 'before reload' });
   d.faults.dropPushAnswers = 1;
-  expect(await d.sync()).toBeTruthy();
+  expectFault(await d.sync(), 'answer lost (test)');
   d.reload(); // the answer was lost and the page reloaded
   expect((await d.store.counts()).waiting).toBe(1);
   d.faults.pullsBeforeOutage = 1;
-  expect(await d.sync()).toBeTruthy(); // push ok (duplicate), then the network goes mid-pull
+  expectFault(await d.sync(), 'outage (test)'); // push ok (duplicate), then the network goes mid-pull
   const cursor = await d.store.cursor();
   d.reload();
   expect(await d.store.cursor()).toBe(cursor);
@@ -130,20 +138,20 @@ test('S18-S20: two devices edit the same sketch offline: both converge with the 
   const phone = new Device(url, token);
   const laptop = new Device(url, token);
   const s = await phone.store.create({ title: 'Whitehead link?', tags: ['board'] });
-  await phone.sync();
-  await laptop.sync();
+  expect(await phone.sync()).toBeNull();
+  expect(await laptop.sync()).toBeNull();
   expect((await laptop.store.get(s.id))?.title).toBe('Whitehead link?');
 
   phone.faults.offline = laptop.faults.offline = true;
   await phone.store.update(s.id, { title: 'Whitehead link', notes: 'seen in the second talk' }); // edits 1, 2
   await laptop.store.update(s.id, { title: 'Borromean rings', tags: ['board', 'three components'] }); // 3, 4
   await laptop.store.update(s.id, { seenAt: 'Lecture hall B' }); // 5
-  expect(await phone.sync()).toBeTruthy(); // offline: nothing sent
+  expectFault(await phone.sync(), 'offline (test)'); // offline: nothing sent
   phone.faults.offline = laptop.faults.offline = false;
 
-  await phone.sync();
-  await laptop.sync(); // later in server order: laptop's title wins
-  await phone.sync();
+  expect(await phone.sync()).toBeNull();
+  expect(await laptop.sync()).toBeNull(); // later in server order: laptop's title wins
+  expect(await phone.sync()).toBeNull();
 
   const server1 = (await serverSketches()).get(s.id)!;
   const onPhone = (await phone.store.get(s.id))!;
@@ -163,8 +171,8 @@ test('S18-S20: two devices edit the same sketch offline: both converge with the 
 
   // S21: resolving on one device clears it everywhere and keeps the chosen value.
   await phone.store.resolveConflict(phoneConflicts[0].id, { title: 'Whitehead link' });
-  await phone.sync();
-  await laptop.sync();
+  expect(await phone.sync()).toBeNull();
+  expect(await laptop.sync()).toBeNull();
   expect(await laptop.store.conflicts()).toEqual([]);
   expect((await laptop.store.get(s.id))?.title).toBe('Whitehead link');
   expect(laptop.status.getState()).toMatchObject({ conflicts: 0, waiting: 0 });
@@ -174,12 +182,12 @@ test('S18-S20: two devices edit the same sketch offline: both converge with the 
 // equals the server, and every edit is either a current value, a conflict copy's losing
 // value, or was replaced by an edit made on a device that showed it (knowingly replaced).
 test('S17-S20: three devices, random offline edits and sync orders: converge, nothing lost', async () => {
-  let seed = 7;
-  const rand = (n: number) => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) % n);
+  const rng = seededRng(7);
+  const rand = (n: number) => Math.floor(rng() * n);
   const devices = [new Device(url, token), new Device(url, token), new Device(url, token)];
   const ids: string[] = [];
   for (let i = 0; i < 3; i++) ids.push((await devices[0].store.create({ title: `t${i}` })).id);
-  for (const d of devices) await d.sync();
+  for (const d of devices) expect(await d.sync()).toBeNull();
   const fields = ['title', 'notes', 'seenAt'] as const;
   const edits: { value: string; replaced: string }[] = [];
   let n = 0;
@@ -194,9 +202,9 @@ test('S17-S20: three devices, random offline edits and sync orders: converge, no
         edits.push({ value, replaced: before });
       }
     }
-    for (const i of [0, 1, 2].sort(() => rand(3) - 1)) await devices[i].sync();
+    for (const i of [0, 1, 2].sort(() => rand(3) - 1)) expect(await devices[i].sync()).toBeNull();
   }
-  for (let pass = 0; pass < 2; pass++) for (const d of devices) await d.sync();
+  for (let pass = 0; pass < 2; pass++) for (const d of devices) expect(await d.sync()).toBeNull();
 
   const onServer = await serverSketches();
   for (const d of devices) {
