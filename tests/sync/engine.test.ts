@@ -37,12 +37,12 @@ function setup(failures: TransportError[]) {
 const net = () => new TransportError('network', 'down');
 
 test('S30: failures back off 1 s, 2 s, 4 s (jitter 0 gives half), success resets to the period', async () => {
-  const t = setup([net(), net(), net()]);
+  const failures = [net(), net(), net()];
+  const t = setup([...failures]);
   await t.store.create({ title: 'x' });
   t.engine.start();
-  for (let i = 0; i < 3; i++) {
-    await t.engine.syncNow().catch(() => undefined);
-  }
+  // Each round fails with the transport's own error (the first is the round start() began).
+  for (const f of failures) await expect(t.engine.syncNow()).rejects.toBe(f);
   await t.engine.syncNow();
   expect(t.delays.slice(0, 3)).toEqual([500, 1000, 2000]);
   expect(t.delays.at(-1)).toBe(60_000); // S29: periodic once up to date
@@ -51,10 +51,11 @@ test('S30: failures back off 1 s, 2 s, 4 s (jitter 0 gives half), success resets
 });
 
 test('S30: a 401 stops retrying until signed in again', async () => {
-  const t = setup([new TransportError('unauthorized', 'sign in', 401)]);
+  const denied = new TransportError('unauthorized', 'sign in', 401);
+  const t = setup([denied]);
   await t.store.create({});
   t.engine.start();
-  await t.engine.syncNow().catch(() => undefined);
+  await expect(t.engine.syncNow()).rejects.toBe(denied);
   expect(t.delays).toEqual([]);
   t.engine.stop();
 });
