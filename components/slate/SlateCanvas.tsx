@@ -36,8 +36,9 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
   const [size, setSize] = useState({ width: 0, height: 0 });
   const [live, setLive] = useState<Point[] | null>(null);
   const drag = useRef<Drag | null>(null);
-  const latest = useRef({ analysis, doc });
-  latest.current = { analysis, doc };
+  // The gesture handlers are made once; they read the latest values through this ref.
+  const latest = useRef({ analysis, doc, onFraming });
+  latest.current = { analysis, doc, onFraming };
   const pictures = useMemo(() => strandPictures(doc, analysis, view), [doc, analysis, view]);
   const picturesRef = useRef(pictures);
   picturesRef.current = pictures;
@@ -104,7 +105,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
     const s = useSlate.getState();
     const { analysis: a, doc } = latest.current;
     const badge = picturesRef.current.find((p) => p.badge && dist(p.badge.at, screen) <= HIT);
-    if (badge) return onFraming(badge.id);
+    if (badge) return latest.current.onFraming(badge.id);
     const arrow = picturesRef.current.find((p) => p.arrow && dist(p.arrow.at, screen) <= HIT);
     if (arrow) return s.apply({ ...doc, sketch: reverseComponent(doc.sketch, arrow.id) });
     const p = toWorld(s.view, screen);

@@ -1,6 +1,7 @@
 // The Slate in a real browser (DESIGN.md journeys 1 and 2): a new sketch, a trefoil drawn with
 // the mouse along a parametric curve, its Readout; a crossing flipped; a PD code pasted and
 // drawn; screenshots at phone and wide size.
+import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
 import { PHONE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
 
@@ -161,6 +162,11 @@ test('details are saved and shown in the sketchbook; shortcuts undo on a wide sc
   await page.getByRole('textbox', { name: 'Title' }).fill('T(2,4) from the seminar');
   await page.getByRole('textbox', { name: 'Where it was seen' }).fill('Topology seminar, room 2');
   await page.getByRole('textbox', { name: 'Tags' }).fill('torus, link');
+  // A board photo from a file, kept on the device until the sync uploads it.
+  const photo = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#2a3b44' } }).png().toBuffer();
+  const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Choose a file' }).click()]);
+  await chooser.setFiles({ name: 'board.png', mimeType: 'image/png', buffer: photo });
+  await page.getByRole('img', { name: 'Board photo' }).waitFor();
   await shoot(page, 'slate-details');
   await page.getByRole('button', { name: 'Save details' }).click();
   await page.getByRole('heading', { name: 'T(2,4) from the seminar' }).waitFor();
@@ -305,7 +311,8 @@ test('the sketchbook lists every sketch with its picture, crossings and Jones po
   // write before the reload.
   await page.waitForTimeout(1000);
   await page.goto(baseUrl + '/sketches');
-  await page.getByRole('link', { name: 'Open T(2,4) from the seminar' }).waitFor();
+  // Opening the device database after a reload can wait for the old page to let go of it.
+  await page.getByRole('link', { name: 'Open T(2,4) from the seminar' }).waitFor({ timeout: 30_000 });
   await page.getByText('Unfinished drawing').waitFor({ state: 'detached' });
   // The trefoil (then pasted over and titled), the circles, the open strand.
   expect(await page.getByRole('link', { name: /^Open / }).count()).toBe(3);
