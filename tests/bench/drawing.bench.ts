@@ -10,22 +10,9 @@ import { layoutPD } from '@/shared/layout/layout';
 import { layoutToSketch } from '@/shared/layout/to-sketch';
 import { fromBraid } from '@/shared/knot/braid';
 import { jones } from '@/shared/knot/jones';
-
-interface Line {
-  name: string;
-  value: number;
-  unit: string;
-  goal?: string;
-}
+import { median, round, type Line } from './timing';
 
 const word = (n: number) => Array.from({ length: n }, (_, i) => (i % 2 === 0 ? 1 : -2));
-
-const round = (x: number) => Math.round(x * 100) / 100;
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
 
 // The link's picture: a sketch of all components but the last, the last as raw touch points of
 // one stroke, and the flips that make the crossings right.

@@ -1,13 +1,7 @@
 // npm run bench: every bench module in turn, one line per figure. Add a module with one line.
 import { jonesBench } from './jones.bench';
 import { khovanovBench } from './khovanov.bench';
-
-interface Line {
-  name: string;
-  value: number;
-  unit: string;
-  goal?: string;
-}
+import type { Line } from './timing';
 
 const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['jones', jonesBench],

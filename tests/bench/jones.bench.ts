@@ -9,13 +9,7 @@ import { torusLink } from '@/shared/knot/families/torus';
 import { jonesFromBracket } from '@/shared/knot/jones';
 import { seededRng } from '@/shared/knot/moves/random';
 import { stateSumBracket } from '@/shared/knot/statesum';
-
-export interface BenchLine {
-  name: string;
-  value: number;
-  unit: string;
-  goal?: string;
-}
+import type { Line } from './timing';
 
 const SIZES = [15, 30, 60, 100];
 const STATE_SUM_LIMIT = 20;
@@ -46,8 +40,8 @@ const TORUS: Record<number, [number, number]> = { 15: [2, 15], 30: [3, 15], 60: 
 const goal = (n: number) => (n === 15 ? '<= 5 ms' : n === 60 ? '<= 1000 ms' : undefined);
 const round = (x: number, digits = 2) => Number(x.toFixed(digits));
 
-export function jonesBench(): BenchLine[] {
-  const lines: BenchLine[] = [];
+export function jonesBench(): Line[] {
+  const lines: Line[] = [];
   const cases: [string, (n: number) => Diagram][] = [
     ['braid closure (4 strands)', (n) => braidOf(4, n)],
     ['braid closure (8 strands)', (n) => braidOf(8, n)],

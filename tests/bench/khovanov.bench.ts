@@ -10,13 +10,7 @@ import { fromBraid } from '@/shared/knot/braid';
 import { torusLink } from '@/shared/knot/families/torus';
 import { PDCode } from '@/shared/knot/pd';
 import { integers } from '@/shared/linalg/ring';
-
-export interface BenchLine {
-  name: string;
-  value: number;
-  unit: string;
-  goal?: string;
-}
+import type { Line } from './timing';
 
 const MB = 1024 * 1024;
 
@@ -45,8 +39,8 @@ function timeEngine(pd: PDCode, ring: KhRing, runs: number): { ms: number; faste
 
 const round = (x: number, digits = 0) => Number(x.toFixed(digits));
 
-export function khovanovBench(): BenchLine[] {
-  const lines: BenchLine[] = [];
+export function khovanovBench(): Line[] {
+  const lines: Line[] = [];
   const goals: [string, PDCode, KhRing, string, string?][] = [
     ['T(5,6) over Z', torusLink(5, 6).pd, 'Z', '<= 10000 ms'],
     ['T(6,7) over Q', torusLink(6, 7).pd, 'Q', '<= 20000 ms'],

@@ -5,17 +5,9 @@
 // frame at 15 crossings).
 import { fromBraid } from '@/shared/knot/braid';
 import { readoutStages, type ReadoutValues } from '@/lib/slate/readout';
-
-interface Line {
-  name: string;
-  value: number;
-  unit: string;
-  goal?: string;
-}
+import { median, round, type Line } from './timing';
 
 const word = (n: number) => Array.from({ length: n }, (_, i) => (i % 2 === 0 ? 1 : -2));
-const round = (x: number) => Math.round(x * 100) / 100;
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 export function readoutBench(runs = 15): Line[] {
   return [5, 15, 30].flatMap((n) => {

@@ -10,13 +10,7 @@ import { defaultPullLimit } from '@/shared/api/sync';
 import { startServer } from '@/server/server';
 import { layoutPD } from '@/shared/layout/layout';
 import { layoutToSketch } from '@/shared/layout/to-sketch';
-
-export interface BenchLine {
-  name: string;
-  value: number;
-  unit: string;
-  goal?: string;
-}
+import type { Line } from './timing';
 
 const SKETCHES = 1000;
 
@@ -25,7 +19,7 @@ const SKETCHES = 1000;
 const pd = [[1, 5, 2, 4], [3, 1, 4, 6], [5, 3, 6, 2]] as [number, number, number, number][];
 const diagram = { pd, unknots: 0, framings: [null], strokes: [], geometry: JSON.parse(JSON.stringify(layoutToSketch(layoutPD(pd)))) };
 
-export async function syncBench(): Promise<BenchLine[]> {
+export async function syncBench(): Promise<Line[]> {
   const server = await startServer({ config: { bcryptRounds: 4 } });
   try {
     const res = await fetch(`${server.url}/api/auth/register`, {
