@@ -64,7 +64,7 @@ beforeAll(async () => {
   });
   if (!res.ok) throw new Error(`register: ${res.status}`);
   browser = await launch();
-  const context = await browser.newContext({ viewport: PHONE });
+  const context = await browser.newContext({ viewport: PHONE, permissions: ['clipboard-read', 'clipboard-write'] });
   context.setDefaultTimeout(15_000);
   page = await context.newPage();
   await page.goto(baseUrl + '/sign-in');
@@ -143,6 +143,33 @@ test('a pasted PD code is drawn on the Slate', async () => {
   expect(await page.getByTestId('slate-canvas').locator('path[stroke-dasharray]').count()).toBe(0);
   expect(await page.getByTestId('slate-canvas').locator('path').count()).toBeGreaterThanOrEqual(4);
   await shoot(page, 'slate-figure-eight');
+});
+
+test('codes are copied; a braid word is simplified; undo goes back', async () => {
+  await page.getByRole('button', { name: 'Paste a code' }).click();
+  await page.getByRole('radio', { name: 'Braid word' }).click();
+  await page.getByRole('textbox', { name: 'Braid word' }).fill('1 1 1');
+  await page.getByRole('button', { name: 'Draw it' }).click();
+  await page.getByText(/invariants match 3_1/).waitFor();
+  await page.getByRole('button', { name: 'Copy braid word' }).click();
+  await page.getByText('Copied the braid word.').waitFor();
+  expect(await page.evaluate(() => navigator.clipboard.readText())).toBe('1 1 1');
+  await page.getByRole('button', { name: 'Copy PD code' }).click();
+  await page.getByText('Copied the PD code.').waitFor();
+  const pd = JSON.parse(await page.evaluate(() => navigator.clipboard.readText())) as number[][];
+  expect(pd).toHaveLength(3);
+
+  // sigma_1 sigma_1^-1 closes to a 2-component unlink through one R2 bigon (common practice).
+  await page.getByRole('button', { name: 'Paste a code' }).click();
+  await page.getByRole('textbox', { name: 'Braid word' }).fill('1 -1');
+  await page.getByRole('button', { name: 'Draw it' }).click();
+  await page.getByTestId('readout-crossings-count').getByText('2 crossings').waitFor();
+  await page.getByRole('button', { name: 'Simplify' }).click();
+  await page.getByText('Simplified from 2 to 0 crossings.').waitFor();
+  await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
+  await page.getByText(/^2 components/).waitFor();
+  for (let i = 0; i < 3; i++) await page.getByRole('button', { name: 'Undo' }).click();
+  await page.getByText(/invariants match 4_1/).waitFor();
 });
 
 test('the Families builder draws a torus link with its linking number', async () => {
