@@ -2,10 +2,10 @@
 // sign up, sign out, sign in, create a group, invite, read the kept mail, accept as the invited
 // person, and see their role enforced in the UI.
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { PHONE, WIDE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
+import { PHONE, WIDE, baseUrl, launch, person, shoot } from './helpers';
 
-const owner = { name: 'Ada Lindgren', email: uniqueEmail('ada'), password: 'correct horse 1' };
-const guest = { name: 'Bruno Sato', email: uniqueEmail('bruno'), password: 'battery staple 2' };
+const owner = person('Ada Lindgren', 'ada', 'correct horse 1');
+const guest = person('Bruno Sato', 'bruno', 'battery staple 2');
 const groupName = 'Thursday knot seminar';
 
 let browser: Browser;

@@ -6,10 +6,10 @@
 import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
-import { PHONE, WIDE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
+import { PHONE, WIDE, baseUrl, launch, person, shoot, signIn } from './helpers';
 
-const ada = { name: 'Ada Feedwright', email: uniqueEmail('ada.feed'), password: 'correct horse 3' };
-const bruno = { name: 'Bruno Commenter', email: uniqueEmail('bruno.feed'), password: 'battery staple 4' };
+const ada = person('Ada Feedwright', 'ada.feed', 'correct horse 3');
+const bruno = person('Bruno Commenter', 'bruno.feed', 'battery staple 4');
 const title = 'Trefoil from the colloquium';
 
 let browser: Browser;
@@ -31,14 +31,6 @@ async function call(method: string, path: string, token: string | null, body?: u
 const strokes = [
   { points: Array.from({ length: 60 }, (_, i) => [100 + 80 * Math.cos((i / 60) * 6 * Math.PI) + 30 * Math.cos((i / 60) * 4 * Math.PI), 100 + 80 * Math.sin((i / 60) * 6 * Math.PI) - 30 * Math.sin((i / 60) * 4 * Math.PI)]), closed: true },
 ];
-
-async function signIn(page: Page, who: typeof ada) {
-  await page.goto(baseUrl + '/sign-in');
-  await page.getByLabel('E-mail').fill(who.email);
-  await page.getByLabel('Password').fill(who.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Sketches', exact: true }).waitFor();
-}
 
 beforeAll(async () => {
   const a = await call('POST', '/api/auth/register', null, { email: ada.email, password: ada.password, displayName: ada.name });

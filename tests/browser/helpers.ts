@@ -1,5 +1,5 @@
 // Shared by the browser specs: the browser (Debian chromium via playwright-core), the server URL
-// from run.mjs, and screenshots at the two sizes the app is designed for.
+// from run.mjs, screenshots at the two sizes the app is designed for, and test accounts.
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
@@ -35,4 +35,24 @@ export async function shoot(page: Page, name: string): Promise<void> {
 /** A unique address per run, so specs never depend on each other's leftovers. */
 export function uniqueEmail(who: string): string {
   return `${who}.${Date.now().toString(36)}@seminar.example`;
+}
+
+/** A test account: the display name, a unique address and the password it signs up with. */
+export interface Person {
+  name: string;
+  email: string;
+  password: string;
+}
+
+export function person(name: string, who: string, password: string): Person {
+  return { name, email: uniqueEmail(who), password };
+}
+
+/** Signs in through the form and waits for the landing page, the sketch list. */
+export async function signIn(page: Page, who: Person): Promise<void> {
+  await page.goto(baseUrl + '/sign-in');
+  await page.getByLabel('E-mail').fill(who.email);
+  await page.getByLabel('Password').fill(who.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Sketches', exact: true }).waitFor();
 }
