@@ -63,7 +63,7 @@ export function Readout({ state, empty, markers, openStrands }: Props) {
   return (
     <View style={styles.box} testID="readout">
       <Text style={styles.kicker}>Readout</Text>
-      <View style={styles.headline}>
+      <View style={[styles.headline, state.stale.has('crossings') && styles.staleValue]} aria-busy={state.stale.has('crossings')} testID="readout-headline">
         <Text style={styles.big} testID="readout-crossings-count">
           {v.crossings ?? '…'} {v.crossings === 1 ? 'crossing' : 'crossings'}
         </Text>

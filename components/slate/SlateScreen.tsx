@@ -122,7 +122,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
     <View style={styles.header}>
       {!wide ? (
         <Pressable role="link" accessibilityLabel="Sketches" onPress={() => (router.canGoBack() ? router.back() : router.replace('/sketches'))} style={styles.back}>
-          <Text style={styles.backText}>‹ Sketches</Text>
+          <Text style={styles.backText}>‹</Text>
         </Pressable>
       ) : null}
       <Pressable role="button" accessibilityLabel="Sketch details" onPress={() => setOpen('details')} style={styles.titleBox}>
@@ -199,9 +199,9 @@ const styles = StyleSheet.create({
   side: { width: 330, flexGrow: 0, borderLeftWidth: 1, borderLeftColor: colors.line, backgroundColor: colors.surface },
   sideContent: { padding: space.xl, gap: space.lg },
   phoneReadout: { padding: space.lg + 4, paddingBottom: space.xxxl, gap: space.lg },
-  header: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingHorizontal: space.lg, paddingTop: space.lg, paddingBottom: space.xs, flexWrap: 'wrap' },
-  back: { minHeight: 40, justifyContent: 'center', width: '100%' },
-  backText: { ...type.label, color: colors.accent, fontSize: 15 },
+  header: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingHorizontal: space.lg, paddingTop: space.md, paddingBottom: space.xs },
+  back: { minHeight: 44, minWidth: 32, justifyContent: 'center', marginLeft: -space.xs },
+  backText: { fontFamily: fonts.medium, fontSize: 30, lineHeight: 34, color: colors.accent },
   titleBox: { flex: 1, minWidth: 0 },
   title: { ...type.title, color: colors.ink },
   meta: { ...type.small, color: colors.inkMuted },
