@@ -1,9 +1,11 @@
 // The signed-in shell: bottom tabs on phones, a side rail on wide screens (>= 1024 px), same
 // destinations (components/shell/destinations.ts). Each tab is a folder with its own stack.
+// Keyboard shortcuts on the web: components/shell/shortcuts.ts.
 import { View } from 'react-native';
 import { Redirect, usePathname } from 'expo-router';
 import { Tabs } from 'expo-router/js-tabs';
 import { AppTabBar } from '@/components/shell/AppTabBar';
+import { ShortcutsHost } from '@/components/shell/ShortcutsHost';
 import { destinations } from '@/components/shell/destinations';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { useSession } from '@/hooks/useSession';
@@ -18,17 +20,20 @@ export default function TabsLayout() {
   if (status === 'loading') return <View style={{ flex: 1, backgroundColor: colors.paper }} />;
   if (status === 'signedOut') return <Redirect href={withNext('/sign-in', visitedPath(pathname)) as never} />;
   return (
-    <Tabs
-      tabBar={(props) => <AppTabBar {...props} wide={wide} />}
-      screenOptions={{
-        headerShown: false,
-        tabBarPosition: wide ? 'left' : 'bottom',
-        sceneStyle: { backgroundColor: colors.paper },
-      }}
-    >
-      {destinations.map((d) => (
-        <Tabs.Screen key={d.name} name={d.name} options={{ title: d.label }} />
-      ))}
-    </Tabs>
+    <>
+      <Tabs
+        tabBar={(props) => <AppTabBar {...props} wide={wide} />}
+        screenOptions={{
+          headerShown: false,
+          tabBarPosition: wide ? 'left' : 'bottom',
+          sceneStyle: { backgroundColor: colors.paper },
+        }}
+      >
+        {destinations.map((d) => (
+          <Tabs.Screen key={d.name} name={d.name} options={{ title: d.label }} />
+        ))}
+      </Tabs>
+      <ShortcutsHost />
+    </>
   );
 }

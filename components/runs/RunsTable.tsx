@@ -16,6 +16,7 @@ import {
 import type { RunSummary } from '@/shared/api/runs';
 import { runPagePath } from '@/shared/api/runs';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
+import { useFilterShortcut } from '@/components/shell/shortcuts';
 import { ProgressBar } from './ProgressBar';
 import { duration, ringLabel, started, statusLabel } from './format';
 
@@ -51,6 +52,7 @@ const widths: Record<string, number> = { status: 0.9, progress: 1.1, label: 2.6,
 export function RunsTable({ runs, wide }: { runs: RunSummary[]; wide: boolean }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
   const [filter, setFilter] = useState('');
+  const filterField = useFilterShortcut('Runs', 'Filter runs');
   const visible = useMemo((): VisibilityState => (wide ? {} : { createdAt: false, time: false }), [wide]);
   const table = useReactTable({
     data: runs,
@@ -67,6 +69,7 @@ export function RunsTable({ runs, wide }: { runs: RunSummary[]; wide: boolean })
   return (
     <View style={styles.wrap}>
       <TextInput
+        ref={filterField}
         value={filter}
         onChangeText={setFilter}
         placeholder="Filter by diagram, ring or status"

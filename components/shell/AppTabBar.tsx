@@ -1,14 +1,16 @@
 // The tab bar for app/(tabs): a bottom bar on phones (thumb reach), a side rail on wide screens.
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Platform, Pressable, StyleSheet, Text, View } from 'react-native';
 import type { BottomTabBarProps } from 'expo-router/js-tabs';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { useSession } from '@/hooks/useSession';
 import { destinations } from './destinations';
 import type { PressState } from '@/components/ui/press-state';
 import { Mark } from './icons';
+import { useShortcutRegistry } from './shortcuts';
 
 export function AppTabBar({ state, navigation, insets, wide }: BottomTabBarProps & { wide: boolean }) {
   const user = useSession((s) => s.user);
+  const setSheet = useShortcutRegistry((s) => s.setSheet);
   const current = state.routes[state.index]?.name;
 
   const items = destinations.map(({ name, label, Icon }) => {
@@ -54,6 +56,12 @@ export function AppTabBar({ state, navigation, insets, wide }: BottomTabBarProps
         <Text style={styles.brandText}>Overstrand</Text>
       </View>
       <View style={styles.railItems}>{items}</View>
+      {Platform.OS === 'web' ? (
+        <Pressable role="button" onPress={() => setSheet(true)} style={({ hovered }: PressState) => [styles.keysHint, hovered && styles.railItemHover]}>
+          <Text style={styles.keysHintText}>Keyboard shortcuts</Text>
+          <Text style={styles.keyCap}>?</Text>
+        </Pressable>
+      ) : null}
       {user ? (
         <View style={styles.who}>
           <Text style={styles.whoName} numberOfLines={1}>{user.displayName}</Text>
@@ -96,6 +104,9 @@ const styles = StyleSheet.create({
     borderRadius: radius.md,
   },
   railItemOn: { backgroundColor: colors.accentSoft },
+  keysHint: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', minHeight: 36, paddingHorizontal: space.md, borderRadius: radius.md, marginBottom: space.sm },
+  keysHintText: { ...type.small, color: colors.inkMuted },
+  keyCap: { fontFamily: fonts.monoMedium, fontSize: 12, color: colors.inkMuted, backgroundColor: colors.sunken, borderRadius: radius.sm, paddingHorizontal: 6, paddingVertical: 1 },
   railItemHover: { backgroundColor: colors.paper },
   railLabel: { ...type.body, fontFamily: fonts.medium },
   who: { paddingHorizontal: space.md, paddingTop: space.lg, borderTopWidth: 1, borderTopColor: colors.line, gap: 2 },
