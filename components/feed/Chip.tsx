@@ -11,8 +11,8 @@ export function Chip({ label, on, onPress }: { label: string; on: boolean; onPre
 }
 
 const styles = StyleSheet.create({
-  chip: { minHeight: 36, justifyContent: 'center', paddingHorizontal: space.md, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  chip: { maxWidth: '100%', minHeight: 36, justifyContent: 'center', paddingHorizontal: space.md, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
   on: { backgroundColor: colors.accent, borderColor: colors.accent },
-  text: { ...type.label, color: colors.ink },
+  text: { ...type.label, color: colors.ink, flexShrink: 1 },
   textOn: { color: colors.onAccent },
 });

@@ -3,9 +3,11 @@
 import { Image, Pressable, StyleSheet, Text, View } from 'react-native';
 import type { FeedItem } from '@/shared/api/feed';
 import { apiUrl } from '@/lib/api';
-import { colors, fonts, radius, space, type } from '@/constants/theme';
+import { colors, radius, space, type } from '@/constants/theme';
 import type { PressState } from '@/components/ui/press-state';
+import { Jones } from './Jones';
 import { StrokeThumb } from './StrokeThumb';
+import { superscripts } from './superscripts';
 import { when } from './when';
 
 const PIC = 84;
@@ -23,11 +25,12 @@ export function FeedCard({ item, onOpen, active }: { item: FeedItem; onOpen: () 
       <View style={styles.body}>
         <Text style={styles.title} numberOfLines={2}>{item.title || 'Untitled sketch'}</Text>
         <Text style={styles.meta} numberOfLines={1}>{item.owner.displayName} · {when(item.updatedAt)}</Text>
-        <Text style={styles.readout} numberOfLines={1}>
-          {inv.crossings} crossing{inv.crossings === 1 ? '' : 's'}{inv.jonesText ? `  V = ${inv.jonesText}` : ''}
-        </Text>
+        <View style={styles.readout}>
+          <Text style={styles.crossings}>{inv.crossings} crossing{inv.crossings === 1 ? '' : 's'}</Text>
+          <View style={styles.jones}><Jones inv={inv} nowrap /></View>
+        </View>
         <View style={styles.foot}>
-          {item.latestRun ? <Text style={styles.run} numberOfLines={1}>Run: {item.latestRun.summary || item.latestRun.kind}</Text> : null}
+          {item.latestRun ? <Text style={styles.run} numberOfLines={1}>{superscripts(item.latestRun.summary) || item.latestRun.kind}</Text> : null}
           <Text style={styles.count}>{item.commentCount} comment{item.commentCount === 1 ? '' : 's'}</Text>
           {item.tags.slice(0, 3).map((t) => <Text key={t} style={styles.tag}>#{t}</Text>)}
         </View>
@@ -43,7 +46,10 @@ const styles = StyleSheet.create({
   body: { flex: 1, gap: 2, minWidth: 0 },
   title: { ...type.heading, color: colors.ink },
   meta: { ...type.small, color: colors.inkMuted },
-  readout: { fontFamily: fonts.mono, fontSize: 13, lineHeight: 18, color: colors.ink },
+  readout: { flexDirection: 'row', alignItems: 'baseline', gap: space.sm, minWidth: 0 },
+  crossings: { ...type.small, color: colors.inkMuted, flexShrink: 0 },
+  // A long polynomial is cut at the card's edge (the sketch page shows it whole).
+  jones: { flexShrink: 1, minWidth: 0, overflow: 'hidden' },
   foot: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, marginTop: 2 },
   run: { ...type.label, color: colors.success },
   count: { ...type.label, color: colors.inkMuted },

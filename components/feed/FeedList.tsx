@@ -1,7 +1,7 @@
 // The Feed tab's list: pick a group, filter (tag, person, has results), scroll the shared
 // sketches newest first; more pages load as the end comes into view.
 import { useEffect, useState } from 'react';
-import { ActivityIndicator, FlatList, StyleSheet, Text, TextInput, View } from 'react-native';
+import { ActivityIndicator, FlatList, ScrollView, StyleSheet, Text, TextInput, View } from 'react-native';
 import { useGlobalSearchParams, useRouter } from 'expo-router';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { canPost } from '@/shared/api/feed-rules';
@@ -13,6 +13,7 @@ import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { FeedIcon } from '@/components/shell/icons';
+import { useFilterShortcut } from '@/components/shell/shortcuts';
 import { COLUMN_MAX, colors, fonts, radius, space, type } from '@/constants/theme';
 import { Chip } from './Chip';
 import { FeedCard } from './FeedCard';
@@ -27,6 +28,7 @@ export function FeedList() {
   const [filters, setFilters] = useState<FeedFilters>({});
   const [tagDraft, setTagDraft] = useState('');
   const [sharing, setSharing] = useState(false);
+  const tagField = useFilterShortcut('Feed', 'Filter by tag');
   useEffect(() => {
     const first = params.groupId ?? groups.data?.[0]?.id;
     if (!groupId && first) setGroupId(first);
@@ -57,15 +59,16 @@ export function FeedList() {
         {groups.data?.map((g) => <Chip key={g.id} label={g.name} on={g.id === groupId} onPress={() => { setGroupId(g.id); setFilters({}); }} />)}
       </View>
       <View style={styles.filters}>
-        <TextInput value={tagDraft} onChangeText={setTagDraft} placeholder="Filter by tag" aria-label="Filter by tag" autoCapitalize="none"
+        <TextInput ref={tagField} value={tagDraft} onChangeText={setTagDraft} placeholder="Filter by tag" aria-label="Filter by tag" autoCapitalize="none"
           onSubmitEditing={() => setFilters((f) => ({ ...f, tag: tagDraft.trim().replace(/^#/, '') || undefined }))} style={styles.tag} />
         <Chip label="Has results" on={!!filters.hasResults} onPress={() => setFilters((f) => ({ ...f, hasResults: !f.hasResults || undefined }))} />
       </View>
       {members.data && members.data.length > 1 ? (
-        <View style={styles.chips} aria-label="Filter by person">
+        // One scrolling row, so a big group's names do not push the feed below the fold.
+        <ScrollView horizontal showsHorizontalScrollIndicator={false} aria-label="Filter by person" contentContainerStyle={styles.people}>
           <Chip label="Everyone" on={!filters.person} onPress={() => setFilters((f) => ({ ...f, person: undefined }))} />
           {members.data.map((m) => <Chip key={m.userId} label={m.displayName} on={filters.person === m.userId} onPress={() => setFilters((f) => ({ ...f, person: m.userId }))} />)}
-        </View>
+        </ScrollView>
       ) : null}
       {group && canPost(group.role) ? (
         sharing ? (
@@ -107,6 +110,7 @@ const styles = StyleSheet.create({
   filters: { flexDirection: 'row', gap: space.sm, alignItems: 'center' },
   tag: { flex: 1, minHeight: 40, paddingHorizontal: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface, fontFamily: fonts.regular, fontSize: 15, color: colors.ink },
   row: { flexDirection: 'row' },
+  people: { flexDirection: 'row', gap: space.sm },
   muted: { ...type.small, color: colors.inkMuted },
   link: { color: colors.accent },
 });

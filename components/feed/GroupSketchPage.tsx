@@ -2,21 +2,24 @@
 // invariants as" links and the discussion. Wide windows put the sketch and the discussion
 // side by side.
 import { useState } from 'react';
-import { Image, StyleSheet, Text, View, useWindowDimensions } from 'react-native';
+import { ActivityIndicator, Image, StyleSheet, Text, View, useWindowDimensions } from 'react-native';
 import { useRouter } from 'expo-router';
 import type { GroupSketch, SketchRef } from '@/shared/api/feed';
 import { useFork, useGroupSketch, useShare } from '@/hooks/queries/useFeed';
-import { apiUrl, isApiError } from '@/lib/api';
+import { apiUrl } from '@/lib/api';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { Section } from '@/components/ui/Section';
 import { Banner } from '@/components/ui/Banner';
+import { LoadError } from '@/components/ui/LoadError';
 import { Button } from '@/components/ui/Button';
-import { colors, fonts, radius, space, type } from '@/constants/theme';
+import { colors, radius, space, type } from '@/constants/theme';
 import { Comments } from './Comments';
+import { Jones } from './Jones';
 import { PhotoStrip } from './PhotoStrip';
 import { StrokeThumb } from './StrokeThumb';
+import { superscripts } from './superscripts';
 import { when } from './when';
 
 const pdText = (pd: GroupSketch['pd']) => pd.map((x) => `X[${x.join(',')}]`).join(' ');
@@ -44,15 +47,20 @@ export function GroupSketchPage({ groupId, sketchId }: { groupId: string; sketch
   const [forked, setForked] = useState<string | null>(null);
   const back = wide ? undefined : () => (router.canGoBack() ? router.back() : router.replace('/feed'));
 
-  if (q.isPending) return <Screen><PageTitle title="Sketch" onBack={back} backLabel="Feed" /></Screen>;
-  if (q.isError) {
-    const missing = isApiError(q.error, 'not_found');
+  if (q.isPending) {
     return (
       <Screen>
         <PageTitle title="Sketch" onBack={back} backLabel="Feed" />
-        <Banner tone="error" title={missing ? 'Not in this group' : 'Could not load the sketch'}>
-          {missing ? 'This sketch is not shared to this group any more, or you are not a member.' : q.error.message}
-        </Banner>
+        <ActivityIndicator color={colors.accent} accessibilityLabel="Loading the sketch" />
+      </Screen>
+    );
+  }
+  if (q.isError) {
+    return (
+      <Screen>
+        <PageTitle title="Sketch" onBack={back} backLabel="Feed" />
+        <LoadError error={q.error} failed="Could not load the sketch"
+          notFound={{ title: 'Not in this group', text: 'This sketch is not shared to this group any more, or you are not a member.' }} />
       </Screen>
     );
   }
@@ -78,14 +86,22 @@ export function GroupSketchPage({ groupId, sketchId }: { groupId: string; sketch
         <Text style={styles.readout}>
           {s.invariants.crossings} crossings{s.invariants.components !== null ? ` · ${s.invariants.components} component${s.invariants.components === 1 ? '' : 's'}` : ''}
         </Text>
-        <Text style={styles.readout}>V(t) = {s.invariants.jonesText ?? '—'}</Text>
+        {s.invariants.jones ? <Jones inv={s.invariants} lhs="V(t)" /> : <Text style={styles.muted}>No Jones polynomial: the diagram is too large or not a valid PD code.</Text>}
         {s.pd.length ? <Text style={styles.code} selectable>{pdText(s.pd)}</Text> : null}
-        {s.latestRun ? <Text style={styles.run}>Latest run: {s.latestRun.summary || s.latestRun.kind}</Text> : null}
+        {s.latestRun ? (
+          <Text role="link" style={styles.run} onPress={() => router.push(`/runs/${s.latestRun!.id}`)}>
+            Latest run: {superscripts(s.latestRun.summary) || s.latestRun.kind} ›
+          </Text>
+        ) : null}
       </Section>
       {s.notes ? <Text style={styles.notes}>{s.notes}</Text> : null}
       <View style={styles.actions}>
         <Button label="Fork into my sketchbook" busy={fork.isPending} busyLabel="Forking…"
           onPress={() => fork.mutate(s.id, { onSuccess: (r) => setForked(r.id) })} />
+        {s.can.comment && s.pd.length ? (
+          <Button variant="secondary" label="Start a run"
+            onPress={() => router.push(`/runs?sketchId=${encodeURIComponent(s.id)}&pd=${encodeURIComponent(JSON.stringify(s.pd))}`)} />
+        ) : null}
         {s.can.unshare ? (
           <Button variant="danger" label="Stop sharing" busy={share.isPending} busyLabel="Stopping…"
             onPress={() => share.mutate({ sketchId: s.id, groupId: null }, { onSuccess: () => router.replace('/feed') })} />
@@ -130,7 +146,7 @@ const styles = StyleSheet.create({
   hero: { width: '100%', maxWidth: 640, borderRadius: radius.lg, overflow: 'hidden', backgroundColor: colors.sunken },
   meta: { ...type.small, color: colors.inkMuted },
   tags: { ...type.label, color: colors.accent },
-  readout: { fontFamily: fonts.mono, fontSize: 15, lineHeight: 22, color: colors.ink },
+  readout: { ...type.body, color: colors.ink },
   code: { ...type.code, color: colors.inkMuted },
   run: { ...type.label, color: colors.success },
   notes: { ...type.body, color: colors.ink },

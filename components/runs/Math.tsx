@@ -2,6 +2,6 @@
 import { Text } from 'react-native';
 import { colors, type } from '@/constants/theme';
 
-export function TeX({ text }: { tex: string; text: string; display?: boolean }) {
-  return <Text style={[type.code, { color: colors.ink }]}>{text}</Text>;
+export function TeX({ text, nowrap = false }: { tex: string; text: string; display?: boolean; nowrap?: boolean }) {
+  return <Text style={[type.code, { color: colors.ink }]} numberOfLines={nowrap ? 1 : undefined}>{text}</Text>;
 }

@@ -18,8 +18,8 @@ if (typeof document !== 'undefined') {
   document.head.appendChild(style);
 }
 
-/** `text` is what screen readers and the native sibling show. */
-export function TeX({ tex, text, display = false }: { tex: string; text: string; display?: boolean }) {
+/** `text` is what screen readers and the native sibling show; `nowrap` keeps it on one line (a card cuts it). */
+export function TeX({ tex, text, display = false, nowrap = false }: { tex: string; text: string; display?: boolean; nowrap?: boolean }) {
   const html = useMemo(() => katex.renderToString(tex, { throwOnError: false, displayMode: display, output: 'htmlAndMathml' }), [tex, display]);
-  return <span aria-label={text} role="math" dangerouslySetInnerHTML={{ __html: html }} />;
+  return <span aria-label={text} role="math" style={nowrap ? { whiteSpace: 'nowrap' } : undefined} dangerouslySetInnerHTML={{ __html: html }} />;
 }

@@ -1,13 +1,13 @@
 // Run results for the feed, read from the Runs area's table (server/runs) by plain SQL, so the
 // feed works before that table exists (no results) and without importing that area. Columns
-// used: runs.id, sketchId, status ('done' = a result), finishedAt, kind, label, parentRunId (a
+// used: runs.id, sketchId, status ('done' = a result), finishedAt, kind, parentRunId (a
 // sweep's cells are skipped), ring, reduced, result (JSON with poincareText).
 import type { DataSource, EntityManager } from 'typeorm';
 import type { RunSummary } from '@/shared/api/feed';
 
 type Db = DataSource | EntityManager;
 
-const NEEDED = ['id', 'sketchId', 'status', 'finishedAt', 'kind', 'label', 'parentRunId', 'ring', 'reduced', 'result'];
+const NEEDED = ['id', 'sketchId', 'status', 'finishedAt', 'kind', 'parentRunId', 'ring', 'reduced', 'result'];
 
 async function runsTable(db: Db): Promise<boolean> {
   const rows: { name: string }[] = await db.query(`SELECT name FROM pragma_table_info('runs')`);
@@ -27,14 +27,16 @@ const marks = (n: number) => Array.from({ length: n }, () => '?').join(',');
 export async function latestRuns(db: Db, sketchIds: string[]): Promise<Map<string, RunSummary>> {
   const out = new Map<string, RunSummary>();
   if (sketchIds.length === 0 || !(await runsTable(db))) return out;
-  const rows: { id: string; sketchId: string; kind: string; label: string; finishedAt: string; poincare: string | null }[] = await db.query(
-    `SELECT r."id" AS id, r."sketchId" AS sketchId, r."kind" AS kind, r."label" AS label, r."finishedAt" AS finishedAt,
+  const rows: { id: string; sketchId: string; kind: string; ring: string; reduced: number; finishedAt: string; poincare: string | null }[] = await db.query(
+    `SELECT r."id" AS id, r."sketchId" AS sketchId, r."kind" AS kind, r."ring" AS ring, r."reduced" AS reduced, r."finishedAt" AS finishedAt,
             json_extract(r."result", '$.poincareText') AS poincare
        FROM "runs" r WHERE ${DONE} AND r."sketchId" IN (${marks(sketchIds.length)}) ORDER BY r."finishedAt" DESC`,
     sketchIds,
   );
   for (const r of rows) {
-    const summary = [r.label, r.poincare && `Kh Poincaré polynomial ${r.poincare}`].filter(Boolean).join(': ');
+    // Not the run's label: it is the sketch's title, which the feed shows already.
+    const what = `${r.kind === 'cable-sweep' ? 'Cable sweep' : 'Kh'} over ${r.ring}${r.reduced ? ', reduced' : ''}`;
+    const summary = r.poincare ? `${what}: ${r.poincare}` : what;
     if (!out.has(r.sketchId)) out.set(r.sketchId, { id: r.id, kind: r.kind, finishedAt: r.finishedAt, summary });
   }
   return out;
