@@ -27,7 +27,7 @@ function ScopePicker({ value, onChange }: { value: RunScope; onChange: (s: RunSc
     <View role="radiogroup" aria-label="Whose runs" style={styles.scopes}>
       {options.map((o) => (
         <Pressable key={o.label} role="radio" aria-checked={same(o.scope, value)} onPress={() => onChange(o.scope)} style={[styles.scope, same(o.scope, value) && styles.chosen]}>
-          <Text style={[styles.scopeText, same(o.scope, value) && styles.chosenText]}>{o.label}</Text>
+          <Text style={[styles.scopeText, same(o.scope, value) && styles.chosenText]} numberOfLines={1}>{o.label}</Text>
         </Pressable>
       ))}
     </View>
@@ -60,8 +60,8 @@ export default function RunsScreen() {
 
 const styles = StyleSheet.create({
   scopes: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  scope: { paddingHorizontal: space.md, paddingVertical: space.sm, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  scope: { maxWidth: '100%', paddingHorizontal: space.md, paddingVertical: space.sm, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
   chosen: { backgroundColor: colors.ink, borderColor: colors.ink },
-  scopeText: { ...type.small, color: colors.ink },
+  scopeText: { ...type.small, color: colors.ink, flexShrink: 1 },
   chosenText: { color: colors.onAccent, fontFamily: fonts.medium },
 });
