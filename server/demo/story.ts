@@ -146,7 +146,8 @@ export async function seedStory(deps: Deps, groupId: string, people: Record<Pers
       createdAt: at.toISOString(), updatedAt: at.toISOString(), groupId, deleted: false,
     };
     const deviceId = 'demo-seed';
-    await push(deps, owner, { deviceId, mutations: [{ mutationId: randomUUID(), deviceId, clock: 1, recordId: s.id, type: 'sketch', op: 'add', baseVersion: 0, fields }] });
+    // Pushed as of that day, so the feed's "when" reads as the seminar's weeks.
+    await push({ ...deps, now: () => at }, owner, { deviceId, mutations: [{ mutationId: randomUUID(), deviceId, clock: 1, recordId: s.id, type: 'sketch', op: 'add', baseVersion: 0, fields }] });
     added++;
     const comments = s.comments.filter((c) => users.has(c.by));
     await inTransaction(deps.db, async (m) => {
