@@ -3,9 +3,9 @@
 // drawn; screenshots at phone and wide size.
 import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
-import { PHONE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
+import { PHONE, baseUrl, launch, person, shoot, signIn } from './helpers';
 
-const who = { name: 'Sofia Slate', email: uniqueEmail('sofia.slate'), password: 'chalk and board 5' };
+const who = person('Sofia Slate', 'sofia.slate', 'chalk and board 5');
 
 let browser: Browser;
 let page: Page;
@@ -67,11 +67,7 @@ beforeAll(async () => {
   const context = await browser.newContext({ viewport: PHONE, permissions: ['clipboard-read', 'clipboard-write'] });
   context.setDefaultTimeout(15_000);
   page = await context.newPage();
-  await page.goto(baseUrl + '/sign-in');
-  await page.getByLabel('E-mail').fill(who.email);
-  await page.getByLabel('Password').fill(who.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.getByRole('heading', { name: 'Sketches', exact: true }).waitFor();
+  await signIn(page, who);
 });
 
 afterAll(async () => {
