@@ -9,6 +9,7 @@ import { isApiError, type ApiError } from '@/lib/api';
 import { roleDescriptions } from '@/lib/permissions';
 import { AuthFrame } from '@/components/auth/AuthFrame';
 import { Banner } from '@/components/ui/Banner';
+import { LoadError } from '@/components/ui/LoadError';
 import { Button } from '@/components/ui/Button';
 import { RoleBadge } from '@/components/ui/RoleBadge';
 import { colors, space, type } from '@/constants/theme';
@@ -19,12 +20,10 @@ export default function InvitationScreen() {
 
   if (preview.isPending) return <AuthFrame title="Invitation"><Text style={styles.muted}>Opening the invitation…</Text></AuthFrame>;
   if (preview.isError) {
-    const unknown = isApiError(preview.error, 'not_found');
     return (
       <AuthFrame title="Invitation">
-        <Banner tone="error" title={unknown ? 'This invitation link is not valid' : 'Could not open the invitation'}>
-          {unknown ? 'Check that the whole link was copied, or ask for a new invitation.' : preview.error.message}
-        </Banner>
+        <LoadError error={preview.error} failed="Could not open the invitation"
+          notFound={{ title: 'This invitation link is not valid', text: 'Check that the whole link was copied, or ask for a new invitation.' }} />
       </AuthFrame>
     );
   }

@@ -5,13 +5,13 @@ import { useGroup } from '@/hooks/queries/useGroups';
 import { useLeaveGroup, useMembers } from '@/hooks/queries/useMembers';
 import { usePendingInvitations } from '@/hooks/queries/useInvitations';
 import { useSession } from '@/hooks/useSession';
-import { isApiError } from '@/lib/api';
 import { canManage, roleDescriptions } from '@/lib/permissions';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { Section } from '@/components/ui/Section';
 import { Banner } from '@/components/ui/Banner';
+import { LoadError } from '@/components/ui/LoadError';
 import { Button } from '@/components/ui/Button';
 import { RoleBadge } from '@/components/ui/RoleBadge';
 import { InviteForm } from '@/components/groups/InviteForm';
@@ -34,13 +34,11 @@ export default function GroupScreen() {
     return <Screen><PageTitle title="Group" onBack={back} backLabel="Account" /></Screen>;
   }
   if (group.isError) {
-    const missing = isApiError(group.error, 'not_found');
     return (
       <Screen>
         <PageTitle title="Group" onBack={back} backLabel="Account" />
-        <Banner tone="error" title={missing ? 'Group not found' : 'Could not load the group'}>
-          {missing ? 'This group does not exist, or you are not one of its members.' : group.error.message}
-        </Banner>
+        <LoadError error={group.error} failed="Could not load the group"
+          notFound={{ title: 'Group not found', text: 'This group does not exist, or you are not one of its members.' }} />
       </Screen>
     );
   }
