@@ -1,54 +1,54 @@
-// Keyboard shortcuts of the Slate on the web (wide screens with a keyboard). Typing in a field
-// is never taken over.
-import { useEffect } from 'react';
+// The Slate's keyboard shortcuts on the web. Single keys go through the app's shortcut registry
+// (components/shell/shortcuts.ts: live while the Slate is focused, listed in the ? sheet);
+// the registry leaves Ctrl/Cmd combinations alone, so undo and redo have their own listener.
+// Typing in a field is never taken over.
+import { useEffect, useMemo } from 'react';
 import { Platform } from 'react-native';
 import { deleteComponent } from '@/shared/drawing/sketch';
 import { useSlate } from '@/lib/slate/slate-store';
+import { useScreenShortcuts, type Shortcut } from '@/components/shell/shortcuts';
 
-export const shortcutList: readonly [string, string][] = [
-  ['Ctrl Z', 'Undo'],
-  ['Ctrl Shift Z / Ctrl Y', 'Redo'],
-  ['D', 'Draw'],
-  ['F', 'Flip crossings'],
-  ['M', 'Move a component'],
-  ['R', 'Reshape a strand'],
-  ['Delete', 'Delete the selected component'],
-  ['Esc', 'Clear the selection'],
-  ['0', 'Fit the drawing to the Slate'],
-  ['P', 'Paste a code'],
-  ['?', 'Show this list'],
-];
+const deleteSelected = () => {
+  const s = useSlate.getState();
+  if (!s.selected) return;
+  s.apply({ ...s.history.present, sketch: deleteComponent(s.history.present.sketch, s.selected) });
+  s.select(null);
+};
 
-/** `enabled` is false while a dialog is open: its keys are its own (Escape closes it). */
-export function useSlateShortcuts(on: { help: () => void; paste: () => void }, enabled: boolean) {
+/** `enabled` is false while a dialog of the Slate is open: its keys are its own. */
+export function useSlateShortcuts(paste: () => void, enabled: boolean) {
+  const list = useMemo<Shortcut[]>(() => {
+    if (!enabled) return [];
+    const s = () => useSlate.getState();
+    const slate = (keys: string, label: string, run: () => void): Shortcut => ({ keys, label, area: 'Slate', run });
+    return [
+      slate('d', 'Draw', () => s().setTool('draw')),
+      slate('f', 'Flip crossings', () => s().setTool('flip')),
+      slate('m', 'Move a component', () => s().setTool('move')),
+      slate('r', 'Reshape a strand', () => s().setTool('reshape')),
+      slate('Delete', 'Delete the selected component', deleteSelected),
+      slate('Backspace', 'The same as Delete', deleteSelected),
+      slate('Escape', 'Clear the selection', () => s().select(null)),
+      slate('0', 'Fit the drawing to the Slate', () => s().fit()),
+      slate('p', 'Paste a code', paste),
+    ];
+  }, [enabled, paste]);
+  useScreenShortcuts(list);
+
   useEffect(() => {
     if (!enabled || Platform.OS !== 'web' || typeof window === 'undefined') return;
     const onKey = (e: KeyboardEvent) => {
       const t = e.target as HTMLElement | null;
       if (t && (t.tagName === 'INPUT' || t.tagName === 'TEXTAREA' || t.isContentEditable)) return;
-      const s = useSlate.getState();
-      const mod = e.ctrlKey || e.metaKey;
+      if (!(e.ctrlKey || e.metaKey) || e.altKey) return;
       const key = e.key.toLowerCase();
-      let handled = true;
-      if (mod && key === 'z') (e.shiftKey ? s.redo : s.undo)();
-      else if (mod && key === 'y') s.redo();
-      else if (mod || e.altKey) handled = false;
-      else if (key === 'd') s.setTool('draw');
-      else if (key === 'f') s.setTool('flip');
-      else if (key === 'm') s.setTool('move');
-      else if (key === 'r') s.setTool('reshape');
-      else if (key === '0') s.fit();
-      else if (key === 'p') on.paste();
-      else if (e.key === '?') on.help();
-      else if (e.key === 'Escape') s.select(null);
-      else if ((e.key === 'Delete' || e.key === 'Backspace') && s.selected) {
-        const doc = s.history.present;
-        s.apply({ ...doc, sketch: deleteComponent(doc.sketch, s.selected) });
-        s.select(null);
-      } else handled = false;
-      if (handled) e.preventDefault();
+      const s = useSlate.getState();
+      if (key === 'z') (e.shiftKey ? s.redo : s.undo)();
+      else if (key === 'y') s.redo();
+      else return;
+      e.preventDefault();
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [on, enabled]);
+  }, [enabled]);
 }

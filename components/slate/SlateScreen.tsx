@@ -16,7 +16,8 @@ import { docFromDiagram, docFromStored } from '@/lib/slate/record';
 import { braidOf, currentDoc, useSlate } from '@/lib/slate/slate-store';
 import { useReadout } from '@/hooks/useReadout';
 import { useSlateAutosave } from '@/hooks/useSlateAutosave';
-import { shortcutList, useSlateShortcuts } from '@/hooks/useSlateShortcuts';
+import { useSlateShortcuts } from '@/hooks/useSlateShortcuts';
+import { useShortcutRegistry } from '@/components/shell/shortcuts';
 import { saveText } from '@/components/runs/save';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { Readout } from '@/components/readout/Readout';
@@ -27,10 +28,9 @@ import { SlateCanvas } from './SlateCanvas';
 import { SelectionBar, Toolbar } from './Toolbar';
 import { FramingDialog } from './FramingDialog';
 import { SketchDetails } from './SketchDetails';
-import { Dialog } from './Dialog';
 import { colors, fonts, space, type } from '@/constants/theme';
 
-type Open = null | 'paste' | 'families' | 'details' | 'help' | { framing: string };
+type Open = null | 'paste' | 'families' | 'details' | { framing: string };
 
 export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const wide = useIsWide();
@@ -59,8 +59,8 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
     return () => clearTimeout(t);
   }, [message]);
 
-  const shortcuts = useMemo(() => ({ help: () => setOpen('help'), paste: () => setOpen('paste') }), []);
-  useSlateShortcuts(shortcuts, ready && open === null);
+  const paste = useCallback(() => setOpen('paste'), []);
+  useSlateShortcuts(paste, ready && open === null);
 
   const numberOf = useCallback((id: string) => {
     const k = analysis.diagram?.componentIds.indexOf(id) ?? -1;
@@ -130,7 +130,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
         <Text style={styles.meta} numberOfLines={1}>{[sketch.seenAt, sketch.tags.map((t) => `#${t}`).join(' ')].filter(Boolean).join(' · ') || 'Add a title, where it was seen, notes, a photo'}</Text>
       </Pressable>
       <View style={styles.headerActions}>
-        {wide ? <Pressable role="button" accessibilityLabel="Keyboard shortcuts" onPress={() => setOpen('help')} style={styles.quiet}><Text style={styles.quietText}>?</Text></Pressable> : null}
+        {wide ? <Pressable role="button" accessibilityLabel="Keyboard shortcuts" onPress={() => useShortcutRegistry.getState().setSheet(true)} style={styles.quiet}><Text style={styles.quietText}>?</Text></Pressable> : null}
         <Pressable role="button" accessibilityLabel="Details" onPress={() => setOpen('details')} style={styles.quiet}><Text style={styles.quietText}>Details</Text></Pressable>
       </View>
     </View>
@@ -180,14 +180,6 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
           setOpen(null);
         }}
       />
-      <Dialog title="Keyboard shortcuts" visible={open === 'help'} onClose={() => setOpen(null)}>
-        {shortcutList.map(([keys, what]) => (
-          <View key={keys} style={styles.keyRow}>
-            <Text style={styles.keys}>{keys}</Text>
-            <Text style={styles.keyWhat}>{what}</Text>
-          </View>
-        ))}
-      </Dialog>
     </View>
   );
 }
@@ -210,7 +202,4 @@ const styles = StyleSheet.create({
   quietText: { ...type.label, color: colors.accent, fontSize: 15 },
   canvasWide: { flex: 1 },
   canvasPhone: { marginHorizontal: 0 },
-  keyRow: { flexDirection: 'row', gap: space.lg, alignItems: 'baseline' },
-  keys: { fontFamily: fonts.mono, fontSize: 14, color: colors.ink, width: 170 },
-  keyWhat: { ...type.body, color: colors.inkMuted },
 });
