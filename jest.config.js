@@ -3,6 +3,7 @@
 const alias = { '^@/(.*)$': '<rootDir>/$1' };
 
 module.exports = {
+  reporters: ['default', ['<rootDir>/tests/summary-reporter.js', { label: 'unit' }]],
   projects: [
     {
       displayName: 'node',

@@ -9,4 +9,5 @@ module.exports = {
   transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: 'tests/browser/tsconfig.json', isolatedModules: true }] },
   moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
   testTimeout: 60_000,
+  reporters: ['default', ['<rootDir>/tests/summary-reporter.js', { label: 'browser' }]],
 };
