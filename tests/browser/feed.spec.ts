@@ -72,7 +72,7 @@ test('Ada shares her sketch to the group and adds a board photo', async () => {
   await adaPage.getByRole('button', { name: `Share ${title}` }).click();
   await adaPage.getByRole('heading', { name: title }).waitFor();
   // Readout summary of the positive trefoil: Jones t + t^3 - t^4 (DESIGN.md conventions).
-  await adaPage.getByText('V(t) = t + t³ − t⁴').waitFor();
+  await adaPage.getByRole('math', { name: 'V(t) = t + t³ − t⁴' }).waitFor(); // typeset; its text is the label
 
   // A "photo of the board": chalk curves on slate, with a GPS position in its EXIF as a phone would write.
   const board = `<svg xmlns="http://www.w3.org/2000/svg" width="800" height="600"><rect width="800" height="600" fill="#2b3a36"/>
