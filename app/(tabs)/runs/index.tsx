@@ -39,21 +39,31 @@ export default function RunsScreen() {
   const [scope, setScope] = useState<RunScope>('mine');
   const runs = useRunList(scope);
   const wide = useIsWide();
+  // Arriving from a sketch ("Start a run" on the Slate or the feed), the form comes first.
+  const fromSketch = !!sketchId;
+  const form = fromSketch ? (
+    <Section title="Start a run on this sketch" note="The server computes it and mails you when it is done.">
+      <StartRunForm key={sketchId} initialPD={pd} sketchId={sketchId} />
+    </Section>
+  ) : (
+    <Section title="Start a run" note="Paste a PD code or a braid word; the server computes it and mails you when it is done.">
+      <StartRunForm key="" initialPD={pd} />
+    </Section>
+  );
   return (
     <Screen wide>
       <PageTitle kicker="Server" title="Runs" />
+      {fromSketch ? form : null}
       <ScopePicker value={scope} onChange={setScope} />
       {runs.isError ? <Banner tone="error">{runs.error.message}</Banner> : null}
-      {runs.data && runs.data.length === 0 ? (
+      {runs.data && runs.data.length === 0 && !fromSketch ? (
         <EmptyState art={<RunsIcon color={colors.inkFaint} size={40} />} title={scope === 'mine' ? 'No runs yet' : 'No runs in this group yet'}>
           Start a run below, or from a sketch: Khovanov homology over the integers, Q or F_p, or a cable sweep over
           strand counts. The group's server computes it; progress shows here and an e-mail says when it is done.
         </EmptyState>
       ) : null}
       {runs.data && runs.data.length > 0 ? <RunsTable runs={runs.data} wide={wide} /> : null}
-      <Section title="Start a run" note="Paste a PD code or a braid word; the server computes it and mails you when it is done.">
-        <StartRunForm key={sketchId ?? ''} initialPD={pd} sketchId={sketchId} />
-      </Section>
+      {fromSketch ? null : form}
     </Screen>
   );
 }
