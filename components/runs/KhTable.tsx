@@ -27,7 +27,7 @@ export function KhTable({ groups, ring, compact = false, label }: { groups: KhGr
               const x = g.at(i, j);
               return (
                 <View key={i} role="cell" style={[cell, x && styles.filled]}>
-                  {x ? <TeX tex={groupText(x, ring, 'tex')} text={groupText(x, ring)} /> : null}
+                  {x ? <TeX tex={groupText(x, ring, 'tex')} text={groupText(x, ring)} nowrap /> : null}
                 </View>
               );
             })}

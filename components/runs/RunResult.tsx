@@ -28,6 +28,12 @@ function Fact({ name, children }: { name: string; children: React.ReactNode }) {
   );
 }
 
+/** A file name a user can find again: the diagram's label, the ring, the run's short id. */
+const exportName = (run: { id: string; label: string; ring: string; reduced: boolean }) => {
+  const slug = run.label.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 40);
+  return ['kh', slug, run.ring + (run.reduced ? '-reduced' : ''), run.id.slice(0, 8)].filter(Boolean).join('-');
+};
+
 function Exports({ result, base }: { result: KhResultJson; base: string }) {
   const [note, setNote] = useState<string | null>(null);
   const save = (ext: string, text: string, mime: string) => void saveText(`${base}.${ext}`, text, mime).then(setNote);
@@ -91,7 +97,7 @@ export function RunResult({ run }: { run: RunDetail }) {
           </Section>
           <KhSummary result={run.result} />
           <Section title="Export">
-            <Exports result={run.result} base={`kh-${run.id.slice(0, 8)}`} />
+            <Exports result={run.result} base={exportName(run)} />
           </Section>
         </>
       ) : null}
