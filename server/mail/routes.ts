@@ -26,7 +26,7 @@ function page(mail: KeptMail[]): string {
   return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>Kept mail - Overstrand</title>
 <meta name="viewport" content="width=device-width, initial-scale=1">
 <style>body{font-family:system-ui,sans-serif;max-width:46rem;margin:2rem auto;padding:0 1rem;color:#222}
-article{border-top:1px solid #ccc;padding:.5rem 0}.meta{color:#666;font-size:.9rem}pre{white-space:pre-wrap}</style>
+h1{font-size:1.6rem}h2{font-size:1.05rem;margin:.8rem 0 .2rem}article{border-top:1px solid #ddd;padding:.5rem 0}.meta{color:#666;font-size:.85rem}pre{white-space:pre-wrap;font-size:.85rem}</style>
 </head><body><h1>Kept mail</h1><p>Development only: every message the server sent, newest first.</p>
 ${items || '<p>No mail yet.</p>'}</body></html>`;
 }
