@@ -14,6 +14,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { Button } from '@/components/ui/Button';
 import { Banner } from '@/components/ui/Banner';
 import { SlateArt } from '@/components/shell/SlateArt';
+import { SyncStatus } from '@/components/sync/SyncStatus';
 import { colors, radius, space, type } from '@/constants/theme';
 
 function Row({ sketch, active }: { sketch: LocalSketch; active: boolean }) {
@@ -47,6 +48,7 @@ export function SketchList() {
     <Screen>
       <View style={styles.head}>
         <PageTitle kicker="Sketchbook" title="Sketches" />
+        <SyncStatus />
         {sketches.length ? <Button label="New sketch" onPress={() => router.push('/sketches/new' as never)} /> : null}
       </View>
       {list.isError ? <Banner tone="error">{list.error.message}</Banner> : null}

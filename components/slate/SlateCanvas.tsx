@@ -10,6 +10,7 @@ import type { Analysis } from '@/shared/drawing/analyse';
 import { componentNear, crossingNear } from '@/shared/drawing/pick';
 import { dist, type Point } from '@/shared/drawing/point';
 import { addStroke, flipCrossing, moveComponent, reshapeComponent, reverseComponent } from '@/shared/drawing/sketch';
+import { carryFlips } from '@/shared/drawing/carry';
 import type { SlateDoc } from '@/lib/slate/record';
 import { fitView, screenSizes, strandPictures, toScreen, toWorld, zoomAbout } from '@/lib/slate/picture';
 import { currentDoc, useSlate, type View as ViewT } from '@/lib/slate/slate-store';
@@ -79,9 +80,11 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
     } else {
       const p = toWorld(s.view, screen);
       const delta = { x: p.x - d.origin.x, y: p.y - d.origin.y };
-      const sketch = d.kind === 'move'
+      const edited = d.kind === 'move'
         ? moveComponent(d.from.sketch, d.id, delta)
         : reshapeComponent(d.from.sketch, d.id, d.index, delta, reshapeRadius / s.view.k);
+      // Flips are anchored by position; a drag can carry a crossing out of its flip's reach.
+      const sketch = carryFlips(d.from.sketch, edited);
       s.setPreview({ ...d.from, sketch });
     }
   };

@@ -68,7 +68,11 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   }, [analysis]);
 
   const draw = (d: Diagram, word?: number[]) => {
-    useSlate.getState().replace(docFromDiagram(d), word);
+    try {
+      useSlate.getState().replace(docFromDiagram(d), word);
+    } catch (e) {
+      setMessage((e as Error).message);
+    }
     setOpen(null);
   };
   const simplifyNow = () => {

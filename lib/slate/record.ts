@@ -48,10 +48,18 @@ export function toStoredDiagram(doc: SlateDoc, a: Analysis): StoredDiagram {
   };
 }
 
-/** A knot-core diagram as an editable drawing (its PD code read back is the same diagram). */
+/**
+ * A knot-core diagram as an editable drawing (its PD code read back is the same diagram).
+ * Throws when the layout finds no picture that reads back as the same diagram: a distorted
+ * picture would make the Readout show another link's invariants.
+ */
 export function docFromDiagram(d: Diagram): SlateDoc {
   if (d.pd.length === 0 && d.unknots === 0) return emptyDoc;
-  return { sketch: layoutToSketch(layoutPD(d.pd, d.unknots), d.framings), colours: {} };
+  const layout = layoutPD(d.pd, d.unknots);
+  if (!layout.faithful) {
+    throw new Error('No faithful picture found for this code; the same link given as a braid word, or with fewer crossings, may draw.');
+  }
+  return { sketch: layoutToSketch(layout, d.framings), colours: {} };
 }
 
 export function docFromStored(stored: StoredDiagram): SlateDoc {
@@ -60,5 +68,8 @@ export function docFromStored(stored: StoredDiagram): SlateDoc {
     const { colours = {}, ...sketch } = g.data;
     return { sketch, colours };
   }
-  return docFromDiagram({ pd: stored.pd, unknots: stored.unknots, framings: stored.framings });
+  // A stored record is shown even if its picture is imperfect, so that it is never replaced by
+  // an empty board; its stored PD code stays the record's truth until the user edits it.
+  if (stored.pd.length === 0 && stored.unknots === 0) return emptyDoc;
+  return { sketch: layoutToSketch(layoutPD(stored.pd, stored.unknots), stored.framings), colours: {} };
 }
