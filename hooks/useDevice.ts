@@ -30,7 +30,7 @@ export function useDevice(): OpenDevice | null {
 /** S31: the status line and "Sync now". */
 export function useSyncStatus() {
   const state = useStore(syncStatus); // the whole state: a derived object per call would loop
-  const status = statusOf(state);
+  const status = statusOf({ ...state, waiting: state.waiting + state.comments });
   const device = useDevice();
   return {
     status,

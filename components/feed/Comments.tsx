@@ -3,7 +3,8 @@
 import { useState } from 'react';
 import { StyleSheet, Text, TextInput, View } from 'react-native';
 import type { Comment } from '@/shared/api/comments';
-import { useAddComment, useDeleteComment, useEditComment } from '@/hooks/queries/useFeed';
+import type { LocalComment } from '@/lib/store/types';
+import { useAddComment, useDeleteComment, useEditComment, useUnsentComments } from '@/hooks/queries/useFeed';
 import { useSession } from '@/hooks/useSession';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
@@ -51,14 +52,28 @@ function Item({ c, groupId, mine, moderate, canWrite }: { c: Comment; groupId: s
   );
 }
 
+/** A comment still on this device (S34): sent by the next sync, or refused with the reason. */
+function Unsent({ c, author }: { c: LocalComment; author: string }) {
+  return (
+    <View style={styles.item} testID="unsent-comment">
+      <Text style={styles.meta}>
+        <Text style={styles.author}>{author}</Text> · {c.state === 'waiting' ? <Text style={styles.waiting}>Waiting to send</Text> : <Text style={styles.refused}>Not sent: {c.reason}</Text>}
+      </Text>
+      <CommentText body={c.body} />
+    </View>
+  );
+}
+
 export function Comments({ groupId, sketchId, comments, canComment, moderate }: { groupId: string; sketchId: string; comments: Comment[]; canComment: boolean; moderate: boolean }) {
   const me = useSession((s) => s.user);
   const add = useAddComment(groupId, sketchId);
+  const unsent = useUnsentComments(groupId, sketchId).filter((c) => !comments.some((s) => s.id === c.id));
   const [round, setRound] = useState(0); // remounts the composer empty after a post
   return (
     <View style={styles.wrap}>
-      {comments.length === 0 ? <Text style={styles.muted}>No comments yet.</Text> : null}
+      {comments.length + unsent.length === 0 ? <Text style={styles.muted}>No comments yet.</Text> : null}
       {comments.map((c) => <Item key={c.id} c={c} groupId={groupId} mine={c.author.id === me?.id} moderate={moderate} canWrite={canComment} />)}
+      {unsent.map((c) => <Unsent key={c.id} c={c} author={me?.displayName ?? 'Me'} />)}
       {add.error ? <Banner tone="error">{add.error.message}</Banner> : null}
       {canComment ? (
         <Composer key={round} label="Post comment" busy={add.isPending} onSubmit={(body) => add.mutate(body, { onSuccess: () => setRound((r) => r + 1) })} />
@@ -77,6 +92,8 @@ const styles = StyleSheet.create({
   actions: { flexDirection: 'row', gap: space.lg },
   action: { ...type.label, color: colors.accent },
   danger: { color: colors.danger },
+  waiting: { fontFamily: fonts.medium, color: colors.inkFaint },
+  refused: { fontFamily: fonts.medium, color: colors.danger },
   composer: { gap: space.sm },
   input: { minHeight: 88, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface, fontFamily: fonts.regular, fontSize: 16, color: colors.ink, textAlignVertical: 'top' },
   row: { flexDirection: 'row', gap: space.sm },

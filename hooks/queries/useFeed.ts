@@ -1,13 +1,18 @@
 // The group feed, a shared sketch's page and what can be done there (comment, fork, photos,
 // share). Keys live under ['feed', groupId] so one invalidation refreshes list and pages.
+import { useEffect, useRef } from 'react';
 import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Comment, commentPaths } from '@/shared/api/comments';
 import { FeedPage, ForkResponse, GroupSketch, ShareResponse, feedPaths } from '@/shared/api/feed';
 import { Photo, photoPaths } from '@/shared/api/photos';
 import { MemberList, groupPaths } from '@/shared/api/groups';
 import { SketchList, sketchPaths } from '@/shared/api/sketches';
-import { api } from '@/lib/api';
+import { api, isApiError } from '@/lib/api';
+import { syncStatus } from '@/lib/store/device';
+import type { LocalComment } from '@/lib/store/types';
+import { useDevice } from '@/hooks/useDevice';
 import { keys } from './keys';
+import { useLocalComments } from './useLocalSketches';
 
 export interface FeedFilters {
   tag?: string;
@@ -52,9 +57,52 @@ function useRefreshGroup(groupId: string) {
   return () => qc.invalidateQueries({ queryKey: feedKeys.group(groupId) });
 }
 
+/**
+ * Online the comment posts at once. Offline, or when the post does not reach the server, it
+ * waits in the device store and the sync engine posts it (sync/SPEC.md S34). Both carry the same
+ * id made here, so a post whose answer was lost and is then queued is not a second comment.
+ */
 export function useAddComment(groupId: string, sketchId: string) {
   const refresh = useRefreshGroup(groupId);
-  return useMutation({ mutationFn: (body: string) => api('POST', commentPaths.comments(sketchId), Comment, { body }), onSuccess: refresh });
+  const device = useDevice();
+  return useMutation({
+    networkMode: 'always', // offline is handled here, not paused
+    mutationFn: async (body: string): Promise<{ queued: boolean }> => {
+      const id = globalThis.crypto.randomUUID();
+      const queue = async () => {
+        if (!device) throw new Error('Cannot reach the server, and the device store is not open yet to keep the comment.');
+        await device.store.addComment(sketchId, body, id);
+        return { queued: true };
+      };
+      if (!syncStatus.getState().online) return queue();
+      try {
+        await api('POST', commentPaths.comments(sketchId), Comment, { id, body });
+        return { queued: false };
+      } catch (e) {
+        if (isApiError(e, 'network')) return queue();
+        throw e;
+      }
+    },
+    onSuccess: (r) => void (r.queued || refresh()),
+  });
+}
+
+/**
+ * My comments on this sketch still on the device: waiting to send, or refused (kept with the
+ * reason). When one the device was holding has been sent, the thread reloads to show it.
+ */
+export function useUnsentComments(groupId: string, sketchId: string): LocalComment[] {
+  const local = useLocalComments(sketchId);
+  const refresh = useRefreshGroup(groupId);
+  const holding = useRef(new Set<string>());
+  const list = local.data;
+  useEffect(() => {
+    if (!list) return;
+    const sent = list.some((c) => c.state === 'sent' && holding.current.has(c.id));
+    holding.current = new Set(list.filter((c) => c.state === 'waiting').map((c) => c.id));
+    if (sent) void refresh();
+  }, [list]); // eslint-disable-line react-hooks/exhaustive-deps
+  return (list ?? []).filter((c) => c.state !== 'sent');
 }
 
 export function useEditComment(groupId: string) {

@@ -3,13 +3,17 @@
 import { useEffect } from 'react';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { SketchFields, SketchFieldsPatch } from '@/shared/api/sketches';
+import type { LocalGroup } from '@/lib/store/types';
 import { useDevice } from '@/hooks/useDevice';
+import { useGroups } from './useGroups';
 
 export const localKeys = {
   all: (userId: string) => ['local', userId] as const,
   sketches: (userId: string) => [...localKeys.all(userId), 'sketches'] as const,
   sketch: (userId: string, id: string) => [...localKeys.all(userId), 'sketch', id] as const,
   conflicts: (userId: string) => [...localKeys.all(userId), 'conflicts'] as const,
+  groups: (userId: string) => [...localKeys.all(userId), 'groups'] as const,
+  comments: (userId: string, sketchId: string) => [...localKeys.all(userId), 'comments', sketchId] as const,
 };
 
 /** Every local query of this user refreshes when the store changes (local write or pull). */
@@ -51,6 +55,38 @@ export function useConflicts() {
     ...local,
     queryKey: localKeys.conflicts(device?.userId ?? ''),
     queryFn: () => device!.store.conflicts(),
+    enabled: !!device,
+  });
+}
+
+/**
+ * My groups with my role: from the server when it answers, else as the device last saw them,
+ * so the Slate can share and name groups offline.
+ */
+export function useKnownGroups(): LocalGroup[] {
+  const device = useStoreRefresh();
+  const remote = useGroups();
+  useEffect(() => {
+    if (device && remote.data) void device.store.rememberGroups(remote.data);
+  }, [device, remote.data]);
+  const cached = useQuery({
+    ...local,
+    queryKey: localKeys.groups(device?.userId ?? ''),
+    queryFn: () => device!.store.groups(),
+    enabled: !!device && !remote.data,
+  });
+  return remote.data ?? cached.data ?? [];
+}
+
+export const groupName = (groups: LocalGroup[], id: string) => groups.find((g) => g.id === id)?.name ?? 'a group';
+
+/** Comments written on this device for one sketch (S34), with their waiting / sent / refused state. */
+export function useLocalComments(sketchId: string) {
+  const device = useStoreRefresh();
+  return useQuery({
+    ...local,
+    queryKey: localKeys.comments(device?.userId ?? '', sketchId),
+    queryFn: () => device!.store.comments(sketchId),
     enabled: !!device,
   });
 }

@@ -5,7 +5,7 @@ import type { ConflictFields, Fields, Mutation, Op, PullResponse, PullViewer, Pu
 import { byClock, coalesce, mutationFor, settle, type Rejected } from '@/sync/outbox';
 import { applyPulled, outOfScope, sameViewer, type LocalRecord } from '@/sync/rebase';
 import { numberKey, type Tables } from './tables';
-import type { LocalComment, LocalConflict, LocalSketch, PendingUpload, Revision, SketchRepository, SyncCounts, SyncStore } from './types';
+import type { LocalComment, LocalConflict, LocalGroup, LocalSketch, PendingUpload, Revision, SketchRepository, SyncCounts, SyncStore } from './types';
 
 export interface StoreOptions {
   newId?: () => string;
@@ -59,7 +59,7 @@ export class LocalStore implements SketchRepository, SyncStore {
 
   private toSketch(r: LocalRecord, pending: number): LocalSketch {
     const fields = r.fields as SketchFields;
-    return { ...fields, id: r.id, version: r.base?.version ?? 0, pending };
+    return { ...fields, id: r.id, version: r.base?.version ?? 0, pending, ownerId: r.base?.ownerId ?? null };
   }
 
   private async pendingFor(t: Tables, id: string): Promise<Mutation[]> {
@@ -140,8 +140,8 @@ export class LocalStore implements SketchRepository, SyncStore {
     await this.write('conflict', conflictId, 'update', { resolved: true });
   }
 
-  async addComment(sketchId: string, body: string): Promise<LocalComment> {
-    const comment: LocalComment = { id: this.newId(), sketchId, body, createdAt: this.now().toISOString(), state: 'waiting' };
+  async addComment(sketchId: string, body: string, id = this.newId()): Promise<LocalComment> {
+    const comment: LocalComment = { id, sketchId, body, createdAt: this.now().toISOString(), state: 'waiting' };
     await this.tx((t) => t.put('comments', commentKey(comment), comment), true);
     return comment;
   }
@@ -164,6 +164,14 @@ export class LocalStore implements SketchRepository, SyncStore {
 
   cachedRun<T>(key: string): Promise<T | undefined> {
     return this.tx((t) => t.get<T>('runs', key));
+  }
+
+  rememberGroups(groups: LocalGroup[]): Promise<void> {
+    return this.tx((t) => t.put('meta', 'groups', groups), true);
+  }
+
+  groups(): Promise<LocalGroup[]> {
+    return this.tx(async (t) => (await t.get<LocalGroup[]>('meta', 'groups')) ?? []);
   }
 
   subscribe(listener: () => void): () => void {

@@ -9,6 +9,15 @@ export interface LocalSketch extends SketchFields {
   version: number;
   /** Changes of this sketch still waiting in the outbox. */
   pending: number;
+  /** From the server snapshot; null for a sketch made here and never pulled (so it is mine). */
+  ownerId: string | null;
+}
+
+/** A group as the device last saw it (kept so the Slate can share and name groups offline). */
+export interface LocalGroup {
+  id: string;
+  name: string;
+  role: 'owner' | 'admin' | 'member' | 'viewer';
 }
 
 export interface LocalConflict extends ConflictFields {
@@ -50,12 +59,16 @@ export interface SketchRepository {
   conflicts(): Promise<LocalConflict[]>;
   /** S21: write the chosen values to the sketch and mark the conflict copy resolved. */
   resolveConflict(conflictId: string, chosen: SketchFieldsPatch): Promise<void>;
-  addComment(sketchId: string, body: string): Promise<LocalComment>;
+  /** `id`: when an online post of the same comment may have reached the server already (S34). */
+  addComment(sketchId: string, body: string, id?: string): Promise<LocalComment>;
   comments(sketchId: string): Promise<LocalComment[]>;
   /** S28: keep a photo until the server has it; answers its hash to list in `attachments`. */
   queueUpload(bytes: Uint8Array, mimeType: string): Promise<string>;
   cacheRun(key: string, value: unknown): Promise<void>;
   cachedRun<T>(key: string): Promise<T | undefined>;
+  /** The user's groups and roles as last fetched, for sharing and group names while offline. */
+  rememberGroups(groups: LocalGroup[]): Promise<void>;
+  groups(): Promise<LocalGroup[]>;
   /** Called after every change of the store (local write or pull). */
   subscribe(listener: () => void): () => void;
 }

@@ -4,6 +4,8 @@ import { createStore } from 'zustand/vanilla';
 import type { StatusInput } from '@/sync/status';
 
 export interface SyncState extends StatusInput {
+  /** S34: comments written offline, still to post; the status counts them as waiting too. */
+  comments: number;
   lastError: string | null;
   lastSyncedAt: string | null;
 }
@@ -14,6 +16,7 @@ export const initialSyncState: SyncState = {
   waiting: 0,
   conflicts: 0,
   rejected: 0,
+  comments: 0,
   lastError: null,
   lastSyncedAt: null,
 };
