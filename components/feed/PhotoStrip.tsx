@@ -3,7 +3,9 @@
 import { useState } from 'react';
 import { Image, Pressable, StyleSheet, Text, View } from 'react-native';
 import * as ImagePicker from 'expo-image-picker';
+import { router } from 'expo-router';
 import type { Photo } from '@/shared/api/photos';
+import { Sha256 } from '@/shared/api/sketches';
 import { useDeletePhoto, useUploadPhoto } from '@/hooks/queries/useFeed';
 import { useSession } from '@/hooks/useSession';
 import { apiUrl } from '@/lib/api';
@@ -38,7 +40,13 @@ export function PhotoStrip({ groupId, sketchId, photos, canUpload, canModerate }
             <Pressable onPress={() => setBig(big?.id === p.id ? null : p)} aria-label={`Board photo by ${p.uploader.displayName}`}>
               <Image source={{ uri: apiUrl(p.thumbUrl) }} style={styles.thumb} />
             </Pressable>
-            {p.uploader.id === me?.id || canModerate ? (
+            {Sha256.safeParse(p.id).success ? (
+              // A photo the owner attached on the Slate (S25, S27): the server only lets it go by
+              // editing the sketch, so it is removed from the sketch's details.
+              p.uploader.id === me?.id ? (
+                <Text role="link" style={styles.hint} onPress={() => router.push(`/sketches/${sketchId}` as never)}>Remove in the sketch's details</Text>
+              ) : null
+            ) : p.uploader.id === me?.id || canModerate ? (
               <Text role="button" style={styles.remove} onPress={() => remove.mutate(p.id)}>Remove</Text>
             ) : null}
           </View>
@@ -68,6 +76,7 @@ const styles = StyleSheet.create({
   thumb: { width: 104, height: 104, borderRadius: radius.md, backgroundColor: colors.sunken },
   big: { width: '100%', borderRadius: radius.md, overflow: 'hidden', backgroundColor: colors.sunken },
   remove: { ...type.label, color: colors.danger },
+  hint: { ...type.small, color: colors.accent, maxWidth: 104 },
   row: { flexDirection: 'row' },
   muted: { ...type.small, color: colors.inkMuted },
   note: { ...type.small, color: colors.inkFaint },
