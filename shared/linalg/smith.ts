@@ -41,13 +41,27 @@ function diagonalise(input: Map<number, Int>[]): Int[] {
       colRows.get(c)!.add(i);
     }
   };
+  // Entries alone in their row and column are diagonal already (after unit elimination most
+  // are: thin knots leave a diagonal of 2s), so they are taken out before the quadratic search.
   const out: Int[] = [];
+  rows.forEach((r, i) => {
+    if (r.size !== 1) return;
+    const [[c, v]] = r;
+    if (colRows.get(c)!.size !== 1) return;
+    out.push(abs(v));
+    set(i, c, 0);
+  });
   for (;;) {
     let pr = -1;
     let pc = -1;
-    rows.forEach((r, i) => {
-      for (const [c, v] of r) if (pr < 0 || cmpAbs(v, rows[pr].get(pc)!) < 0) [pr, pc] = [i, c];
-    });
+    // Any nonzero pivot is correct (the steps below shrink it as needed); a smallest one saves
+    // steps, and with the units eliminated an entry of absolute value 2 nearly always is one.
+    search: for (let i = 0; i < rows.length; i++) {
+      for (const [c, v] of rows[i]) {
+        if (pr < 0 || cmpAbs(v, rows[pr].get(pc)!) < 0) [pr, pc] = [i, c];
+        if (cmpAbs(v, 2) === 0) break search;
+      }
+    }
     if (pr < 0) return out;
     for (let clean = false; !clean; ) {
       clean = true;
@@ -100,7 +114,11 @@ function factor(n: Int): [Int, Int][] {
 /** Groups the prime powers of the diagonal entries into invariant factors d1 | d2 | ... (ascending). */
 function invariantFactors(diagonal: Int[]): Int[] {
   const byPrime = new Map<string, Int[]>();
-  for (const [p, power] of diagonal.flatMap(factor)) byPrime.set(p.toString(), [...(byPrime.get(p.toString()) ?? []), power]);
+  for (const [p, power] of diagonal.flatMap(factor)) {
+    const key = p.toString();
+    const list = byPrime.get(key) ?? byPrime.set(key, []).get(key)!;
+    list.push(power);
+  }
   const lists = [...byPrime.values()].map((l) => l.sort((a, b) => Z.sign(Z.sub(b, a))));
   const count = Math.max(0, ...lists.map((l) => l.length));
   const out: Int[] = [];
