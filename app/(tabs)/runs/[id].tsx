@@ -1,12 +1,16 @@
 // One run: progress while it computes (polled), then its result. Linked from the finished-run e-mail.
 import { router, useLocalSearchParams } from 'expo-router';
-import { ActivityIndicator } from 'react-native';
+import { ActivityIndicator, StyleSheet, Text } from 'react-native';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { Banner } from '@/components/ui/Banner';
 import { RunResult } from '@/components/runs/RunResult';
 import { useRun } from '@/hooks/queries/useRuns';
-import { colors } from '@/constants/theme';
+import type { RunSummary } from '@/shared/api/runs';
+import { colors, type } from '@/constants/theme';
+
+/** A sketch's run is titled by the sketch; a pasted code is a code, shown in its own face below. */
+const titleOf = (r: RunSummary) => (r.sketchId ? r.label : r.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology');
 
 export default function RunPage() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -14,10 +18,15 @@ export default function RunPage() {
   const back = () => (router.canGoBack() ? router.back() : router.replace('/runs' as never));
   return (
     <Screen wide>
-      <PageTitle kicker="Run" title={run.data?.label ?? 'Run'} onBack={back} backLabel="Runs" />
+      <PageTitle kicker="Run" title={run.data ? titleOf(run.data) : 'Run'} onBack={back} backLabel="Runs" />
+      {run.data && !run.data.sketchId ? <Text style={styles.code} selectable>{run.data.label}</Text> : null}
       {run.isError ? <Banner tone="error">{run.error.message}</Banner> : null}
       {run.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {run.data ? <RunResult run={run.data} /> : null}
     </Screen>
   );
 }
+
+const styles = StyleSheet.create({
+  code: { ...type.code, color: colors.inkMuted },
+});
