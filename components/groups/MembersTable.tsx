@@ -19,13 +19,13 @@ import { colors, fonts, space, type } from '@/constants/theme';
 
 const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 
-function Row({ groupId, m, myRole, isMe, wide }: { groupId: string; m: RosterEntry; myRole: Role; isMe: boolean; wide: boolean }) {
+function Row({ groupId, m, myRole, isMe, wide, first }: { groupId: string; m: RosterEntry; myRole: Role; isMe: boolean; wide: boolean; first: boolean }) {
   const change = useChangeRole(groupId);
   const remove = useRemoveMember(groupId);
   const editable = !isMe && canEditMember(myRole, m.role);
   const error = change.error ?? remove.error;
   return (
-    <View role="row" style={[styles.row, wide && styles.rowWide]} testID={`roster-${m.email}`}>
+    <View role="row" style={[styles.row, wide && styles.rowWide, first && !wide && styles.firstRow]} testID={`roster-${m.email}`}>
       <View role="cell" style={wide ? styles.cName : undefined}>
         <Text style={styles.name}>{m.displayName}{isMe ? <Text style={styles.muted}>  (you)</Text> : null}</Text>
         <Text style={styles.email} numberOfLines={1}>{m.email}</Text>
@@ -65,7 +65,7 @@ export function MembersTable({ groupId, myRole }: { groupId: string; myRole: Rol
               ))}
             </View>
           ) : null}
-          {roster.data?.map((m) => <Row key={m.userId} groupId={groupId} m={m} myRole={myRole} isMe={m.userId === me?.id} wide={wide} />)}
+          {roster.data?.map((m, k) => <Row key={m.userId} groupId={groupId} m={m} myRole={myRole} isMe={m.userId === me?.id} wide={wide} first={k === 0} />)}
         </View>
       </Section>
       <Section title="Pending invitations">
@@ -88,6 +88,8 @@ export function MembersTable({ groupId, myRole }: { groupId: string; myRole: Rol
 
 const styles = StyleSheet.create({
   row: { gap: space.xs, paddingVertical: space.md, borderTopWidth: 1, borderTopColor: colors.line },
+  // On a phone there is no header row above the first member: no rule either.
+  firstRow: { borderTopWidth: 0, paddingTop: 0 },
   rowWide: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
   headRow: { paddingBottom: space.sm },
   head: { ...type.caps, color: colors.inkMuted },
