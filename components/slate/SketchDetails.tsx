@@ -71,19 +71,23 @@ export function SketchDetails({ sketch, visible, onClose }: { sketch: LocalSketc
       <View style={styles.photos}>
         <Text style={styles.label}>Board photos</Text>
         <View style={styles.strip}>
-          {sketch.attachments.map((sha) =>
-            photos[sha] ? (
-              <Image key={sha} source={{ uri: photos[sha] }} style={styles.photo} accessibilityLabel="Board photo" />
-            ) : (
-              <View key={sha} style={[styles.photo, styles.uploaded]}><Text style={styles.small}>uploaded</Text></View>
-            ),
-          )}
+          {sketch.attachments.map((sha, i) => (
+            <View key={sha} style={styles.item}>
+              {photos[sha] ? (
+                <Image source={{ uri: photos[sha] }} style={styles.photo} accessibilityLabel="Board photo" />
+              ) : (
+                <View style={[styles.photo, styles.uploaded]}><Text style={styles.small}>uploaded</Text></View>
+              )}
+              <Text role="button" aria-label={`Remove board photo ${i + 1}`} style={styles.remove}
+                onPress={() => update.mutate({ id: sketch.id, patch: { attachments: sketch.attachments.filter((h) => h !== sha) } })}>Remove</Text>
+            </View>
+          ))}
         </View>
         <View style={styles.row}>
           <Button variant="secondary" label="Take a photo" onPress={() => void addPhoto('camera')} />
           <Button variant="secondary" label="Choose a file" onPress={() => void addPhoto('library')} />
         </View>
-        <Text style={styles.small}>Photos stay on this device until the sketchbook syncs.</Text>
+        <Text style={styles.small}>Photos stay on this device until the sketchbook syncs. Removing one here takes it out of the group feed too.</Text>
       </View>
       <Text style={styles.small}>Created {time(sketch.createdAt)} · edited {time(sketch.updatedAt)}</Text>
       {error ? <Banner tone="error">{error}</Banner> : null}
@@ -101,6 +105,8 @@ const styles = StyleSheet.create({
   strip: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   photo: { width: 96, height: 72, borderRadius: radius.sm, backgroundColor: colors.sunken },
   uploaded: { alignItems: 'center', justifyContent: 'center' },
+  item: { gap: 2 },
+  remove: { ...type.label, color: colors.danger },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   small: { ...type.small, color: colors.inkMuted },
 });

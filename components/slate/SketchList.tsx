@@ -2,8 +2,8 @@
 // Jones polynomial and when it was edited. Used as the list pane (wide) and the Sketches page.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { router, usePathname } from 'expo-router';
-import { useLocalSketches } from '@/hooks/queries/useLocalSketches';
-import type { LocalSketch } from '@/lib/store/types';
+import { useKnownGroups, useLocalSketches } from '@/hooks/queries/useLocalSketches';
+import type { LocalGroup, LocalSketch } from '@/lib/store/types';
 import { summaryOf } from '@/lib/slate/summary';
 import { StrokeThumb } from '@/components/feed/StrokeThumb';
 import { when } from '@/components/feed/when';
@@ -15,11 +15,13 @@ import { Button } from '@/components/ui/Button';
 import { Banner } from '@/components/ui/Banner';
 import { SlateArt } from '@/components/shell/SlateArt';
 import { SyncStatus } from '@/components/sync/SyncStatus';
+import { sharedLabel } from './ShareControl';
 import { colors, radius, space, type } from '@/constants/theme';
 
-function Row({ sketch, active }: { sketch: LocalSketch; active: boolean }) {
+function Row({ sketch, active, groups }: { sketch: LocalSketch; active: boolean; groups: LocalGroup[] }) {
   const s = summaryOf(sketch.diagram);
   const drawn = s.crossings > 0 || s.components > 0;
+  const shared = sharedLabel(sketch, groups);
   return (
     <Pressable role="link" accessibilityLabel={`Open ${sketch.title || 'Untitled sketch'}`} onPress={() => router.navigate(`/sketches/${sketch.id}` as never)}
       style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [styles.row, active && styles.active, (pressed || hovered) && !active && styles.hover]}>
@@ -30,6 +32,7 @@ function Row({ sketch, active }: { sketch: LocalSketch; active: boolean }) {
           {drawn ? `${s.crossings} crossing${s.crossings === 1 ? '' : 's'}` : sketch.diagram.strokes.length ? 'Unfinished drawing' : 'Nothing drawn yet'} · {when(sketch.updatedAt)}
           {sketch.pending ? ' · not synced' : ''}
         </Text>
+        {shared ? <Text style={styles.shared} numberOfLines={1}>{shared}</Text> : null}
         {s.jones ? (
           <View style={styles.jones}>
             <TeX tex={`V = ${s.jones.format('t', 'latex')}`} text={`V = ${s.jones.format('t', 'unicode')}`} />
@@ -44,6 +47,7 @@ export function SketchList() {
   const list = useLocalSketches();
   const path = usePathname();
   const sketches = list.data ?? [];
+  const groups = useKnownGroups();
   return (
     <Screen>
       <View style={styles.head}>
@@ -60,7 +64,7 @@ export function SketchList() {
         </EmptyState>
       ) : null}
       <View style={styles.list}>
-        {sketches.map((s) => <Row key={s.id} sketch={s} active={path === `/sketches/${s.id}`} />)}
+        {sketches.map((s) => <Row key={s.id} sketch={s} active={path === `/sketches/${s.id}`} groups={groups} />)}
       </View>
     </Screen>
   );
@@ -75,5 +79,6 @@ const styles = StyleSheet.create({
   text: { flex: 1, minWidth: 0, gap: 2 },
   title: { ...type.heading, color: colors.ink },
   meta: { ...type.small, color: colors.inkMuted },
+  shared: { ...type.small, color: colors.accent },
   jones: { overflow: 'hidden' },
 });

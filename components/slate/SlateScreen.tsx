@@ -17,6 +17,7 @@ import { braidOf, currentDoc, useSlate } from '@/lib/slate/slate-store';
 import { useReadout } from '@/hooks/useReadout';
 import { useSlateAutosave } from '@/hooks/useSlateAutosave';
 import { useSlateShortcuts } from '@/hooks/useSlateShortcuts';
+import { useKnownGroups } from '@/hooks/queries/useLocalSketches';
 import { useShortcutRegistry } from '@/components/shell/shortcuts';
 import { saveText } from '@/components/runs/save';
 import { useIsWide } from '@/components/shell/useIsWide';
@@ -28,9 +29,11 @@ import { SlateCanvas } from './SlateCanvas';
 import { SelectionBar, Toolbar } from './Toolbar';
 import { FramingDialog } from './FramingDialog';
 import { SketchDetails } from './SketchDetails';
+import { Dialog } from './Dialog';
+import { ShareControl, sharedLabel } from './ShareControl';
 import { colors, fonts, space, type } from '@/constants/theme';
 
-type Open = null | 'paste' | 'families' | 'details' | { framing: string };
+type Open = null | 'paste' | 'families' | 'details' | 'share' | { framing: string };
 
 export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const wide = useIsWide();
@@ -52,6 +55,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const diagram = analysis.diagram?.diagram ?? null;
   const readout = useReadout(ready ? diagram : null, dragging);
   const [open, setOpen] = useState<Open>(null);
+  const shared = sharedLabel(sketch, useKnownGroups());
   const [message, setMessage] = useState<string | null>(null);
   useEffect(() => {
     if (!message) return;
@@ -131,10 +135,11 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
       ) : null}
       <Pressable role="button" accessibilityLabel="Sketch details" onPress={() => setOpen('details')} style={styles.titleBox}>
         <Text role="heading" aria-level={1} style={styles.title} numberOfLines={1}>{sketch.title || 'Untitled sketch'}</Text>
-        <Text style={styles.meta} numberOfLines={1}>{[sketch.seenAt, sketch.tags.map((t) => `#${t}`).join(' ')].filter(Boolean).join(' · ') || 'Add a title, where it was seen, notes, a photo'}</Text>
+        <Text style={styles.meta} numberOfLines={1}>{[shared, sketch.seenAt, sketch.tags.map((t) => `#${t}`).join(' ')].filter(Boolean).join(' · ') || 'Add a title, where it was seen, notes, a photo'}</Text>
       </Pressable>
       <View style={styles.headerActions}>
         {wide ? <Pressable role="button" accessibilityLabel="Keyboard shortcuts" onPress={() => useShortcutRegistry.getState().setSheet(true)} style={styles.quiet}><Text style={styles.quietText}>?</Text></Pressable> : null}
+        <Pressable role="button" accessibilityLabel="Share" onPress={() => setOpen('share')} style={styles.quiet}><Text style={styles.quietText}>Share</Text></Pressable>
         <Pressable role="button" accessibilityLabel="Details" onPress={() => setOpen('details')} style={styles.quiet}><Text style={styles.quietText}>Details</Text></Pressable>
       </View>
     </View>
@@ -172,6 +177,9 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
       <PasteCodeDialog visible={open === 'paste'} onClose={() => setOpen(null)} onDraw={draw} />
       <FamiliesDialog visible={open === 'families'} onClose={() => setOpen(null)} current={diagram} onDraw={(d) => draw(d)} />
       <SketchDetails sketch={sketch} visible={open === 'details'} onClose={() => setOpen(null)} />
+      <Dialog title="Share to a group" visible={open === 'share'} onClose={() => setOpen(null)}>
+        <ShareControl sketch={sketch} />
+      </Dialog>
       <FramingDialog
         visible={!!framingComponent}
         number={framingNumber}
