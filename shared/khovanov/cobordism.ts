@@ -9,9 +9,6 @@
 /** partner[k] = the point matched with point k. */
 export type Matching = readonly number[];
 
-/** Coefficient of each dot mask. */
-export type Mor<T> = Map<number, T>;
-
 export interface Cycles {
   /** Cycle of every point, cycles numbered by their smallest point. */
   readonly of: number[];
@@ -101,6 +98,19 @@ export interface Composition {
   readonly compPQ: number[];
   readonly compQR: number[];
   readonly pieces: Piece[];
+  /** Reduced composites already met, by (dots on P u Q) * 2^(cycles of Q u R) + dots on Q u R. */
+  readonly memo: Map<number, [number, number][]>;
+}
+
+/** The composite of the discs with dot masks m1 (on P u Q) and m2 (on Q u R), reduced. */
+export function composite(c: Composition, m1: number, m2: number): [number, number][] {
+  const key = m1 * 2 ** c.compQR.length + m2;
+  let terms = c.memo.get(key);
+  if (!terms) {
+    terms = reduce(c.pieces, dotsOf(c.pieces.length, [c.compPQ, c.compQR], [m1, m2]));
+    c.memo.set(key, terms);
+  }
+  return terms;
 }
 
 export function composition(p: Matching, q: Matching, r: Matching): Composition {
@@ -125,6 +135,7 @@ export function composition(p: Matching, q: Matching, r: Matching): Composition 
     compPQ: comp.slice(0, pq.count),
     compQR: comp.slice(pq.count),
     pieces: euler.map((e, c) => ({ genus: genus(e, circles[c]), boundary: boundary[c] })),
+    memo: new Map(),
   };
 }
 

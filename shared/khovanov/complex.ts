@@ -3,7 +3,8 @@
 // cobordisms (cobordism.ts). Bar-Natan, "Fast Khovanov homology computations", math/0606318.
 
 import { Ring } from '../linalg/ring';
-import { composition, Composition, dotsOf, Matching, Mor, reduce } from './cobordism';
+import { composite, composition, Composition, Matching } from './cobordism';
+import { Mor } from './mor';
 
 export interface Obj {
   /** Index into the complex's matchings. */
@@ -55,7 +56,7 @@ export class TangleComplex<T> {
     let current = row.get(t);
     if (!current) {
       if (ring.isZero(c)) return;
-      current = new Map();
+      current = new Mor<T>();
       row.set(t, current);
       this.inn[t].add(s);
     }
@@ -70,8 +71,8 @@ export class TangleComplex<T> {
   remove(x: number): void {
     for (const t of this.out[x].keys()) this.inn[t].delete(x);
     for (const s of this.inn[x]) this.out[s].delete(x);
-    this.out[x] = new Map();
-    this.inn[x] = new Set();
+    this.out[x].clear();
+    this.inn[x].clear();
     this.alive[x] = false;
     this.live--;
   }
@@ -89,12 +90,13 @@ export class TangleComplex<T> {
       bySource.set(key, comp);
     }
     const { ring } = this;
-    const { pieces, compPQ, compQR } = comp;
     // forEach rather than for-of: no [key, value] pair is allocated per entry.
     x.forEach((c1, m1) => {
       y.forEach((c2, m2) => {
         const c12 = ring.mul(factor, ring.mul(c1, c2));
-        for (const [mask, k] of reduce(pieces, dotsOf(pieces.length, [compPQ, compQR], [m1, m2]))) {
+        const terms = composite(comp!, m1, m2);
+        for (let n = 0; n < terms.length; n++) {
+          const [mask, k] = terms[n];
           this.addTerm(a, c, mask, k === 1 ? c12 : ring.mul(ring.fromInt(k), c12));
         }
       });

@@ -38,14 +38,16 @@ export function simplify<T>(cx: TangleComplex<T>, check: () => void): void {
   }
 }
 
+// The loops run over inn[b2] and out[b1] while adding s -> t terms: those touch out[s] and
+// inn[t] only, never these two (s is not b1 and t is not b2), so no copies are needed.
 function cancel<T>(cx: TangleComplex<T>, b1: number, b2: number, minusInverse: T): void {
-  const sources = [...cx.inn[b2]].filter((s) => s !== b1);
-  const targets = [...cx.out[b1].keys()].filter((t) => t !== b2);
-  for (const s of sources) {
+  const gammas = cx.out[b1];
+  for (const s of cx.inn[b2]) {
+    if (s === b1) continue;
     const delta = cx.out[s].get(b2)!;
-    for (const t of targets) {
-      cx.addComposite(s, b1, t, delta, cx.out[b1].get(t)!, minusInverse);
-    }
+    gammas.forEach((gamma, t) => {
+      if (t !== b2) cx.addComposite(s, b1, t, delta, gamma, minusInverse);
+    });
   }
   cx.remove(b1);
   cx.remove(b2);

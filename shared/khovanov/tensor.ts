@@ -3,8 +3,9 @@
 // followed by delooping (a closed circle is isomorphic to the empty set shifted by +1 and -1).
 
 import { Crossing } from '../knot/pd';
-import { cycles, dotsOf, glue, genus, Matching, Mor, Piece, popcount, reduce } from './cobordism';
+import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, reduce } from './cobordism';
 import { TangleComplex } from './complex';
+import { Mor } from './mor';
 
 /** 0-smoothing joins (a,b)(c,d), 1-smoothing joins (a,d)(b,c) (DESIGN.md). */
 const SMOOTHING: readonly Matching[] = [
@@ -151,17 +152,22 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
   // The glued morphism between summands: cups on bottom loops (dotted for x), caps on top
   // loops (dotted for 1).
   const connect = (from: number[], to: number[], g: Gluing, f: Mor<T>, sign: T): void => {
-    from.forEach((source, sigma) => {
-      to.forEach((target, tau) => {
-        f.forEach((c, mask) => {
-          const sc = ring.mul(sign, c);
-          for (const [m, k] of surface(g, mask, sigma, tau)) cx.addTerm(source, target, m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
-        });
-      });
+    f.forEach((c, mask) => {
+      const sc = ring.mul(sign, c);
+      for (let sigma = 0; sigma < from.length; sigma++) {
+        for (let tau = 0; tau < to.length; tau++) {
+          const terms = surface(g, mask, sigma, tau);
+          for (let n = 0; n < terms.length; n++) {
+            const [m, k] = terms[n];
+            cx.addTerm(from[sigma], to[tau], m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
+          }
+        }
+      }
     });
   };
 
-  const identity: Mor<T> = new Map([[0, ring.one]]);
+  const identity = new Mor<T>();
+  identity.set(0, ring.one);
   for (const [k, [zero, one]] of ids) {
     const o = old.objs[k];
     for (const [t, f] of old.out[k]) {
