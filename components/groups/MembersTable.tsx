@@ -55,7 +55,7 @@ export function MembersTable({ groupId, myRole }: { groupId: string; myRole: Rol
   const revoke = useRevokeInvitation(groupId);
   return (
     <>
-      <Section title={roster.data ? `Members · ${roster.data.length}` : 'Members'}>
+      <Section title={roster.data ? `In the group · ${roster.data.length}` : 'In the group'}>
         {roster.isError ? <Banner tone="error">{roster.error.message}</Banner> : null}
         <View role="table" aria-label="Members">
           {wide ? (
