@@ -94,7 +94,16 @@ export function FeedList() {
       onEndReachedThreshold={0.5}
       onEndReached={() => feed.hasNextPage && !feed.isFetchingNextPage && feed.fetchNextPage()}
       ListEmptyComponent={feed.isPending ? <ActivityIndicator color={colors.accent} /> : (
-        <Text style={styles.muted}>{Object.values(filters).some(Boolean) ? 'No shared sketch matches these filters.' : 'Nothing shared in this group yet.'}</Text>
+        Object.values(filters).some(Boolean) ? <Text style={styles.muted}>No shared sketch matches these filters.</Text> : (
+          <View style={styles.empty}>
+            <Text style={styles.muted}>Nothing shared in this group yet.</Text>
+            <Text style={styles.muted}>
+              {group && canPost(group.role)
+                ? 'Share a sketch from your sketchbook with the button above; the group can then comment on it, fork it and start runs.'
+                : 'When a member shares a sketch, it appears here with its Readout, runs and discussion.'}
+            </Text>
+          </View>
+        )
       )}
       ListFooterComponent={feed.isFetchingNextPage ? <ActivityIndicator color={colors.accent} style={{ marginTop: space.lg }} /> : null}
     />
@@ -111,6 +120,7 @@ const styles = StyleSheet.create({
   tag: { flex: 1, minHeight: 40, paddingHorizontal: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface, fontFamily: fonts.regular, fontSize: 15, color: colors.ink },
   row: { flexDirection: 'row' },
   people: { flexDirection: 'row', gap: space.sm },
+  empty: { gap: space.xs },
   muted: { ...type.small, color: colors.inkMuted },
   link: { color: colors.accent },
 });
