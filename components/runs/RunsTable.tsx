@@ -32,7 +32,7 @@ const columns = [
   col.accessor('label', {
     header: 'Diagram',
     cell: (c) => (
-      <Link href={runPagePath(c.row.original.id) as never} style={styles.link}>
+      <Link href={runPagePath(c.row.original.id) as never} style={[styles.link, !c.row.original.sketchId && styles.linkCode]}>
         {c.getValue()}
         <Text style={styles.muted}>{`  ${c.row.original.kind === 'cable-sweep' ? 'cable sweep · ' : ''}${c.row.original.crossings} crossings`}</Text>
       </Link>
@@ -119,5 +119,7 @@ const styles = StyleSheet.create({
   cell: { ...type.small, color: colors.ink },
   code: { fontFamily: fonts.mono, fontSize: 13, color: colors.ink },
   link: { ...type.small, color: colors.accent, fontFamily: fonts.medium },
+  // A pasted code (no sketch) is a code: monospace, like everywhere else.
+  linkCode: { fontFamily: fonts.monoMedium, fontSize: 13 },
   muted: { ...type.small, color: colors.inkFaint, fontFamily: fonts.regular },
 });
