@@ -135,18 +135,17 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
   };
 
   // New objects: loop bit 1 = the {-1} summand (x), bit 0 = the {+1} summand (1).
-  const ids = new Map<number, number[][]>();
+  // ids[k][s] = the new objects of old object k with smoothing s (k alive).
+  const ids: number[][][] = new Array(old.objs.length);
   old.objs.forEach((o, k) => {
     if (!old.alive[k]) return;
-    ids.set(
-      k,
-      [0, 1].map((s) => {
-        const { mat, loops } = side(o.mat, s);
-        return Array.from({ length: 1 << loops }, (_, bits) =>
-          cx.addObject({ mat, shift: o.shift + s + loops - 2 * popcount(bits), height: o.height + s }),
-        );
-      }),
-    );
+    const summands = (s: number): number[] => {
+      const { mat, loops } = side(o.mat, s);
+      const out = new Array<number>(1 << loops);
+      for (let bits = 0; bits < out.length; bits++) out[bits] = cx.addObject({ mat, shift: o.shift + s + loops - 2 * popcount(bits), height: o.height + s });
+      return out;
+    };
+    ids[k] = [summands(0), summands(1)];
   });
 
   // The glued morphism between summands: cups on bottom loops (dotted for x), caps on top
@@ -168,15 +167,16 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
 
   const identity = new Mor<T>();
   identity.set(0, ring.one);
-  for (const [k, [zero, one]] of ids) {
-    const o = old.objs[k];
-    for (const [t, f] of old.out[k]) {
-      const [tZero, tOne] = ids.get(t)!;
+  old.objs.forEach((o, k) => {
+    if (!old.alive[k]) return;
+    const [zero, one] = ids[k];
+    old.out[k].forEach((f, t) => {
+      const [tZero, tOne] = ids[t];
       connect(zero, tZero, gluing(o.mat, old.objs[t].mat, 0, 0), f, ring.one);
       connect(one, tOne, gluing(o.mat, old.objs[t].mat, 1, 1), f, ring.one);
-    }
+    });
     connect(zero, one, gluing(o.mat, o.mat, 0, 1), identity, o.height % 2 ? ring.neg(ring.one) : ring.one);
-  }
+  });
   return cx;
 }
 
