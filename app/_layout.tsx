@@ -10,6 +10,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { queryClient } from '@/lib/query-client';
 import { useSession } from '@/hooks/useSession';
 import { colors, fonts } from '@/constants/theme';
+import '@/lib/offline/register'; // web: the service worker that lets the app load offline
 
 export { ErrorBoundary } from '@/components/shell/ErrorBoundary';
 

@@ -10,6 +10,7 @@ import { syncPaths, syncPushLimit } from '@/shared/api/sync';
 import { areas, devAreas } from './areas';
 import type { Deps } from './deps';
 import { errorHandler, notFound } from './http/errors';
+import { setServiceWorkerHeaders } from './web/headers';
 
 export function createApp(deps: Deps): Express {
   const app = express();
@@ -37,7 +38,7 @@ export function createApp(deps: Deps): Express {
 
   const webDir = deps.config.webDir && resolve(deps.config.webDir);
   if (webDir && existsSync(join(webDir, 'index.html'))) {
-    app.use(express.static(webDir, { index: false }));
+    app.use(express.static(webDir, { index: false, setHeaders: setServiceWorkerHeaders }));
     app.get('/{*splat}', (_req, res) => {
       res.sendFile(join(webDir, 'index.html'));
     });

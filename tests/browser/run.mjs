@@ -10,7 +10,7 @@ import { fileURLToPath } from 'node:url';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
 const CHROMIUM = '/usr/bin/chromium';
-const SOURCES = ['app', 'components', 'hooks', 'lib', 'constants', 'shared', 'sync', 'assets',
+const SOURCES = ['app', 'components', 'hooks', 'lib', 'constants', 'shared', 'sync', 'assets', 'server/web',
   'app.json', 'metro.config.js', 'babel.config.js', 'package.json'];
 
 function seconds(since) {

@@ -1,0 +1,2 @@
+// Native: the app is installed, so it loads offline without a service worker (see register.web.ts).
+export {};
