@@ -27,8 +27,10 @@ function hex(buffer) {
 
 // A file whose bytes differ from the manifest means the server changed build mid-install:
 // fail the install and keep the previous worker and cache rather than mix two builds.
+// 'no-cache' revalidates with the server, so a file the page has just loaded costs a 304, not a
+// second download.
 async function precache(cache, file) {
-  const response = await fetch(new Request(file.url, { cache: 'reload' }));
+  const response = await fetch(file.url, { cache: 'no-cache' });
   if (!response.ok) throw new Error(`precache ${file.url}: ${response.status}`);
   const digest = hex(await crypto.subtle.digest('SHA-256', await response.clone().arrayBuffer()));
   if (digest !== file.sha256) throw new Error(`precache ${file.url}: content differs from the manifest`);
