@@ -41,11 +41,11 @@ export function ShareControl({ sketch }: { sketch: LocalSketch }) {
             <Button key={g.id} variant="secondary" label={`${sketch.groupId ? 'Move to' : 'Share to'} ${g.name}`} onPress={() => setGroup(g.id)} disabled={update.isPending} />
           ))}
         </View>
-      ) : (
-        <Text style={styles.note}>
-          {groups.length ? 'You are a viewer in your other groups; members, admins and owners share.' : 'Join or create a group (Account) to share sketches with it.'}
-        </Text>
-      )}
+      ) : groups.length === 0 ? (
+        <Text style={styles.note}>Join or create a group (Account) to share sketches with it.</Text>
+      ) : groups.some((g) => g.id !== sketch.groupId) ? (
+        <Text style={styles.note}>{sketch.groupId ? 'In your other groups' : 'In your groups'} you are a viewer; members, admins and owners share.</Text>
+      ) : null}
       <Text style={styles.note}>Everyone in the group sees the sketch, its photos and its Readout in the Feed. Works offline: the change syncs later.</Text>
       {update.error ? <Banner tone="error">{update.error.message}</Banner> : null}
     </View>

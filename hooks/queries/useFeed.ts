@@ -154,11 +154,28 @@ export function useMyServerSketches(enabled: boolean) {
   return useQuery({ queryKey: feedKeys.mySketches(), enabled, queryFn: () => api('GET', sketchPaths.sketches, SketchList) });
 }
 
+/**
+ * Share or stop sharing. A sketch on this device changes as any local edit does (the Slate's
+ * Share dialog writes the same way), then one sync round carries it to the server before the
+ * feed reloads; offline it simply waits in the outbox. A sketch the device has not pulled yet
+ * goes through the server's share route (the same push on the server side).
+ */
 export function useShare() {
   const qc = useQueryClient();
+  const device = useDevice();
   return useMutation({
-    mutationFn: ({ sketchId, groupId }: { sketchId: string; groupId: string | null }) =>
-      groupId ? api('PUT', feedPaths.share(sketchId), ShareResponse, { groupId }) : api('DELETE', feedPaths.share(sketchId), ShareResponse),
+    networkMode: 'always',
+    mutationFn: async ({ sketchId, groupId }: { sketchId: string; groupId: string | null }): Promise<void> => {
+      if (!device || !(await device.store.get(sketchId))) {
+        await (groupId ? api('PUT', feedPaths.share(sketchId), ShareResponse, { groupId }) : api('DELETE', feedPaths.share(sketchId), ShareResponse));
+        return;
+      }
+      const refused = async () => (await device.store.counts()).rejected;
+      const before = await refused();
+      await device.store.update(sketchId, { groupId });
+      await device.engine.syncNow().catch(() => undefined); // offline: the next round sends it
+      if ((await refused()) > before) throw new Error('The server refused the change: only the owner shares a sketch, and not to a group where they are a viewer.');
+    },
     onSuccess: () => qc.invalidateQueries({ queryKey: ['feed'] }),
   });
 }

@@ -6,7 +6,7 @@
 import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
-import { PHONE, WIDE, baseUrl, launch, person, shoot, signIn } from './helpers';
+import { baseUrl, call, groupOfTwo, person, shoot, signedInPair } from './helpers';
 
 const ada = person('Ada Feedwright', 'ada.feed', 'correct horse 3');
 const bruno = person('Bruno Commenter', 'bruno.feed', 'battery staple 4');
@@ -16,33 +16,16 @@ let browser: Browser;
 let adaPage: Page;
 let brunoPage: Page;
 
-async function call(method: string, path: string, token: string | null, body?: unknown) {
-  const res = await fetch(baseUrl + path, {
-    method,
-    headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const json = await res.json().catch(() => null);
-  if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json)}`);
-  return json;
-}
-
 /** A circle-ish stroke set, as the Slate would store it. */
 const strokes = [
   { points: Array.from({ length: 60 }, (_, i) => [100 + 80 * Math.cos((i / 60) * 6 * Math.PI) + 30 * Math.cos((i / 60) * 4 * Math.PI), 100 + 80 * Math.sin((i / 60) * 6 * Math.PI) - 30 * Math.sin((i / 60) * 4 * Math.PI)]), closed: true },
 ];
 
 beforeAll(async () => {
-  const a = await call('POST', '/api/auth/register', null, { email: ada.email, password: ada.password, displayName: ada.name });
-  const b = await call('POST', '/api/auth/register', null, { email: bruno.email, password: bruno.password, displayName: bruno.name });
-  const group = await call('POST', '/api/groups', a.token, { name: 'Knot lunch' });
-  await call('POST', `/api/groups/${group.id}/invitations`, a.token, { email: bruno.email, role: 'member' });
-  const mail = (await call('GET', '/api/dev/mail', null)) as { to: string[]; links: string[] }[];
-  const link = mail.filter((m) => m.to.includes(bruno.email)).pop()!.links.find((l) => l.includes('/invite/'))!;
-  await call('POST', `/api/invitations/${new URL(link).pathname.split('/').pop()}/accept`, b.token);
+  const { ownerToken } = await groupOfTwo(ada, bruno, 'Knot lunch');
   const now = new Date().toISOString();
   // Ada's sketch as her phone would have synced it: the positive trefoil (DESIGN.md PD convention, from memory).
-  await call('POST', '/api/sync/push', a.token, {
+  await call('POST', '/api/sync/push', ownerToken, {
     deviceId: 'ada-phone',
     mutations: [{
       mutationId: randomUUID(), deviceId: 'ada-phone', clock: 1, recordId: randomUUID(), type: 'sketch', op: 'add', baseVersion: 0,
@@ -51,14 +34,7 @@ beforeAll(async () => {
     }],
   });
 
-  browser = await launch();
-  const adaContext = await browser.newContext({ viewport: PHONE });
-  const brunoContext = await browser.newContext({ viewport: WIDE });
-  for (const c of [adaContext, brunoContext]) c.setDefaultTimeout(10_000);
-  adaPage = await adaContext.newPage();
-  brunoPage = await brunoContext.newPage();
-  await signIn(adaPage, ada);
-  await signIn(brunoPage, bruno);
+  ({ browser, phone: { page: adaPage }, wide: { page: brunoPage } } = await signedInPair(ada, bruno, 10_000));
 });
 
 afterAll(async () => {

@@ -56,3 +56,44 @@ export async function signIn(page: Page, who: Person): Promise<void> {
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('heading', { name: 'Sketches', exact: true }).waitFor();
 }
+
+/** The server's JSON API straight (for setting up what a spec does not test through the screens). */
+export async function call(method: string, path: string, token: string | null, body?: unknown) {
+  const res = await fetch(baseUrl + path, {
+    method,
+    headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const json = await res.json().catch(() => null);
+  if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json)}`);
+  return json;
+}
+
+/**
+ * Registers both people, makes `owner` the owner of a new group named `name` and `member` a
+ * member of it (invited by e-mail, accepted through the kept mail's link). Answers their tokens.
+ */
+export async function groupOfTwo(owner: Person, member: Person, name: string) {
+  const a = await call('POST', '/api/auth/register', null, { email: owner.email, password: owner.password, displayName: owner.name });
+  const b = await call('POST', '/api/auth/register', null, { email: member.email, password: member.password, displayName: member.name });
+  const group = await call('POST', '/api/groups', a.token, { name });
+  await call('POST', `/api/groups/${group.id}/invitations`, a.token, { email: member.email, role: 'member' });
+  const mail = (await call('GET', '/api/dev/mail', null)) as { to: string[]; links: string[] }[];
+  const link = mail.filter((m) => m.to.includes(member.email)).pop()!.links.find((l) => l.includes('/invite/'))!;
+  await call('POST', `/api/invitations/${new URL(link).pathname.split('/').pop()}/accept`, b.token);
+  return { ownerToken: a.token as string, memberToken: b.token as string, groupId: group.id as string };
+}
+
+/**
+ * A browser with two people signed in at once: the first on a phone, the second on a wide
+ * screen (so a two-person spec shoots both layouts as it goes).
+ */
+export async function signedInPair(phoneUser: Person, wideUser: Person, timeoutMs: number) {
+  const browser = await launch();
+  const contexts = [await browser.newContext({ viewport: PHONE }), await browser.newContext({ viewport: WIDE })];
+  for (const c of contexts) c.setDefaultTimeout(timeoutMs);
+  const pages = [await contexts[0].newPage(), await contexts[1].newPage()];
+  await signIn(pages[0], phoneUser);
+  await signIn(pages[1], wideUser);
+  return { browser, phone: { context: contexts[0], page: pages[0] }, wide: { context: contexts[1], page: pages[1] } };
+}
