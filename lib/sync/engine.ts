@@ -18,6 +18,14 @@ export interface EngineOptions {
   timers?: { setTimeout: typeof setTimeout; clearTimeout: typeof clearTimeout };
 }
 
+/** S34: why the server refused a comment, in the words the thread shows beside it. */
+const refusals: Record<number, string> = {
+  400: 'the server found it invalid',
+  403: 'you may not comment there (a viewer, or no longer in the group)',
+  404: 'the sketch is not shared with you any more',
+  409: 'its id was already used',
+};
+
 function fromBase64(s: string): Uint8Array {
   const bin = atob(s);
   return Uint8Array.from(bin, (c) => c.charCodeAt(0));
@@ -144,7 +152,7 @@ export class SyncEngine {
         await this.o.store.commentSettled(c);
       } catch (e) {
         if (!(e instanceof TransportError && e.kind === 'client')) throw e;
-        await this.o.store.commentSettled(c, e.message); // refused: kept on the device, not retried
+        await this.o.store.commentSettled(c, `${refusals[e.status] ?? 'refused by the server'} (${e.message})`); // kept on the device, not retried
       }
     }
   }
