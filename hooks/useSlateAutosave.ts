@@ -1,13 +1,14 @@
-// Saves the Slate's drawing to the device store a moment after each edit (never mid-drag: the
-// history only changes when a gesture ends); what is still waiting is saved when the screen
-// closes or another sketch opens.
+// Saves the Slate's drawing to the device store right after each edit (never mid-drag: the
+// history only changes when a gesture ends), so a reload or a closed tab straight after a stroke
+// loses nothing; the outbox joins unsent writes (sync/SPEC.md S8a), so this costs no extra
+// sync traffic. What is still waiting is saved when the screen closes or another sketch opens.
 import { useEffect, useRef } from 'react';
 import { analyse } from '@/shared/drawing/analyse';
 import { useSketchWrites } from '@/hooks/queries/useLocalSketches';
 import { toStoredDiagram, type SlateDoc } from '@/lib/slate/record';
 import { useSlate } from '@/lib/slate/slate-store';
 
-const saveDelayMs = 500;
+const saveDelayMs = 0;
 
 export function useSlateAutosave(id: string | null) {
   const { update } = useSketchWrites();
