@@ -39,6 +39,11 @@ export function createApp(deps: Deps): Express {
   const webDir = deps.config.webDir && resolve(deps.config.webDir);
   if (webDir && existsSync(join(webDir, 'index.html'))) {
     app.use(express.static(webDir, { index: false, setHeaders: setServiceWorkerHeaders }));
+    // A missing build file is a 404, not index.html: a font or script answered with HTML fails
+    // in confusing ways (and would be cached by the service worker as if it were the file).
+    app.use(['/_expo', '/assets'], () => {
+      throw notFound('No such file in the web build');
+    });
     app.get('/{*splat}', (_req, res) => {
       res.sendFile(join(webDir, 'index.html'));
     });

@@ -47,6 +47,12 @@ describe('serving the exported web build', () => {
     expect(res.text).toContain('<div id="root">');
   });
 
+  it.each(['/_expo/static/css/fonts/missing.woff2', '/assets/missing.ttf'])('answers a missing build file %s with 404, not the app page', async (path) => {
+    const res = await request(server.url).get(path);
+    expect(res.status).toBe(404);
+    expect(res.text).not.toContain('<div id="root">');
+  });
+
   it('keeps unknown /api routes as JSON 404, not the app page', async () => {
     const res = await request(server.url).get('/api/nothing-here');
     expect(res.status).toBe(404);
