@@ -99,16 +99,16 @@ export interface Composition {
   readonly compQR: number[];
   readonly pieces: Piece[];
   /** Reduced composites already met, by (dots on P u Q) * 2^(cycles of Q u R) + dots on Q u R. */
-  readonly memo: Map<number, [number, number][]>;
+  readonly memo: ([number, number][] | undefined)[];
 }
 
 /** The composite of the discs with dot masks m1 (on P u Q) and m2 (on Q u R), reduced. */
 export function composite(c: Composition, m1: number, m2: number): [number, number][] {
-  const key = m1 * 2 ** c.compQR.length + m2;
-  let terms = c.memo.get(key);
+  const key = m1 * (1 << c.compQR.length) + m2;
+  let terms = c.memo[key];
   if (!terms) {
     terms = reduce(c.pieces, dotsOf(c.pieces.length, [c.compPQ, c.compQR], [m1, m2]));
-    c.memo.set(key, terms);
+    c.memo[key] = terms;
   }
   return terms;
 }
@@ -117,6 +117,7 @@ export function composition(p: Matching, q: Matching, r: Matching): Composition 
   const pq = cycles(p, q);
   const qr = cycles(q, r);
   const pr = cycles(p, r);
+  if (pq.count + qr.count > 52) throw new RangeError(`${pq.count + qr.count} cycles exceed the memo keys of composites; the diagram's open boundary grew too wide`);
   const arcs: [number, number][] = [];
   q.forEach((partner, k) => {
     if (k < partner) arcs.push([pq.of[k], pq.count + qr.of[k]]);
@@ -135,7 +136,7 @@ export function composition(p: Matching, q: Matching, r: Matching): Composition 
     compPQ: comp.slice(0, pq.count),
     compQR: comp.slice(pq.count),
     pieces: euler.map((e, c) => ({ genus: genus(e, circles[c]), boundary: boundary[c] })),
-    memo: new Map(),
+    memo: [],
   };
 }
 

@@ -28,8 +28,11 @@ interface Gluing {
   /** Component of every bottom loop and every top loop. */
   readonly bottomLoops: number[];
   readonly topLoops: number[];
-  /** Reduced surfaces already met, by (disc dots, bottom summands, top summands). */
-  readonly memo: Map<number, [number, number][]>;
+  /**
+   * Reduced surfaces already met, by (disc dots, bottom summands, top summands); an array, as
+   * the keys are small and dense (a Map lookup was the merge step's hottest line).
+   */
+  readonly memo: ([number, number][] | undefined)[];
 }
 
 /**
@@ -128,7 +131,7 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
       compPQ: comp.slice(0, pq.count),
       bottomLoops,
       topLoops,
-      memo: new Map(),
+      memo: [],
     };
     gluings.set(key, result);
     return result;
@@ -182,14 +185,14 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
 
 // The glued surface with dots `mask` on the old discs, capped as the summands say, reduced.
 function surface(g: Gluing, mask: number, sigma: number, tau: number): [number, number][] {
-  const key = (mask * 2 ** g.bottomLoops.length + sigma) * 2 ** g.topLoops.length + tau;
-  let terms = g.memo.get(key);
+  const key = (mask * (1 << g.bottomLoops.length) + sigma) * (1 << g.topLoops.length) + tau;
+  let terms = g.memo[key];
   if (!terms) {
     const dots = dotsOf(g.pieces.length, [g.compPQ], [mask]);
     g.bottomLoops.forEach((piece, l) => (dots[piece] += (sigma >> l) & 1));
     g.topLoops.forEach((piece, l) => (dots[piece] += 1 - ((tau >> l) & 1)));
     terms = reduce(g.pieces, dots);
-    g.memo.set(key, terms);
+    g.memo[key] = terms;
   }
   return terms;
 }
