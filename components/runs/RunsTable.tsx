@@ -1,6 +1,7 @@
-// The Runs tab's table: status, progress, diagram, ring, started, time. Headers sort (press
-// again to reverse); the filter matches the diagram label, ring and status.
-import { useMemo, useState } from 'react';
+// The Runs tab's table, compact enough for a phone or the wide list pane: status, progress,
+// diagram, ring, newest first. Headers sort (press again to reverse); the filter matches the
+// diagram label, ring and status. The open run (wide: shown on the right) is marked.
+import { useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { Link } from 'expo-router';
 import {
@@ -11,14 +12,13 @@ import {
   getSortedRowModel,
   useReactTable,
   type SortingState,
-  type VisibilityState,
 } from '@tanstack/react-table';
 import type { RunSummary } from '@/shared/api/runs';
 import { runPagePath } from '@/shared/api/runs';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { useFilterShortcut } from '@/components/shell/shortcuts';
 import { ProgressBar } from './ProgressBar';
-import { duration, ringLabel, started, statusLabel } from './format';
+import { ringLabel, statusLabel } from './format';
 
 const col = createColumnHelper<RunSummary>();
 
@@ -39,25 +39,21 @@ const columns = [
     ),
   }),
   col.accessor((r) => ringLabel(r), { id: 'ring', header: 'Ring', cell: (c) => <Text style={styles.code}>{c.getValue()}</Text> }),
-  col.accessor('createdAt', { header: 'Started', cell: (c) => <Text style={styles.cell}>{started(c.getValue())}</Text> }),
-  col.accessor((r) => (r.startedAt ? (r.finishedAt ? Date.parse(r.finishedAt) : Date.now()) - Date.parse(r.startedAt) : -1), {
-    id: 'time',
-    header: 'Time',
-    cell: (c) => <Text style={styles.cell}>{duration(c.row.original)}</Text>,
-  }),
+  // Not shown: it only gives the default order, newest first.
+  col.accessor('createdAt', { header: 'Started' }),
 ];
 
-const widths: Record<string, number> = { status: 0.9, progress: 1.1, label: 2.6, ring: 0.9, createdAt: 1.2, time: 0.8 };
+const widths: Record<string, number> = { status: 0.9, progress: 1.1, label: 2.6, ring: 0.9 };
+const hidden = { createdAt: false };
 
-export function RunsTable({ runs, wide }: { runs: RunSummary[]; wide: boolean }) {
+export function RunsTable({ runs, openId }: { runs: RunSummary[]; openId?: string }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
   const [filter, setFilter] = useState('');
   const filterField = useFilterShortcut('Runs', 'Filter runs');
-  const visible = useMemo((): VisibilityState => (wide ? {} : { createdAt: false, time: false }), [wide]);
   const table = useReactTable({
     data: runs,
     columns,
-    state: { sorting, globalFilter: filter, columnVisibility: visible },
+    state: { sorting, globalFilter: filter, columnVisibility: hidden },
     onSortingChange: setSorting,
     onGlobalFilterChange: setFilter,
     globalFilterFn: (row, _id, value: string) =>
@@ -95,7 +91,7 @@ export function RunsTable({ runs, wide }: { runs: RunSummary[]; wide: boolean })
           </View>
         ))}
         {table.getRowModel().rows.map((row) => (
-          <View role="row" key={row.id} style={styles.row} testID={`run-row-${row.original.id}`}>
+          <View role="row" key={row.id} style={[styles.row, row.original.id === openId && styles.open]} aria-current={row.original.id === openId || undefined} testID={`run-row-${row.original.id}`}>
             {row.getVisibleCells().map((c) => (
               <View role="cell" key={c.id} style={[styles.cellBox, { flex: widths[c.column.id] ?? 1 }]}>
                 {flexRender(c.column.columnDef.cell, c.getContext())}
@@ -114,6 +110,7 @@ const styles = StyleSheet.create({
   filter: { ...type.small, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.surface, color: colors.ink },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
   headRow: { borderBottomColor: colors.ink },
+  open: { backgroundColor: colors.accentSoft },
   head: { ...type.label, color: colors.inkMuted },
   cellBox: { justifyContent: 'center' },
   cell: { ...type.small, color: colors.ink },

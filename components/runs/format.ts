@@ -18,6 +18,3 @@ export function duration(r: Pick<RunSummary, 'startedAt' | 'finishedAt'>, now = 
 }
 
 export const ringLabel = (r: Pick<RunSummary, 'ring' | 'reduced'>) => `${r.ring}${r.reduced ? ', reduced' : ''}`;
-
-export const started = (iso: string) =>
-  new Date(iso).toLocaleString(undefined, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });

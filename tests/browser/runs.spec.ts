@@ -1,9 +1,10 @@
 // The runs journey in a real browser against the real server: start a run from a pasted braid
 // word, watch the progress bar move, open the result table; a second run from a PD code shows
-// the trefoil's torsion typeset. Screenshots at phone and wide size (tests/artifacts/runs-*).
+// the trefoil's torsion typeset; on a wide screen the runs table stays beside the run or the form.
+// Screenshots at phone and wide size (tests/artifacts/runs-*).
 import type { Browser, Page } from 'playwright-core';
 import { fromBraid } from '@/shared/knot/braid';
-import { PHONE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
+import { PHONE, WIDE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
 
 let browser: Browser;
 let page: Page;
@@ -140,3 +141,24 @@ test('from a sketch on the server: the Slate opens Runs with the sketch, the run
   await page.getByRole('table', { name: 'Khovanov homology' }).waitFor();
   await shoot(page, 'runs-08-from-sketch');
 }, 90_000);
+
+test('wide: the runs stay on the left while a run or the start form shows on the right', async () => {
+  await page.setViewportSize(WIDE);
+  try {
+    await page.goto(`${baseUrl}/runs`);
+    const runs = page.getByRole('table', { name: 'Runs' });
+    await runs.waitFor();
+    await expect(page.getByLabel('PD code').isVisible()).resolves.toBe(true);
+    await runs.getByRole('link', { name: /Figure-eight from the board/ }).click();
+    await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
+    await page.getByRole('heading', { name: 'Figure-eight from the board' }).waitFor();
+    await expect(runs.isVisible()).resolves.toBe(true);
+    await expect(runs.locator('[aria-current="true"]').count()).resolves.toBe(1); // the open run is marked
+    await page.getByRole('button', { name: 'New run' }).click();
+    await page.waitForURL((u) => u.pathname === '/runs');
+    await page.getByLabel('PD code').waitFor();
+    await expect(runs.isVisible()).resolves.toBe(true);
+  } finally {
+    await page.setViewportSize(PHONE);
+  }
+}, 60_000);

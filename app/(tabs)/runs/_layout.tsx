@@ -1,3 +1,8 @@
-import { TabStack } from '@/components/shell/TabStack';
+// Runs: phone = a stack (the runs and the start form, then a run); wide = the runs on the left,
+// the start form or the open run on the right.
+import { SplitPane } from '@/components/shell/SplitPane';
+import { RunsPane } from '@/components/runs/RunsPane';
 
-export default TabStack;
+export default function RunsLayout() {
+  return <SplitPane list={<RunsPane />} />;
+}
