@@ -1,5 +1,5 @@
 // The Runs tab's table, compact enough for a phone or the wide list pane: status, progress,
-// diagram, ring, newest first. Headers sort (press again to reverse); the filter matches the
+// diagram, ring, time, newest first. Headers sort (press again to reverse); the filter matches the
 // diagram label, ring and status. The open run (wide: shown on the right) is marked.
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
@@ -18,7 +18,7 @@ import { runPagePath } from '@/shared/api/runs';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { useFilterShortcut } from '@/components/shell/shortcuts';
 import { ProgressBar } from './ProgressBar';
-import { ringLabel, statusLabel } from './format';
+import { duration, ringLabel, statusLabel } from './format';
 
 const col = createColumnHelper<RunSummary>();
 
@@ -39,11 +39,16 @@ const columns = [
     ),
   }),
   col.accessor((r) => ringLabel(r), { id: 'ring', header: 'Ring', cell: (c) => <Text style={styles.code}>{c.getValue()}</Text> }),
+  col.accessor((r) => (r.startedAt ? (r.finishedAt ? Date.parse(r.finishedAt) : Date.now()) - Date.parse(r.startedAt) : -1), {
+    id: 'time',
+    header: 'Time',
+    cell: (c) => <Text style={styles.cell}>{duration(c.row.original)}</Text>,
+  }),
   // Not shown: it only gives the default order, newest first.
   col.accessor('createdAt', { header: 'Started' }),
 ];
 
-const widths: Record<string, number> = { status: 0.9, progress: 1.1, label: 2.6, ring: 0.9 };
+const widths: Record<string, number> = { status: 0.9, progress: 1.1, label: 2.4, ring: 0.8, time: 0.8 };
 const hidden = { createdAt: false };
 
 export function RunsTable({ runs, openId }: { runs: RunSummary[]; openId?: string }) {
