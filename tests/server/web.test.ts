@@ -13,6 +13,7 @@ beforeAll(async () => {
   mkdirSync(join(dir, '_expo', 'static', 'js'), { recursive: true });
   writeFileSync(join(dir, 'index.html'), '<!doctype html><title>Overstrand</title><div id="root"></div>');
   writeFileSync(join(dir, '_expo', 'static', 'js', 'entry-abc.js'), 'console.log("app")');
+  writeFileSync(join(dir, '_expo', 'static', 'js', 'entry-big.js'), 'console.log("a large bundle");\n'.repeat(2000));
   server = await testServer({ config: { webDir: dir } });
 });
 afterAll(async () => {
@@ -51,6 +52,14 @@ describe('serving the exported web build', () => {
     const res = await request(server.url).get(path);
     expect(res.status).toBe(404);
     expect(res.text).not.toContain('<div id="root">');
+  });
+
+  it('sends large build files gzip-compressed to a browser that accepts it', async () => {
+    const res = await request(server.url).get('/_expo/static/js/entry-big.js').set('Accept-Encoding', 'gzip');
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBe('gzip');
+    expect(res.text).toContain('a large bundle');
+    isolated(res);
   });
 
   it('keeps unknown /api routes as JSON 404, not the app page', async () => {
