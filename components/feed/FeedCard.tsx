@@ -25,10 +25,8 @@ export function FeedCard({ item, onOpen, active }: { item: FeedItem; onOpen: () 
       <View style={styles.body}>
         <Text style={styles.title} numberOfLines={2}>{item.title || 'Untitled sketch'}</Text>
         <Text style={styles.meta} numberOfLines={1}>{item.owner.displayName} · {when(item.updatedAt)}</Text>
-        <View style={styles.readout}>
-          <Text style={styles.crossings}>{inv.crossings} crossing{inv.crossings === 1 ? '' : 's'}</Text>
-          <View style={styles.jones}><Jones inv={inv} nowrap /></View>
-        </View>
+        <Text style={styles.crossings}>{inv.crossings} crossing{inv.crossings === 1 ? '' : 's'}</Text>
+        <View style={styles.jones}><Jones inv={inv} /></View>
         <View style={styles.foot}>
           {item.latestRun ? <Text style={styles.run} numberOfLines={1}>{superscripts(item.latestRun.summary) || item.latestRun.kind}</Text> : null}
           <Text style={styles.count}>{item.commentCount} comment{item.commentCount === 1 ? '' : 's'}</Text>
@@ -46,10 +44,10 @@ const styles = StyleSheet.create({
   body: { flex: 1, gap: 2, minWidth: 0 },
   title: { ...type.heading, color: colors.ink },
   meta: { ...type.small, color: colors.inkMuted },
-  readout: { flexDirection: 'row', alignItems: 'baseline', gap: space.sm, minWidth: 0 },
-  crossings: { ...type.small, color: colors.inkMuted, flexShrink: 0 },
-  // A long polynomial is cut at the card's edge (the sketch page shows it whole).
-  jones: { flexShrink: 1, minWidth: 0, overflow: 'hidden' },
+  crossings: { ...type.small, color: colors.inkMuted },
+  // Its own line, free to wrap after a + or − (KaTeX breaks inline math there), so a long
+  // polynomial stays whole on a phone instead of running past the card's edge.
+  jones: { minWidth: 0 },
   foot: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, marginTop: 2 },
   run: { ...type.label, color: colors.success },
   count: { ...type.label, color: colors.inkMuted },

@@ -3,8 +3,8 @@ import { TeX } from '@/components/runs/Math';
 import type { InvariantSummary } from '@/shared/api/feed';
 import { Laurent } from '@/shared/poly/laurent';
 
-export function Jones({ inv, lhs = 'V', nowrap = false }: { inv: InvariantSummary; lhs?: string; nowrap?: boolean }) {
+export function Jones({ inv, lhs = 'V' }: { inv: InvariantSummary; lhs?: string }) {
   if (!inv.jones) return null;
   const v = Laurent.fromJSON(inv.jones);
-  return <TeX tex={`${lhs} = ${v.format('t', 'latex')}`} text={`${lhs} = ${inv.jonesText ?? v.format('t', 'unicode')}`} nowrap={nowrap} />;
+  return <TeX tex={`${lhs} = ${v.format('t', 'latex')}`} text={`${lhs} = ${inv.jonesText ?? v.format('t', 'unicode')}`} />;
 }
