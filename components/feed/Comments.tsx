@@ -5,6 +5,7 @@ import { StyleSheet, Text, TextInput, View } from 'react-native';
 import type { Comment } from '@/shared/api/comments';
 import type { LocalComment } from '@/lib/store/types';
 import { useAddComment, useDeleteComment, useEditComment, useUnsentComments } from '@/hooks/queries/useFeed';
+import { useSketchWrites } from '@/hooks/queries/useLocalSketches';
 import { useSession } from '@/hooks/useSession';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
@@ -54,12 +55,19 @@ function Item({ c, groupId, mine, moderate, canWrite }: { c: Comment; groupId: s
 
 /** A comment still on this device (S34): sent by the next sync, or refused with the reason. */
 function Unsent({ c, author }: { c: LocalComment; author: string }) {
+  const { discardComment } = useSketchWrites();
   return (
     <View style={styles.item} testID="unsent-comment">
       <Text style={styles.meta}>
         <Text style={styles.author}>{author}</Text> · {c.state === 'waiting' ? <Text style={styles.waiting}>Waiting to send</Text> : <Text style={styles.refused}>Not sent: {c.reason}</Text>}
       </Text>
       <CommentText body={c.body} />
+      {c.state === 'rejected' ? (
+        <View style={styles.actions}>
+          <Text role="button" aria-label="Discard unsent comment" style={[styles.action, styles.danger]} onPress={() => discardComment.mutate(c)}>Discard</Text>
+        </View>
+      ) : null}
+      {discardComment.error ? <Banner tone="error">{discardComment.error.message}</Banner> : null}
     </View>
   );
 }

@@ -3,7 +3,7 @@
 import { useEffect } from 'react';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { SketchFields, SketchFieldsPatch } from '@/shared/api/sketches';
-import type { LocalGroup } from '@/lib/store/types';
+import type { LocalComment, LocalGroup } from '@/lib/store/types';
 import { useDevice } from '@/hooks/useDevice';
 import { useGroups } from './useGroups';
 
@@ -102,6 +102,7 @@ export function useSketchWrites() {
     create: useMutation({ ...opts, mutationFn: (init: Partial<SketchFields>) => need().create(init) }),
     update: useMutation({ ...opts, mutationFn: ({ id, patch }: { id: string; patch: SketchFieldsPatch }) => need().update(id, patch) }),
     remove: useMutation({ ...opts, mutationFn: (id: string) => need().remove(id) }),
+    discardComment: useMutation({ ...opts, mutationFn: (c: LocalComment) => need().discardComment(c) }),
     resolve: useMutation({
       ...opts,
       mutationFn: ({ conflictId, chosen }: { conflictId: string; chosen: SketchFieldsPatch }) => need().resolveConflict(conflictId, chosen),

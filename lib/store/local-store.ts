@@ -151,6 +151,10 @@ export class LocalStore implements SketchRepository, SyncStore {
     return list.map((c) => ({ ...c, state: c.state ?? 'waiting' }));
   }
 
+  discardComment(comment: LocalComment): Promise<void> {
+    return this.tx((t) => t.remove('comments', commentKey(comment)), true);
+  }
+
   async queueUpload(bytes: Uint8Array, mimeType: string): Promise<string> {
     const sha256 = await sha256Hex(bytes);
     const item: PendingUpload = { sha256, mimeType, base64: toBase64(bytes) };

@@ -62,6 +62,8 @@ export interface SketchRepository {
   /** `id`: when an online post of the same comment may have reached the server already (S34). */
   addComment(sketchId: string, body: string, id?: string): Promise<LocalComment>;
   comments(sketchId: string): Promise<LocalComment[]>;
+  /** The author drops a comment the server refused (S34): it leaves the device. */
+  discardComment(comment: LocalComment): Promise<void>;
   /** S28: keep a photo until the server has it; answers its hash to list in `attachments`. */
   queueUpload(bytes: Uint8Array, mimeType: string): Promise<string>;
   cacheRun(key: string, value: unknown): Promise<void>;

@@ -93,3 +93,21 @@ test('S34 a comment the server refused stays in the thread with the reason, and 
   expect(posts(calls)).toHaveLength(1);
   expect(await store.comments(SKETCH)).toHaveLength(before);
 });
+
+test('S34 the author discards a refused comment: it leaves the thread and the device; a waiting one has no Discard', async () => {
+  mockFetch(() => ({ status: 500, body: {} }));
+  const refused = await store.addComment(SKETCH, 'Refused, to discard');
+  await store.commentSettled(refused, 'answered 403');
+  const waiting = await store.addComment(SKETCH, 'Still waiting');
+  renderThread();
+  expect(await screen.findByText('Refused, to discard')).toBeOnTheScreen();
+  const discards = () => screen.queryAllByRole('button', { name: 'Discard unsent comment' });
+  const refusedBefore = (await store.comments(SKETCH)).filter((c) => c.state === 'rejected').length;
+  expect(discards()).toHaveLength(refusedBefore); // one per refused comment, none for the waiting ones
+  await act(async () => fireEvent.press(discards()[discards().length - 1]));
+  await waitFor(() => expect(screen.queryByText('Refused, to discard')).toBeNull());
+  const left = await store.comments(SKETCH);
+  expect(left.map((c) => c.id)).not.toContain(refused.id);
+  expect(left.map((c) => c.id)).toContain(waiting.id);
+  expect(screen.getByText('Still waiting')).toBeOnTheScreen();
+});

@@ -131,6 +131,15 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
     ]);
   });
 
+  test('S34: the author discards a refused comment; only that one leaves the device', async () => {
+    const s = await store.create({});
+    const kept = await store.addComment(s.id, 'kept');
+    const refused = await store.addComment(s.id, 'refused');
+    await store.commentSettled(refused, 'answered 403');
+    await store.discardComment(refused);
+    expect(await store.comments(s.id)).toEqual([kept]);
+  });
+
   test('S8: a write that fails halfway leaves neither record nor outbox entry', async () => {
     const tables = await open();
     let failRecords = false;
