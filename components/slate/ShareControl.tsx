@@ -3,7 +3,8 @@
 // (S5, S8), so it works offline and reaches the group on the next sync.
 import { StyleSheet, Text, View } from 'react-native';
 import type { LocalSketch } from '@/lib/store/types';
-import { groupName, useKnownGroups, useSketchWrites } from '@/hooks/queries/useLocalSketches';
+import type { Rejected } from '@/sync/outbox';
+import { groupName, useKnownGroups, useRejected, useSketchWrites } from '@/hooks/queries/useLocalSketches';
 import { useSession } from '@/hooks/useSession';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
@@ -14,10 +15,27 @@ export function sharedLabel(sketch: Pick<LocalSketch, 'groupId'>, groups: Return
   return sketch.groupId ? `Shared to ${groupName(groups, sketch.groupId)}` : null;
 }
 
+/** S24: this sketch's share changes the server refused (kept until the owner dismisses them). */
+export function useRefusedShares(sketchId: string): Rejected[] {
+  return (useRejected(sketchId).data ?? []).filter((r) => 'groupId' in r.mutation.fields);
+}
+
+const why: Record<string, string> = {
+  forbidden: 'only the owner shares a sketch, and not to a group where they are a viewer',
+  invalid: 'the change was not valid',
+};
+
+function refusal(r: Rejected, groups: ReturnType<typeof useKnownGroups>): string {
+  const to = r.mutation.fields.groupId;
+  const what = typeof to === 'string' ? `sharing to ${groupName(groups, to)}` : 'to stop sharing';
+  return `The server refused ${what}: ${why[r.reason] ?? r.reason}.`;
+}
+
 export function ShareControl({ sketch }: { sketch: LocalSketch }) {
   const me = useSession((s) => s.user?.id ?? null);
   const groups = useKnownGroups();
-  const { update } = useSketchWrites();
+  const { update, dismissRejected } = useSketchWrites();
+  const refused = useRefusedShares(sketch.id);
   const mine = sketch.ownerId === null || sketch.ownerId === me;
   const shared = sharedLabel(sketch, groups);
   const targets = groups.filter((g) => g.role !== 'viewer' && g.id !== sketch.groupId);
@@ -30,6 +48,14 @@ export function ShareControl({ sketch }: { sketch: LocalSketch }) {
         {shared ?? 'Private: only you see it'}
         {sketch.groupId && sketch.pending ? ' (reaches the group on the next sync)' : ''}
       </Text>
+      {refused.map((r) => (
+        <View key={r.mutation.mutationId} style={styles.refused} testID="share-refused">
+          <Banner tone="error" title="Share not applied">{refusal(r, groups)}</Banner>
+          <View style={styles.row}>
+            <Button variant="quiet" label="Dismiss" onPress={() => dismissRejected.mutate(r.mutation.mutationId)} disabled={dismissRejected.isPending} />
+          </View>
+        </View>
+      ))}
       {sketch.groupId ? (
         <View style={styles.row}>
           <Button variant="danger" label="Stop sharing" onPress={() => setGroup(null)} busy={update.isPending} busyLabel="Saving…" />
@@ -57,4 +83,5 @@ const styles = StyleSheet.create({
   state: { ...type.body, color: colors.ink },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   note: { ...type.small, color: colors.inkMuted },
+  refused: { gap: space.xs },
 });

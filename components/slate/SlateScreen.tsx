@@ -30,7 +30,7 @@ import { SelectionBar, Toolbar } from './Toolbar';
 import { FramingDialog } from './FramingDialog';
 import { SketchDetails } from './SketchDetails';
 import { Dialog } from './Dialog';
-import { ShareControl, sharedLabel } from './ShareControl';
+import { ShareControl, sharedLabel, useRefusedShares } from './ShareControl';
 import { colors, fonts, space, type } from '@/constants/theme';
 
 type Open = null | 'paste' | 'families' | 'details' | 'share' | { framing: string };
@@ -55,6 +55,8 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const diagram = analysis.diagram?.diagram ?? null;
   const readout = useReadout(ready ? diagram : null, dragging);
   const [open, setOpen] = useState<Open>(null);
+  // A refused share (S24) shows beside the label, so the owner opens Share to read why.
+  const shareRefused = useRefusedShares(sketch.id).length > 0 ? 'share refused by the server' : null;
   const shared = sharedLabel(sketch, useKnownGroups());
   const [message, setMessage] = useState<string | null>(null);
   useEffect(() => {
@@ -135,7 +137,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
       ) : null}
       <Pressable role="button" accessibilityLabel="Sketch details" onPress={() => setOpen('details')} style={styles.titleBox}>
         <Text role="heading" aria-level={1} style={styles.title} numberOfLines={1}>{sketch.title || 'Untitled sketch'}</Text>
-        <Text style={styles.meta} numberOfLines={1}>{[shared, sketch.seenAt, sketch.tags.map((t) => `#${t}`).join(' ')].filter(Boolean).join(' · ') || 'Add a title, where it was seen, notes, a photo'}</Text>
+        <Text style={styles.meta} numberOfLines={1}>{[shared, shareRefused, sketch.seenAt, sketch.tags.map((t) => `#${t}`).join(' ')].filter(Boolean).join(' · ') || 'Add a title, where it was seen, notes, a photo'}</Text>
       </Pressable>
       <View style={styles.headerActions}>
         {wide ? <Pressable role="button" accessibilityLabel="Keyboard shortcuts" onPress={() => useShortcutRegistry.getState().setSheet(true)} style={styles.quiet}><Text style={styles.quietText}>?</Text></Pressable> : null}

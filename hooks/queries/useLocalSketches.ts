@@ -14,6 +14,7 @@ export const localKeys = {
   conflicts: (userId: string) => [...localKeys.all(userId), 'conflicts'] as const,
   groups: (userId: string) => [...localKeys.all(userId), 'groups'] as const,
   comments: (userId: string, sketchId: string) => [...localKeys.all(userId), 'comments', sketchId] as const,
+  rejected: (userId: string, recordId: string) => [...localKeys.all(userId), 'rejected', recordId] as const,
 };
 
 /** Every local query of this user refreshes when the store changes (local write or pull). */
@@ -91,6 +92,17 @@ export function useLocalComments(sketchId: string) {
   });
 }
 
+/** S24: this sketch's writes the server refused, kept with the reason until dismissed. */
+export function useRejected(sketchId: string) {
+  const device = useStoreRefresh();
+  return useQuery({
+    ...local,
+    queryKey: localKeys.rejected(device?.userId ?? '', sketchId),
+    queryFn: () => device!.store.rejected(sketchId),
+    enabled: !!device,
+  });
+}
+
 export function useSketchWrites() {
   const device = useDevice();
   const need = () => {
@@ -103,6 +115,7 @@ export function useSketchWrites() {
     update: useMutation({ ...opts, mutationFn: ({ id, patch }: { id: string; patch: SketchFieldsPatch }) => need().update(id, patch) }),
     remove: useMutation({ ...opts, mutationFn: (id: string) => need().remove(id) }),
     discardComment: useMutation({ ...opts, mutationFn: (c: LocalComment) => need().discardComment(c) }),
+    dismissRejected: useMutation({ ...opts, mutationFn: (mutationId: string) => need().dismissRejected(mutationId) }),
     resolve: useMutation({
       ...opts,
       mutationFn: ({ conflictId, chosen }: { conflictId: string; chosen: SketchFieldsPatch }) => need().resolveConflict(conflictId, chosen),

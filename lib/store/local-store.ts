@@ -155,6 +155,15 @@ export class LocalStore implements SketchRepository, SyncStore {
     return this.tx((t) => t.remove('comments', commentKey(comment)), true);
   }
 
+  async rejected(recordId: string): Promise<Rejected[]> {
+    const list = await this.tx((t) => t.list<Rejected>('rejected'));
+    return list.filter((r) => r.mutation.recordId === recordId).sort((a, b) => byClock(a.mutation, b.mutation));
+  }
+
+  dismissRejected(mutationId: string): Promise<void> {
+    return this.tx((t) => t.remove('rejected', mutationId), true);
+  }
+
   async queueUpload(bytes: Uint8Array, mimeType: string): Promise<string> {
     const sha256 = await sha256Hex(bytes);
     const item: PendingUpload = { sha256, mimeType, base64: toBase64(bytes) };

@@ -2,6 +2,7 @@
 // uses (SyncStore). One implementation serves both: local-store.ts.
 import type { SketchFields, SketchFieldsPatch } from '@/shared/api/sketches';
 import type { ConflictFields, Mutation, PullResponse, PushResult } from '@/shared/api/sync';
+import type { Rejected } from '@/sync/outbox';
 
 export interface LocalSketch extends SketchFields {
   id: string;
@@ -64,6 +65,9 @@ export interface SketchRepository {
   comments(sketchId: string): Promise<LocalComment[]>;
   /** The author drops a comment the server refused (S34): it leaves the device. */
   discardComment(comment: LocalComment): Promise<void>;
+  /** S24: the writes of one record the server refused, kept with the reason until dismissed. */
+  rejected(recordId: string): Promise<Rejected[]>;
+  dismissRejected(mutationId: string): Promise<void>;
   /** S28: keep a photo until the server has it; answers its hash to list in `attachments`. */
   queueUpload(bytes: Uint8Array, mimeType: string): Promise<string>;
   cacheRun(key: string, value: unknown): Promise<void>;

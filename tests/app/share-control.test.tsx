@@ -82,3 +82,17 @@ test('offline: the groups last seen on the device still offer sharing', async ()
   expect((await store.get(sketch.id))!).toMatchObject({ groupId: 'g-lunch', pending: 1 }); // joined into its unsent add (S8a)
   syncStatus.setState({ online: true });
 });
+
+test('S24: a share the server refused shows where the owner shares, with the reason, until dismissed', async () => {
+  mockFetch(() => ({ status: 200, body: groups }));
+  const sketch = await store.create({ title: 'Figure eight' });
+  await store.update(sketch.id, { groupId: 'g-read' }); // became a viewer there before the push
+  const box = (await store.outbox(50)).filter((m) => m.recordId === sketch.id);
+  const share = box.find((m) => 'groupId' in m.fields && m.fields.groupId === 'g-read')!;
+  await store.settle(box, box.map((m) => ({ mutationId: m.mutationId, status: m === share ? 'rejected' as const : 'applied' as const, reason: 'forbidden' as const, seq: 1 })));
+  renderWithProviders(<Shared id={sketch.id} />);
+  expect(await screen.findByText('The server refused sharing to Reading group: only the owner shares a sketch, and not to a group where they are a viewer.')).toBeOnTheScreen();
+  await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Dismiss' })));
+  await waitFor(() => expect(screen.queryByTestId('share-refused')).toBeNull());
+  expect(await store.rejected(sketch.id)).toEqual([]);
+});

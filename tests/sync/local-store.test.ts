@@ -140,6 +140,21 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
     expect(await store.comments(s.id)).toEqual([kept]);
   });
 
+  test('S24: a refused write is kept per record until dismissed', async () => {
+    const s = await store.create({});
+    const other = await store.create({});
+    await store.update(s.id, { groupId: 'g1' });
+    const box = await store.outbox(10);
+    const share = box.find((m) => m.recordId === s.id && m.op === 'update')!;
+    await store.settle(box, box.map((m) => ({ mutationId: m.mutationId, status: m === share ? 'rejected' as const : 'applied' as const, reason: 'forbidden' as const, seq: 1 })));
+    expect(await store.rejected(other.id)).toEqual([]);
+    expect(await store.rejected(s.id)).toEqual([{ mutation: share, reason: 'forbidden' }]);
+    expect((await store.counts()).rejected).toBe(1);
+    await store.dismissRejected(share.mutationId);
+    expect(await store.rejected(s.id)).toEqual([]);
+    expect((await store.counts()).rejected).toBe(0);
+  });
+
   test('S8: a write that fails halfway leaves neither record nor outbox entry', async () => {
     const tables = await open();
     let failRecords = false;
