@@ -27,14 +27,17 @@ afterAll(async () => {
   await browser?.close();
 });
 
-/** T(6,7) as a braid word: (1 2 3 4 5)^7, 35 crossings, a few seconds of work over Q. */
-const T67 = Array.from({ length: 7 }, () => '1 2 3 4 5').join(' ');
+/**
+ * T(7,8) as a braid word: (1 2 3 4 5 6)^8, 48 crossings, several seconds of work over Q: long
+ * enough that the page, polling once a second, sees the bar between 0 and 100.
+ */
+const T78 = Array.from({ length: 8 }, () => '1 2 3 4 5 6').join(' ');
 
 test('start a run from a braid word, watch its progress, read the table', async () => {
   await page.getByRole('tab', { name: 'Runs' }).click();
   await page.getByRole('heading', { name: 'No runs yet' }).waitFor();
   await page.getByRole('radio', { name: 'Braid word' }).click();
-  await page.getByLabel('Braid word').fill(T67);
+  await page.getByLabel('Braid word').fill(T78);
   await page.getByRole('radio', { name: 'Q' }).click();
   await shoot(page, 'runs-01-form');
   await page.getByRole('button', { name: 'Start run' }).click();
@@ -55,9 +58,9 @@ test('start a run from a braid word, watch its progress, read the table', async 
   await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 90_000 });
   const table = page.getByRole('table', { name: 'Khovanov homology' });
   await table.waitFor();
-  // T(6,7) is a positive braid knot: Kh^{0,*} over Q is Q at j = s -+ 1 (from memory, Stosic on
-  // positive braid knots), s = (p-1)(q-1) = 30 (Rasmussen 2004, math/0402131).
-  await expect(table.getByRole('rowheader', { name: '29', exact: true }).isVisible()).resolves.toBe(true);
+  // T(7,8) is a positive braid knot: Kh^{0,*} over Q is Q at j = s -+ 1 (from memory, Stosic on
+  // positive braid knots), s = (p-1)(q-1) = 42 (Rasmussen 2004, math/0402131).
+  await expect(table.getByRole('rowheader', { name: '41', exact: true }).isVisible()).resolves.toBe(true);
   await expect(page.getByText('as the Jones polynomial says ✓').isVisible()).resolves.toBe(true);
   await shoot(page, 'runs-03-result');
 }, 150_000);
