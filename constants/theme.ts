@@ -1,4 +1,4 @@
-// Overstrand's look (DESIGN.md "Look"): calm light paper for the app, chalk on slate for the
+// Overstrand's look (docs/product.md "Look"): calm light paper for the app, chalk on slate for the
 // canvas. One place for colours, type and spacing so screens never invent their own.
 
 /** The light, typographic UI around the canvas. */

@@ -20,7 +20,7 @@ export function createApp(deps: Deps): Express {
     helmet({
       // The Expo web export injects inline styles and scripts; a CSP would need per-build hashes.
       contentSecurityPolicy: false,
-      // expo-sqlite on web needs a cross-origin isolated page (STACK.md).
+      // expo-sqlite on web needs a cross-origin isolated page (docs/stack.md).
       crossOriginOpenerPolicy: { policy: 'same-origin' },
       crossOriginEmbedderPolicy: { policy: 'require-corp' },
     }),

@@ -1,4 +1,4 @@
-// TeX typeset with KaTeX on web (DESIGN.md "Look": real math typography). katex.css loads its
+// TeX typeset with KaTeX on web (docs/product.md "Look": real math typography). katex.css loads its
 // fonts from fonts/ beside the exported CSS; `npm run build:web` copies them there.
 import katex from 'katex';
 import 'katex/dist/katex.min.css';

@@ -1,4 +1,4 @@
-// Keyboard shortcuts (DESIGN.md journey 5): one registry every screen adds to, one key handler
+// Keyboard shortcuts (docs/product.md journey 5): one registry every screen adds to, one key handler
 // (ShortcutsHost, web only) that runs them, one sheet (? key) that lists them. A shortcut is a
 // key ("n", "/", "?") or a sequence of two ("g s"). To add some to a screen:
 //

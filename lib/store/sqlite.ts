@@ -1,4 +1,4 @@
-// Tables on SQLite through the async API of expo-sqlite (STACK.md: the only one that works on
+// Tables on SQLite through the async API of expo-sqlite (docs/stack.md: the only one that works on
 // web). Only the few calls below are used, so Node tests run the same SQL on better-sqlite3.
 import type { Collection, Tables } from './tables';
 

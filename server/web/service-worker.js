@@ -1,5 +1,5 @@
 // Overstrand's service worker: lets the web app LOAD with no network once it has been opened
-// online (DESIGN.md journey 1). The data itself lives in the app's own store (expo-sqlite in
+// online (docs/product.md journey 1). The data itself lives in the app's own store (expo-sqlite in
 // origin-private storage) and syncs through /api, which this worker never touches.
 // server/web/write-service-worker.ts writes the build's precache manifest in below.
 /* eslint-env serviceworker */

@@ -1,4 +1,4 @@
-// The group feed (DESIGN.md journey 4): sharing a sketch to a group, the paged feed, a shared
+// The group feed (docs/product.md journey 4): sharing a sketch to a group, the paged feed, a shared
 // sketch's page (photos, fork link, "same invariants as") and forking into my own sketchbook.
 import { z } from 'zod';
 import { Comment } from './comments';

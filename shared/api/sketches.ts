@@ -21,7 +21,7 @@ export const Stroke = z.object({
 export type Stroke = z.infer<typeof Stroke>;
 
 /**
- * The link diagram: PD code (DESIGN.md conventions), unknotted circles with no crossings that
+ * The link diagram: PD code (docs/conventions.md), unknotted circles with no crossings that
  * the PD code cannot show, one framing per component (components in `orient()` order, unknots
  * after them; null = blackboard framing), the drawn strokes, and in `geometry` the Slate's
  * own drawing state as JSON (shared/drawing's Sketch: components, flips, nextSeq), so the

@@ -1,4 +1,4 @@
-// From the crossings of closed drawn paths to a PD code (DESIGN.md conventions). Each
+// From the crossings of closed drawn paths to a PD code (docs/conventions.md). Each
 // component's edges are labelled consecutively along its orientation, so an over-only
 // component has increasing labels as orient() expects. At a crossing the four labels are read
 // counterclockwise AS SEEN ON SCREEN (y down) from the incoming under-strand. Seen on screen,

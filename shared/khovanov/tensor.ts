@@ -7,7 +7,7 @@ import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, reduce } from '
 import { TangleComplex } from './complex';
 import { Mor } from './mor';
 
-/** 0-smoothing joins (a,b)(c,d), 1-smoothing joins (a,d)(b,c) (DESIGN.md). */
+/** 0-smoothing joins (a,b)(c,d), 1-smoothing joins (a,d)(b,c) (docs/conventions.md). */
 const SMOOTHING: readonly Matching[] = [
   [1, 0, 3, 2],
   [3, 2, 1, 0],

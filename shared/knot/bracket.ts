@@ -14,7 +14,7 @@ interface Dense {
   c: bigint[];
 }
 
-/** The Kauffman bracket <D> in A, normalised so that <O> = 1 (DESIGN.md conventions). */
+/** The Kauffman bracket <D> in A, normalised so that <O> = 1 (docs/conventions.md). */
 export function bracket(d: Diagram): Laurent {
   return bracketOfPD(d.pd, d.unknots);
 }

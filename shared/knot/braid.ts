@@ -1,5 +1,5 @@
 // Braid words and their closures. A word is a list of nonzero integers: k > 0 is sigma_k, a
-// positive crossing of strands k and k+1, and k < 0 its inverse (DESIGN.md conventions).
+// positive crossing of strands k and k+1, and k < 0 its inverse (docs/conventions.md).
 // Strands run upwards; the closure returns them around the right-hand side, which is planar.
 
 import { Diagram } from './diagram';

@@ -1,5 +1,5 @@
 // Jones polynomial from the Kauffman bracket: V(L) = (-A^3)^(-w) <L> at A = t^(-1/4)
-// (Kauffman, "State models and the Jones polynomial", Topology 26, 1987; DESIGN.md conventions).
+// (Kauffman, "State models and the Jones polynomial", Topology 26, 1987; docs/conventions.md).
 
 import { bracket } from './bracket';
 import { Diagram } from './diagram';

@@ -1,7 +1,7 @@
 // PD code: crossings X[a,b,c,d], labels read counterclockwise from the incoming under-strand.
 // This file validates a PD code and derives what every invariant needs from it: the
 // components, the direction of every edge and the sign of every crossing (conventions in
-// DESIGN.md "Mathematical conventions").
+// docs/conventions.md).
 
 export type Crossing = readonly [number, number, number, number];
 export type PDCode = readonly Crossing[];

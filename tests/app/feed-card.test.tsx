@@ -14,7 +14,7 @@ const item: FeedItem = {
   updatedAt: '2026-11-20T10:00:00.000Z',
   strokes: [],
   photoThumbUrl: null,
-  // V of the positive trefoil is t + t^3 - t^4 (DESIGN.md conventions, from memory).
+  // V of the positive trefoil is t + t^3 - t^4 (docs/conventions.md, from memory).
   invariants: { crossings: 3, components: 1, jones: [[1, 1], [3, 1], [4, -1]], jonesText: 't + t³ − t⁴' },
   latestRun: { id: 'r1', kind: 'khovanov', finishedAt: '2026-11-20T11:00:00.000Z', summary: 'Kh over Z: q + q^3 + t^2 q^5 + t^3 q^9' },
   commentCount: 2,

@@ -1,4 +1,4 @@
-// Sharing from the Slate (DESIGN.md journey 4, sync/SPEC.md S5, S8, S23): the owner shares a
+// Sharing from the Slate (docs/product.md journey 4, sync/SPEC.md S5, S8, S23): the owner shares a
 // sketch to a group where they are not a viewer and stops sharing; each is a local write queued
 // in the outbox, so it works offline; the groups are remembered on the device for that.
 import { Text } from 'react-native';

@@ -17,7 +17,7 @@ function setup(current: Diagram | null) {
   return onDraw;
 }
 
-// DESIGN.md: the closure of [1,1,1] is the positive trefoil, V = t + t^3 - t^4.
+// docs/conventions.md: the closure of [1,1,1] is the positive trefoil, V = t + t^3 - t^4.
 const trefoil = fromBraid([1, 1, 1]);
 const V = (d: Diagram) => jones(d).format('t', 'plain');
 

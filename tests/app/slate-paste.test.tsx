@@ -21,7 +21,7 @@ test('a PD code with a wrong crossing is refused with the reason, and nothing is
 
 test('X[...] PD codes, braid words and DT codes are drawn', () => {
   const { onDraw } = setup();
-  // The positive trefoil in the DESIGN.md convention (from memory): Jones t + t^3 - t^4.
+  // The positive trefoil in docs/conventions.md (from memory): Jones t + t^3 - t^4.
   fireEvent.changeText(field('PD code'), 'X[1,5,2,4] X[3,1,4,6] X[5,3,6,2]');
   fireEvent.press(screen.getByRole('button', { name: 'Draw it' }));
   expect(onDraw).toHaveBeenCalledTimes(1);

@@ -18,7 +18,7 @@ afterEach(() => jest.useRealTimers());
 
 const run = () => act(() => void jest.runAllTimers());
 
-// DESIGN.md conventions: the closure of [1,1,1] is the positive trefoil.
+// docs/conventions.md: the closure of [1,1,1] is the positive trefoil.
 const trefoil = fromBraid([1, 1, 1]);
 
 test('values of the positive trefoil appear once computed, marked as updating before', () => {
@@ -27,7 +27,7 @@ test('values of the positive trefoil appear once computed, marked as updating be
   run();
   expect(screen.queryByText('updating…')).toBeNull();
   expect(screen.getByText('3 crossings')).toBeOnTheScreen();
-  // Jones polynomial of the positive trefoil: t + t^3 - t^4 (DESIGN.md; Jones 1985).
+  // Jones polynomial of the positive trefoil: t + t^3 - t^4 (docs/conventions.md; Jones 1985).
   expect(screen.getByText('V(t) = t + t³ − t⁴')).toBeOnTheScreen();
   // Alexander polynomial t^-1 - 1 + t, determinant 3 (Lickorish, ch. 6; from memory).
   expect(screen.getByText('Δ(t) = t⁻¹ − 1 + t')).toBeOnTheScreen();

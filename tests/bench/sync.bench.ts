@@ -14,7 +14,7 @@ import type { Line } from './timing';
 
 const SKETCHES = 1000;
 
-// A sketch as the Slate stores it: the trefoil's PD code (DESIGN.md convention, from memory)
+// A sketch as the Slate stores it: the trefoil's PD code (docs/conventions.md, from memory)
 // with the drawing state the layout code makes for it (about 12 KB of JSON) as its geometry.
 const pd = [[1, 5, 2, 4], [3, 1, 4, 6], [5, 3, 6, 2]] as [number, number, number, number][];
 const diagram = { pd, unknots: 0, framings: [null], strokes: [], geometry: JSON.parse(JSON.stringify(layoutToSketch(layoutPD(pd)))) };

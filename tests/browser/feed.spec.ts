@@ -1,4 +1,4 @@
-// The group journey (DESIGN.md journey 4) in a real browser, two people at once: Ada shares a
+// The group journey (docs/product.md journey 4) in a real browser, two people at once: Ada shares a
 // sketch to the group feed and adds a board photo; Bruno (wide screen) finds it in the feed,
 // comments and forks it; Ada sees the notification in the app and the e-mail in the kept mail.
 // Accounts, the group and Ada's synced sketch are set up through the API (their UI is covered
@@ -24,7 +24,7 @@ const strokes = [
 beforeAll(async () => {
   const { ownerToken } = await groupOfTwo(ada, bruno, 'Knot lunch');
   const now = new Date().toISOString();
-  // Ada's sketch as her phone would have synced it: the positive trefoil (DESIGN.md PD convention, from memory).
+  // Ada's sketch as her phone would have synced it: the positive trefoil (docs/conventions.md, PD code, from memory).
   await call('POST', '/api/sync/push', ownerToken, {
     deviceId: 'ada-phone',
     mutations: [{
@@ -47,7 +47,7 @@ test('Ada shares her sketch to the group and adds a board photo', async () => {
   await adaPage.getByRole('button', { name: 'Share a sketch' }).click();
   await adaPage.getByRole('button', { name: `Share ${title}` }).click();
   await adaPage.getByRole('heading', { name: title }).waitFor();
-  // Readout summary of the positive trefoil: Jones t + t^3 - t^4 (DESIGN.md conventions).
+  // Readout summary of the positive trefoil: Jones t + t^3 - t^4 (docs/conventions.md).
   await adaPage.getByRole('math', { name: 'V(t) = t + t³ − t⁴' }).waitFor(); // typeset; its text is the label
 
   // A "photo of the board": chalk curves on slate, with a GPS position in its EXIF as a phone would write.

@@ -7,7 +7,7 @@ import { chromium, type Browser, type Page } from 'playwright-core';
 export const baseUrl = process.env.BROWSER_BASE_URL ?? '';
 if (!baseUrl) throw new Error('Run the browser specs with `npm run test:browser` (it starts the server).');
 
-/** STACK.md: the flags Debian chromium needs here when run as root in a container. */
+/** docs/stack.md: the flags Debian chromium needs here when run as root in a container. */
 const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
   '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 

@@ -1,7 +1,7 @@
-// The app itself loads with no network (DESIGN.md journey 1: at a talk, offline, on a phone):
+// The app itself loads with no network (docs/product.md journey 1: at a talk, offline, on a phone):
 // opened once online, its service worker (server/web/service-worker.js) has the build cached;
 // offline, a reload still opens it cross-origin isolated (expo-sqlite on web needs that,
-// STACK.md), a sketch made then survives another offline reload, and back online it syncs.
+// docs/stack.md), a sketch made then survives another offline reload, and back online it syncs.
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { SESSION_KEY } from '@/lib/stored-session';
 import { PHONE, baseUrl, launch, person, shoot } from './helpers';

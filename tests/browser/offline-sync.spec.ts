@@ -1,4 +1,4 @@
-// Offline-first in a real browser (DESIGN.md journeys 1 and 3; sync/SPEC.md S8, S16, S29):
+// Offline-first in a real browser (docs/product.md journeys 1 and 3; sync/SPEC.md S8, S16, S29):
 // with the network off, create and edit sketches; reopen the app while the server is still
 // unreachable and find them kept; then let the network back and see them reach the server
 // and a second signed-in browser context.

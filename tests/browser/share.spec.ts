@@ -1,4 +1,4 @@
-// Sharing from the Slate and commenting offline (DESIGN.md journey 4; sync/SPEC.md S8, S23,
+// Sharing from the Slate and commenting offline (docs/product.md journey 4; sync/SPEC.md S8, S23,
 // S34), two people at once: Ada pastes a trefoil on the Slate and shares it to the group from
 // the Slate's Share dialog (a local write that syncs); Bruno finds it in the Feed, writes a
 // comment with his browser offline (it waits on his device), goes online, and Ada reads it.
@@ -51,7 +51,7 @@ test('Ada pastes a trefoil on the Slate and shares it to the group from there', 
   await adaPage.getByRole('button', { name: 'New sketch' }).first().click();
   await adaPage.getByTestId('slate-canvas').waitFor();
   await adaPage.getByRole('button', { name: 'Paste a code' }).click();
-  // The positive trefoil's PD code (DESIGN.md conventions, from memory; feed.spec.ts uses it too).
+  // The positive trefoil's PD code (docs/conventions.md, from memory; feed.spec.ts uses it too).
   await adaPage.getByRole('textbox', { name: 'PD code' }).fill('[[1,5,2,4],[3,1,4,6],[5,3,6,2]]');
   await adaPage.getByRole('button', { name: 'Draw it' }).click();
   await adaPage.getByTestId('readout-crossings-count').getByText('3 crossings').waitFor();

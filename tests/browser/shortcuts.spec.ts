@@ -1,4 +1,4 @@
-// Keyboard shortcuts on a wide screen (DESIGN.md journey 5): g then a destination's first letter
+// Keyboard shortcuts on a wide screen (docs/product.md journey 5): g then a destination's first letter
 // switches destination, ? lists the live shortcuts, Escape closes the list, and keys typed into
 // a field stay in the field. Screenshot of the list at 1440x900 (tests/artifacts/shortcuts-*).
 import type { Browser, Page } from 'playwright-core';

@@ -1,4 +1,4 @@
-// The Slate in a real browser (DESIGN.md journeys 1 and 2): a new sketch, a trefoil drawn with
+// The Slate in a real browser (docs/product.md journeys 1 and 2): a new sketch, a trefoil drawn with
 // the mouse along a parametric curve, its Readout; a crossing flipped; a PD code pasted and
 // drawn; screenshots at phone and wide size.
 import sharp from 'sharp';
@@ -104,7 +104,7 @@ test('a trefoil drawn with the mouse shows 3 crossings; flipping one changes its
   // (The crossing count stays 3, so wait for the name before reading the settled values.)
   await page.getByText(/invariants match 3_1/).waitFor();
   await settled(page);
-  // Now alternating: one of the two trefoils, V = t + t^3 - t^4 or its mirror (DESIGN.md: the
+  // Now alternating: one of the two trefoils, V = t + t^3 - t^4 or its mirror (docs/conventions.md: the
   // closure of [1,1,1]; mirror V(t) -> V(1/t), Jones 1985).
   expect(['V(t) = t + t³ − t⁴', 'V(t) = −t⁻⁴ + t⁻³ + t⁻¹']).toContain(await jonesText(page));
   await page.getByTestId('readout-crossings-count').getByText('3 crossings').waitFor();

@@ -1,5 +1,5 @@
 // The `overstrand` command line as a user runs it: through the package bin (server/cli/bin.mjs),
-// as a child process. Values: DESIGN.md conventions (positive trefoil Jones t + t^3 - t^4, Kh
+// as a child process. Values: docs/conventions.md (positive trefoil Jones t + t^3 - t^4, Kh
 // with Z/2 at (3,7), Bar-Natan 2002, arXiv math/0201043); determinant 3 and signature -2 of the
 // positive trefoil (Lickorish, An Introduction to Knot Theory, ch. 6 and 8; from memory).
 import { spawn, spawnSync } from 'node:child_process';
@@ -117,7 +117,7 @@ describe('request answers in process', () => {
   });
 
   it('reads an empty PD code as the unknot, and "unknots" as free components', () => {
-    // <O> = 1 and <O O> = -A^2 - A^-2 (DESIGN.md conventions).
+    // <O> = 1 and <O O> = -A^2 - A^-2 (docs/conventions.md).
     expect(JSON.parse(answerLine('{"id":0,"pd":[],"compute":["components","bracket","name"]}'))).toEqual({ id: 0, components: 1, bracket: [[0, 1]], name: 'invariants match 0_1 (the unknot)' });
     expect(JSON.parse(answerLine('{"id":0,"pd":[],"unknots":2,"compute":["bracket","determinant"]}'))).toEqual({ id: 0, bracket: [[-2, -1], [2, -1]], determinant: 0 });
   });

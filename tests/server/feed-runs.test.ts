@@ -12,7 +12,7 @@ let c: Cast;
 beforeAll(async () => ({ server, c } = await castServer()));
 afterAll(() => server.stop());
 
-// Positive trefoil, DESIGN.md conventions (from memory).
+// Positive trefoil, docs/conventions.md (from memory).
 const trefoilPd: [number, number, number, number][] = [[1, 5, 2, 4], [3, 1, 4, 6], [5, 3, 6, 2]];
 
 async function insertRun(sketchId: string, status: string, finishedAt: string, result: unknown, parentRunId: string | null = null) {

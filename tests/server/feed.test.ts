@@ -11,7 +11,7 @@ let c: Cast;
 beforeAll(async () => ({ server, c } = await castServer()));
 afterAll(() => server.stop());
 
-// Positive trefoil (DESIGN.md conventions; PD from tests/server/sync-fixtures.ts, from memory)
+// Positive trefoil (docs/conventions.md; PD from tests/server/sync-fixtures.ts, from memory)
 // and the same knot with every label shifted by 10: a relabelling changes no invariant.
 const trefoil = { pd: [[1, 5, 2, 4], [3, 1, 4, 6], [5, 3, 6, 2]] as [number, number, number, number][], unknots: 0, framings: [null], strokes: [] };
 const trefoilShifted = { ...trefoil, pd: trefoil.pd.map((x) => x.map((l) => l + 10) as [number, number, number, number]) };
@@ -90,7 +90,7 @@ describe('the feed', () => {
     expect(a.owner).toEqual({ id: c.as.owner.id, displayName: c.as.owner.name });
     expect(a.commentCount).toBe(0);
     expect(a.latestRun).toBeNull();
-    // Jones of the positive trefoil: t + t^3 - t^4 (DESIGN.md conventions).
+    // Jones of the positive trefoil: t + t^3 - t^4 (docs/conventions.md).
     expect(a.invariants).toMatchObject({ crossings: 3, components: 1, jones: [[1, 1], [3, 1], [4, -1]] });
     // Figure-eight: t^-2 - t^-1 + 1 - t + t^2 (from memory; amphichiral, so symmetric in t <-> 1/t).
     expect(mine[0].invariants.jones).toEqual([[-2, 1], [-1, -1], [0, 1], [1, -1], [2, 1]]);

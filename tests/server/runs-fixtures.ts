@@ -14,7 +14,7 @@ export function torus(p: number, q: number): PD {
   return fromBraid(word).pd.map((x) => [...x] as PD[number]);
 }
 
-/** The positive trefoil, closure of sigma_1^3 (DESIGN.md conventions). */
+/** The positive trefoil, closure of sigma_1^3 (docs/conventions.md). */
 export const trefoil = (): PD => torus(2, 3);
 
 /** Takes well over the test's patience on this machine (T(7,8) over Q: about 35 s alone). */

@@ -11,7 +11,7 @@ export const sketchFields = (over: Partial<SketchFields> = {}): SketchFields => 
   seenAt: 'Topology seminar',
   notes: '',
   tags: ['knot'],
-  // The positive trefoil's PD code as written in DESIGN.md's convention (from memory).
+  // The positive trefoil's PD code as written in docs/conventions.md (from memory).
   diagram: { pd: [[1, 5, 2, 4], [3, 1, 4, 6], [5, 3, 6, 2]], unknots: 0, framings: [null], strokes: [] },
   attachments: [],
   createdAt: '2026-12-01T10:00:00.000Z',

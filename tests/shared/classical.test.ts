@@ -35,7 +35,7 @@ function colouringsByEnumeration(d: Diagram, n: number): bigint {
   return count * BigInt(n) ** BigInt(d.unknots);
 }
 
-const trefoil = fromBraid([1, 1, 1]); // positive (right-handed) trefoil, DESIGN.md conventions
+const trefoil = fromBraid([1, 1, 1]); // positive (right-handed) trefoil, docs/conventions.md
 const figureEight = fromBraid([1, -2, 1, -2]);
 const cinquefoil = fromBraid([1, 1, 1, 1, 1]); // 5_1 = T(2,5)
 const threeTwist = fromDT([4, 8, 10, 2, 6]); // 5_2 (DT code from memory; confirmed by det 7 below)

@@ -15,7 +15,7 @@ import { circleCurve, drawCurves, figureEightCurve, makeAlternating, touches, tr
 const poly = (pairs: [number, number][]) => Laurent.fromPairs(pairs);
 // Jones polynomials: Jones 1985 (Bull. AMS 12, "A polynomial invariant for knots via von
 // Neumann algebras") and the tables in Lickorish, An Introduction to Knot Theory, ch. 3;
-// the positive trefoil value is also fixed in DESIGN.md.
+// the positive trefoil value is also fixed in docs/conventions.md.
 const positiveTrefoil = poly([[1, 1], [3, 1], [4, -1]]);
 const figureEight = poly([[-2, 1], [-1, -1], [0, 1], [1, -1], [2, 1]]);
 const positiveHopf = poly([[0.5, -1], [2.5, -1]]);

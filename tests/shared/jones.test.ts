@@ -11,7 +11,7 @@ import { atOmega, determinantOf } from './roots';
 const V = (pairs: [number, number][]) => Laurent.fromPairs(pairs);
 const J = (word: number[]) => jones(fromBraid(word));
 
-// Right-handed trefoil t + t^3 - t^4 (DESIGN.md; Lickorish, An Introduction to Knot Theory, ch. 3).
+// Right-handed trefoil t + t^3 - t^4 (docs/conventions.md; Lickorish, An Introduction to Knot Theory, ch. 3).
 const trefoil = V([[1, 1], [3, 1], [4, -1]]);
 // Figure-eight t^-2 - t^-1 + 1 - t + t^2 (Lickorish, ch. 3).
 const figureEight = V([[-2, 1], [-1, -1], [0, 1], [1, -1], [2, 1]]);

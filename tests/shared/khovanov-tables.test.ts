@@ -1,5 +1,5 @@
 // Published Khovanov homology tables, checked on the fast engine and (where small) on the
-// reference cube. Gradings: Bar-Natan 2002 (DESIGN.md). Each value names its source.
+// reference cube. Gradings: Bar-Natan 2002 (docs/conventions.md). Each value names its source.
 
 import { cubeKhovanov } from '@/shared/khovanov/cube';
 import { khovanov, KhResult } from '@/shared/khovanov';
@@ -12,7 +12,7 @@ describe('published tables over Z', () => {
   it('unknot and unlink', () => {
     // Khovanov 2000 (arXiv math/9908171): Kh(unknot) = V = Z{1} + Z{-1}, disjoint union = tensor.
     expect(table(khovanov([], { ring: 'Z' }).groups)).toEqual(['0,-1:1', '0,1:1']);
-    // DESIGN.md (Bar-Natan 2002 normalisation): the reduced unknot is Z at (0,0).
+    // docs/conventions.md (Bar-Natan 2002 normalisation): the reduced unknot is Z at (0,0).
     expect(table(khovanov([], { ring: 'Z', reduced: true }).groups)).toEqual(['0,0:1']);
     expect(table(kh([1])).sort()).toEqual(['0,-1:1', '0,1:1']); // a one-crossing unknot
     expect(table(kh([1, -1]))).toEqual(['0,-2:1', '0,0:2', '0,2:1']); // V (x) V
@@ -41,7 +41,7 @@ describe('published tables over Z', () => {
   });
 
   it('trefoils', () => {
-    // DESIGN.md and Bar-Natan 2002 (arXiv math/0201043), table for 3_1.
+    // docs/conventions.md and Bar-Natan 2002 (arXiv math/0201043), table for 3_1.
     const right = ['0,1:1', '0,3:1', '2,5:1', '3,7:0+Z/2', '3,9:1'];
     expect(table(kh([1, 1, 1]))).toEqual(right);
     expect(table(cubeKhovanov(pdOf([1, 1, 1]), integers))).toEqual(right);
@@ -87,7 +87,7 @@ describe('the result record', () => {
     expect(r.ring).toBe('Z');
     expect(r.poincareText).toBe('q + q^3 + t^2 q^5 + t^3 q^9');
     expect(r.poincare).toEqual([[0, 1, 1], [0, 3, 1], [2, 5, 1], [3, 9, 1]]);
-    // Jones of the right trefoil t + t^3 - t^4 (DESIGN.md): (q + q^-1)(q^2 + q^6 - q^8).
+    // Jones of the right trefoil t + t^3 - t^4 (docs/conventions.md): (q + q^-1)(q^2 + q^6 - q^8).
     expect(r.euler).toEqual({ computed: [[1, '1'], [3, '1'], [5, '1'], [9, '-1']], expected: [[1, '1'], [3, '1'], [5, '1'], [9, '-1']], ok: true });
     // Thin: Lee 2005, "An endomorphism of the Khovanov invariant", arXiv math/0210213: Kh of an
     // alternating knot lies on the two diagonals j - 2i = -sigma +- 1; the table above (Bar-Natan

@@ -164,7 +164,7 @@ describe('bracket and Jones identities', () => {
     );
   });
 
-  it('Jones of a split union with unknots carries the loop factor (DESIGN.md)', () => {
+  it('Jones of a split union with unknots carries the loop factor (docs/conventions.md)', () => {
     const d = fromBraid([1, 1, 1], 4); // two untouched strands: two crossingless unknots
     expect(d.unknots).toBe(2);
     const loop = Laurent.fromPairs([[0.5, -1], [-0.5, -1]]);

@@ -41,7 +41,7 @@ describe('knot table', () => {
   });
 
   it('matches the published Jones polynomials of the representatives of 3_1 and 4_1', () => {
-    // DESIGN.md conventions (positive trefoil t + t^3 - t^4); figure-eight from Jones 1985.
+    // docs/conventions.md (positive trefoil t + t^3 - t^4); figure-eight from Jones 1985.
     expect(jones(entryDiagram(knotTable[0])).equals(Laurent.fromPairs([[1, 1], [3, 1], [4, -1]]))).toBe(true);
     expect(jones(entryDiagram(knotTable[1])).equals(Laurent.fromPairs([[-2, 1], [-1, -1], [0, 1], [1, -1], [2, 1]]))).toBe(true);
   });

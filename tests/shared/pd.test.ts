@@ -2,7 +2,7 @@ import { checkPlanar } from '@/shared/knot/moves/faces';
 import { orient, parsePD, relabel, writhe } from '@/shared/knot/pd';
 import { blackboardFramings, diagram, framingsOf } from '@/shared/knot/diagram';
 
-// Right-handed trefoil in the DESIGN.md conventions (checked: all signs +1).
+// Right-handed trefoil in docs/conventions.md (checked: all signs +1).
 const trefoil = [[4, 2, 5, 1], [2, 6, 3, 5], [6, 4, 1, 3]] as const;
 
 describe('PD codes', () => {

@@ -11,7 +11,7 @@ import { orient, type PDCode } from '@/shared/knot/pd';
 import { arbDiagram } from './arbitraries';
 import { scramble } from './scramble';
 
-/** Every component passes under somewhere, so any relabelling keeps the orientation (DESIGN.md). */
+/** Every component passes under somewhere, so any relabelling keeps the orientation (docs/conventions.md). */
 const allUnder = (pd: PDCode) => {
   const o = orient(pd);
   const under = new Set(pd.map((x) => o.componentOf.get(x[0])));
@@ -48,7 +48,7 @@ describe('canonicalPD', () => {
   });
 
   it('tells a chiral knot from its mirror image', () => {
-    // The trefoil is chiral: its Jones polynomial t + t^3 - t^4 is not symmetric (DESIGN.md; from memory).
+    // The trefoil is chiral: its Jones polynomial t + t^3 - t^4 is not symmetric (docs/conventions.md; from memory).
     const trefoil = fromBraid([1, 1, 1]);
     expect(canonicalPD(mirror(trefoil).pd)).not.toEqual(canonicalPD(trefoil.pd));
   });

@@ -1,7 +1,7 @@
 // Closing a braid with caps: a plat closure when the caps pair neighbouring strands, and the
 // pretzel closure when they pair each column with the next, around the back (Birman, "Braids,
 // links and mapping class groups", 1974, for plats). The Gauss code is read by walking the
-// strands; crossing types are those of the braid picture (DESIGN.md): in sigma_k the strand
+// strands; crossing types are those of the braid picture (docs/conventions.md): in sigma_k the strand
 // from bottom right to top left passes under, in its inverse the one from bottom left.
 
 import { Diagram } from '../diagram';

@@ -21,7 +21,7 @@ export function addKink(d: Diagram, label: number, kink: Kink): Diagram {
   const loop = Math.max(...d.pd.flat()) + 1;
   const out = loop + 1;
   const k = d.pd.length;
-  // The strand arrives on `label`, goes round the loop and leaves on `out` (DESIGN.md slots).
+  // The strand arrives on `label`, goes round the loop and leaves on `out` (docs/conventions.md, PD code).
   const [x, into]: [Crossing, number] = kink.overFirst
     ? kink.sign > 0 ? [[loop, loop, out, label], 3] : [[loop, label, out, loop], 1]
     : kink.sign > 0 ? [[label, out, loop, loop], 0] : [[label, loop, loop, out], 0];
