@@ -1,4 +1,4 @@
-// Two kinds of tests: pure TypeScript (shared, sync, server, CLI) in Node, and React components
+// Two kinds of tests: pure TypeScript (shared, sync, server, CLI, lint rules) in Node, and React components
 // under jest-expo. Browser tests have their own runner (tests/browser/run.mjs).
 const alias = { '^@/(.*)$': '<rootDir>/$1' };
 
@@ -9,7 +9,7 @@ module.exports = {
       displayName: 'node',
       testEnvironment: 'node',
       roots: ['<rootDir>/tests'],
-      testMatch: ['<rootDir>/tests/{shared,sync,server,cli}/**/*.test.ts'],
+      testMatch: ['<rootDir>/tests/{shared,sync,server,cli,lint}/**/*.test.ts'],
       transform: {
         '^.+\\.ts$': ['ts-jest', { tsconfig: 'server/tsconfig.json', isolatedModules: true }],
       },

@@ -39,8 +39,8 @@ export function useSlateAutosave(id: string | null) {
     pending.current = { id, doc: present };
     const t = setTimeout(flush, saveDelayMs);
     return () => clearTimeout(t);
-  }, [id, present]); // eslint-disable-line react-hooks/exhaustive-deps
+  }, [id, present]);
 
-  useEffect(() => () => flush(), []); // eslint-disable-line react-hooks/exhaustive-deps
+  useEffect(() => () => flush(), []);
   return update;
 }

@@ -18,7 +18,9 @@ export function FramingDialog({ visible, number, framing, blackboard, onClose, o
   const [text, setText] = useState('');
   const [error, setError] = useState<string | null>(null);
   useEffect(() => {
-    if (visible) (setText(framing === null ? '' : String(framing)), setError(null));
+    if (!visible) return;
+    setText(framing === null ? '' : String(framing));
+    setError(null);
   }, [visible, framing]);
   const submit = () => {
     const t = text.trim().replace('−', '-');

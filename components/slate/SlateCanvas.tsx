@@ -148,7 +148,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
       });
     return Gesture.Race(Gesture.Simultaneous(pinch, two), one, tapG);
     // The handlers read the store and refs, so one gesture object serves every render.
-  }, []); // eslint-disable-line react-hooks/exhaustive-deps
+  }, []);
 
   // Web: the wheel zooms about the pointer.
   const surface = useRef<View>(null);

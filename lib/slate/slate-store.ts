@@ -51,7 +51,7 @@ export interface SlateState {
   markFitted(request: number, view: View): void;
 }
 
-export const useSlate = create<SlateState>((set, get) => ({
+export const useSlate = create<SlateState>((set) => ({
   sketchId: null,
   history: historyOf(emptyDoc),
   opened: emptyDoc,

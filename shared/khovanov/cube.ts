@@ -27,8 +27,9 @@ export function cubeKhovanov<T>(pd: PDCode, ring: Ring<T>, marked?: number): KhG
     const find = (x: number): number => (parent[x] === x ? x : (parent[x] = find(parent[x])));
     const join = (a: number, b: number): void => void (parent[find(labelIndex.get(a)!)] = find(labelIndex.get(b)!));
     pd.forEach(([a, b, c, d], k) => {
-      if ((state >> k) & 1) [join(a, d), join(b, c)];
-      else [join(a, b), join(c, d)];
+      const one = (state >> k) & 1;
+      join(a, one ? d : b);
+      join(c, one ? b : d);
     });
     const ids = new Map<number, number>();
     const of = labels.map((_, k) => {

@@ -136,7 +136,7 @@ export class Laurent {
       return new Laurent([[checkExponent(e * n), n % 2 === 0 ? 1n : c]]);
     }
     let result: Laurent = Laurent.one;
-    let base: Laurent = this;
+    let base: Laurent = this.mul(Laurent.one);
     for (let k = n; k > 0; k >>= 1) {
       if (k & 1) result = result.mul(base);
       if (k > 1) base = base.mul(base);
