@@ -5,7 +5,6 @@
 
 import { orient, PDCode } from '../knot/pd';
 import { Ring } from '../linalg/ring';
-import { popcount } from './cobordism';
 import { TangleComplex } from './complex';
 import { Generator, homology, KhGroup } from './homology';
 import { crossingOrder } from './order';
@@ -26,7 +25,7 @@ export interface Progress {
 export interface EngineOptions {
   /** Reduced at this edge label: the edge is cut open and never closed. */
   readonly marked?: number;
-  /** Extra crossingless unknots (each doubles the complex: V = q + q^-1). */
+  /** Extra crossingless unknots, tensored on at the end (withUnknots). */
   readonly unknots?: number;
   readonly onProgress?: (p: Progress) => void;
   /** Checked between steps; aborting throws KhCancelled. */
@@ -57,12 +56,9 @@ export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
     code = pd.map((x, k) => (k === head.crossing ? (x.map((l, p) => (p === head.position ? fresh : l)) as unknown as typeof x) : x));
   }
 
+  // The empty tangle: one object, the empty matching (Kh of the empty link is R at (0,0)).
   let cx = new TangleComplex(ring, []);
-  const empty = cx.matchingId([]);
-  const unknots = options.unknots ?? 0;
-  for (let bits = 0; bits < 1 << unknots; bits++) {
-    cx.addObject({ mat: empty, shift: unknots - 2 * popcount(bits), height: 0 });
-  }
+  cx.addObject({ mat: cx.matchingId([]), shift: 0, height: 0 });
   const order = crossingOrder(code);
   order.forEach((k, step) => {
     check();
@@ -88,6 +84,41 @@ export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
       if (c !== undefined) entries.push([index.get(s)!, index.get(t)!, c]);
     }
   });
-  return homology(ring, gens, entries);
+  return withUnknots(homology(ring, gens, entries), options.unknots ?? 0);
 }
+
+/**
+ * Kh(L u k unknots) = Kh(L) (x) V^(x)k, V free on q^{+1} and q^{-1}: each group is repeated
+ * C(k, m) times at j + k - 2m (the complex of a split diagram is a tensor product and V is free,
+ * so there is no Tor term; Khovanov 2000, arXiv math/9908171, Sect. 7). RangeError when a rank
+ * or the list of torsion summands would pass what a table can hold.
+ */
+export function withUnknots(groups: readonly KhGroup[], k: number): KhGroup[] {
+  if (!Number.isSafeInteger(k) || k < 0) throw new RangeError(`the number of unknots must be a non-negative integer, got ${k}`);
+  if (k === 0) return [...groups];
+  const binomial = [1];
+  for (let m = 1; m <= k; m++) {
+    const product = binomial[m - 1] * (k - m + 1);
+    if (!Number.isSafeInteger(product)) throw new RangeError(`${k} unknots: the binomial coefficients pass 2^53`);
+    binomial.push(product / m);
+  }
+  const at = new Map<string, { i: number; j: number; free: number; torsion: number[] }>();
+  for (const g of groups) {
+    binomial.forEach((c, m) => {
+      const i = g.i;
+      const j = g.j + k - 2 * m;
+      const cell = at.get(`${i},${j}`) ?? { i, j, free: 0, torsion: [] };
+      at.set(`${i},${j}`, cell);
+      cell.free += c * g.free;
+      if (!Number.isSafeInteger(cell.free)) throw new RangeError(`${k} unknots: a rank passes 2^53`);
+      if (g.torsion.length === 0) return;
+      if (cell.torsion.length + c * g.torsion.length > MAX_TORSION) throw new RangeError(`${k} unknots: more than ${MAX_TORSION} torsion summands in one group`);
+      for (let n = 0; n < c; n++) cell.torsion.push(...g.torsion);
+    });
+  }
+  return [...at.values()].map((g) => ({ ...g, torsion: g.torsion.sort((a, b) => a - b) })).sort((a, b) => a.i - b.i || a.j - b.j);
+}
+
+/** Torsion summands listed one by one in a group; beyond this a table is not readable anyway. */
+const MAX_TORSION = 100_000;
 

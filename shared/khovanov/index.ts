@@ -65,7 +65,8 @@ export function parseRing(ring: KhRing): { name: string; ring: Ring<unknown> } {
  * Bar-Natan's local algorithm. Degenerate inputs: the empty code is the unknot unless
  * `unknots` says otherwise (unknots: 0 gives the empty link, Z at (0,0)); kinks (a label twice
  * in one crossing) and split diagrams are fine. RangeError for an unknown ring, a missing
- * component, or a diagram whose open boundary would pass 60 points in the crossing order.
+ * component, a diagram whose open boundary would pass 60 points in the crossing order, or so
+ * many unknots that a rank passes 2^53.
  * KhCancelled when `signal.aborted` becomes true.
  */
 export function khovanov(pd: PDCode, options: KhOptions): KhResult {

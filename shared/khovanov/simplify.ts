@@ -1,7 +1,10 @@
 // Gaussian elimination in an additive category (Bar-Natan, math/0606318, Lemma 4.2): an
 // isomorphism phi: b1 -> b2 inside the differential is cancelled, and every s -> b2 -> ... ->
 // b1 -> t path adds -gamma phi^-1 delta to d(s -> t). An isomorphism between matchings is a
-// unit multiple of the identity cobordism (same matching, same shift, undotted).
+// unit multiple of the identity cobordism (same matching, same shift, undotted). Cancellations
+// go cheapest first, by the Markowitz count (|in(b2)| - 1)(|out(b1)| - 1) of entries they may
+// create, as in sparse LU (Markowitz 1957): the fill-in, not the count of cancellations, is
+// what costs time and memory.
 
 import { TangleComplex } from './complex';
 
@@ -9,29 +12,35 @@ function unitIdentity<T>(cx: TangleComplex<T>, s: number, t: number): T | undefi
   const a = cx.objs[s];
   const b = cx.objs[t];
   if (a.mat !== b.mat || a.shift !== b.shift) return undefined;
-  const m = cx.out[s].get(t)!;
+  const m = cx.out[s].get(t);
+  if (!m) return undefined;
   const c = m.get(0);
   return m.size === 1 && c !== undefined && cx.ring.isUnit(c) ? c : undefined;
 }
+
+const markowitz = <T>(cx: TangleComplex<T>, b1: number, b2: number): number => (cx.inn[b2].size - 1) * (cx.out[b1].size - 1);
 
 /** Cancels isomorphisms until none is left; `check` runs between cancellations (for abort). */
 export function simplify<T>(cx: TangleComplex<T>, check: () => void): void {
   const { ring } = cx;
   for (let changed = true; changed; ) {
     changed = false;
+    const candidates: [number, number, number][] = [];
     for (let b1 = 0; b1 < cx.objs.length; b1++) {
       if (!cx.alive[b1]) continue;
-      let b2 = -1;
-      let phi: T | undefined;
-      // Prefer the cancellation that touches the fewest other entries.
-      let cost = Infinity;
-      for (const t of cx.out[b1].keys()) {
-        const c = unitIdentity(cx, b1, t);
-        const k = c === undefined ? Infinity : cx.inn[t].size;
-        if (k < cost) [b2, phi, cost] = [t, c, k];
+      for (const t of cx.out[b1].keys()) if (unitIdentity(cx, b1, t) !== undefined) candidates.push([markowitz(cx, b1, t), b1, t]);
+    }
+    candidates.sort((x, y) => x[0] - y[0]);
+    for (const [cost, b1, b2] of candidates) {
+      if (!cx.alive[b1] || !cx.alive[b2]) continue;
+      const phi = unitIdentity(cx, b1, b2);
+      if (phi === undefined) continue;
+      // Earlier cancellations changed the counts: a pair grown dearer waits for the next pass.
+      if (markowitz(cx, b1, b2) > 2 * cost + 8) {
+        changed = true;
+        continue;
       }
-      if (b2 < 0) continue;
-      cancel(cx, b1, b2, ring.neg(ring.inv(phi!)));
+      cancel(cx, b1, b2, ring.neg(ring.inv(phi)));
       changed = true;
       check();
     }

@@ -35,6 +35,27 @@ describe('published tables over Z', () => {
     expect(khovanov(trefoil, { ring: 'Z', unknots: 1 }).euler?.ok).toBe(true);
   });
 
+  it('split unknots as kinks through the complex = unknots tensored on at the end (Reidemeister I: a kink is an unknot)', () => {
+    // Trefoil [[1,5,2,4],[3,1,4,6],[5,3,6,2]] and two split one-crossing kinks on fresh labels.
+    const trefoil = pdOf([1, 1, 1]);
+    const kinks = [[7, 7, 8, 8], [9, 10, 10, 9]] as const;
+    for (const ring of ['Z', 'F2'] as const) {
+      expect(table(khovanov([...trefoil, ...kinks], { ring }))).toEqual(table(khovanov(trefoil, { ring, unknots: 2 })));
+    }
+    expect(table(khovanov([...trefoil, ...kinks], { ring: 'Z' }))).toEqual(table(cubeKhovanov([...trefoil, ...kinks], integers)));
+  });
+
+  it('many unknots: ranks C(k, m) at j = k - 2m, exactly; refused where a rank passes 2^53; the empty link is Z at (0,0)', () => {
+    // V^(x)40 (Khovanov 2000, arXiv math/9908171), ranks by the binomial theorem (common practice).
+    const groups = khovanov([], { ring: 'Z', unknots: 40 }).groups;
+    expect(groups).toHaveLength(41);
+    expect(groups[20]).toEqual({ i: 0, j: 0, free: 137846528820, torsion: [] }); // C(40, 20)
+    expect(groups.reduce((s, g) => s + g.free, 0)).toBe(2 ** 40);
+    expect(() => khovanov([], { ring: 'Z', unknots: 70 })).toThrow(RangeError);
+    // Khovanov 2000: Kh of the empty link is Z in degree (0,0) by definition.
+    expect(table(khovanov([], { ring: 'Z', unknots: 0 }))).toEqual(['0,0:1']);
+  });
+
   it('positive Hopf link', () => {
     // Bar-Natan 2002 (arXiv math/0201043), the Hopf link with positive crossings (from memory).
     expect(table(kh([1, 1]))).toEqual(['0,0:1', '0,2:1', '2,4:1', '2,6:1']);
