@@ -7,7 +7,6 @@ import type { LocalMessage, LocalRequest } from './local-kh';
 let worker: Worker | null = null;
 
 export function warmUpLocal(): void {
-  // @ts-expect-error import.meta is rewritten by Metro's worker transform
   worker ??= new Worker(new URL('./kh.worker', import.meta.url));
 }
 
