@@ -2,7 +2,7 @@
 // validated with zod, answered as a plain JSON object. Shared by `batch` (one per line) and
 // `invariants --json`, so both speak the contract of issue 3 exactly.
 import { z } from 'zod';
-import { Diagram, diagram, fromBraid, fromDT, Laurent, orient, writhe } from '@/shared/knot';
+import { cable, Diagram, diagram, fromBraid, fromDT, Laurent, orient, writhe } from '@/shared/knot';
 import { alexander } from '@/shared/knot/alexander';
 import { bracket } from '@/shared/knot/bracket';
 import { colourings } from '@/shared/knot/colourings';
@@ -25,21 +25,39 @@ export const computable = [
   'colourings',
   'name',
   'kh',
+  'pd',
 ] as const;
 export type Computable = (typeof computable)[number];
 
-/** What is computed when a request names nothing: everything but the heavy Khovanov homology. */
-export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh');
+/** What is computed when a request names nothing: everything but the heavy Khovanov homology and the PD code itself. */
+export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh' && c !== 'pd');
 
 const label = z.number().int();
+const code = {
+  pd: z.array(z.tuple([label, label, label, label])).optional(),
+  braid: z.array(z.number().int().refine((k) => k !== 0, 'braid letters are nonzero integers')).optional(),
+  dt: z.array(z.number().int()).optional(),
+  /** Crossingless unknot components beside the code (default 0; for an empty PD code 1). */
+  unknots: z.number().int().min(0).optional(),
+};
+const oneCode = (keys: string[]) => (r: Record<string, unknown>) => keys.filter((k) => r[k] !== undefined).length === 1;
+
+/** The diagram a cable is taken of: a code, with a framing per component (null = blackboard). */
+const CableOf = z
+  .object({ ...code, framings: z.array(z.number().int().nullable()).optional() })
+  .strict()
+  .refine(oneCode(['pd', 'braid', 'dt']), { message: 'give exactly one of "pd", "braid" or "dt"' });
+type CableOf = z.infer<typeof CableOf>;
+
 export const Request = z
   .object({
     id: z.unknown().optional(),
-    pd: z.array(z.tuple([label, label, label, label])).optional(),
-    braid: z.array(z.number().int().refine((k) => k !== 0, 'braid letters are nonzero integers')).optional(),
-    dt: z.array(z.number().int()).optional(),
-    /** Crossingless unknot components beside the code (default 0; for an empty PD code 1). */
-    unknots: z.number().int().min(0).optional(),
+    ...code,
+    /** Instead of a code: the (rPlus, rMinus)-cable of one component of a framed diagram. */
+    cable: z
+      .object({ of: CableOf, component: z.number().int().min(0).optional(), rPlus: z.number().int().min(0), rMinus: z.number().int().min(0) })
+      .strict()
+      .optional(),
     compute: z.array(z.enum(computable)).optional(),
     /** For "kh": 'Z', 'Q' or 'F<p>'. */
     ring: z.string().regex(/^(Z|Q|F\d+)$/, "ring must be 'Z', 'Q' or 'F<p>' (e.g. 'F2')").optional(),
@@ -48,9 +66,7 @@ export const Request = z
     n: z.number().int().min(2).optional(),
   })
   .strict()
-  .refine((r) => [r.pd, r.braid, r.dt].filter((x) => x !== undefined).length === 1, {
-    message: 'give exactly one of "pd", "braid" or "dt"',
-  });
+  .refine(oneCode(['pd', 'braid', 'dt', 'cable']), { message: 'give exactly one of "pd", "braid", "dt" or "cable"' });
 export type Request = z.infer<typeof Request>;
 
 export type Answer = Record<string, unknown>;
@@ -58,11 +74,16 @@ export type Answer = Record<string, unknown>;
 /** Numbers stay numbers while they are safe integers; beyond 2^53 they travel as decimal strings. */
 export const jsonInteger = (x: bigint): number | string => (Number.isSafeInteger(Number(x)) ? Number(x) : x.toString());
 
-/** An empty PD code alone is the unknot (as for khovanov()); "unknots" adds free components to a braid or DT code. */
-export function diagramOf(r: Request): Diagram {
-  if (r.pd) return diagram(r.pd, { unknots: r.unknots ?? (r.pd.length === 0 ? 1 : 0) });
+/**
+ * An empty PD code alone is the unknot (as for khovanov()); "unknots" adds free components to a
+ * braid or DT code. A cable is built by the knot core's cable builder.
+ */
+export function diagramOf(r: Request | CableOf): Diagram {
+  if ('cable' in r && r.cable) return cable(diagramOf(r.cable.of), r.cable.component ?? 0, r.cable.rPlus, r.cable.rMinus);
+  const framings = 'framings' in r ? r.framings : undefined;
+  if (r.pd) return diagram(r.pd, { unknots: r.unknots ?? (r.pd.length === 0 ? 1 : 0), framings });
   const base = r.braid ? fromBraid(r.braid) : fromDT(r.dt!);
-  return r.unknots ? diagram(base.pd, { unknots: base.unknots + r.unknots }) : base;
+  return r.unknots || framings ? diagram(base.pd, { unknots: base.unknots + (r.unknots ?? 0), framings }) : base;
 }
 
 /** Computes what the request asks; throws (PDError, RangeError, ...) when it cannot. */
@@ -73,6 +94,8 @@ export function answer(r: Request): Answer {
   const out: Answer = {};
   let kauffman: Laurent | undefined;
   const bracketOnce = () => (kauffman ??= bracket(d));
+  // With "unknots" the answer reads back as a request for the same diagram.
+  if (wanted.has('pd')) [out.pd, out.unknots] = [d.pd, d.unknots];
   if (wanted.has('crossings')) out.crossings = d.pd.length;
   if (wanted.has('components')) out.components = o.components.length + d.unknots;
   if (wanted.has('writhe')) out.writhe = writhe(o);

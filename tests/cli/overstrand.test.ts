@@ -76,7 +76,7 @@ describe('overstrand batch', () => {
     expect(out[4].id).toBe(4);
     expect(out[4].error).toMatch(/compute/);
     expect(out[5].kh.groups).toContainEqual({ i: 3, j: 7, free: 0, torsion: [2] });
-    expect(out[6].error).toMatch(/exactly one of "pd", "braid" or "dt"/);
+    expect(out[6].error).toMatch(/exactly one of "pd", "braid", "dt" or "cable"/);
   });
 
   it('streams: an answer comes out before stdin is closed', async () => {
@@ -120,5 +120,30 @@ describe('request answers in process', () => {
     // <O> = 1 and <O O> = -A^2 - A^-2 (docs/conventions.md).
     expect(JSON.parse(answerLine('{"id":0,"pd":[],"compute":["components","bracket","name"]}'))).toEqual({ id: 0, components: 1, bracket: [[0, 1]], name: 'invariants match 0_1 (the unknot)' });
     expect(JSON.parse(answerLine('{"id":0,"pd":[],"unknots":2,"compute":["bracket","determinant"]}'))).toEqual({ id: 0, bracket: [[-2, -1], [2, -1]], determinant: 0 });
+  });
+});
+
+describe('cables in requests', () => {
+  const ask = (request: object) => JSON.parse(answerLine(JSON.stringify({ id: 0, ...request })));
+
+  it('the (3,0)-cable of the +1-framed unknot is T(3,3): same Khovanov homology as the closure of (s1 s2)^3 (common practice)', () => {
+    const c = ask({ cable: { of: { pd: [], framings: [1] }, rPlus: 3, rMinus: 0 }, compute: ['pd', 'crossings', 'components', 'kh'], ring: 'Z' });
+    expect(c.crossings).toBe(6); // one full twist of 3 strands
+    expect(c.components).toBe(3);
+    expect(c.pd).toHaveLength(6);
+    expect(c.kh).toEqual(ask({ braid: [1, 2, 1, 2, 1, 2], compute: ['kh'], ring: 'Z' }).kh);
+  });
+
+  it('returns the cable PD code, which reads back as the same diagram', () => {
+    // The 0-framed right trefoil: its (2,1)-cable has 9 * 3 grid crossings and 3 full negative twists of 3 strands.
+    const c = ask({ cable: { of: { braid: [1, 1, 1], framings: [0] }, component: 0, rPlus: 2, rMinus: 1 }, compute: ['pd', 'crossings', 'jones'] });
+    expect(c.crossings).toBe(27 + 18);
+    expect(ask({ pd: c.pd, unknots: c.unknots, compute: ['jones'] }).jones).toEqual(c.jones);
+  });
+
+  it('refuses a cable beside a code, a missing component and bad framings', () => {
+    expect(ask({ braid: [1], cable: { of: { braid: [1, 1, 1] }, rPlus: 1, rMinus: 0 } }).error).toMatch(/exactly one of/);
+    expect(ask({ cable: { of: { braid: [1, 1, 1] }, component: 3, rPlus: 1, rMinus: 0 } }).error).toMatch(/no component 4/);
+    expect(ask({ cable: { of: { braid: [1, 1, 1], framings: [0, 1] }, rPlus: 2, rMinus: 0 } }).error).toMatch(/2 framings given for 1 component/);
   });
 });
