@@ -33,6 +33,21 @@ export function cycles(bottom: Matching, top: Matching): Cycles {
   return { of, count };
 }
 
+/**
+ * The Frobenius algebra's rules for glued surfaces. `capDots[k]` counts the caps on piece k that
+ * carry the delooping's dual dot: x when x^2 = 0 (here), x - H in the deformed theory
+ * (shared/rasmussen/). Coefficients are integers; a theory with a grading variable leaves its
+ * power implicit, as the grading fixes it.
+ */
+export interface Theory {
+  reduce(pieces: readonly Piece[], dots: readonly number[], capDots?: readonly number[]): [number, number][];
+}
+
+/** Khovanov's theory: x^2 = 0, so a dual dot is a dot. */
+export const khovanovTheory: Theory = {
+  reduce: (pieces, dots, capDots) => reduce(pieces, capDots ? dots.map((d, k) => d + capDots[k]) : dots),
+};
+
 /** A connected glued surface: its genus and the result cycles on its boundary (a mask). */
 export interface Piece {
   readonly genus: number;
@@ -103,11 +118,11 @@ export interface Composition {
 }
 
 /** The composite of the discs with dot masks m1 (on P u Q) and m2 (on Q u R), reduced. */
-export function composite(c: Composition, m1: number, m2: number): [number, number][] {
+export function composite(c: Composition, m1: number, m2: number, theory: Theory = khovanovTheory): [number, number][] {
   const key = m1 * (1 << c.compQR.length) + m2;
   let terms = c.memo[key];
   if (!terms) {
-    terms = reduce(c.pieces, dotsOf(c.pieces.length, [c.compPQ, c.compQR], [m1, m2]));
+    terms = theory.reduce(c.pieces, dotsOf(c.pieces.length, [c.compPQ, c.compQR], [m1, m2]));
     c.memo[key] = terms;
   }
   return terms;

@@ -3,7 +3,7 @@
 // cobordisms (cobordism.ts). Bar-Natan, "Fast Khovanov homology computations", math/0606318.
 
 import { Ring } from '../linalg/ring';
-import { composite, composition, Composition, Matching } from './cobordism';
+import { composite, composition, Composition, khovanovTheory, Matching, Theory } from './cobordism';
 import { Mor } from './mor';
 
 export interface Obj {
@@ -27,7 +27,11 @@ export class TangleComplex<T> {
   live = 0;
 
   /** `boundary` lists the labels of the open ends; matchings are on their positions. */
-  constructor(readonly ring: Ring<T>, readonly boundary: readonly number[]) {}
+  constructor(
+    readonly ring: Ring<T>,
+    readonly boundary: readonly number[],
+    readonly theory: Theory = khovanovTheory,
+  ) {}
 
   matchingId(m: Matching): number {
     const key = m.join(',');
@@ -94,7 +98,7 @@ export class TangleComplex<T> {
     x.forEach((c1, m1) => {
       y.forEach((c2, m2) => {
         const c12 = ring.mul(factor, ring.mul(c1, c2));
-        const terms = composite(comp!, m1, m2);
+        const terms = composite(comp!, m1, m2, this.theory);
         for (let n = 0; n < terms.length; n++) {
           const [mask, k] = terms[n];
           this.addTerm(a, c, mask, k === 1 ? c12 : ring.mul(ring.fromInt(k), c12));

@@ -5,6 +5,7 @@
 
 import { orient, PDCode } from '../knot/pd';
 import { Ring } from '../linalg/ring';
+import { khovanovTheory, Theory } from './cobordism';
 import { TangleComplex } from './complex';
 import { Generator, homology, KhGroup } from './homology';
 import { crossingOrder } from './order';
@@ -39,7 +40,19 @@ export class KhCancelled extends Error {
   }
 }
 
-export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOptions = {}): KhGroup[] {
+/**
+ * The complex after the last crossing, closed up (one open arc when reduced), and the crossing
+ * counts that shift its gradings. Extra unknots (options.unknots) are not in it: the caller
+ * tensors them on.
+ */
+export interface LocalComplex<T> {
+  readonly cx: TangleComplex<T>;
+  readonly nPlus: number;
+  readonly nMinus: number;
+}
+
+/** Bar-Natan's local algorithm in a theory (Khovanov's by default); fastKhovanov reads homology off its result. */
+export function localComplex<T>(pd: PDCode, ring: Ring<T>, options: EngineOptions = {}, theory: Theory = khovanovTheory): LocalComplex<T> {
   const o = orient(pd);
   const nPlus = o.signs.filter((s) => s > 0).length;
   const nMinus = pd.length - nPlus;
@@ -57,7 +70,7 @@ export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
   }
 
   // The empty tangle: one object, the empty matching (Kh of the empty link is R at (0,0)).
-  let cx = new TangleComplex(ring, []);
+  let cx = new TangleComplex(ring, [], theory);
   cx.addObject({ mat: cx.matchingId([]), shift: 0, height: 0 });
   const order = crossingOrder(code);
   order.forEach((k, step) => {
@@ -66,10 +79,14 @@ export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
     simplify(cx, check);
     options.onProgress?.({ merged: step + 1, total: order.length, fraction: (step + 1) / order.length, objects: cx.live, entries: cx.entries(), boundary: cx.boundary.length });
   });
+  if (cx.boundary.length !== (options.marked === undefined ? 0 : 2)) throw new Error(`internal: ${cx.boundary.length} open ends after the last crossing`);
+  return { cx, nPlus, nMinus };
+}
 
+export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOptions = {}): KhGroup[] {
+  const { cx, nPlus, nMinus } = localComplex(pd, ring, options);
   // Closed up (or one open arc when reduced): objects are free modules of rank one; the
   // reduced quotient by x keeps the undotted coefficient.
-  if (cx.boundary.length !== (options.marked === undefined ? 0 : 2)) throw new Error(`internal: ${cx.boundary.length} open ends after the last crossing`);
   const gens: Generator[] = [];
   const index = new Map<number, number>();
   cx.objs.forEach((obj, k) => {

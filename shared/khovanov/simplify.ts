@@ -47,9 +47,10 @@ export function simplify<T>(cx: TangleComplex<T>, check: () => void): void {
   }
 }
 
+// d(b1 -> b2) = -1/minusInverse; also used over k[H] on entries c H^m (shared/rasmussen/).
 // The loops run over inn[b2] and out[b1] while adding s -> t terms: those touch out[s] and
 // inn[t] only, never these two (s is not b1 and t is not b2), so no copies are needed.
-function cancel<T>(cx: TangleComplex<T>, b1: number, b2: number, minusInverse: T): void {
+export function cancel<T>(cx: TangleComplex<T>, b1: number, b2: number, minusInverse: T): void {
   const gammas = cx.out[b1];
   for (const s of cx.inn[b2]) {
     if (s === b1) continue;

@@ -3,7 +3,7 @@
 // followed by delooping (a closed circle is isomorphic to the empty set shifted by +1 and -1).
 
 import { Crossing } from '../knot/pd';
-import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, reduce } from './cobordism';
+import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, Theory } from './cobordism';
 import { TangleComplex } from './complex';
 import { Mor } from './mor';
 
@@ -52,7 +52,7 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
   const freeSlots = labelOf.map((_, slot) => slot).filter((slot) => join[slot] < 0);
   const newPos = new Array<number>(labelOf.length).fill(-1);
   freeSlots.forEach((slot, k) => (newPos[slot] = k));
-  const cx = new TangleComplex(ring, freeSlots.map((slot) => labelOf[slot]));
+  const cx = new TangleComplex(ring, freeSlots.map((slot) => labelOf[slot]), old.theory);
 
   const sides = new Map<number, Side>();
   const side = (mat: number, s: number): Side => {
@@ -137,7 +137,8 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
     return result;
   };
 
-  // New objects: loop bit 1 = the {-1} summand (x), bit 0 = the {+1} summand (1).
+  // New objects: loop bit 1 = the {-1} summand (x), bit 0 = the {+1} summand (1); the caps
+  // onto the {+1} summand carry the theory's dual dot.
   // ids[k][s] = the new objects of old object k with smoothing s (k alive).
   const ids: number[][][] = new Array(old.objs.length);
   old.objs.forEach((o, k) => {
@@ -158,7 +159,7 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
       const sc = ring.mul(sign, c);
       for (let sigma = 0; sigma < from.length; sigma++) {
         for (let tau = 0; tau < to.length; tau++) {
-          const terms = surface(g, mask, sigma, tau);
+          const terms = surface(old.theory, g, mask, sigma, tau);
           for (let n = 0; n < terms.length; n++) {
             const [m, k] = terms[n];
             cx.addTerm(from[sigma], to[tau], m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
@@ -184,14 +185,15 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
 }
 
 // The glued surface with dots `mask` on the old discs, capped as the summands say, reduced.
-function surface(g: Gluing, mask: number, sigma: number, tau: number): [number, number][] {
+function surface(theory: Theory, g: Gluing, mask: number, sigma: number, tau: number): [number, number][] {
   const key = (mask * (1 << g.bottomLoops.length) + sigma) * (1 << g.topLoops.length) + tau;
   let terms = g.memo[key];
   if (!terms) {
     const dots = dotsOf(g.pieces.length, [g.compPQ], [mask]);
     g.bottomLoops.forEach((piece, l) => (dots[piece] += (sigma >> l) & 1));
-    g.topLoops.forEach((piece, l) => (dots[piece] += 1 - ((tau >> l) & 1)));
-    terms = reduce(g.pieces, dots);
+    const capDots = new Array<number>(g.pieces.length).fill(0);
+    g.topLoops.forEach((piece, l) => (capDots[piece] += 1 - ((tau >> l) & 1)));
+    terms = theory.reduce(g.pieces, dots, capDots);
     g.memo[key] = terms;
   }
   return terms;
