@@ -11,6 +11,7 @@ import { jonesFromBracket } from '@/shared/knot/jones';
 import { linkingMatrix } from '@/shared/knot/linking';
 import { guessName } from '@/shared/knot/names';
 import { khovanov, KhRing } from '@/shared/khovanov';
+import { rasmussenS } from '@/shared/rasmussen';
 
 export const computable = [
   'components',
@@ -26,11 +27,12 @@ export const computable = [
   'name',
   'kh',
   'pd',
+  's',
 ] as const;
 export type Computable = (typeof computable)[number];
 
-/** What is computed when a request names nothing: everything but the heavy Khovanov homology and the PD code itself. */
-export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh' && c !== 'pd');
+/** What is computed when a request names nothing: everything but the heavy Khovanov homology and s, and the PD code itself. */
+export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh' && c !== 's' && c !== 'pd');
 
 const label = z.number().int();
 const code = {
@@ -118,6 +120,8 @@ export function answer(r: Request): Answer {
     const kh = khovanov(d.pd, { ring: (r.ring ?? 'Z') as KhRing, reduced: r.reduced ?? false, unknots: d.unknots });
     out.kh = { ring: kh.ring, reduced: kh.reduced, groups: kh.groups.map(({ i, j, free, torsion }) => ({ i, j, free, torsion })) };
   }
+  // A link of several components throws "s is defined for knots here" (an {id, error} line).
+  if (wanted.has('s')) out.s = { Q: rasmussenS(d.pd, 'Q', { unknots: d.unknots }), F2: rasmussenS(d.pd, 'F2', { unknots: d.unknots }) };
   return out;
 }
 

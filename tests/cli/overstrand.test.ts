@@ -116,6 +116,15 @@ describe('request answers in process', () => {
     expect(all.determinant).toBe(0); // split link (unknot + unknot): det 0 (common practice)
   });
 
+  it('answers "s" over Q and F2 for a knot, and an {id, error} line for a link', () => {
+    // s(T(3,4)) = 6 and s of the negative trefoil = -2 (Rasmussen 2010, arXiv math/0402131; docs/conventions.md signs).
+    expect(JSON.parse(answerLine('{"id":7,"braid":[1,2,1,2,1,2,1,2],"compute":["s"]}'))).toEqual({ id: 7, s: { Q: 6, F2: 6 } });
+    expect(JSON.parse(answerLine('{"id":8,"braid":[-1,-1,-1],"compute":["s","signature"]}'))).toEqual({ id: 8, s: { Q: -2, F2: -2 }, signature: 2 });
+    expect(JSON.parse(answerLine('{"id":0,"pd":[],"compute":["s"]}'))).toEqual({ id: 0, s: { Q: 0, F2: 0 } });
+    expect(JSON.parse(answerLine('{"id":9,"braid":[1,1],"compute":["s"]}'))).toEqual({ id: 9, error: 's is defined for knots here; this link has 2 components' });
+    expect(JSON.parse(answerLine('{"id":9,"braid":[1,1,1]}')).s).toBeUndefined();
+  });
+
   it('reads an empty PD code as the unknot, and "unknots" as free components', () => {
     // <O> = 1 and <O O> = -A^2 - A^-2 (docs/conventions.md).
     expect(JSON.parse(answerLine('{"id":0,"pd":[],"compute":["components","bracket","name"]}'))).toEqual({ id: 0, components: 1, bracket: [[0, 1]], name: 'invariants match 0_1 (the unknot)' });
