@@ -28,7 +28,7 @@ export default tseslint.config(
   },
   {
     files: ['server/web/service-worker.js'],
-    languageOptions: { globals: { ...globals.serviceworker } },
+    languageOptions: { globals: { ...globals.serviceworker, __PRECACHE_MANIFEST__: 'readonly' } },
   },
   {
     files: appFolders.map((f) => `${f}/**/*.{ts,tsx}`),

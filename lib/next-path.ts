@@ -1,15 +1,18 @@
+import type { Href } from 'expo-router';
+
 /**
  * Where to go after signing in: the `next` query parameter when it is a path inside this app,
  * else the sketchbook. Anything else (another origin, "//host") is ignored, so a crafted
  * sign-in link cannot send people away.
  */
-export function nextPath(next: string | string[] | undefined): string {
+export function nextPath(next: string | string[] | undefined): Href {
   const value = Array.isArray(next) ? next[0] : next;
-  return value && value.startsWith('/') && !value.startsWith('//') ? value : '/sketches';
+  // A checked path of this app: the router resolves it (or shows its not-found page).
+  return value && value.startsWith('/') && !value.startsWith('//') ? (value as Href) : '/sketches';
 }
 
-export function withNext(path: string, next: string | undefined): string {
-  return next ? `${path}?next=${encodeURIComponent(next)}` : path;
+export function withNext(pathname: '/sign-in' | '/sign-up', next: string | undefined): Href {
+  return next ? { pathname, params: { next } } : pathname;
 }
 
 /**

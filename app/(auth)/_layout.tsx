@@ -9,6 +9,6 @@ export default function AuthLayout() {
   const { next } = useGlobalSearchParams<{ next?: string }>();
   const segments = useSegments();
   const signingOut = segments[segments.length - 1] === 'sign-out';
-  if (status === 'signedIn' && !signingOut) return <Redirect href={nextPath(next) as never} />;
+  if (status === 'signedIn' && !signingOut) return <Redirect href={nextPath(next)} />;
   return <Slot />;
 }

@@ -9,7 +9,7 @@ export default function SignInScreen() {
   return (
     <AuthFrame title="Sign in" lead="Your sketchbook works offline; signing in lets it sync with your group.">
       <SignInForm defaultEmail={email ?? ''} />
-      <SwitchLink prompt="New to Overstrand?" label="Create an account" href={withNext('/sign-up', next) as never} />
+      <SwitchLink prompt="New to Overstrand?" label="Create an account" href={withNext('/sign-up', next)} />
     </AuthFrame>
   );
 }

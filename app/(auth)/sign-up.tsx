@@ -9,7 +9,7 @@ export default function SignUpScreen() {
   return (
     <AuthFrame title="Create your account" lead="Sketch links anywhere; share them with your seminar group when you are back online.">
       <SignUpForm defaultEmail={email ?? ''} />
-      <SwitchLink prompt="Already have an account?" label="Sign in" href={withNext('/sign-in', next) as never} />
+      <SwitchLink prompt="Already have an account?" label="Sign in" href={withNext('/sign-in', next)} />
     </AuthFrame>
   );
 }

@@ -18,7 +18,7 @@ export default function TabsLayout() {
   const wide = useIsWide();
 
   if (status === 'loading') return <View style={{ flex: 1, backgroundColor: colors.paper }} />;
-  if (status === 'signedOut') return <Redirect href={withNext('/sign-in', visitedPath(pathname)) as never} />;
+  if (status === 'signedOut') return <Redirect href={withNext('/sign-in', visitedPath(pathname))} />;
   return (
     <>
       <Tabs

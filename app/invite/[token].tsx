@@ -35,7 +35,7 @@ function Offer({ token, invitation }: { token: string; invitation: InvitationPre
   const session = useSession();
   const accept = useAcceptInvitation(token);
   const here = `/invite/${token}`;
-  const authLink = (path: string) => `${path}?next=${encodeURIComponent(here)}&email=${encodeURIComponent(invitation.email)}`;
+  const authLink = (pathname: '/sign-in' | '/sign-up') => ({ pathname, params: { next: here, email: invitation.email } });
 
   const closed = invitation.status !== 'pending';
   return (
@@ -72,8 +72,8 @@ function Offer({ token, invitation }: { token: string; invitation: InvitationPre
         </View>
       ) : (
         <View style={styles.actions}>
-          <Button label="Create an account to join" onPress={() => router.push(authLink('/sign-up') as never)} />
-          <Button variant="secondary" label="I have an account: sign in" onPress={() => router.push(authLink('/sign-in') as never)} />
+          <Button label="Create an account to join" onPress={() => router.push(authLink('/sign-up'))} />
+          <Button variant="secondary" label="I have an account: sign in" onPress={() => router.push(authLink('/sign-in'))} />
         </View>
       )}
     </AuthFrame>

@@ -1,7 +1,7 @@
 // My notifications, newest first (tap one to open what it is about; it is then read), and
 // which kinds also come by e-mail.
 import { Pressable, StyleSheet, Switch, Text, View } from 'react-native';
-import { useRouter } from 'expo-router';
+import { useRouter, type Href } from 'expo-router';
 import { notificationKinds, type Notification, type NotificationKind } from '@/shared/api/notifications';
 import { useMarkRead, useNotifications, useSaveSettings, useSettings } from '@/hooks/queries/useNotifications';
 import { formatComment } from '@/lib/comment-format';
@@ -22,7 +22,7 @@ const kindLabels: Record<NotificationKind, string> = {
 /** The comment's words without its formatting markers. */
 const plain = (body: string) => formatComment(body).map((s) => s.text).join('');
 
-function describe(n: Notification): { text: string; href: string } {
+function describe(n: Notification): { text: string; href: Href } {
   switch (n.kind) {
     case 'comment':
       return { text: `${n.payload.author} commented on “${n.payload.sketchTitle || 'Untitled sketch'}”: ${plain(n.payload.excerpt)}`, href: `/feed/${n.payload.groupId}/${n.payload.sketchId}` };
@@ -49,7 +49,7 @@ export function NotificationsPage({ onBack }: { onBack?: () => void }) {
           {list.data?.items.map((n) => {
             const d = describe(n);
             return (
-              <Pressable key={n.id} role="link" onPress={() => { if (!n.readAt) read.mutate(n.id); router.push(d.href as never); }}
+              <Pressable key={n.id} role="link" onPress={() => { if (!n.readAt) read.mutate(n.id); router.push(d.href); }}
                 style={[styles.item, !n.readAt && styles.unread]} testID={`notification-${n.kind}`}>
                 {!n.readAt ? <View style={styles.dot} aria-label="unread" /> : null}
                 <View style={styles.itemBody}>

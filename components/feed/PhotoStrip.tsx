@@ -44,7 +44,7 @@ export function PhotoStrip({ groupId, sketchId, photos, canUpload, canModerate }
               // A photo the owner attached on the Slate (S25, S27): the server only lets it go by
               // editing the sketch, so it is removed from the sketch's details.
               p.uploader.id === me?.id ? (
-                <Text role="link" style={styles.hint} onPress={() => router.push(`/sketches/${sketchId}` as never)}>Remove in the sketch's details</Text>
+                <Text role="link" style={styles.hint} onPress={() => router.push(`/sketches/${sketchId}`)}>Remove in the sketch's details</Text>
               ) : null
             ) : p.uploader.id === me?.id || canModerate ? (
               <Text role="button" style={styles.remove} onPress={() => remove.mutate(p.id)}>Remove</Text>

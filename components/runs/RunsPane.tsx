@@ -15,7 +15,7 @@ export function RunsPane() {
       <PageTitle kicker="Server" title="Runs" />
       {id ? (
         <View style={styles.row}>
-          <Button variant="secondary" label="New run" onPress={() => router.dismissTo('/runs' as never)} />
+          <Button variant="secondary" label="New run" onPress={() => router.dismissTo('/runs')} />
         </View>
       ) : null}
       <RunsOverview formWhere="on the right" hideEmpty={!!sketchId} />

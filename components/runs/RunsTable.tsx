@@ -32,7 +32,7 @@ const columns = [
   col.accessor('label', {
     header: 'Diagram',
     cell: (c) => (
-      <Link href={runPagePath(c.row.original.id) as never} style={[styles.link, !c.row.original.sketchId && styles.linkCode]}>
+      <Link href={runPagePath(c.row.original.id)} style={[styles.link, !c.row.original.sketchId && styles.linkCode]}>
         {c.getValue()}
         <Text style={styles.muted}>{`  ${c.row.original.kind === 'cable-sweep' ? 'cable sweep · ' : ''}${c.row.original.crossings} crossings`}</Text>
       </Link>

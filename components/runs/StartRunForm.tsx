@@ -80,7 +80,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
     const body = request(input, code, ring, reduced === 'reduced', kind === 'sweep' ? 2 : 0);
     if (typeof body === 'string') return setInvalid(body);
     setInvalid(null);
-    const open = { onSuccess: (run: { id: string }) => router.push(runPagePath(run.id) as never) };
+    const open = { onSuccess: (run: { id: string }) => router.push(runPagePath(run.id)) };
     if (!onSketch || !sketchId) return start.mutate(body, open);
     const { diagram: _d, label: _l, ...rest } = body;
     start.mutate({ ...rest, sketchId }, {

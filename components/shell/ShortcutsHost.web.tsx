@@ -25,7 +25,7 @@ export function ShortcutsHost() {
   const setSheet = useShortcutRegistry((s) => s.setSheet);
   const global = useMemo<Shortcut[]>(
     () => [
-      ...destinations.map((d) => ({ keys: `g ${d.name[0]}`, label: d.label, area: 'Go to', run: () => router.navigate(`/${d.name}` as never) })),
+      ...destinations.map((d) => ({ keys: `g ${d.name[0]}`, label: d.label, area: 'Go to', run: () => router.navigate(`/${d.name}`) })),
       { keys: '?', label: 'Show or hide this list', area: 'Help', run: () => setSheet(!useShortcutRegistry.getState().sheetOpen) },
     ],
     [router, setSheet],

@@ -23,7 +23,7 @@ function Row({ sketch, active, groups }: { sketch: LocalSketch; active: boolean;
   const drawn = s.crossings > 0 || s.components > 0;
   const shared = sharedLabel(sketch, groups);
   return (
-    <Pressable role="link" accessibilityLabel={`Open ${sketch.title || 'Untitled sketch'}`} onPress={() => router.navigate(`/sketches/${sketch.id}` as never)}
+    <Pressable role="link" accessibilityLabel={`Open ${sketch.title || 'Untitled sketch'}`} onPress={() => router.navigate(`/sketches/${sketch.id}`)}
       style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [styles.row, active && styles.active, (pressed || hovered) && !active && styles.hover]}>
       <StrokeThumb strokes={sketch.diagram.strokes} size={64} crossings={s.crossings} />
       <View style={styles.text}>
@@ -53,12 +53,12 @@ export function SketchList() {
       <View style={styles.head}>
         <PageTitle kicker="Sketchbook" title="Sketches" />
         <SyncStatus />
-        {sketches.length ? <Button label="New sketch" onPress={() => router.push('/sketches/new' as never)} /> : null}
+        {sketches.length ? <Button label="New sketch" onPress={() => router.push('/sketches/new')} /> : null}
       </View>
       {list.isError ? <Banner tone="error">{list.error.message}</Banner> : null}
       {list.data && sketches.length === 0 ? (
         <EmptyState art={<SlateArt />} title="Draw your first link"
-          action={<Button label="New sketch" onPress={() => router.push('/sketches/new' as never)} />}>
+          action={<Button label="New sketch" onPress={() => router.push('/sketches/new')} />}>
           Draw the strands with a finger or the mouse; crossings appear where they meet and the invariants update as you draw.
           Sketches stay on this device and work without a network.
         </EmptyState>

@@ -101,7 +101,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
       setMessage(e instanceof Error ? e.message : String(e));
     }
   };
-  const startRun = () => diagram && router.push({ pathname: '/runs', params: { pd: pdToText(diagram.pd), sketchId: sketch.id } } as never);
+  const startRun = () => diagram && router.push({ pathname: '/runs', params: { pd: pdToText(diagram.pd), sketchId: sketch.id } });
 
   const framingId = open && typeof open === 'object' ? open.framing : null;
   const framingComponent = framingId ? doc.sketch.components.find((c) => c.id === framingId) : undefined;

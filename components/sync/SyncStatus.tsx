@@ -22,7 +22,7 @@ export function SyncStatus() {
         role={status.kind === 'conflict' ? 'link' : undefined}
         accessibilityLabel={status.kind === 'conflict' ? `${label}: open them` : label}
         disabled={status.kind !== 'conflict'}
-        onPress={() => router.push('/sketches/conflicts' as never)}
+        onPress={() => router.push('/sketches/conflicts')}
         style={[styles.pill, { backgroundColor: t.bg }]}
       >
         <Text style={[styles.text, { color: t.fg }]}>{label}</Text>

@@ -2,7 +2,6 @@
 // online (docs/product.md journey 1). The data itself lives in the app's own store (expo-sqlite in
 // origin-private storage) and syncs through /api, which this worker never touches.
 // server/web/write-service-worker.ts writes the build's precache manifest in below.
-/* global __PRECACHE_MANIFEST__ */
 const MANIFEST = __PRECACHE_MANIFEST__;
 const PREFIX = 'overstrand-shell-';
 const CACHE = PREFIX + MANIFEST.version;

@@ -11,7 +11,7 @@ export const runPaths = {
 } as const;
 
 /** The page a finished-run e-mail links to, under PUBLIC_URL. */
-export const runPagePath = (id: string) => `/runs/${id}`;
+export const runPagePath = (id: string) => `/runs/${id}` as const;
 
 export const runKinds = ['khovanov', 'cable-sweep'] as const;
 export const RunKind = z.enum(runKinds);

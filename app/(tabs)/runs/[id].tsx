@@ -18,7 +18,7 @@ export default function RunPage() {
   const run = useRun(String(id));
   // Wide: the runs stay in the list pane on the left, so there is nothing to go back to.
   const wide = useIsWide();
-  const back = () => (router.canGoBack() ? router.back() : router.replace('/runs' as never));
+  const back = () => (router.canGoBack() ? router.back() : router.replace('/runs'));
   return (
     <Screen wide>
       <PageTitle kicker="Run" title={run.data ? titleOf(run.data) : 'Run'} onBack={wide ? undefined : back} backLabel="Runs" />

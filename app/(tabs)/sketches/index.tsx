@@ -13,7 +13,7 @@ export default function SketchesIndex() {
     <View style={styles.pane}>
       <View style={styles.board}>
         <Text style={styles.text}>Open a sketch from the list, or start a new one: draw, paste a code or build one from a family.</Text>
-        <Button label="New sketch" onPress={() => router.push('/sketches/new' as never)} />
+        <Button label="New sketch" onPress={() => router.push('/sketches/new')} />
       </View>
     </View>
   );

@@ -14,7 +14,7 @@ export default function NewSketch() {
   useEffect(() => {
     if (!device || started.current) return;
     started.current = true;
-    create.mutate({}, { onSuccess: (s) => router.replace(`/sketches/${s.id}` as never) });
+    create.mutate({}, { onSuccess: (s) => router.replace(`/sketches/${s.id}`) });
   }, [device, create]);
   return (
     <View style={{ flex: 1, padding: space.xl, backgroundColor: colors.paper }}>
