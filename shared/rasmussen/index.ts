@@ -55,20 +55,19 @@ export function deformedHomology(pd: PDCode, field: SField, options: Options = {
   const alive = (): number[] => cx.objs.flatMap((_, k) => (cx.alive[k] ? [k] : []));
   const atZero = alive().map(grade);
   const torsion: DeformedHomology['torsion'] = [];
+  // An entry s -> t is c H^m with m = (shift t - shift s) / 2. Cancelling one of least m only
+  // adds entries of power >= m, so the entries of each power are cancelled in passes, least first.
+  const power = (s: number, t: number): number => (cx.objs[t].shift - cx.objs[s].shift) / 2;
   for (;;) {
-    // An entry s -> t is c H^m with m = (shift t - shift s) / 2; take one of least m.
-    let best: [number, number, number] | undefined;
-    for (const s of alive()) {
-      for (const t of cx.out[s].keys()) {
-        const m = (cx.objs[t].shift - cx.objs[s].shift) / 2;
-        if (!best || m < best[2]) best = [s, t, m];
-      }
+    const entries = alive().flatMap((s) => [...cx.out[s].keys()].map((t): [number, number] => [s, t]));
+    if (entries.length === 0) break;
+    const least = entries.reduce((m, [s, t]) => Math.min(m, power(s, t)), Infinity);
+    for (const [s, t] of entries) {
+      const c = cx.out[s].get(t)?.get(0);
+      if (c === undefined || power(s, t) !== least) continue; // gone with an earlier cancellation
+      torsion.push({ ...grade(t), power: least });
+      cancel(cx, s, t, cx.ring.neg(cx.ring.inv(c)));
     }
-    if (!best) break;
-    const [s, t, power] = best;
-    const c = cx.out[s].get(t)!.get(0)!;
-    torsion.push({ ...grade(t), power });
-    cancel(cx, s, t, cx.ring.neg(cx.ring.inv(c)));
   }
   return { atZero, free: alive().map(grade), torsion };
 }

@@ -9,6 +9,7 @@ const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['drawing', () => import('./drawing.bench').then((m) => m.drawingBench())],
   ['readout', () => import('./readout.bench').then((m) => m.readoutBench())],
   ['sync', () => import('./sync.bench').then((m) => m.syncBench())],
+  ['sinv', () => import('./sinv.bench').then((m) => m.sinvBench())],
 ];
 
 async function main(): Promise<void> {
