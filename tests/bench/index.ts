@@ -1,11 +1,11 @@
 // npm run bench: every bench module in turn, one line per figure. Add a module with one line.
 import { jonesBench } from './jones.bench';
-import { khovanovBench } from './khovanov.bench';
+import { cableBench, khovanovBench } from './khovanov.bench';
 import type { Line } from './timing';
 
 const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['jones', jonesBench],
-  ['khovanov', khovanovBench],
+  ['khovanov', () => [...khovanovBench(), ...cableBench()]],
   ['drawing', () => import('./drawing.bench').then((m) => m.drawingBench())],
   ['readout', () => import('./readout.bench').then((m) => m.readoutBench())],
   ['sync', () => import('./sync.bench').then((m) => m.syncBench())],

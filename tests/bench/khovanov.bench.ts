@@ -4,14 +4,20 @@
 // braid closures on p strands.
 // Memory is the process's resident set (rss), sampled after every merged crossing; the cube
 // is sampled once at its end, a lower bound of its peak.
+// Then the cables of issue 10 (research scale), each run once and stopped after CAP_S seconds
+// ("over" the cap then), with peak rss, widest open boundary, most objects, and the Euler check
+// (q + q^-1) V of every result.
 
-import { khovanov, KhRing, Progress } from '@/shared/khovanov';
+import { khovanov, KhCancelled, KhRing, Progress } from '@/shared/khovanov';
 import { cubeKhovanov } from '@/shared/khovanov/cube';
 import { fromBraid } from '@/shared/knot/braid';
+import { diagram, Diagram } from '@/shared/knot/diagram';
 import { cable } from '@/shared/knot/families/cable';
 import { torusLink } from '@/shared/knot/families/torus';
-import { PDCode } from '@/shared/knot/pd';
+import { seededRng } from '@/shared/knot/moves';
+import { orient, PDCode } from '@/shared/knot/pd';
 import { integers } from '@/shared/linalg/ring';
+import { randomWord } from '../shared/khovanov-fixtures';
 import type { Line } from './timing';
 
 const MB = 1024 * 1024;
@@ -43,6 +49,88 @@ function timeEngine(pd: PDCode, ring: KhRing, runs: number, sampleMemory = true)
 }
 
 const round = (x: number, digits = 0) => Number(x.toFixed(digits));
+
+/** Seconds after which a research-scale run is stopped. */
+const CAP_S = 180;
+
+// One run of a large diagram, stopped at the cap; figures that do not depend on load beside the time.
+function cableLines(name: string, d: Diagram, ring: KhRing, goal?: string, memGoal?: string): Line[] {
+  let rss = 0;
+  let boundary = 0;
+  let objects = 0;
+  const start = performance.now();
+  const deadline = start + CAP_S * 1000;
+  const signal = { get aborted() { return performance.now() > deadline; } };
+  const sample = (p: Progress) => {
+    rss = Math.max(rss, process.memoryUsage().rss);
+    boundary = Math.max(boundary, p.boundary);
+    objects = Math.max(objects, p.objects);
+  };
+  let euler: boolean | undefined;
+  try {
+    euler = khovanov(d.pd, { ring, unknots: d.unknots, onProgress: sample, signal }).euler?.ok;
+  } catch (e) {
+    if (!(e instanceof KhCancelled)) throw e;
+  }
+  const s = (performance.now() - start) / 1000;
+  const label = `kh: ${name} (${d.pd.length} crossings) over ${ring}`;
+  const done = euler !== undefined;
+  return [
+    { name: `${label}, ${done ? 'time' : `stopped at the cap, over`}`, value: round(done ? s : CAP_S, 1), unit: 's', goal },
+    { name: `${label}, peak rss${done ? '' : ' so far'}`, value: round(rss / MB), unit: 'MB', goal: memGoal },
+    { name: `${label}, widest open boundary${done ? '' : ' so far'}`, value: boundary, unit: 'points' },
+    { name: `${label}, most objects${done ? '' : ' so far'}`, value: objects, unit: 'objects' },
+    ...(done ? [{ name: `${label}, Euler characteristic = (q + q^-1) V`, value: euler ? 1 : 0, unit: euler ? '(yes)' : '(NO)', goal: '1' }] : []),
+  ];
+}
+
+const trefoil = fromBraid([1, 1, 1]);
+/** (a, b): a parallel copies of the first component of the 0-framed Hopf link, b of the second. */
+const hopfCable = (a: number, b: number): Diagram => {
+  const first = cable(fromBraid([1, 1]), 0, a, 0);
+  return cable(first, orient(first.pd).components.length - 1, b, 0);
+};
+
+/** Seeded 6-strand braids of 40 letters whose closures have two components. */
+function twoComponentBraids(count: number): number[][] {
+  const rnd = seededRng(20261202);
+  const out: number[][] = [];
+  while (out.length < count) {
+    const w = randomWord(rnd, 6, 40);
+    if (orient(fromBraid(w).pd).components.length === 2) out.push(w);
+  }
+  return out;
+}
+
+export function cableBench(): Line[] {
+  const lines: Line[] = [];
+  const runs: [string, Diagram, KhRing, string?, string?][] = [
+    ['T(7,7)', torusLink(7, 7), 'Z'],
+    ['T(8,8)', torusLink(8, 8), 'Q', '<= 30 s'],
+    ['T(8,9)', torusLink(8, 9), 'Z', '<= 180 s'],
+    ['(3,0)-cable of the blackboard trefoil', cable(trefoil, 0, 3, 0), 'Q'],
+    ['(3,0)-cable of the figure-eight (closure of s1 s2^-1 s1 s2^-1, blackboard = 0-framed)', cable(fromBraid([1, -2, 1, -2]), 0, 3, 0), 'Q', '<= 20 s'],
+    ['(4,4)-cable of the 0-framed Hopf link', hopfCable(4, 4), 'Q'],
+    ['(5,5)-cable of the 0-framed Hopf link', hopfCable(5, 5), 'Z', '<= 120 s'],
+    ['(4,0)-cable of the blackboard trefoil', cable(trefoil, 0, 4, 0), 'Q', '<= 120 s', '<= 4096 MB'],
+    ['(4,0)-cable of the blackboard trefoil', cable(trefoil, 0, 4, 0), 'Z', '<= 300 s'],
+    ...twoComponentBraids(2).map((w, k): [string, Diagram, KhRing] => [`seeded 2-component 6-strand braid ${k + 1}`, fromBraid(w), 'Q']),
+  ];
+  for (const [name, d, ring, goal, memGoal] of runs) lines.push(...cableLines(name, d, ring, goal, memGoal));
+
+  // The sweep r+ + r- <= 3 of the 0-framed right trefoil over Q: every cell, then the total.
+  const trefoil0 = diagram(trefoil.pd, { framings: [0] });
+  let total = 0;
+  for (let r = 1; r <= 3; r++) {
+    for (let rMinus = 0; rMinus <= r; rMinus++) {
+      const cell = cableLines(`(${r - rMinus},${rMinus})-cable of the 0-framed trefoil`, cable(trefoil0, 0, r - rMinus, rMinus), 'Q');
+      total += cell[0].value;
+      lines.push(...cell);
+    }
+  }
+  lines.push({ name: 'kh: sweep r+ + r- <= 3 of the 0-framed trefoil over Q, total', value: round(total, 1), unit: 's', goal: '<= 300 s' });
+  return lines;
+}
 
 export function khovanovBench(): Line[] {
   const lines: Line[] = [];
@@ -97,5 +185,5 @@ export function khovanovBench(): Line[] {
 }
 
 if (require.main === module) {
-  for (const l of khovanovBench()) console.log(`${l.name}: ${l.value} ${l.unit}${l.goal ? ` (goal ${l.goal})` : ''}`);
+  for (const l of [...khovanovBench(), ...cableBench()]) console.log(`${l.name}: ${l.value} ${l.unit}${l.goal ? ` (goal ${l.goal})` : ''}`);
 }
