@@ -33,3 +33,17 @@ export function table(of: readonly KhGroup[] | { readonly groups: readonly KhGro
   const groups = 'groups' in of ? of.groups : of;
   return groups.map((g) => `${g.i},${g.j}:${g.free}${g.torsion.map((t) => `+Z/${t}`).join('')}`);
 }
+
+/** The table of the mirror image: free (i,j) -> (-i,-j), torsion (i,j) -> (1-i,-j) (Khovanov 2000, arXiv math/9908171, Sect. 7, from memory). */
+export function mirrorDual(groups: readonly KhGroup[]): KhGroup[] {
+  const dual = new Map<string, { free: number; torsion: number[] }>();
+  const cell = (i: number, j: number) => dual.get(`${i},${j}`) ?? dual.set(`${i},${j}`, { free: 0, torsion: [] }).get(`${i},${j}`)!;
+  for (const g of groups) {
+    cell(-g.i, -g.j).free += g.free;
+    cell(1 - g.i, -g.j).torsion.push(...g.torsion);
+  }
+  return [...dual]
+    .map(([k, v]) => ({ i: Number(k.split(',')[0]), j: Number(k.split(',')[1]), free: v.free, torsion: v.torsion.sort((a, b) => a - b) }))
+    .filter((g) => g.free > 0 || g.torsion.length > 0)
+    .sort((a, b) => a.i - b.i || a.j - b.j);
+}
