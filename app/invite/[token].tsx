@@ -6,7 +6,7 @@ import type { InvitationPreview } from '@/shared/api/groups';
 import { useAcceptInvitation, useInvitationPreview } from '@/hooks/queries/useInvitations';
 import { useSession } from '@/hooks/useSession';
 import { isApiError, type ApiError } from '@/lib/api';
-import { roleDescriptions } from '@/lib/permissions';
+import { roleDescriptions } from '@/lib/role-descriptions';
 import { AuthFrame } from '@/components/auth/AuthFrame';
 import { Banner } from '@/components/ui/Banner';
 import { LoadError } from '@/components/ui/LoadError';

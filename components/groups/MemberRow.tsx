@@ -3,7 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { Member, Role } from '@/shared/api/groups';
 import { useChangeRole, useRemoveMember } from '@/hooks/queries/useMembers';
 import { isApiError } from '@/lib/api';
-import { assignableRoles, canEditMember } from '@/lib/permissions';
+import { assignableRoles, canEditMember } from '@/shared/api/roles';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
 import { RoleBadge } from '@/components/ui/RoleBadge';

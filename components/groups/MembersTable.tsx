@@ -8,7 +8,7 @@ import { useChangeRole, useRemoveMember } from '@/hooks/queries/useMembers';
 import { usePendingInvitations } from '@/hooks/queries/useInvitations';
 import { useResendInvitation, useRevokeInvitation, useRoster } from '@/hooks/queries/useRoster';
 import { useSession } from '@/hooks/useSession';
-import { assignableRoles, canEditMember } from '@/lib/permissions';
+import { assignableRoles, canEditMember } from '@/shared/api/roles';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { when } from '@/components/feed/when';
 import { Banner } from '@/components/ui/Banner';

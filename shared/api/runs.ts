@@ -2,6 +2,7 @@
 // sweep of a framed link: Kh of every (r+, r-)-cable, each a sub-run). The request and answer
 // shapes, shared by the server routes and the app.
 import { z } from 'zod';
+import { isPrime } from '@/shared/linalg/ring';
 import { RecordId } from './sketches';
 
 export const runPaths = {
@@ -21,12 +22,6 @@ export const runStatuses = ['queued', 'running', 'done', 'failed', 'cancelled'] 
 export const RunStatus = z.enum(runStatuses);
 export type RunStatus = z.infer<typeof RunStatus>;
 export const isFinished = (s: RunStatus): boolean => s === 'done' || s === 'failed' || s === 'cancelled';
-
-const isPrime = (p: number): boolean => {
-  if (p < 2) return false;
-  for (let d = 2; d * d <= p; d++) if (p % d === 0) return false;
-  return true;
-};
 
 /** 'Z' (with torsion), 'Q', or 'F<p>' for a prime p. */
 export const RunRing = z

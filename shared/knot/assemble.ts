@@ -3,7 +3,7 @@
 // keep their direction, and framings follow the components through anchor labels.
 
 import { Diagram, diagram } from './diagram';
-import { Crossing, orient, PDCode, PDError, relabel, Slot, slotsOf } from './pd';
+import { Crossing, mapLabels, orient, PDCode, PDError, relabel, Slot, slotsOf } from './pd';
 
 export interface Framed {
   /** A label of the component in the constructed code. */
@@ -69,7 +69,7 @@ export function assemble(pd: PDCode, heads: ReadonlyMap<number, Slot>, framed: r
     if (loop.length === 2 && tailCrossing(loop[0]) > tailCrossing(loop[1])) loop.reverse();
     for (const l of loop) fresh.set(l, fresh.size + 1);
   }
-  const numbered = turned.map((x) => x.map((l) => fresh.get(l)!) as unknown as Crossing);
+  const numbered = turned.map((x) => mapLabels(x, (l) => fresh.get(l)!));
   const o = orient(numbered);
   const framings: (number | null)[] = new Array<number | null>(o.components.length).fill(null);
   for (const { label, framing } of framed) framings[o.componentOf.get(fresh.get(label)!)!] = framing;

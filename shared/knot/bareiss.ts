@@ -2,7 +2,11 @@
 // integer-preserving Gaussian elimination", Math. Comp. 22, 1968), over any integral domain
 // that can divide exactly: the integers (Goeritz matrices) and Z[t] (Alexander matrices).
 
-export interface Ring<T> {
+/**
+ * What fraction-free elimination needs: an integral domain with exact division. Not the
+ * coefficient rings of shared/linalg/ring.ts (units, inverses, F_p), which Z[t] is not.
+ */
+export interface ExactDomain<T> {
   readonly zero: T;
   readonly one: T;
   isZero(a: T): boolean;
@@ -13,7 +17,7 @@ export interface Ring<T> {
   divExact(a: T, b: T): T;
 }
 
-export const integers: Ring<bigint> = {
+export const integers: ExactDomain<bigint> = {
   zero: 0n,
   one: 1n,
   isZero: (a) => a === 0n,
@@ -24,7 +28,7 @@ export const integers: Ring<bigint> = {
 };
 
 /** The determinant of a square matrix; the empty matrix has determinant one. */
-export function determinant<T>(ring: Ring<T>, matrix: readonly (readonly T[])[]): T {
+export function determinant<T>(ring: ExactDomain<T>, matrix: readonly (readonly T[])[]): T {
   const m = matrix.map((row) => {
     if (row.length !== matrix.length) throw new RangeError('determinant needs a square matrix');
     return [...row];

@@ -9,9 +9,9 @@
 // The crossings, relabelled, are sorted; the least result over all starting edges is the form.
 // Split diagrams: each piece separately, pieces sorted (a marked piece first).
 
-import { connectedPieces, Crossing, orient, Oriented, PDCode } from './pd';
+import { connectedPieces, Crossing, mapLabels, orient, Oriented, PDCode } from './pd';
 
-type Form = number[][];
+type Form = Crossing[];
 
 function compare(a: Form, b: Form): number {
   for (let k = 0; k < Math.min(a.length, b.length); k++) {
@@ -38,7 +38,7 @@ function formFrom(o: Oriented, crossings: readonly number[], start: number): For
     const x = o.pd[o.head.get(order[n])!.crossing];
     for (const label of x) if (!fresh.has(label)) labelComponent(label);
   }
-  return crossings.map((k) => o.pd[k].map((l) => fresh.get(l)!)).sort((a, b) => compare([a], [b]));
+  return crossings.map((k) => mapLabels(o.pd[k], (l) => fresh.get(l)!)).sort((a, b) => compare([a], [b]));
 }
 
 function pieceForm(o: Oriented, crossings: readonly number[], starts: readonly number[]): Form {
@@ -69,7 +69,7 @@ export function canonicalPD(pd: PDCode, marked?: number): PDCode {
   const out: Crossing[] = [];
   for (const { form } of pieces) {
     const top = Math.max(...form.flat());
-    out.push(...form.map((x) => x.map((l) => l + offset) as unknown as Crossing));
+    out.push(...form.map((x) => mapLabels(x, (l) => l + offset)));
     offset += top;
   }
   return out;

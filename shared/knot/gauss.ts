@@ -4,7 +4,7 @@
 // each crossing, so the code determines the PD code directly (no embedding search).
 
 import { Diagram, diagram } from './diagram';
-import { Crossing, orient, PDError } from './pd';
+import { orient, PDError, WritablePD } from './pd';
 
 export interface GaussCode {
   readonly components: readonly (readonly number[])[];
@@ -29,7 +29,7 @@ export function fromGauss(code: GaussCode): Diagram {
   for (let i = 0; i < n; i++) {
     if (over[i] !== 1 || under[i] !== 1) throw new PDError(`crossing ${i + 1} must be passed once over and once under; it is passed ${over[i]} times over and ${under[i]} times under`);
   }
-  const slots: number[][] = Array.from({ length: n }, () => [0, 0, 0, 0]);
+  const slots: WritablePD = Array.from({ length: n }, () => [0, 0, 0, 0]);
   let next = 1;
   for (const given of code.components) {
     // A two-edge loop passing only over reads "increasing" both ways; orient() leaves the
@@ -49,7 +49,7 @@ export function fromGauss(code: GaussCode): Diagram {
     });
   }
   const unknots = code.components.filter((c) => c.length === 0).length;
-  return diagram(slots as unknown as Crossing[], { unknots });
+  return diagram(slots, { unknots });
 }
 
 /** The signed Gauss code of a diagram, components in the order orient() finds them. */

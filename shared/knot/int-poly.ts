@@ -1,6 +1,6 @@
 // Dense polynomials in Z[t] (coefficient i belongs to t^i, no trailing zeros) as a ring with
 // exact division, so Bareiss elimination can run on Alexander matrices.
-import type { Ring } from './bareiss';
+import type { ExactDomain } from './bareiss';
 
 export type IntPoly = readonly bigint[];
 
@@ -43,7 +43,7 @@ function divExact(a: IntPoly, b: IntPoly): IntPoly {
   return trim(quotient);
 }
 
-export const polynomials: Ring<IntPoly> = {
+export const polynomials: ExactDomain<IntPoly> = {
   zero: [],
   one: [1n],
   isZero: (a) => a.length === 0,

@@ -5,6 +5,13 @@
 
 export type Crossing = readonly [number, number, number, number];
 export type PDCode = readonly Crossing[];
+/** A writable copy of a PD code, for moves and builders that rewire slots. */
+export type WritablePD = [number, number, number, number][];
+
+export const writablePD = (pd: PDCode): WritablePD => pd.map(([a, b, c, d]) => [a, b, c, d]);
+
+/** The crossing with every label replaced by f(label). */
+export const mapLabels = (x: Crossing, f: (label: number) => number): Crossing => [f(x[0]), f(x[1]), f(x[2]), f(x[3])];
 
 /** Where one occurrence of an edge label sits: crossing index and position 0..3 (a..d). */
 export interface Slot {
@@ -175,7 +182,7 @@ export function connectedPieces(pd: PDCode): number[][] {
 export function relabel(o: Oriented): PDCode {
   const fresh = new Map<number, number>();
   o.components.flat().forEach((label, i) => fresh.set(label, i + 1));
-  return o.pd.map((x) => x.map((label) => fresh.get(label)!) as unknown as Crossing);
+  return o.pd.map((x) => mapLabels(x, (label) => fresh.get(label)!));
 }
 
 /** Reads a PD code from JSON text: an array of crossings, each an array of four integer labels. */

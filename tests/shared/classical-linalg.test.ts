@@ -3,11 +3,11 @@
 // against Descartes' rule of signs on the characteristic polynomial (exact for symmetric
 // matrices, whose eigenvalues are all real), computed by Faddeev-LeVerrier.
 import fc from 'fast-check';
-import { determinant, integers, Ring } from '@/shared/knot/bareiss';
+import { determinant, integers, ExactDomain } from '@/shared/knot/bareiss';
 import { IntPoly, polynomials } from '@/shared/knot/int-poly';
 import { signature } from '@/shared/knot/symmetric';
 
-function laplace<T>(ring: Ring<T>, m: readonly (readonly T[])[]): T {
+function laplace<T>(ring: ExactDomain<T>, m: readonly (readonly T[])[]): T {
   if (m.length === 0) return ring.one;
   return m[0].reduce((sum, a, j) => {
     const minor = m.slice(1).map((row) => row.filter((_, k) => k !== j));

@@ -1,7 +1,7 @@
 // The same diagram written another way: labels renamed by a random bijection onto other integers,
 // crossings listed in a random order (Fisher-Yates shuffles; common practice).
 import { Rng } from '@/shared/knot/moves/random';
-import { Crossing, PDCode } from '@/shared/knot/pd';
+import { mapLabels, PDCode } from '@/shared/knot/pd';
 
 function shuffle<T>(items: T[], rng: Rng): T[] {
   for (let k = items.length - 1; k > 0; k--) {
@@ -15,5 +15,5 @@ export function scramble(pd: PDCode, rng: Rng): { pd: PDCode; rename: Map<number
   const labels = [...new Set(pd.flat())];
   const targets = shuffle(labels.map((_, k) => 5 * k - 40), rng);
   const rename = new Map(labels.map((l, k) => [l, targets[k]]));
-  return { pd: shuffle(pd.map((x) => x.map((l) => rename.get(l)!) as unknown as Crossing), rng), rename };
+  return { pd: shuffle(pd.map((x) => mapLabels(x, (l) => rename.get(l)!)), rng), rename };
 }

@@ -6,7 +6,7 @@
 
 import { assemble, Framed } from '../assemble';
 import { blackboardFramings, Diagram, framingsOf } from '../diagram';
-import { Crossing, orient, PDError, Slot } from '../pd';
+import { Crossing, mapLabels, orient, PDError, Slot } from '../pd';
 
 export function cable(d: Diagram, component: number, rPlus: number, rMinus: number): Diagram {
   const o = orient(d.pd);
@@ -68,7 +68,7 @@ export function cable(d: Diagram, component: number, rPlus: number, rMinus: numb
       const bottom = Array.from({ length: r }, (_, j) => id(`loop:${j}`));
       const top = twistRegion(bottom);
       const close = new Map(top.map((t, j) => [t, bottom[j]]));
-      for (let i = 0; i < pd.length; i++) pd[i] = pd[i].map((l) => close.get(l) ?? l) as unknown as Crossing;
+      for (let i = 0; i < pd.length; i++) pd[i] = mapLabels(pd[i], (l) => close.get(l) ?? l);
       for (const [t, b] of close) {
         heads.set(b, heads.get(t) ?? heads.get(b)!);
         heads.delete(t);

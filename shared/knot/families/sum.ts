@@ -6,7 +6,7 @@
 
 import { assemble, Framed } from '../assemble';
 import { Diagram } from '../diagram';
-import { Crossing, orient, PDError } from '../pd';
+import { orient, PDError, writablePD } from '../pd';
 import { sideBySide } from './union';
 
 export function connectedSum(d1: Diagram, d2: Diagram, i = 0, j = 0): Diagram {
@@ -39,12 +39,12 @@ export function connectedSum(d1: Diagram, d2: Diagram, i = 0, j = 0): Diagram {
   const e2 = f2[j].label;
   const h1 = s.heads.get(e1)!;
   const h2 = s.heads.get(e2)!;
-  const pd = s.pd.map((x) => [...x]);
+  const pd = writablePD(s.pd);
   pd[h1.crossing][h1.position] = e2;
   pd[h2.crossing][h2.position] = e1;
   const heads = new Map(s.heads);
   heads.set(e1, h2);
   heads.set(e2, h1);
   const framed = [...without(f1, i), ...without(f2, j), { label: e1, framing: joined }];
-  return assemble(pd as unknown as Crossing[], heads, framed, [...u1, ...u2]);
+  return assemble(pd, heads, framed, [...u1, ...u2]);
 }

@@ -2,7 +2,7 @@
 
 import { assemble, directions, Framed } from '../assemble';
 import { Diagram } from '../diagram';
-import { Crossing, PDCode, Slot } from '../pd';
+import { mapLabels, PDCode, Slot } from '../pd';
 
 export interface SideBySide {
   pd: PDCode;
@@ -17,7 +17,7 @@ export function sideBySide(d1: Diagram, d2: Diagram): SideBySide {
   const b = directions(d2);
   const shift = Math.max(0, ...d1.pd.flat());
   const n = d1.pd.length;
-  const pd = [...d1.pd, ...d2.pd.map((x) => x.map((l) => l + shift) as unknown as Crossing)];
+  const pd = [...d1.pd, ...d2.pd.map((x) => mapLabels(x, (l) => l + shift))];
   const heads = new Map<number, Slot>(a.heads);
   for (const [l, h] of b.heads) heads.set(l + shift, { crossing: h.crossing + n, position: h.position });
   return {

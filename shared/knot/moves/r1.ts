@@ -3,7 +3,7 @@
 
 import { assemble, directions } from '../assemble';
 import { Diagram } from '../diagram';
-import { Crossing, orient, PDError, Slot } from '../pd';
+import { Crossing, orient, PDError, Slot, writablePD } from '../pd';
 import { splice } from './splice';
 
 export interface Kink {
@@ -25,14 +25,14 @@ export function addKink(d: Diagram, label: number, kink: Kink): Diagram {
   const [x, into]: [Crossing, number] = kink.overFirst
     ? kink.sign > 0 ? [[loop, loop, out, label], 3] : [[loop, label, out, loop], 1]
     : kink.sign > 0 ? [[label, out, loop, loop], 0] : [[label, loop, loop, out], 0];
-  const pd = d.pd.map((c) => [...c]);
+  const pd = writablePD(d.pd);
   pd[head.crossing][head.position] = out;
   pd.push([...x]);
   const hints = new Map<number, Slot>(heads);
   hints.set(out, head);
   hints.set(label, { crossing: k, position: into });
   hints.delete(loop);
-  return assemble(pd as unknown as Crossing[], hints, framed, unknotFramings);
+  return assemble(pd, hints, framed, unknotFramings);
 }
 
 /** Crossings where some edge runs from one slot to the next: the removable kinks. */

@@ -3,7 +3,7 @@
 
 import { assemble, directions } from '../assemble';
 import { Diagram } from '../diagram';
-import { Crossing, PDError, Slot } from '../pd';
+import { PDError, Slot, writablePD, type WritablePD } from '../pd';
 import { Corner, faces } from './faces';
 import { splice } from './splice';
 
@@ -25,13 +25,13 @@ export function pushAcross(d: Diagram, face: readonly Corner[], i: number, j: nu
   const { heads, framed, unknotFramings } = directions(d);
   const next = Math.max(...d.pd.flat()) + 1;
   const [e2, e3, f2, f3] = [next, next + 1, next + 2, next + 3];
-  const pd = d.pd.map((c) => [...c]);
+  const pd = writablePD(d.pd);
   pd[E.end.crossing][E.end.position] = e3;
   pd[F.end.crossing][F.end.position] = f3;
   // Along the walk (face on the right) E meets the finger's crossings P then Q, F meets Q then
   // P; counterclockwise P = [E1, F3, E2, F2] and Q = [E3, F2, E2, F1], with E1 = E and F1 = F
   // kept at their starts. Rotated so the under-strand sits at slots a and c.
-  const [p, q] = eOver ? [[f3, e2, f2, E.label], [f2, e2, F.label, e3]] : [[E.label, f3, e2, f2], [e3, f2, e2, F.label]];
+  const [p, q]: WritablePD = eOver ? [[f3, e2, f2, E.label], [f2, e2, F.label, e3]] : [[E.label, f3, e2, f2], [e3, f2, e2, F.label]];
   const [P, Q] = [pd.length, pd.length + 1];
   pd.push(p, q);
   const hints = new Map<number, Slot>();
@@ -40,7 +40,7 @@ export function pushAcross(d: Diagram, face: readonly Corner[], i: number, j: nu
   // An edge running along the walk now enters P (or Q) as its first piece; otherwise it still ends at its start.
   hints.set(E.label, same(heads.get(E.label)!, E.end) ? { crossing: P, position: p.indexOf(E.label) } : E.start);
   hints.set(F.label, same(heads.get(F.label)!, F.end) ? { crossing: Q, position: q.indexOf(F.label) } : F.start);
-  return assemble(pd as unknown as Crossing[], hints, framed, unknotFramings);
+  return assemble(pd, hints, framed, unknotFramings);
 }
 
 /**

@@ -5,7 +5,7 @@
 
 import { assemble, directions } from '../assemble';
 import { Diagram } from '../diagram';
-import { Crossing, PDError, Slot } from '../pd';
+import { PDError, Slot, writablePD } from '../pd';
 import { Corner, faces } from './faces';
 
 /** Triangles on which R3 applies, each as its three corners in order of the face walk. */
@@ -25,7 +25,7 @@ export function applyR3(d: Diagram, triangle: Corner[]): Diagram {
   // at each corner its two outside slots in counterclockwise order.
   const ring: Slot[] = [0, 2, 1].flatMap((k) => [2, 3].map((s) => ({ crossing: triangle[k].crossing, position: (triangle[k].arrive + s) % 4 })));
   const at = (s: Slot) => ring.findIndex((r) => r.crossing === s.crossing && r.position === s.position);
-  const pd = d.pd.map((c) => [...c]);
+  const pd = writablePD(d.pd);
   ring.forEach((s, i) => {
     const from = ring[(i + 3) % 6];
     pd[s.crossing][s.position] = d.pd[from.crossing][from.position];
@@ -36,5 +36,5 @@ export function applyR3(d: Diagram, triangle: Corner[]): Diagram {
     if (i >= 0) hints.set(label, ring[(i + 3) % 6]);
     else if (!triangle.some((c) => c.crossing === h.crossing)) hints.set(label, h);
   }
-  return assemble(pd as unknown as Crossing[], hints, framed, unknotFramings);
+  return assemble(pd, hints, framed, unknotFramings);
 }

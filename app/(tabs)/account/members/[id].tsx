@@ -1,7 +1,7 @@
 // The members page of a group (owners and admins): roster with joined / last active, roles, invitations.
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useGroup } from '@/hooks/queries/useGroups';
-import { canManage } from '@/lib/permissions';
+import { canManage } from '@/shared/api/roles';
 import { MembersTable } from '@/components/groups/MembersTable';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
