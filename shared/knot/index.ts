@@ -11,6 +11,8 @@ export { fromDT, interlacedGroups, MAX_DT_CROSSINGS, parseDT, toDT } from './dt'
 export { fromGauss, toGauss } from './gauss';
 export type { GaussCode } from './gauss';
 export { bracket, bracketOfPD, loopFactor } from './bracket';
+export { contractionOrder, cutWidths, scoreOrder } from './contraction-order';
+export type { ContractionOrder, OrderScore } from './contraction-order';
 export { jones, jonesFromBracket } from './jones';
 export { Laurent } from '@/shared/poly/laurent';
 export * as families from './families';
