@@ -7,14 +7,28 @@
 import { Diagram } from './diagram';
 import { Laurent } from '@/shared/poly/laurent';
 import { PDCode } from './pd';
+import { contractionOrder, scoreOrder } from './contraction-order';
 
 /** A dense polynomial in A: sum of c[i] A^(off + i). */
-interface Dense {
+interface Dense<T> {
   off: number;
-  c: bigint[];
+  c: T[];
 }
 
-/** The Kauffman bracket <D> in A, normalised so that <O> = 1 (docs/conventions.md). */
+/** The coefficient arithmetic: doubles while they are provably exact, else bigints. */
+interface Ring<T> {
+  zero: T;
+  one: T;
+  /** Largest |coefficient| of c, for a ring whose exactness has a limit. */
+  maxAbs?: (c: T[]) => number;
+  add(a: T, b: T): T;
+  neg(a: T): T;
+  big(a: T): bigint;
+}
+const DOUBLES: Ring<number> = { zero: 0, one: 1, maxAbs: (c) => c.reduce((m, x) => Math.max(m, Math.abs(x)), 0), add: (a, b) => a + b, neg: (a) => -a, big: (a) => BigInt(a) };
+const BIGINTS: Ring<bigint> = { zero: 0n, one: 1n, add: (a, b) => a + b, neg: (a) => -a, big: (a) => a };
+
+/** The Kauffman bracket <D> in A, normalised so that <O> = 1 (DESIGN.md conventions). */
 export function bracket(d: Diagram): Laurent {
   return bracketOfPD(d.pd, d.unknots);
 }
@@ -22,28 +36,96 @@ export function bracket(d: Diagram): Laurent {
 /** <pd> times (-A^2 - A^-2)^unknots; the empty code with no unknots is taken as the empty link, 1. */
 export function bracketOfPD(pd: PDCode, unknots = 0): Laurent {
   if (pd.length === 0) return loopFactor().pow(Math.max(unknots - 1, 0));
-  let states = new Map<string, { match: number[]; poly: Dense }>([['', { match: [], poly: { off: 0, c: [1n] } }]]);
+  const order = cheaperOrder(pd);
+  const closed = contract(pd, order, DOUBLES) ?? contract(pd, order, BIGINTS)!;
+  // Every state has at least one loop; one of them is the normalising <O> = 1.
+  const p = divideByLoop({ off: closed.off, c: closed.c });
+  return Laurent.fromDense(p.c, p.off).mul(loopFactor().pow(unknots));
+}
+
+/** Up to this cut the greedy order is cheap enough that a search for a better one does not pay. */
+const NARROW = 10;
+
+/** The greedy order below or the tree-decomposition order, whichever costs less. */
+function cheaperOrder(pd: PDCode): number[] {
+  const greedy = greedyOrder(pd);
+  const score = scoreOrder(pd, greedy);
+  if (score.widest <= NARROW) return greedy;
+  const tree = contractionOrder(pd);
+  return tree.cost < score.cost ? tree.order : greedy;
+}
+
+/**
+ * The closed tangle's sum over states, in bigints; undefined when doubles were asked for and
+ * could lose exactness. A new coefficient sums at most 2 * states terms, each at most 4 times an
+ * old coefficient (a crossing closes at most two loops, and (A^2 + A^-2)^2 has coefficients
+ * up to 2 summed over 2 terms), so 8 * states * max|c| < 2^53 keeps every partial sum exact.
+ */
+function contract<T>(pd: PDCode, order: number[], ring: Ring<T>): Dense<bigint> | undefined {
+  let states = new Map<string, { match: number[]; poly: Dense<T> }>([['', { match: [], poly: { off: 0, c: [ring.one] } }]]);
   let boundary: number[] = [];
-  for (const x of contractionOrder(pd)) {
+  for (const x of order) {
+    if (ring.maxAbs && 8 * states.size * maxAbs(ring.maxAbs, states.values()) >= 2 ** 53) return undefined;
     const step = prepare(boundary, pd[x]);
-    const next = new Map<string, { match: number[]; poly: Dense }>();
+    const next = new Map<string, { match: number[]; poly: Dense<T> }>();
     for (const { match, poly } of states.values()) {
       for (const [smoothing, shift] of SMOOTHINGS) {
         const { match: q, loops } = join(step, match, smoothing);
-        const key = q.join(',');
-        const term = timesLoops({ off: poly.off + shift, c: poly.c }, loops);
-        const old = next.get(key);
-        if (old) old.poly = addDense(old.poly, term);
-        else next.set(key, { match: q, poly: term });
+        const key = String.fromCharCode(...q);
+        let target = next.get(key);
+        if (!target) next.set(key, (target = { match: q, poly: { off: 0, c: [] } }));
+        addTerm(ring, target.poly, poly, shift, loops);
       }
     }
     states = next;
     boundary = step.boundary;
   }
   const closed = states.get('')!.poly;
-  // Every state has at least one loop; one of them is the normalising <O> = 1.
-  const p = divideByLoop(closed);
-  return Laurent.fromDense(p.c, p.off).mul(loopFactor().pow(unknots));
+  return { off: closed.off, c: closed.c.map(ring.big) };
+}
+
+function maxAbs<T>(of: (c: T[]) => number, states: Iterable<{ poly: Dense<T> }>): number {
+  let m = 0;
+  for (const { poly } of states) m = Math.max(m, of(poly.c));
+  return m;
+}
+
+// target += A^shift (-A^2 - A^-2)^loops p, in place (loops is 0, 1 or 2).
+function addTerm<T>(ring: Ring<T>, target: Dense<T>, p: Dense<T>, shift: number, loops: number): void {
+  const off = p.off + shift - 2 * loops;
+  widen(ring, target, off, off + p.c.length + 4 * loops);
+  const t = target.c;
+  const c = p.c;
+  const base = off - target.off;
+  const { add, neg } = ring;
+  for (let i = 0; i < c.length; i++) {
+    const x = c[i];
+    const j = base + i;
+    if (loops === 0) t[j] = add(t[j], x);
+    else if (loops === 1) {
+      t[j] = add(t[j], neg(x));
+      t[j + 4] = add(t[j + 4], neg(x));
+    } else {
+      t[j] = add(t[j], x);
+      t[j + 4] = add(t[j + 4], add(x, x));
+      t[j + 8] = add(t[j + 8], x);
+    }
+  }
+}
+
+// Makes target.c cover exponents lo..hi-1.
+function widen<T>(ring: Ring<T>, target: Dense<T>, lo: number, hi: number): void {
+  if (target.c.length === 0) {
+    target.off = lo;
+    target.c = new Array<T>(hi - lo).fill(ring.zero);
+    return;
+  }
+  const end = target.off + target.c.length;
+  if (lo < target.off) {
+    target.c = [...new Array<T>(target.off - lo).fill(ring.zero), ...target.c];
+    target.off = lo;
+  }
+  if (hi > end) target.c.push(...new Array<T>(hi - end).fill(ring.zero));
 }
 
 /** -A^2 - A^-2, the value of a circle. */
@@ -126,7 +208,7 @@ function join(step: Step, match: number[], smoothing: readonly number[]): { matc
 
 // Greedy order: next the crossing with most edges on the current boundary, which keeps the cut
 // small; among those, the one touching the longest-open edge, so the cut sweeps the diagram.
-function contractionOrder(pd: PDCode): number[] {
+function greedyOrder(pd: PDCode): number[] {
   const left = new Set(pd.map((_, i) => i));
   const opened = new Map<number, number>(); // boundary label -> step at which it opened
   const closed = new Set<number>();
@@ -152,31 +234,8 @@ function contractionOrder(pd: PDCode): number[] {
   return order;
 }
 
-function addDense(p: Dense, q: Dense): Dense {
-  const off = Math.min(p.off, q.off);
-  const c = new Array<bigint>(Math.max(p.off + p.c.length, q.off + q.c.length) - off).fill(0n);
-  p.c.forEach((x, i) => (c[i + p.off - off] += x));
-  q.c.forEach((x, i) => (c[i + q.off - off] += x));
-  return { off, c };
-}
-
-// p * (-A^2 - A^-2)^loops
-function timesLoops(p: Dense, loops: number): Dense {
-  let { off, c } = p;
-  for (let k = 0; k < loops; k++) {
-    const r = new Array<bigint>(c.length + 4).fill(0n);
-    c.forEach((x, i) => {
-      r[i] -= x;
-      r[i + 4] -= x;
-    });
-    off -= 2;
-    c = r;
-  }
-  return { off, c };
-}
-
 // p / (-A^2 - A^-2) = -A^2 p / (1 + A^4); exact because every state closed at least one loop.
-function divideByLoop(p: Dense): Dense {
+function divideByLoop(p: Dense<bigint>): Dense<bigint> {
   const c = p.c;
   const q = new Array<bigint>(Math.max(c.length - 4, 0)).fill(0n);
   for (let i = 0; i < q.length; i++) q[i] = c[i] - (i >= 4 ? q[i - 4] : 0n);

@@ -1,9 +1,12 @@
 // Bracket + Jones speed by tangle contraction, for braid closures and torus links of 15, 30,
 // 60 and 100 crossings (goals: 15 crossings <= 5 ms, 60 crossings <= 1 s), with the ratio to
-// the plain state sum where that is feasible (<= 20 crossings).
+// the plain state sum where that is feasible (<= 20 crossings); then the wide cases (random
+// 10-strand braids of 100 and 200 crossings, T(7,33)) with the widest cut of the order used,
+// a measure that does not depend on the machine's load.
 
 import { fromBraid } from '@/shared/knot/braid';
 import { bracket } from '@/shared/knot/bracket';
+import { contractionOrder } from '@/shared/knot/contraction-order';
 import { Diagram } from '@/shared/knot/diagram';
 import { torusLink } from '@/shared/knot/families/torus';
 import { jonesFromBracket } from '@/shared/knot/jones';
@@ -58,6 +61,16 @@ export function jonesBench(): Line[] {
         lines.push({ name: `state sum / contraction, ${name}, ${d.pd.length} crossings`, value: round(slow / ms, 0), unit: 'x' });
       }
     }
+  }
+  const wide: [string, Diagram, string][] = [
+    ['random 10-strand braid', braidOf(10, 100), '<= 100 ms'],
+    ['random 10-strand braid', braidOf(10, 200), '<= 1000 ms'],
+    ['T(7,33)', torusLink(7, 33), '<= 1000 ms'],
+  ];
+  for (const [name, d, target] of wide) {
+    const ms = medianMs(() => jonesFromBracket(d, bracket(d)), 3000, 5);
+    lines.push({ name: `bracket+Jones, ${name}, ${d.pd.length} crossings`, value: round(ms), unit: 'ms', goal: target });
+    lines.push({ name: `widest cut of the tree-decomposition order, ${name}, ${d.pd.length} crossings`, value: contractionOrder(d.pd).widest, unit: 'ends' });
   }
   return lines;
 }

@@ -1,11 +1,13 @@
 // Jones polynomials of small knots and links against published values, and the published values
 // themselves against identities they must satisfy (so a mistake in memory shows up as well).
+import fc from 'fast-check';
 import { fromBraid } from '@/shared/knot/braid';
 import { bracket } from '@/shared/knot/bracket';
 import { diagram, unknot } from '@/shared/knot/diagram';
 import { jones } from '@/shared/knot/jones';
 import { stateSumBracket } from '@/shared/knot/statesum';
 import { Laurent } from '@/shared/poly/laurent';
+import { arbDiagram } from './arbitraries';
 import { atOmega, determinantOf } from './roots';
 
 const V = (pairs: [number, number][]) => Laurent.fromPairs(pairs);
@@ -86,5 +88,16 @@ describe('Jones polynomial: published values', () => {
       const d = fromBraid(word);
       expect(bracket(d).equals(stateSumBracket(d))).toBe(true);
     }
+  });
+});
+
+describe('bracket by contraction', () => {
+  it('equals the state sum on random diagrams (order chosen between greedy and tree decomposition)', () => {
+    fc.assert(
+      fc.property(arbDiagram(14), (d) => {
+        expect(bracket(d).equals(stateSumBracket(d))).toBe(true);
+      }),
+      { numRuns: 40 },
+    );
   });
 });
