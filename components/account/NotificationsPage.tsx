@@ -4,7 +4,7 @@ import { Pressable, StyleSheet, Switch, Text, View } from 'react-native';
 import { useRouter, type Href } from 'expo-router';
 import { notificationKinds, type Notification, type NotificationKind } from '@/shared/api/notifications';
 import { useMarkRead, useNotifications, useSaveSettings, useSettings } from '@/hooks/queries/useNotifications';
-import { formatComment } from '@/lib/comment-format';
+import { commentPlainText } from '@/shared/text/comment-markdown';
 import { when } from '@/components/feed/when';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
@@ -19,13 +19,10 @@ const kindLabels: Record<NotificationKind, string> = {
   invitation_accepted: 'People accepting my invitations',
 };
 
-/** The comment's words without its formatting markers. */
-const plain = (body: string) => formatComment(body).map((s) => s.text).join('');
-
 function describe(n: Notification): { text: string; href: Href } {
   switch (n.kind) {
     case 'comment':
-      return { text: `${n.payload.author} commented on “${n.payload.sketchTitle || 'Untitled sketch'}”: ${plain(n.payload.excerpt)}`, href: `/feed/${n.payload.groupId}/${n.payload.sketchId}` };
+      return { text: `${n.payload.author} commented on “${n.payload.sketchTitle || 'Untitled sketch'}”: ${commentPlainText(n.payload.excerpt)}`, href: `/feed/${n.payload.groupId}/${n.payload.sketchId}` };
     case 'run_finished':
       return { text: `Your run on “${n.payload.sketchTitle || 'Untitled sketch'}” ${n.payload.status}. ${n.payload.summary}`, href: `/runs/${n.payload.runId}` };
     case 'invitation_accepted':

@@ -17,7 +17,7 @@ function Composer({ initial = '', label, busy, onSubmit, onCancel }: { initial?:
   const [body, setBody] = useState(initial);
   return (
     <View style={styles.composer}>
-      <TextInput value={body} onChangeText={setBody} multiline aria-label={label} placeholder="Write a comment. **bold**, *italic*, `code`"
+      <TextInput value={body} onChangeText={setBody} multiline aria-label={label} placeholder="Write a comment: Markdown, maths between $…$"
         placeholderTextColor={colors.inkFaint} style={styles.input} />
       <View style={styles.row}>
         <Button label={label} busy={busy} busyLabel="Saving…" disabled={!body.trim()} onPress={() => onSubmit(body)} />

@@ -10,9 +10,9 @@ import { Button } from '@/components/ui/Button';
 import { Banner } from '@/components/ui/Banner';
 import { Dialog } from './Dialog';
 import { Field } from './Field';
+import { tagsFrom } from '@/shared/api/tags';
 import { colors, radius, space, type } from '@/constants/theme';
 
-const tagsOf = (text: string) => [...new Set(text.split(',').map((t) => t.trim()).filter(Boolean))];
 const time = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 function bytesOf(base64: string): Uint8Array {
@@ -45,7 +45,7 @@ export function SketchDetails({ sketch, visible, onClose }: { sketch: LocalSketc
   }, [visible, device, sketch.attachments]);
 
   const save = () =>
-    update.mutate({ id: sketch.id, patch: { title: title.trim(), seenAt: seenAt.trim(), notes, tags: tagsOf(tags) } }, { onSuccess: onClose, onError: (e) => setError(e.message) });
+    update.mutate({ id: sketch.id, patch: { title: title.trim(), seenAt: seenAt.trim(), notes, tags: tagsFrom(tags) } }, { onSuccess: onClose, onError: (e) => setError(e.message) });
 
   const addPhoto = async (from: 'camera' | 'library') => {
     setError(null);

@@ -11,6 +11,7 @@ export interface FeedFilter {
   groupId: string;
   /** Sketch versions below this one (the paging key: a sketch's version is a unique server seq). */
   before?: number;
+  /** In normal form (shared/api/tags.ts); stored tags typed before it are compared lower-cased. */
   tag?: string;
   ownerId?: string;
   hasResults?: boolean;
@@ -21,7 +22,7 @@ export async function feedSketches(db: Db, f: FeedFilter): Promise<Sketch[]> {
   const qb = db.getRepository(Sketch).createQueryBuilder('s').where('s.groupId = :g AND s.deleted = :no', { g: f.groupId, no: false });
   if (f.before) qb.andWhere('s.version < :before', { before: f.before });
   if (f.ownerId) qb.andWhere('s.ownerId = :owner', { owner: f.ownerId });
-  if (f.tag) qb.andWhere('EXISTS (SELECT 1 FROM json_each(s.tags) t WHERE t.value = :tag)', { tag: f.tag });
+  if (f.tag) qb.andWhere('EXISTS (SELECT 1 FROM json_each(s.tags) t WHERE lower(t.value) = :tag)', { tag: f.tag });
   if (f.hasResults !== undefined) {
     const sql = await hasResultsSql(db, 's.id');
     if (sql) qb.andWhere(f.hasResults ? sql : `NOT ${sql}`);

@@ -6,6 +6,8 @@ export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
+  /** An HTML alternative to the text, when the message carries formatted words (a comment). */
+  html?: string;
 }
 
 export interface Mailer {

@@ -1,13 +1,23 @@
 // The e-mail twin of each notification kind: a subject and a short text with a link back.
+import katex from 'katex';
 import type { NotificationKind, NotificationPayload } from '@/shared/api/notifications';
+import { commentMarkdown, commentPlainText } from '@/shared/text/comment-markdown';
 import type { OutgoingMail } from '../mail/mailer';
 
-type Texts = { [K in NotificationKind]: (p: NotificationPayload<K>, base: string) => { subject: string; lines: string[] } };
+// Comments in the HTML part as the app shows them; maths as MathML, which needs no style sheet.
+const md = commentMarkdown();
+md.renderer.rules.math_inline = (tokens, i) => katex.renderToString(tokens[i].content, { output: 'mathml', throwOnError: false });
+const escape = (s: string) => s.replace(/[&<>"]/g, (c) => `&${({ '&': 'amp', '<': 'lt', '>': 'gt', '"': 'quot' } as Record<string, string>)[c]};`);
+
+/** A line is plain words, or a comment's Markdown (its plain words in the text part, rendered in the HTML). */
+type Line = string | { markdown: string };
+type Text = { subject: string; lines: Line[] };
+type Texts = { [K in NotificationKind]: (p: NotificationPayload<K>, base: string) => Text };
 
 const texts: Texts = {
   comment: (p, base) => ({
     subject: `${p.author} commented on "${p.sketchTitle || 'Untitled sketch'}"`,
-    lines: [`${p.author} wrote:`, '', p.excerpt, '', `Open the sketch: ${base}/feed/${p.groupId}/${p.sketchId}`],
+    lines: [`${p.author} wrote:`, '', { markdown: p.excerpt }, '', `Open the sketch: ${base}/feed/${p.groupId}/${p.sketchId}`],
   }),
   run_finished: (p, base) => ({
     subject: `Run ${p.status} on "${p.sketchTitle || 'Untitled sketch'}"`,
@@ -20,10 +30,9 @@ const texts: Texts = {
 };
 
 export function notificationMail<K extends NotificationKind>(to: string, kind: K, payload: NotificationPayload<K>, base: string): OutgoingMail {
-  const { subject, lines } = (texts[kind] as (p: NotificationPayload<K>, b: string) => { subject: string; lines: string[] })(payload, base);
-  return {
-    to,
-    subject,
-    text: [...lines, '', 'You get these e-mails because of your Overstrand notification settings (Account > Notifications).'].join('\n'),
-  };
+  const { subject, lines } = (texts[kind] as (p: NotificationPayload<K>, b: string) => Text)(payload, base);
+  const all = [...lines, '', 'You get these e-mails because of your Overstrand notification settings (Account > Notifications).'];
+  const text = all.map((l) => (typeof l === 'string' ? l : commentPlainText(l.markdown))).join('\n');
+  if (all.every((l) => typeof l === 'string')) return { to, subject, text };
+  return { to, subject, text, html: all.map((l) => (typeof l !== 'string' ? md.render(l.markdown) : l ? `<p>${escape(l)}</p>` : '')).join('\n') };
 }

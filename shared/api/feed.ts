@@ -5,6 +5,7 @@ import { Comment } from './comments';
 import { Photo } from './photos';
 import { Role } from './groups';
 import { RecordId, Stroke } from './sketches';
+import { normalTag } from './tags';
 
 export const feedPaths = {
   feed: (groupId: string) => `/api/groups/${groupId}/feed`, // GET ?cursor=&tag=&person=&hasResults=
@@ -18,7 +19,8 @@ export const feedPageSize = 20;
 export const FeedQuery = z.object({
   /** The `nextCursor` of the previous page; absent for the first page. */
   cursor: z.coerce.number().int().min(1).optional(),
-  tag: z.string().trim().min(1).max(50).optional(),
+  /** Matched in normal form (shared/api/tags.ts): "#Torus Knot" finds "torus knot". */
+  tag: z.string().max(60).transform(normalTag).pipe(z.string().min(1).max(50)).optional(),
   /** Only sketches owned by this user id. */
   person: z.uuid({ message: 'person must be a user id' }).optional(),
   hasResults: z.enum(['true', 'false']).optional(),
