@@ -5,7 +5,7 @@ import { useRouter, type Href } from 'expo-router';
 import { notificationKinds, type Notification, type NotificationKind } from '@/shared/api/notifications';
 import { useMarkRead, useNotifications, useSaveSettings, useSettings } from '@/hooks/queries/useNotifications';
 import { commentPlainText } from '@/shared/text/comment-markdown';
-import { when } from '@/components/feed/when';
+import { when } from '@/lib/when';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { Section } from '@/components/ui/Section';

@@ -11,7 +11,7 @@ import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { CommentText } from './CommentText';
-import { when } from './when';
+import { when } from '@/lib/when';
 
 function Composer({ initial = '', label, busy, onSubmit, onCancel }: { initial?: string; label: string; busy: boolean; onSubmit: (body: string) => void; onCancel?: () => void }) {
   const [body, setBody] = useState(initial);
@@ -97,8 +97,9 @@ const styles = StyleSheet.create({
   item: { gap: 4, paddingBottom: space.md, borderBottomWidth: 1, borderBottomColor: colors.line },
   meta: { ...type.small, color: colors.inkMuted },
   author: { fontFamily: fonts.medium, color: colors.ink },
-  actions: { flexDirection: 'row', gap: space.lg },
-  action: { ...type.label, color: colors.accent },
+  actions: { flexDirection: 'row', gap: space.sm },
+  // A 44 px tall target around the 18 px line (touch targets, issue of the phone layout).
+  action: { ...type.label, color: colors.accent, minHeight: 44, minWidth: 44, paddingVertical: 13 },
   danger: { color: colors.danger },
   waiting: { fontFamily: fonts.medium, color: colors.inkFaint },
   refused: { fontFamily: fonts.medium, color: colors.danger },

@@ -8,7 +8,7 @@ import type { PressState } from '@/components/ui/press-state';
 import { Jones } from './Jones';
 import { StrokeThumb } from './StrokeThumb';
 import { superscripts } from './superscripts';
-import { when } from './when';
+import { when } from '@/lib/when';
 
 const PIC = 84;
 

@@ -20,7 +20,7 @@ import { Jones } from './Jones';
 import { PhotoStrip } from './PhotoStrip';
 import { StrokeThumb } from './StrokeThumb';
 import { superscripts } from './superscripts';
-import { when } from './when';
+import { when } from '@/lib/when';
 
 const pdText = (pd: GroupSketch['pd']) => pd.map((x) => `X[${x.join(',')}]`).join(' ');
 

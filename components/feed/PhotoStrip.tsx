@@ -75,7 +75,7 @@ const styles = StyleSheet.create({
   item: { gap: 4, alignItems: 'flex-start' },
   thumb: { width: 104, height: 104, borderRadius: radius.md, backgroundColor: colors.sunken },
   big: { width: '100%', borderRadius: radius.md, overflow: 'hidden', backgroundColor: colors.sunken },
-  remove: { ...type.label, color: colors.danger },
+  remove: { ...type.label, color: colors.danger, minHeight: 44, minWidth: 44, paddingVertical: 13 },
   hint: { ...type.small, color: colors.accent, maxWidth: 104 },
   row: { flexDirection: 'row' },
   muted: { ...type.small, color: colors.inkMuted },

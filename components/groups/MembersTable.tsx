@@ -10,7 +10,7 @@ import { useResendInvitation, useRevokeInvitation, useRoster } from '@/hooks/que
 import { useSession } from '@/hooks/useSession';
 import { assignableRoles, canEditMember } from '@/shared/api/roles';
 import { useIsWide } from '@/components/shell/useIsWide';
-import { when } from '@/components/feed/when';
+import { when } from '@/lib/when';
 import { Banner } from '@/components/ui/Banner';
 import { RoleBadge } from '@/components/ui/RoleBadge';
 import { RolePicker } from '@/components/ui/RolePicker';

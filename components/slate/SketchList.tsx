@@ -6,7 +6,7 @@ import { useKnownGroups, useLocalSketches } from '@/hooks/queries/useLocalSketch
 import type { LocalGroup, LocalSketch } from '@/lib/store/types';
 import { summaryOf } from '@/lib/slate/summary';
 import { StrokeThumb } from '@/components/feed/StrokeThumb';
-import { when } from '@/components/feed/when';
+import { when } from '@/lib/when';
 import { TeX } from '@/components/runs/Math';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';

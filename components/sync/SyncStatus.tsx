@@ -40,6 +40,6 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   pill: { borderRadius: radius.pill, paddingHorizontal: space.md, paddingVertical: 4 },
   text: { ...type.label },
-  action: { paddingHorizontal: space.sm, paddingVertical: 4 },
+  action: { minHeight: 44, justifyContent: 'center', paddingHorizontal: space.sm },
   actionText: { ...type.label, color: colors.accent },
 });
