@@ -81,6 +81,11 @@ export function GroupSketchPage({ groupId, sketchId }: { groupId: string; sketch
       <Text style={styles.meta}>
         {s.owner.displayName} · {when(s.updatedAt)}{s.seenAt ? ` · seen at ${s.seenAt}` : ''}
       </Text>
+      {s.forkedFrom ? (
+        <Text style={styles.meta}>
+          Forked from <Text role="link" style={styles.link} onPress={() => router.push(`/feed/${groupId}/${s.forkedFrom!.id}`)}>{s.forkedFrom.title || 'Untitled sketch'}</Text> by {s.forkedFrom.owner.displayName}
+        </Text>
+      ) : null}
       {s.tags.length ? <Text style={styles.tags}>{s.tags.map((t) => `#${t}`).join('  ')}</Text> : null}
       <Section title="Readout">
         <Text style={styles.readout}>
@@ -96,7 +101,8 @@ export function GroupSketchPage({ groupId, sketchId }: { groupId: string; sketch
       </Section>
       {s.notes ? <Text style={styles.notes}>{s.notes}</Text> : null}
       <View style={styles.actions}>
-        <Button label="Fork into my sketchbook" busy={fork.isPending} busyLabel="Forking…"
+        {/* On my own sketch a fork is a side action, not the page's first button. */}
+        <Button variant={s.can.unshare ? 'secondary' : 'primary'} label="Fork into my sketchbook" busy={fork.isPending} busyLabel="Forking…"
           onPress={() => fork.mutate(s.id, { onSuccess: (r) => setForked(r.id) })} />
         {s.can.comment && s.pd.length ? (
           <Button variant="secondary" label="Start a run"
@@ -107,11 +113,12 @@ export function GroupSketchPage({ groupId, sketchId }: { groupId: string; sketch
             onPress={() => share.mutate({ sketchId: s.id, groupId: null }, { onSuccess: () => router.replace('/feed') })} />
         ) : null}
       </View>
-      {forked ? <Banner tone="success" title="Forked">A private copy is in your sketchbook; it reaches your devices on the next sync.</Banner> : null}
-      {fork.error ? <Banner tone="error">{fork.error.message}</Banner> : null}
-      {s.forkedFrom ? (
-        <Section title="Forked from"><Refs refs={[s.forkedFrom]} groupId={groupId} /></Section>
+      {forked ? (
+        <Banner tone="success" title="Forked">
+          A private copy is in your sketchbook. <Text role="link" style={styles.link} onPress={() => router.push(`/sketches/${forked}`)}>Open it</Text>
+        </Banner>
       ) : null}
+      {fork.error ? <Banner tone="error">{fork.error.message}</Banner> : null}
       {s.sameInvariants.length ? (
         <Section title="Same invariants as" note="Same crossing count and Jones polynomial, or the same Khovanov result.">
           <Refs refs={s.sameInvariants} groupId={groupId} />

@@ -118,8 +118,13 @@ export function useDeleteComment(groupId: string) {
   return useMutation({ mutationFn: (id: string) => api('DELETE', commentPaths.comment(id), null), onSuccess: refresh });
 }
 
+/** The fork reaches this device's sketchbook at once: a pull right after the server made it. */
 export function useFork() {
-  return useMutation({ mutationFn: (sketchId: string) => api('POST', feedPaths.fork(sketchId), ForkResponse) });
+  const device = useDevice();
+  return useMutation({
+    mutationFn: (sketchId: string) => api('POST', feedPaths.fork(sketchId), ForkResponse),
+    onSuccess: () => void device?.engine.syncNow().catch(() => undefined),
+  });
 }
 
 /** An image the user picked, as the browser or the device hands it over. */
