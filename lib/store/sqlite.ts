@@ -18,6 +18,7 @@ export const migrations: readonly string[] = [
   ['meta', 'records', 'outbox', 'rejected', 'revisions', 'uploads', 'comments', 'runs'].map(kv).join(';\n'),
 ];
 
+/** Brings the schema up to date; resolves to how many migrations it applied. */
 export async function migrate(db: SqlDatabase): Promise<number> {
   const row = await db.getFirstAsync<{ user_version: number }>('PRAGMA user_version');
   const from = row?.user_version ?? 0;
@@ -27,7 +28,7 @@ export async function migrate(db: SqlDatabase): Promise<number> {
       await db.execAsync(`PRAGMA user_version = ${v + 1}`);
     });
   }
-  return migrations.length;
+  return Math.max(0, migrations.length - from);
 }
 
 /** The caller (LocalStore) runs one operation at a time, so a transaction is never interleaved. */

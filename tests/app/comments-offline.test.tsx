@@ -83,7 +83,7 @@ test('S34 online but the post does not reach the server: queued under the id it 
 
 test('S34 a comment the server refused stays in the thread with the reason, and an API refusal is not queued', async () => {
   const calls = mockFetch(() => ({ status: 403, body: { error: { code: 'forbidden', message: 'Viewers cannot comment' } } }));
-  const waiting = (await store.comments(SKETCH)).find((c) => c.state === 'waiting')!;
+  const waiting = await store.addComment(SKETCH, 'Posted just before the sketch was unshared');
   await store.commentSettled(waiting, 'the sketch is not shared with you any more (POST /api/sketches/sketch-1/comments answered 404)'); // as the engine words it
   renderThread();
   expect(await screen.findByText('Not sent: the sketch is not shared with you any more (POST /api/sketches/sketch-1/comments answered 404)')).toBeOnTheScreen();

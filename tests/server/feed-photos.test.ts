@@ -205,7 +205,7 @@ describe('a board photo attached on a device is a photo of the shared sketch (S2
     expect((await sharp(input).metadata()).exif).toBeDefined(); // the camera's EXIF with GPS is there going in
     const h = await d.store.queueUpload(new Uint8Array(input), 'image/jpeg');
     const s = await d.store.create({ title: 'From the seminar board', groupId: c.group, attachments: [h] });
-    expect(await d.sync()).toBeTruthy(); // offline: nothing left the device
+    expect(await d.sync()).toMatchObject({ message: 'offline (test)' }); // offline: nothing left the device
     d.faults.offline = false;
     expect(await d.sync()).toBeNull();
     expect((await d.store.counts()).uploads).toBe(0);

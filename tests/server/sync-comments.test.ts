@@ -33,12 +33,12 @@ test('S34: a comment on a sketch shared offline goes after its sketch, once acro
   d.faults.offline = true;
   const s = await d.store.create({ title: 'Shared in the field', groupId: group });
   const c = await d.store.addComment(s.id, 'drawn from the board, check the crossing signs');
-  expect(await d.sync()).toBeTruthy(); // offline
+  expect(await d.sync()).toMatchObject({ message: 'offline (test)' }); // offline
   expect((await d.store.counts()).comments).toBe(1);
 
   d.faults.offline = false;
   d.faults.dropCommentAnswers = 1;
-  expect(await d.sync()).toBeTruthy(); // the server made the comment, the answer was lost
+  expect(await d.sync()).toMatchObject({ message: 'answer lost (test)' }); // the server made the comment, the answer was lost
   expect((await serverComments(s.id)).map((x) => x.id)).toEqual([c.id]); // the sketch got there first
   expect((await d.store.comments(s.id))[0].state).toBe('waiting');
 
@@ -64,7 +64,7 @@ test('S34: a member\'s offline comment on another\'s sketch notifies its owner o
   const c = await b.store.addComment(s.id, 'is it the left-handed one?');
   b.faults.offline = false;
   b.faults.dropCommentAnswers = 1;
-  expect(await b.sync()).toBeTruthy();
+  expect(await b.sync()).toMatchObject({ message: 'answer lost (test)' });
   b.reload(); // the app restarts before the retry
   expect(await b.sync()).toBeNull();
   expect((await b.store.comments(s.id)).map((x) => x.state)).toEqual(['sent']);
