@@ -1,4 +1,5 @@
-// Query key factories: every cached server answer is named here, so invalidation is exact.
+// Query key factories of the account and its groups. Other resources keep their factory beside
+// their hooks (feedKeys, runKeys, localKeys, notificationKeys); every cached answer has one.
 export const keys = {
   me: () => ['me'] as const,
   groups: {

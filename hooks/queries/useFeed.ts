@@ -21,10 +21,11 @@ export interface FeedFilters {
 }
 
 export const feedKeys = {
-  group: (groupId: string) => ['feed', groupId] as const,
+  all: () => ['feed'] as const,
+  group: (groupId: string) => [...feedKeys.all(), groupId] as const,
   list: (groupId: string, f: FeedFilters) => [...feedKeys.group(groupId), 'list', f] as const,
   sketch: (groupId: string, sketchId: string) => [...feedKeys.group(groupId), 'sketch', sketchId] as const,
-  mySketches: () => ['feed', 'my-sketches'] as const,
+  mySketches: () => [...feedKeys.all(), 'my-sketches'] as const,
 };
 
 function feedPath(groupId: string, f: FeedFilters, cursor: number | null): string {
@@ -181,7 +182,7 @@ export function useShare() {
       await device.engine.syncNow().catch(() => undefined); // offline: the next round sends it
       if ((await refused()) > before) throw new Error('The server refused the change: only the owner shares a sketch, and not to a group where they are a viewer.');
     },
-    onSuccess: () => qc.invalidateQueries({ queryKey: ['feed'] }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: feedKeys.all() }),
   });
 }
 

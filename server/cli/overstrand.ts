@@ -1,4 +1,4 @@
-// The `overstrand` command line (issue 3 contract): `invariants` for one diagram, `batch` for
+// The `overstrand` command line (the contract in DEVELOPERS.md, Command line): `invariants` for one diagram, `batch` for
 // JSON lines on stdin (streamed: one answer per line as it arrives), `kh` for a Khovanov table.
 // All mathematics lives in shared/; this file only reads, validates and prints.
 import { Command, Option } from 'commander';

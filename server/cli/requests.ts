@@ -1,6 +1,6 @@
 // One `overstrand` request: which diagram (PD code, braid word or DT code) and what to compute,
 // validated with zod, answered as a plain JSON object. Shared by `batch` (one per line) and
-// `invariants --json`, so both speak the contract of issue 3 exactly.
+// `invariants --json`, so both speak the same contract (DEVELOPERS.md, Command line).
 import { z } from 'zod';
 import { cable, Diagram, diagram, fromBraid, fromDT, Laurent, orient, writhe } from '@/shared/knot';
 import { alexander } from '@/shared/knot/alexander';

@@ -4,7 +4,7 @@
 // braid closures on p strands.
 // Memory is the process's resident set (rss), sampled after every merged crossing; the cube
 // is sampled once at its end, a lower bound of its peak.
-// Then the cables of issue 10 (research scale), each run once and stopped after CAP_S seconds
+// Then cables at research scale, each run once and stopped after CAP_S seconds
 // ("over" the cap then), with peak rss, widest open boundary, most objects, and the Euler check
 // (q + q^-1) V of every result.
 

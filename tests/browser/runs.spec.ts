@@ -115,7 +115,7 @@ test('offline, a small diagram is computed on the device in a web worker', async
     await table.waitFor({ timeout: 30_000 });
     expect(page.workers().length).toBeGreaterThan(0); // the engine runs in a web worker, not on the page
     // The negative trefoil is the mirror: torsion Z/2 moves from (3,7) to (1-3,-7) = (-2,-7)
-    // (mirror duality of Kh over Z, Khovanov 2000, math/9908171, as stated in issue 4).
+    // (mirror duality of Kh over Z, Khovanov 2000, math/9908171).
     await expect(table.getByRole('math', { name: 'Z/2' }).isVisible()).resolves.toBe(true);
     await expect(table.getByRole('rowheader', { name: '-7', exact: true }).isVisible()).resolves.toBe(true);
     await shoot(page, 'runs-07-on-device');
