@@ -28,7 +28,7 @@ interface Ring<T> {
 const DOUBLES: Ring<number> = { zero: 0, one: 1, maxAbs: (c) => c.reduce((m, x) => Math.max(m, Math.abs(x)), 0), add: (a, b) => a + b, neg: (a) => -a, big: (a) => BigInt(a) };
 const BIGINTS: Ring<bigint> = { zero: 0n, one: 1n, add: (a, b) => a + b, neg: (a) => -a, big: (a) => a };
 
-/** The Kauffman bracket <D> in A, normalised so that <O> = 1 (DESIGN.md conventions). */
+/** The Kauffman bracket <D> in A, normalised so that <O> = 1 (docs/conventions.md). */
 export function bracket(d: Diagram): Laurent {
   return bracketOfPD(d.pd, d.unknots);
 }

@@ -17,7 +17,7 @@ import { torusLink } from '@/shared/knot/families/torus';
 import { seededRng } from '@/shared/knot/moves';
 import { orient, PDCode } from '@/shared/knot/pd';
 import { integers } from '@/shared/linalg/ring';
-import { randomWord } from '../shared/khovanov-fixtures';
+import { randomWord } from '@/tests/shared/khovanov-fixtures';
 import type { Line } from './timing';
 
 const MB = 1024 * 1024;
