@@ -126,20 +126,21 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   const max = deps.config.runs.maxCrossings;
   const base = { ...t, ring: req.ring, reduced: req.reduced };
   let id: string;
+  let queued: Run[];
   if (req.kind === 'khovanov') {
     if (d.pd.length > max) throw badDiagram(`The diagram has ${d.pd.length} crossings; this server computes at most ${max} per run.`);
     const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov' });
     await insertRun(deps.db, run);
     await settle();
-    id = run.id;
+    [id, queued] = [run.id, [run]];
   } else {
-    id = await startSweep(deps, user, { ...base, kind: 'cable-sweep', sweep: req.sweep! }, d);
+    ({ id, queued } = await startSweep(deps, user, { ...base, kind: 'cable-sweep', sweep: req.sweep! }, d));
   }
-  schedulerOf(deps).poke();
+  schedulerOf(deps).submit(queued.filter((r) => r.status === 'queued'));
   return getRun(deps, user, id);
 }
 
-async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promise<string> {
+async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promise<{ id: string; queued: Run[] }> {
   const components = componentCount(d);
   const { maxStrands } = n.sweep!;
   const size = sweepSize(components, maxStrands);
@@ -162,7 +163,7 @@ async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promis
   for (const { run } of planned) await insertRun(deps.db, run);
   for (const { settle } of planned) await settle();
   await refreshSweep(deps, sweep.id);
-  return sweep.id;
+  return { id: sweep.id, queued: planned.map((p) => p.run) };
 }
 
 async function visibleRun(deps: Deps, user: User, id: string): Promise<Run> {
