@@ -2,6 +2,7 @@
 // zod contract (shared/api), every failure turned into an ApiError the screens can switch on.
 import { z } from 'zod';
 import { ApiErrorBody, type ErrorCode } from '@/shared/api/errors';
+import { authorizedFetch, serverUrl } from './http';
 
 /** Failures that never reached (or never came back from) the server as a proper API error. */
 export type ClientErrorCode = 'network' | 'bad_response';
@@ -23,14 +24,8 @@ export function isApiError(e: unknown, code?: ApiError['code']): e is ApiError {
   return e instanceof ApiError && (code === undefined || e.code === code);
 }
 
-/**
- * Web: same origin as the page (the server serves the build and /api). Native: the group's
- * server, from EXPO_PUBLIC_API_URL at build time.
- */
-const baseUrl = process.env.EXPO_PUBLIC_API_URL ?? '';
-
 /** An absolute URL for a server path the API handed out (e.g. a signed photo URL for <Image>). */
-export const apiUrl = (path: string) => baseUrl + path;
+export const apiUrl = serverUrl;
 
 let tokenSource: () => string | null = () => null;
 let onUnauthorized: () => void = () => {};
@@ -57,15 +52,14 @@ export async function api(method: Method, path: string, schema: z.ZodType | null
   // FormData (uploads) sets its own multipart Content-Type with the boundary.
   const form = typeof FormData !== 'undefined' && body instanceof FormData;
   if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
-  if (token) headers.Authorization = `Bearer ${token}`;
 
   let res: Response;
   try {
-    res = await fetch(baseUrl + path, {
+    res = await authorizedFetch(serverUrl(path), {
       method,
       headers,
       body: body === undefined ? undefined : form ? (body as FormData) : JSON.stringify(body),
-    });
+    }, token);
   } catch {
     throw new ApiError(0, 'network', 'Cannot reach the server. Check the connection and try again.');
   }

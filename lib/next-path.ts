@@ -1,14 +1,25 @@
 import type { Href } from 'expo-router';
 
+// Any origin will do: only whether `next` stays on it matters.
+const HERE = 'https://overstrand.invalid';
+
 /**
  * Where to go after signing in: the `next` query parameter when it is a path inside this app,
- * else the sketchbook. Anything else (another origin, "//host") is ignored, so a crafted
- * sign-in link cannot send people away.
+ * else the sketchbook. Anything that a browser would resolve to another origin ("//host",
+ * "/\host", "https:host", tabs or newlines inside) is ignored, so a crafted sign-in link cannot
+ * send people away. The URL parser decides, as the browser will, not a string prefix.
  */
 export function nextPath(next: string | string[] | undefined): Href {
   const value = Array.isArray(next) ? next[0] : next;
+  if (!value?.startsWith('/')) return '/sketches';
+  let url: URL;
+  try {
+    url = new URL(value, HERE);
+  } catch {
+    return '/sketches';
+  }
   // A checked path of this app: the router resolves it (or shows its not-found page).
-  return value && value.startsWith('/') && !value.startsWith('//') ? (value as Href) : '/sketches';
+  return url.origin === HERE ? ((url.pathname + url.search + url.hash) as Href) : '/sketches';
 }
 
 export function withNext(pathname: '/sign-in' | '/sign-up', next: string | undefined): Href {

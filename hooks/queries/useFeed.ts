@@ -8,6 +8,7 @@ import { Photo, photoPaths } from '@/shared/api/photos';
 import { MemberList, groupPaths } from '@/shared/api/groups';
 import { SketchList, sketchPaths } from '@/shared/api/sketches';
 import { api, isApiError } from '@/lib/api';
+import { randomId } from '@/lib/crypto';
 import { syncStatus } from '@/lib/store/device';
 import type { LocalComment } from '@/lib/store/types';
 import { useDevice } from '@/hooks/useDevice';
@@ -69,7 +70,7 @@ export function useAddComment(groupId: string, sketchId: string) {
   return useMutation({
     networkMode: 'always', // offline is handled here, not paused
     mutationFn: async (body: string): Promise<{ queued: boolean }> => {
-      const id = globalThis.crypto.randomUUID();
+      const id = randomId();
       const queue = async () => {
         if (!device) throw new Error('Cannot reach the server, and the device store is not open yet to keep the comment.');
         await device.store.addComment(sketchId, body, id);

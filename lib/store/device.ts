@@ -1,6 +1,8 @@
 // The app's device store and sync engine, one per signed-in account (a shared browser never
 // mixes two people's sketchbooks), opened on first use and kept in sync from then on.
 import { openDatabaseAsync } from 'expo-sqlite';
+import { randomId, sha256Hex } from '@/lib/crypto';
+import { serverUrl } from '@/lib/http';
 import { autoSync } from '@/lib/sync/autosync';
 import { SyncEngine } from '@/lib/sync/engine';
 import { createSyncStatusStore } from '@/lib/sync/status-store';
@@ -19,8 +21,7 @@ export const syncStatus = createSyncStatusStore();
 const opened = new Map<string, Promise<OpenDevice>>();
 const stops = new Map<string, () => void>();
 
-/** Web: same origin as the page; native: EXPO_PUBLIC_API_URL (as lib/api.ts). */
-const baseUrl = () => process.env.EXPO_PUBLIC_API_URL ?? '';
+const baseUrl = () => serverUrl('');
 
 export function openDevice(userId: string, token: () => string | null): Promise<OpenDevice> {
   let d = opened.get(userId);
@@ -28,7 +29,7 @@ export function openDevice(userId: string, token: () => string | null): Promise<
     d = (async () => {
       const db = await openDatabaseAsync(`overstrand-${userId}.db`);
       await migrate(db);
-      const store = new LocalStore(sqliteTables(db));
+      const store = new LocalStore(sqliteTables(db), { newId: randomId, sha256Hex });
       const engine = new SyncEngine({ store, transport: httpTransport({ baseUrl, token }), status: syncStatus });
       stops.set(userId, autoSync(store, engine, syncStatus));
       return { userId, store, engine };

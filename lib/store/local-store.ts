@@ -7,8 +7,10 @@ import { applyPulled, outOfScope, sameViewer, type LocalRecord } from '@/sync/re
 import { numberKey, type Tables } from './tables';
 import type { LocalComment, LocalConflict, LocalGroup, LocalSketch, PendingUpload, Revision, SketchRepository, SyncCounts, SyncStore } from './types';
 
+/** The device's crypto comes in from outside (lib/crypto.ts in the app, node:crypto in tests). */
 export interface StoreOptions {
-  newId?: () => string;
+  newId: () => string;
+  sha256Hex: (bytes: Uint8Array) => Promise<string>;
   now?: () => Date;
 }
 
@@ -23,22 +25,19 @@ function toBase64(bytes: Uint8Array): string {
   return btoa(s);
 }
 
-async function sha256Hex(bytes: Uint8Array): Promise<string> {
-  const digest = await globalThis.crypto.subtle.digest('SHA-256', new Uint8Array(bytes));
-  return [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
-}
-
 export class LocalStore implements SketchRepository, SyncStore {
   private queue: Promise<unknown> = Promise.resolve();
   private listeners = new Set<() => void>();
   private readonly newId: () => string;
+  private readonly sha256Hex: (bytes: Uint8Array) => Promise<string>;
   private readonly now: () => Date;
 
   constructor(
     private readonly tables: Tables,
-    opts: StoreOptions = {},
+    opts: StoreOptions,
   ) {
-    this.newId = opts.newId ?? (() => globalThis.crypto.randomUUID());
+    this.newId = opts.newId;
+    this.sha256Hex = opts.sha256Hex;
     this.now = opts.now ?? (() => new Date());
   }
 
@@ -165,7 +164,7 @@ export class LocalStore implements SketchRepository, SyncStore {
   }
 
   async queueUpload(bytes: Uint8Array, mimeType: string): Promise<string> {
-    const sha256 = await sha256Hex(bytes);
+    const sha256 = await this.sha256Hex(bytes);
     const item: PendingUpload = { sha256, mimeType, base64: toBase64(bytes) };
     await this.tx((t) => t.put('uploads', sha256, item), true);
     return sha256;

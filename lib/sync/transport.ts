@@ -3,6 +3,7 @@
 // (network, 5xx) from "stop" (401) and "our bug" (other 4xx).
 import { Comment, commentPaths, type NewCommentRequest } from '@/shared/api/comments';
 import { PullResponse, PushResponse, syncPaths, type PushRequest } from '@/shared/api/sync';
+import { authorizedFetch } from '@/lib/http';
 
 export type TransportFailure = 'network' | 'unauthorized' | 'server' | 'client';
 
@@ -27,24 +28,19 @@ export interface SyncTransport {
 }
 
 export interface HttpOptions {
-  /** A function, so a test can move the server (restart on another port). */
+  /** The server's origin ('' on web); a function, so a test can move the server (restart on another port). */
   baseUrl: () => string;
   token: () => string | null;
   fetch?: typeof fetch;
 }
 
 export function httpTransport(opts: HttpOptions): SyncTransport {
-  const doFetch = opts.fetch ?? ((input, init) => fetch(input, init));
-
   async function call(path: string, init: RequestInit): Promise<Response> {
-    const headers = new Headers(init.headers);
-    const token = opts.token();
-    if (token) headers.set('Authorization', `Bearer ${token}`);
     let res: Response;
     try {
-      res = await doFetch(opts.baseUrl() + path, { ...init, headers });
+      res = await authorizedFetch(opts.baseUrl() + path, init, opts.token(), opts.fetch);
     } catch (e) {
-      throw new TransportError('network', e instanceof Error ? e.message : 'Network error');
+      throw new TransportError('network', (e as Error).message);
     }
     if (res.ok || res.status === 404) return res;
     const kind = res.status === 401 ? 'unauthorized' : res.status >= 500 || res.status === 429 ? 'server' : 'client';

@@ -1,7 +1,7 @@
 // Development-only pages over the SMTP fake: a JSON list for tests and an HTML page where the
 // links in the kept mail can be clicked. Mounted only when config.devPages is on.
 import { Router } from 'express';
-import type { KeptMail } from '@/shared/api/dev-mail';
+import { devMailPaths, type KeptMail } from '@/shared/api/dev-mail';
 import type { Deps } from '../deps';
 import { URL_PATTERN } from './smtp-fake';
 
@@ -34,10 +34,10 @@ ${items || '<p>No mail yet.</p>'}</body></html>`;
 export function routes({ mailbox }: Deps): Router {
   const router = Router();
   if (!mailbox) return router;
-  router.get('/api/dev/mail', (_req, res) => {
+  router.get(devMailPaths.list, (_req, res) => {
     res.json(mailbox.list());
   });
-  router.get('/dev/mail', (_req, res) => {
+  router.get(devMailPaths.page, (_req, res) => {
     res.type('html').send(page(mailbox.list()));
   });
   return router;

@@ -1,7 +1,7 @@
 // The members page of a group (owners and admins): the roster with joined and last-active
 // times, and resending a pending invitation (a new link; the old one stops working).
 import { z } from 'zod';
-import { Invitation, Member } from './groups';
+import { Member } from './groups';
 
 export const memberPaths = {
   roster: (groupId: string) => `/api/groups/${groupId}/roster`, // GET (owner/admin)
@@ -16,4 +16,3 @@ export const RosterEntry = Member.extend({
 export type RosterEntry = z.infer<typeof RosterEntry>;
 export const Roster = z.array(RosterEntry);
 
-export const ResendResponse = Invitation;

@@ -1,7 +1,7 @@
 // The sync protocol's messages (sync/SPEC.md; rule ids in comments). Shared by the device
 // engine (lib/sync), the pure protocol library (sync/) and the server (server/sync).
 import { z } from 'zod';
-import { RecordId, SketchFields, SketchFieldsPatch } from './sketches';
+import { RecordId, SketchFieldsPatch } from './sketches';
 
 export const syncPaths = {
   push: '/api/sync/push',
@@ -49,7 +49,6 @@ export const fieldPatchSchemas = {
   sketch: SketchFieldsPatch,
   conflict: ConflictFieldsPatch,
 } as const;
-export const fullFieldSchemas = { sketch: SketchFields, conflict: ConflictFields } as const;
 
 export const SyncRecord = z.object({
   id: RecordId,

@@ -6,7 +6,10 @@ export function deviceMock() {
   const { createSyncStatusStore } = jest.requireActual('@/lib/sync/status-store');
   const { autoSync } = jest.requireActual('@/lib/sync/autosync');
   let n = 0;
-  const store = new LocalStore(memoryTables(), { newId: () => `00000000-0000-4000-8000-${String(++n).padStart(12, '0')}` });
+  const store = new LocalStore(memoryTables(), {
+    ...jest.requireActual('../sync/node-crypto').nodeCrypto,
+    newId: () => `00000000-0000-4000-8000-${String(++n).padStart(12, '0')}`,
+  });
   const engine = { start: jest.fn(), stop: jest.fn(), setOnline: jest.fn(), syncNow: jest.fn(async () => undefined) };
   const syncStatus = createSyncStatusStore();
   const opened = Promise.resolve({ userId: 'u1', store, engine });

@@ -14,6 +14,12 @@ jest.mock('expo-sqlite/kv-store', () => {
   return { __esModule: true, default: store };
 });
 
+// expo-crypto has no native module under Jest: the device's ids and hashes come from Node.
+jest.mock('@/lib/crypto', () => {
+  const { nodeCrypto } = jest.requireActual('../sync/node-crypto');
+  return { __esModule: true, randomId: nodeCrypto.newId, sha256Hex: nodeCrypto.sha256Hex };
+});
+
 // TanStack Query keeps unused entries for gcTime (5 minutes) behind a timer that would hold
 // Jest open; with gcTime Infinity no timer is set, and each test starts from an empty cache.
 const { queryClient } = require('@/lib/query-client') as typeof import('@/lib/query-client');

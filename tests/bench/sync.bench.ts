@@ -1,6 +1,7 @@
 // Sync of 1000 sketches on loopback (goal: <= 5 s each way) and the size of a pull page.
 // Real server (in-memory database), real engine and LocalStore over memory tables.
 import { LocalStore } from '@/lib/store/local-store';
+import { nodeCrypto } from '../sync/node-crypto';
 import { memoryTables } from '@/lib/store/memory';
 import { SyncEngine } from '@/lib/sync/engine';
 import { createSyncStatusStore } from '@/lib/sync/status-store';
@@ -29,7 +30,7 @@ export async function syncBench(): Promise<Line[]> {
     });
     const { token } = AuthResponse.parse(await res.json());
     const device = () => {
-      const store = new LocalStore(memoryTables());
+      const store = new LocalStore(memoryTables(), nodeCrypto);
       const transport = httpTransport({ baseUrl: () => server.url, token: () => token });
       return { store, engine: new SyncEngine({ store, transport, status: createSyncStatusStore() }) };
     };

@@ -2,7 +2,7 @@
 // removal, resend and revoke of invitations (role x action matrix), and the notification the
 // inviter gets when an invitation is accepted.
 import request from 'supertest';
-import { KeptMailList } from '@/shared/api/dev-mail';
+import { KeptMailList, devMailPaths } from '@/shared/api/dev-mail';
 import { Invitation } from '@/shared/api/groups';
 import { Roster } from '@/shared/api/members';
 import { NotificationList } from '@/shared/api/notifications';
@@ -26,7 +26,7 @@ async function invite(email: string) {
 }
 
 async function lastTokenTo(email: string): Promise<string> {
-  const mail = KeptMailList.parse((await request(server.url).get('/api/dev/mail')).body).filter((m) => m.to.includes(email));
+  const mail = KeptMailList.parse((await request(server.url).get(devMailPaths.list)).body).filter((m) => m.to.includes(email));
   return new URL(mail[mail.length - 1].links.find((l) => l.includes('/invite/'))!).pathname.replace('/invite/', '');
 }
 

@@ -125,7 +125,7 @@ describe('limits', () => {
     const { id } = (await start(server, token, { diagram: { pd: slow() }, ring: 'Q' })).body;
     const run = await waitFor(server, token, id, ended);
     expect(run.status).toBe('failed');
-    expect(run.error).toMatch(/^Stopped after the time limit of 2 s per run/);
+    expect(run.error).toMatch(/^Stopped after the time limit of 1.5 s per run/);
   });
 
   it('fails a run that needs more memory than the limit', async () => {

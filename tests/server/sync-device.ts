@@ -1,6 +1,7 @@
 // A device for the fault tests: the real sync engine and LocalStore over in-memory tables
 // (the same interface as expo-sqlite), talking HTTP to the real server, with faults to inject.
 import { LocalStore } from '@/lib/store/local-store';
+import { nodeCrypto } from '../sync/node-crypto';
 import { memoryDisk, memoryTables, type MemoryDisk } from '@/lib/store/memory';
 import { SyncEngine } from '@/lib/sync/engine';
 import { createSyncStatusStore } from '@/lib/sync/status-store';
@@ -38,7 +39,7 @@ export class Device {
 
   /** A page reload / app restart: everything in memory is gone except the "disk". */
   reload(): void {
-    this.store = new LocalStore(memoryTables(this.disk));
+    this.store = new LocalStore(memoryTables(this.disk), nodeCrypto);
     this.status = createSyncStatusStore();
     this.engine = new SyncEngine({ store: this.store, transport: this.transport(), status: this.status, pageSize: this.pageSize, random: () => 0 });
   }

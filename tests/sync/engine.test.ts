@@ -1,5 +1,6 @@
 // The sync engine's schedule (sync/SPEC.md S29, S30, S31) against a scripted transport.
 import { LocalStore } from '@/lib/store/local-store';
+import { nodeCrypto } from './node-crypto';
 import { memoryTables } from '@/lib/store/memory';
 import { SyncEngine } from '@/lib/sync/engine';
 import { createSyncStatusStore } from '@/lib/sync/status-store';
@@ -7,7 +8,7 @@ import { TransportError, type SyncTransport } from '@/lib/sync/transport';
 import type { PushRequest } from '@/shared/api/sync';
 
 function setup(failures: TransportError[]) {
-  const store = new LocalStore(memoryTables());
+  const store = new LocalStore(memoryTables(), nodeCrypto);
   const status = createSyncStatusStore();
   const calls: string[] = [];
   const delays: number[] = [];

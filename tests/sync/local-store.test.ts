@@ -2,6 +2,7 @@
 // lib/store/sqlite.ts (run here on better-sqlite3 behind expo-sqlite's async call shapes).
 import Database from 'better-sqlite3';
 import { LocalStore } from '@/lib/store/local-store';
+import { nodeCrypto } from './node-crypto';
 import { memoryTables } from '@/lib/store/memory';
 import { migrate, migrations, sqliteTables, type SqlDatabase } from '@/lib/store/sqlite';
 import type { Tables } from '@/lib/store/tables';
@@ -44,7 +45,7 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
   beforeEach(async () => {
     n = 0;
     const ids = () => `00000000-0000-4000-8000-${String(++n).padStart(12, '0')}`;
-    store = new LocalStore(await open(), { newId: ids, now: () => new Date('2026-12-01T12:00:00Z') });
+    store = new LocalStore(await open(), { ...nodeCrypto, newId: ids, now: () => new Date('2026-12-01T12:00:00Z') });
   });
 
   test('S8: a write shows at once and queues a mutation, in clock order', async () => {
@@ -163,7 +164,7 @@ describe.each(kinds)('LocalStore on %s tables', (_name, open) => {
       put: (c, k, v) => (failRecords && c === 'records' ? Promise.reject(new Error('disk full (test)')) : t.put(c, k, v)),
     });
     const flaky: Tables = { ...tables, transaction: (work) => tables.transaction((inner) => work(failing(inner))) };
-    const s2 = new LocalStore(flaky);
+    const s2 = new LocalStore(flaky, nodeCrypto);
     const s = await s2.create({ title: 'x' });
     failRecords = true;
     await expect(s2.update(s.id, { title: 'y' })).rejects.toThrow('disk full');

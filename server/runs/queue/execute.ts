@@ -5,6 +5,7 @@
 // other error is thrown, for the back end to record or retry.
 import type { KhResultJson, RunDiagram } from '@/shared/api/runs';
 import type { Progress } from '@/shared/khovanov';
+import { formatDuration } from '@/shared/text/duration';
 import type { RunLimits } from '../limits';
 import { isOutOfMemory, type RunPool } from '../pool';
 
@@ -64,10 +65,4 @@ export async function execute(
 export function failureMessage(err: unknown): string {
   const message = (err as { message?: unknown } | null)?.message;
   return typeof message === 'string' ? `The computation failed: ${message}` : 'The computation failed';
-}
-
-export function formatDuration(ms: number): string {
-  if (ms < 1000) return `${ms} ms`;
-  if (ms < 120_000) return `${Math.round(ms / 1000)} s`;
-  return `${Math.round(ms / 60_000)} min`;
 }
