@@ -1,8 +1,12 @@
 // The Readout: the instant invariants of the diagram on the Slate, each marked while it is
-// being recomputed, with what to do when there is nothing to compute yet.
+// being recomputed, with what to do when there is nothing to compute yet; the s-invariant
+// (hooks/useSInvariant, in a web worker) with the slice-genus bounds from s and the signature.
 import { StyleSheet, Text, View } from 'react-native';
 import type { Marker } from '@/shared/drawing/crossings';
 import type { ReadoutState } from '@/hooks/useReadout';
+import type { SState } from '@/hooks/useSInvariant';
+import { sliceGenusBounds } from '@/shared/rasmussen';
+import { S_MAX_CROSSINGS } from './local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
 import { nameTeX } from '@/lib/slate/readout';
 import { TeX } from '@/components/runs/Math';
@@ -10,18 +14,16 @@ import { colors, fonts, radius, space, type } from '@/constants/theme';
 
 type Props = {
   state: ReadoutState;
+  s: SState;
   /** Why there is no diagram yet (null: there is one). */
   empty: null | 'nothing' | 'open' | 'markers';
   markers: readonly Marker[];
   openStrands: number;
 };
 
-function Row({ label, k, state, children }: { label: string; k: ReadoutKey; state: ReadoutState; children: React.ReactNode }) {
-  const stale = state.stale.has(k);
-  const error = state.errors[k];
-  const has = state.values[k] !== undefined;
+function Line({ label, testID, stale, error, has, children }: { label: string; testID: string; stale: boolean; error?: string; has: boolean; children: React.ReactNode }) {
   return (
-    <View style={styles.row} aria-busy={stale} testID={`readout-${k}`}>
+    <View style={styles.row} aria-busy={stale} testID={testID}>
       <View style={styles.labelCol}>
         <Text style={styles.label}>{label}</Text>
         {stale ? <Text style={styles.updating} accessibilityLabel={`${label} updating`}>updating…</Text> : null}
@@ -33,9 +35,49 @@ function Row({ label, k, state, children }: { label: string; k: ReadoutKey; stat
   );
 }
 
-const signed = (n: number) => (n > 0 ? `+${n}` : n < 0 ? `−${-n}` : '0');
+function Row({ label, k, state, children }: { label: string; k: ReadoutKey; state: ReadoutState; children: React.ReactNode }) {
+  return (
+    <Line label={label} testID={`readout-${k}`} stale={state.stale.has(k)} error={state.errors[k]} has={state.values[k] !== undefined}>
+      {children}
+    </Line>
+  );
+}
 
-export function Readout({ state, empty, markers, openStrands }: Props) {
+const signed = (n: number) => (n > 0 ? `+${n}` : n < 0 ? `−${-n}` : '0');
+const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
+
+/** s (from its worker) with the two slice-genus bounds; for a link or a large diagram, why not. */
+function SRow({ s, signature }: { s: SState; signature?: number }) {
+  if (s.kind === 'none') return null;
+  const label = 'Rasmussen s (over Q)';
+  if (s.kind !== 'knot') {
+    return (
+      <Line label={label} testID="readout-s" stale={false} has>
+        <Text style={styles.note}>
+          {s.kind === 'link'
+            ? 's is defined for knots here.'
+            : `Computed on the device up to ${S_MAX_CROSSINGS} crossings (this has ${s.crossings}); a Khovanov run can also compute s.`}
+        </Text>
+      </Line>
+    );
+  }
+  const b = s.s !== undefined && signature !== undefined ? sliceGenusBounds(s.s, signature) : null;
+  return (
+    <Line label={label} testID="readout-s" stale={s.stale} error={s.error} has={s.s !== undefined}>
+      <View>
+        <Text style={styles.num}>s = {minus(s.s ?? 0)}</Text>
+        {b ? (
+          <Text style={styles.note} testID="readout-slice-bounds">
+            Slice genus ≥ {Math.max(b.fromS, b.fromSignature)}: |s|/2 = {b.fromS}, |σ|/2 = {b.fromSignature}
+            {b.stronger === 'equal' ? ', the same bound' : b.stronger === 's' ? ', the bound from s is stronger' : ', the bound from σ is stronger'}
+          </Text>
+        ) : null}
+      </View>
+    </Line>
+  );
+}
+
+export function Readout({ state, s, empty, markers, openStrands }: Props) {
   const v = state.values;
   if (empty) {
     return (
@@ -103,6 +145,7 @@ export function Readout({ state, empty, markers, openStrands }: Props) {
       <Row label="Signature" k="signature" state={state}>
         <Text style={styles.num}>{v.signature !== undefined ? signed(v.signature) : ''}</Text>
       </Row>
+      <SRow s={s} signature={v.signature} />
       <Row label="Framings" k="framings" state={state}>
         <Text style={styles.num}>
           {(v.framings ?? []).map((f, i) => `${i + 1}: ${signed(f.value)}${f.blackboard ? ' bb' : ''}`).join('   ')}

@@ -15,6 +15,7 @@ import { savePng } from '@/lib/slate/png';
 import { docFromDiagram, docFromStored } from '@/lib/slate/record';
 import { braidOf, currentDoc, useSlate } from '@/lib/slate/slate-store';
 import { useReadout } from '@/hooks/useReadout';
+import { useSInvariant } from '@/hooks/useSInvariant';
 import { useSlateAutosave } from '@/hooks/useSlateAutosave';
 import { useSlateShortcuts } from '@/hooks/useSlateShortcuts';
 import { useKnownGroups } from '@/hooks/queries/useLocalSketches';
@@ -54,6 +55,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const analysis = useMemo(() => analyse(doc.sketch), [doc.sketch]);
   const diagram = analysis.diagram?.diagram ?? null;
   const readout = useReadout(ready ? diagram : null, dragging);
+  const sInvariant = useSInvariant(ready ? diagram : null, dragging);
   const [open, setOpen] = useState<Open>(null);
   // A refused share (S24) shows beside the label, so the owner opens Share to read why.
   const shareRefused = useRefusedShares(sketch.id).length > 0 ? 'share refused by the server' : null;
@@ -112,7 +114,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const empty = diagram ? null : analysis.markers.length ? 'markers' : analysis.open.length ? 'open' : 'nothing';
   const readoutPane = (
     <>
-      <Readout state={readout} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} />
+      <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} />
       <ReadoutActions
         hasDiagram={!!diagram}
         hasBraid={!!braid}

@@ -88,3 +88,18 @@ export function rasmussenS(pd: PDCode, field: SField, options: SOptions = {}): n
   }
   return lo + 1;
 }
+
+export interface SliceGenusBounds {
+  /** |s|/2 <= g4 (Rasmussen 2010, Theorem 1). */
+  readonly fromS: number;
+  /** |sigma|/2 <= g4 (Murasugi, "On a certain numerical invariant of link types", 1965). */
+  readonly fromSignature: number;
+  readonly stronger: 's' | 'signature' | 'equal';
+}
+
+/** The two lower bounds on the slice genus of a knot with these s and signature, and which is larger. */
+export function sliceGenusBounds(s: number, signature: number): SliceGenusBounds {
+  const fromS = Math.abs(s) / 2;
+  const fromSignature = Math.abs(signature) / 2;
+  return { fromS, fromSignature, stronger: fromS > fromSignature ? 's' : fromS < fromSignature ? 'signature' : 'equal' };
+}

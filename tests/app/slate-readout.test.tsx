@@ -1,30 +1,35 @@
-// The Readout with its scheduling hook: values appear stage by stage, each marked while it is
+// The Readout with its scheduling hooks: values appear stage by stage, each marked while it is
 // recomputed; nothing is computed while a drag is in progress; a drawing with a degeneracy
-// shows its messages instead of values.
+// shows its messages instead of values; the s-invariant with its slice-genus bounds.
 import { act, render, screen } from '@testing-library/react-native';
 import { fromBraid } from '@/shared/knot/braid';
 import type { Diagram } from '@/shared/knot/diagram';
 import type { Marker } from '@/shared/drawing/crossings';
+import { torusLink } from '@/shared/knot/families';
 import { useReadout } from '@/hooks/useReadout';
+import { useSInvariant } from '@/hooks/useSInvariant';
 import { Readout } from '@/components/readout/Readout';
 
 function Harness({ diagram, paused = false, markers = [] }: { diagram: Diagram | null; paused?: boolean; markers?: Marker[] }) {
   const state = useReadout(diagram, paused);
-  return <Readout state={state} empty={diagram ? null : markers.length ? 'markers' : 'nothing'} markers={markers} openStrands={0} />;
+  const s = useSInvariant(diagram, paused);
+  return <Readout state={state} s={s} empty={diagram ? null : markers.length ? 'markers' : 'nothing'} markers={markers} openStrands={0} />;
 }
 
 beforeEach(() => jest.useFakeTimers());
 afterEach(() => jest.useRealTimers());
 
 const run = () => act(() => void jest.runAllTimers());
+/** Also lets the s computation's promise settle. */
+const runAsync = () => act(async () => void jest.runAllTimers());
 
 // docs/conventions.md: the closure of [1,1,1] is the positive trefoil.
 const trefoil = fromBraid([1, 1, 1]);
 
-test('values of the positive trefoil appear once computed, marked as updating before', () => {
+test('values of the positive trefoil appear once computed, marked as updating before', async () => {
   render(<Harness diagram={trefoil} />);
   expect(screen.getAllByText('updating…').length).toBeGreaterThan(3);
-  run();
+  await runAsync();
   expect(screen.queryByText('updating…')).toBeNull();
   expect(screen.getByText('3 crossings')).toBeOnTheScreen();
   // Jones polynomial of the positive trefoil: t + t^3 - t^4 (docs/conventions.md; Jones 1985).
@@ -67,4 +72,50 @@ test('a degenerate drawing shows the markers\' messages instead of values', () =
   render(<Harness diagram={null} markers={[marker]} />);
   expect(screen.getByText('One spot needs attention')).toBeOnTheScreen();
   expect(screen.getByText('The strands touch here.')).toBeOnTheScreen();
+});
+
+describe('the s-invariant', () => {
+  const sText = () => screen.getByTestId('readout-s');
+
+  test('the positive trefoil has s = 2, both slice-genus bounds 1', async () => {
+    render(<Harness diagram={trefoil} />);
+    run();
+    await runAsync();
+    // docs/conventions.md (Rasmussen 2010, arXiv math/0402131): the positive trefoil has s = 2, signature -2.
+    expect(sText()).toHaveTextContent('s = 2', { exact: false });
+    expect(screen.getByTestId('readout-slice-bounds')).toHaveTextContent('Slice genus ≥ 1: |s|/2 = 1, |σ|/2 = 1, the same bound');
+    expect(sText()).toHaveProp('aria-busy', false);
+  });
+
+  test('T(4,5): the bound from s is stronger than the signature\'s', async () => {
+    render(<Harness diagram={torusLink(4, 5)} />);
+    run();
+    await runAsync();
+    // s(T(4,5)) = (4-1)(5-1) = 12 (Rasmussen 2010); signature -8 (from memory: torus knot signatures,
+    // Gordon, Litherland and Murasugi, "Signatures of iterated torus knots", 1981).
+    expect(screen.getByTestId('readout-slice-bounds')).toHaveTextContent('Slice genus ≥ 6: |s|/2 = 6, |σ|/2 = 4, the bound from s is stronger');
+  });
+
+  test('the mirror trefoil is marked stale during a drag, then s = −2', async () => {
+    const view = render(<Harness diagram={trefoil} />);
+    await runAsync();
+    view.rerender(<Harness diagram={fromBraid([-1, -1, -1])} paused />);
+    await runAsync();
+    expect(sText()).toHaveProp('aria-busy', true);
+    expect(sText()).toHaveTextContent('s = 2', { exact: false });
+    view.rerender(<Harness diagram={fromBraid([-1, -1, -1])} />);
+    await runAsync();
+    // s of the mirror is -s (Rasmussen 2010).
+    expect(sText()).toHaveTextContent('s = −2', { exact: false });
+  });
+
+  test('a link says s is defined for knots here; a large knot is left to a run', async () => {
+    const view = render(<Harness diagram={fromBraid([1, 1])} />);
+    await runAsync();
+    expect(sText()).toHaveTextContent('s is defined for knots here.', { exact: false });
+    // T(2,21) is a knot of 21 crossings (p, q coprime; common practice).
+    view.rerender(<Harness diagram={torusLink(2, 21)} />);
+    await runAsync();
+    expect(sText()).toHaveTextContent('Computed on the device up to 20 crossings (this has 21); a Khovanov run can also compute s.', { exact: false });
+  });
 });
