@@ -1,12 +1,14 @@
 // Crossings and degeneracies of closed polylines. Method: a grid broad phase gives the pairs of
 // segments closer than the tolerance; such pairs that touch along both strands form clusters
-// (union-find). A cluster with exactly one proper segment intersection is a crossing; a cluster
-// with none is a tangency/near-touch (or a retraced stroke), one with several is an ambiguous
-// tangle. Crossings closer together than minCrossingGap (e.g. three strands through one point)
-// are reported too. Any marker means the drawing has no reliable diagram.
+// (union-find). A cluster with exactly one proper segment intersection is a crossing, unless the
+// strands run side by side through it (a retrace, retrace.ts); a cluster with none is a
+// tangency/near-touch (or a retraced stroke), one with several is an ambiguous tangle. Crossings
+// closer together than minCrossingGap (e.g. three strands through one point) are reported too.
+// Any marker means the drawing has no reliable diagram.
 
 import { DrawingOptions } from './options';
 import { lerp, Point, sub } from './point';
+import { isRetrace } from './retrace';
 import { intersect, nearbyPairs, Segment, segmentDistance } from './segments';
 
 export interface Path {
@@ -31,7 +33,7 @@ export interface FoundCrossing {
   readonly passages: readonly [Passage, Passage];
 }
 
-export type MarkerKind = 'touch' | 'overlap' | 'tangle' | 'crowded' | 'triple-point';
+export type MarkerKind = 'touch' | 'overlap' | 'retrace' | 'tangle' | 'crowded' | 'triple-point';
 
 export interface Marker {
   readonly kind: MarkerKind;
@@ -44,6 +46,7 @@ export interface Marker {
 const messages: Record<MarkerKind, string> = {
   touch: 'The strands touch here without crossing clearly: move them apart or make them cross.',
   overlap: 'A strand runs along a strand here (a retraced stroke): redraw this piece.',
+  retrace: 'A strand runs close along a strand through a crossing too shallow to see (traced twice?): redraw it once round, or make the crossing clear.',
   tangle: 'The strands cross several times in a tiny area here: draw the crossings farther apart.',
   crowded: 'Two crossings are too close together here: spread them out.',
   'triple-point': 'Three strands pass through nearly one point here: move one of them.',
@@ -151,7 +154,9 @@ export function findCrossings(paths: readonly Path[], o: DrawingOptions): { cros
   for (const cluster of clusters.values()) {
     const hits = cluster.filter((c) => c.hit);
     if (hits.length === 1) {
-      crossings.push(crossingOf(segs, hits[0]));
+      const found = crossingOf(segs, hits[0]);
+      if (isRetrace(paths, found.passages, o)) mark('retrace', found.at, ids(hits[0]));
+      else crossings.push(found);
       continue;
     }
     const nearest = cluster.reduce((m, c) => (c.distance < m.distance ? c : m));

@@ -6,8 +6,13 @@ export interface DrawingOptions {
   readonly spacing: number;
   /** A stroke ending this close to a start closes (or joins) there. */
   readonly closeRadius: number;
+  /** A stroke running on past its start by up to this much arc length is trimmed and closed. */
+  readonly overshoot: number;
   /** Strands closer than this without a clean crossing are a degeneracy. */
   readonly tolerance: number;
+  /** Strands crossing while closer than retraceWidth for retraceLength either side are a retrace. */
+  readonly retraceWidth: number;
+  readonly retraceLength: number;
   /** Two crossings closer than this (in the plane) are a degeneracy. */
   readonly minCrossingGap: number;
   /** Half-length of the gap cut into an under-strand, along the strand. */
@@ -19,7 +24,10 @@ export interface DrawingOptions {
 export const defaultOptions: DrawingOptions = {
   spacing: 3,
   closeRadius: 20,
+  overshoot: 100,
   tolerance: 3,
+  retraceWidth: 12,
+  retraceLength: 45,
   minCrossingGap: 10,
   gapRadius: 5,
   flipRadius: 24,

@@ -5,7 +5,8 @@
 
 import { DrawingOptions, withDefaults } from './options';
 import { add, dist, Point, scale } from './point';
-import { length, resample, smoothPath } from './smooth';
+import { closeStroke } from './close';
+import { resample, smoothPath } from './smooth';
 
 export interface SketchComponent {
   readonly id: string;
@@ -57,14 +58,11 @@ const nearestEnd = (strands: SketchComponent[], p: Point, end: 'start' | 'finish
   return best;
 };
 
-// A strand closes when its end comes back near its start, and it is long enough not to be a dot.
-const closes = (points: readonly Point[], o: DrawingOptions): boolean =>
-  points.length >= 3 && dist(points[0], points[points.length - 1]) <= o.closeRadius && length(points, false) > 4 * o.closeRadius;
-
 /**
- * Adds a stroke of raw touch points. It continues an open strand whose end is near the stroke's
- * start; it closes into a component when it ends near its own start, or joins an open strand
- * whose start is near its end (closing if that strand's end is near this stroke's start).
+ * Adds a stroke of raw touch points (the point where the finger went down first). It continues
+ * an open strand whose end is near the stroke's start; it closes into a component when it comes
+ * back near its own start (close.ts: an overshoot is trimmed), or joins an open strand whose
+ * start is near its end (closing if that strand's end is near this stroke's start).
  * A stroke with fewer than two distinct points (a tap) leaves the sketch unchanged.
  */
 export function addStroke(s: Sketch, raw: readonly Point[], options: Partial<DrawingOptions> = {}): Sketch {
@@ -73,16 +71,17 @@ export function addStroke(s: Sketch, raw: readonly Point[], options: Partial<Dra
   if (stroke.length < 2) return s;
   const open = openStrands(s);
   const before = nearestEnd(open, stroke[0], 'finish', o.closeRadius);
-  let points: Point[] = before ? [...before.points, ...stroke] : stroke;
+  let joined = closeStroke(before ? [...before.points, ...stroke] : stroke, o);
   const used = new Set(before ? [before.id] : []);
-  if (!closes(points, o)) {
-    const after = nearestEnd(open.filter((c) => !used.has(c.id)), points[points.length - 1], 'start', o.closeRadius);
+  if (!joined.closed) {
+    const end = joined.points[joined.points.length - 1];
+    const after = nearestEnd(open.filter((c) => !used.has(c.id)), end, 'start', o.closeRadius);
     if (after) {
-      points = [...points, ...after.points];
+      joined = closeStroke([...joined.points, ...after.points], o);
       used.add(after.id);
     }
   }
-  const closed = closes(points, o);
+  const { points, closed } = joined;
   const keep = before ?? { id: `c${s.nextSeq}`, seq: s.nextSeq, reversed: false, framing: null };
   const component: SketchComponent = {
     id: keep.id,

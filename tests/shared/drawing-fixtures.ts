@@ -1,9 +1,8 @@
 // Programmatic drawings for the drawing tests: parametric curves sampled as touch points with
-// deterministic jitter, and a helper that flips crossings so every component alternates.
+// deterministic jitter.
 
-import { analyse } from '@/shared/drawing/analyse';
 import { Point } from '@/shared/drawing/point';
-import { addStroke, flipCrossing, Sketch } from '@/shared/drawing/sketch';
+import { addStroke, Sketch } from '@/shared/drawing/sketch';
 import { seededRng } from '@/shared/knot/moves/random';
 
 /**
@@ -37,24 +36,4 @@ export const circleCurve = (cx: number, cy: number, r: number) => at(cx, cy, r, 
 /** Draws each curve as one stroke. */
 export function drawCurves(curves: readonly ((t: number) => Point)[], samples = 400, noise = 0.6): Sketch {
   return curves.reduce((s, c, i) => addStroke(s, touches(c, samples, noise, i + 1)), { components: [], flips: [], nextSeq: 1 } as Sketch);
-}
-
-/** Flips crossings so that, along every component, passages alternate over and under. */
-export function makeAlternating(s: Sketch): Sketch {
-  const a = analyse(s);
-  // For every crossing, whether its current over passage should stay over (first claim wins).
-  const keepOver = new Map<number, boolean>();
-  for (const path of a.paths.filter((p) => p.closed)) {
-    const passes = a.crossings
-      .flatMap((c, i) => [
-        { i, arc: c.overArc, id: c.over, over: true },
-        { i, arc: c.underArc, id: c.under, over: false },
-      ])
-      .filter((p) => p.id === path.id)
-      .sort((p, q) => p.arc - q.arc);
-    passes.forEach((p, k) => {
-      if (!keepOver.has(p.i)) keepOver.set(p.i, p.over === (k % 2 === 0));
-    });
-  }
-  return a.crossings.reduce((acc, c, i) => (keepOver.get(i) ? acc : flipCrossing(acc, { a: c.over, b: c.under, at: c.at })), s);
 }

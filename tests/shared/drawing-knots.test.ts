@@ -1,6 +1,7 @@
 // Knots and links drawn programmatically as parametric curves (sampled as noisy touch points):
 // crossing count, PD code, orientation and the Jones polynomial from the knot core.
 
+import { alternate } from '@/shared/drawing/alternate';
 import { analyse } from '@/shared/drawing/analyse';
 import { Point } from '@/shared/drawing/point';
 import { carryFlips } from '@/shared/drawing/carry';
@@ -10,7 +11,7 @@ import { Diagram } from '@/shared/knot/diagram';
 import { jones } from '@/shared/knot/jones';
 import { orient, writhe } from '@/shared/knot/pd';
 import { Laurent } from '@/shared/poly/laurent';
-import { circleCurve, drawCurves, figureEightCurve, makeAlternating, touches, trefoilCurve } from './drawing-fixtures';
+import { circleCurve, drawCurves, figureEightCurve, touches, trefoilCurve } from './drawing-fixtures';
 
 const poly = (pairs: [number, number][]) => Laurent.fromPairs(pairs);
 // Jones polynomials: Jones 1985 (Bull. AMS 12, "A polynomial invariant for knots via von
@@ -32,7 +33,7 @@ const flipAll = (s: Sketch): Sketch => analyse(s).crossings.reduce((acc, c) => f
 
 describe('knots drawn as curves', () => {
   test.each([1, 2, 3])('trefoil (seed %i): 3 crossings, Jones of a trefoil matching its writhe', (seed) => {
-    const s = makeAlternating(addStroke(emptySketch, touches(trefoilCurve, 400, 0.8, seed)));
+    const s = alternate(addStroke(emptySketch, touches(trefoilCurve, 400, 0.8, seed)));
     const d = diagramOf(s);
     expect(d.pd).toHaveLength(3);
     const w = writhe(orient(d.pd));
@@ -43,7 +44,7 @@ describe('knots drawn as curves', () => {
   });
 
   test('carryFlips: dragging a strand through a flipped crossing far keeps the knot', () => {
-    const s = makeAlternating(addStroke(emptySketch, touches(trefoilCurve, 400, 0.5, 5)));
+    const s = alternate(addStroke(emptySketch, touches(trefoilCurve, 400, 0.5, 5)));
     const before = analyse(s);
     const c = before.crossings.find((x) => x.flipped)!;
     // Drag the strand by 40 px (beyond the flip radius) across its direction: the crossing
@@ -76,7 +77,7 @@ describe('knots drawn as curves', () => {
   });
 
   test.each([1, 2])('figure-eight (seed %i): 4 crossings, amphichiral Jones', (seed) => {
-    const s = makeAlternating(addStroke(emptySketch, touches(figureEightCurve, 600, 0.8, seed)));
+    const s = alternate(addStroke(emptySketch, touches(figureEightCurve, 600, 0.8, seed)));
     const d = diagramOf(s);
     expect(d.pd).toHaveLength(4);
     expect(writhe(orient(d.pd))).toBe(0);
@@ -131,7 +132,7 @@ describe('PD code from strokes', () => {
   });
 
   test('components are oriented along the drawing direction, and reversible', () => {
-    const s = makeAlternating(addStroke(emptySketch, touches(trefoilCurve, 400, 0.5, 9)));
+    const s = alternate(addStroke(emptySketch, touches(trefoilCurve, 400, 0.5, 9)));
     const a = analyse(s);
     const travelled = (an: typeof a) => {
       const o = orient(an.diagram!.diagram.pd);
