@@ -8,7 +8,7 @@ import type { SState } from '@/hooks/useSInvariant';
 import { sliceGenusBounds } from '@/shared/rasmussen';
 import { S_MAX_CROSSINGS } from './local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
-import { nameTeX } from '@/lib/slate/readout';
+import { HOMFLY_DEVICE_LIMIT, nameTeX } from '@/lib/slate/readout';
 import { TeX } from '@/components/runs/Math';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 
@@ -138,6 +138,13 @@ export function Readout({ state, s, empty, markers, openStrands }: Props) {
             {v.alexander.conwaySign ? null : <Text style={styles.note}>Sign by our convention (first Conway coefficient is 0).</Text>}
           </View>
         ) : null}
+      </Row>
+      <Row label="HOMFLY-PT polynomial" k="homfly" state={state}>
+        {v.homfly ? (
+          <TeX tex={`P(v,z) = ${v.homfly.format('latex')}`} text={`P(v,z) = ${v.homfly.format('unicode')}`} />
+        ) : (
+          <Text style={styles.note}>Computed here up to {HOMFLY_DEVICE_LIMIT} crossings; the command line computes it at any size.</Text>
+        )}
       </Row>
       <Row label="Determinant" k="determinant" state={state}>
         <Text style={styles.num}>{v.determinant?.toString()}</Text>

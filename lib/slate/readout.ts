@@ -4,10 +4,12 @@ import { alexander } from '@/shared/knot/alexander';
 import { bracket } from '@/shared/knot/bracket';
 import { componentCount, framingsOf, type Diagram } from '@/shared/knot/diagram';
 import { linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
+import { homfly } from '@/shared/knot/homfly';
 import { jonesFromBracket } from '@/shared/knot/jones';
 import { linkingMatrix } from '@/shared/knot/linking';
 import { guessName } from '@/shared/knot/names';
 import { orient, writhe } from '@/shared/knot/pd';
+import type { Poly2 } from '@/shared/knot/poly2';
 import type { Laurent } from '@/shared/poly/laurent';
 
 export interface ReadoutValues {
@@ -25,7 +27,15 @@ export interface ReadoutValues {
   alexander: { polynomial: Laurent; conwaySign: boolean };
   /** null when no guess applies (a link, or not in the table). */
   name: { text: string; name: string; mirror: boolean } | null;
+  /** null beyond HOMFLY_DEVICE_LIMIT crossings. */
+  homfly: Poly2 | null;
 }
+
+/**
+ * The HOMFLY-PT skein tree grows exponentially in the worst case: up to this many crossings it
+ * takes well under a second on a phone (the homfly benchmark: 15 crossings in tens of ms).
+ */
+export const HOMFLY_DEVICE_LIMIT = 16;
 
 export type ReadoutKey = keyof ReadoutValues;
 
@@ -64,6 +74,8 @@ export const readoutStages: readonly { keys: readonly ReadoutKey[]; run: (d: Dia
       return { name: g ? { text: g.text, name: g.name, mirror: g.mirror } : null };
     },
   },
+  // Last: the slowest stage, so every other value is already shown while it runs.
+  { keys: ['homfly'], run: (d) => ({ homfly: d.pd.length <= HOMFLY_DEVICE_LIMIT ? homfly(d) : null }) },
 ];
 
 /** All values at once (tests, exports). */

@@ -7,6 +7,7 @@ import { alexander } from '@/shared/knot/alexander';
 import { bracket } from '@/shared/knot/bracket';
 import { colourings } from '@/shared/knot/colourings';
 import { linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
+import { homfly } from '@/shared/knot/homfly';
 import { jonesFromBracket } from '@/shared/knot/jones';
 import { linkingMatrix } from '@/shared/knot/linking';
 import { guessName } from '@/shared/knot/names';
@@ -20,6 +21,7 @@ export const computable = [
   'bracket',
   'jones',
   'alexander',
+  'homfly',
   'determinant',
   'signature',
   'linking',
@@ -31,8 +33,11 @@ export const computable = [
 ] as const;
 export type Computable = (typeof computable)[number];
 
-/** What is computed when a request names nothing: everything but the heavy Khovanov homology and s, and the PD code itself. */
-export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh' && c !== 's' && c !== 'pd');
+/**
+ * What is computed when a request names nothing: everything but the PD code itself and what can
+ * be slow on large diagrams (Khovanov homology, s, HOMFLY-PT by its skein tree).
+ */
+export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh' && c !== 's' && c !== 'pd' && c !== 'homfly');
 
 const label = z.number().int();
 const code = {
@@ -108,6 +113,8 @@ export function answer(r: Request): Answer {
     out.alexander = a.polynomial.toJSON();
     out.alexanderSign = a.conwaySign ? 'conway' : 'convention';
   }
+  // [vExp, zExp, coefficient] in the convention of docs/conventions.md, sorted by v then z.
+  if (wanted.has('homfly')) out.homfly = homfly(d).toTriples().map(([v, z, c]) => [v, z, jsonInteger(c)]);
   if (wanted.has('determinant')) out.determinant = jsonInteger(linkDeterminant(d));
   if (wanted.has('signature')) out.signature = linkSignature(d);
   if (wanted.has('linking')) out.linking = linkingMatrix(d);

@@ -9,6 +9,7 @@ import { torusLink } from '@/shared/knot/families';
 import { useReadout } from '@/hooks/useReadout';
 import { useSInvariant } from '@/hooks/useSInvariant';
 import { Readout } from '@/components/readout/Readout';
+import { HOMFLY_DEVICE_LIMIT } from '@/lib/slate/readout';
 
 function Harness({ diagram, paused = false, markers = [] }: { diagram: Diagram | null; paused?: boolean; markers?: Marker[] }) {
   const state = useReadout(diagram, paused);
@@ -41,6 +42,14 @@ test('values of the positive trefoil appear once computed, marked as updating be
   // negative signature (Rolfsen, Knots and Links; from memory).
   expect(screen.getByTestId('readout-signature')).toHaveTextContent('−2', { exact: false });
   expect(screen.getByText('invariants match 3_1')).toBeOnTheScreen();
+  // HOMFLY-PT of the positive trefoil: 2v^2 - v^4 + v^2 z^2 (docs/conventions.md; from memory).
+  expect(screen.getByText('P(v,z) = 2v² − v⁴ + v²z²')).toBeOnTheScreen();
+});
+
+test('beyond its size limit the HOMFLY-PT row says where to compute it', () => {
+  render(<Harness diagram={fromBraid(new Array<number>(HOMFLY_DEVICE_LIMIT + 1).fill(1))} />);
+  run();
+  expect(screen.getByText(`Computed here up to ${HOMFLY_DEVICE_LIMIT} crossings; the command line computes it at any size.`)).toBeOnTheScreen();
 });
 
 test('a new diagram marks the old values stale until recomputed; a drag postpones it', () => {

@@ -10,6 +10,7 @@ const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['readout', () => import('./readout.bench').then((m) => m.readoutBench())],
   ['sync', () => import('./sync.bench').then((m) => m.syncBench())],
   ['sinv', () => import('./sinv.bench').then((m) => m.sinvBench())],
+  ['homfly', () => import('./homfly.bench').then((m) => m.homflyBench())],
 ];
 
 async function main(): Promise<void> {

@@ -125,6 +125,14 @@ describe('request answers in process', () => {
     expect(JSON.parse(answerLine('{"id":9,"braid":[1,1,1]}')).s).toBeUndefined();
   });
 
+  it('answers "homfly" as [vExp, zExp, coeff] triples, only when asked', () => {
+    // Positive trefoil 2v^2 - v^4 + v^2 z^2 (docs/conventions.md, HOMFLY-PT; from memory, checked in tests/shared/homfly.test.ts).
+    expect(JSON.parse(answerLine('{"id":3,"braid":[1,1,1],"compute":["homfly"]}'))).toEqual({ id: 3, homfly: [[2, 0, 2], [2, 2, 1], [4, 0, -1]] });
+    // Two-component unlink: (v^-1 - v) z^-1 (the skein relation at a kink).
+    expect(JSON.parse(answerLine('{"id":4,"pd":[],"unknots":2,"compute":["homfly"]}'))).toEqual({ id: 4, homfly: [[-1, -1, 1], [1, -1, -1]] });
+    expect(JSON.parse(answerLine('{"id":3,"braid":[1,1,1]}')).homfly).toBeUndefined();
+  });
+
   it('reads an empty PD code as the unknot, and "unknots" as free components', () => {
     // <O> = 1 and <O O> = -A^2 - A^-2 (docs/conventions.md).
     expect(JSON.parse(answerLine('{"id":0,"pd":[],"compute":["components","bracket","name"]}'))).toEqual({ id: 0, components: 1, bracket: [[0, 1]], name: 'invariants match 0_1 (the unknot)' });
