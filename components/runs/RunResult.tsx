@@ -4,8 +4,8 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { isFinished, type KhResultJson, type RunDetail } from '@/shared/api/runs';
-import { toCsv, toJson, toLatexTable } from '@/shared/khovanov/export';
-import { poincareTeX } from '@/shared/khovanov/format';
+import { toCsv, toJson, toLatexTable, type ExportRecord } from '@/shared/khovanov/export';
+import { poincareFormat } from '@/shared/khovanov/format';
 import { Laurent } from '@/shared/poly/laurent';
 import { useCancelRun } from '@/hooks/queries/useRuns';
 import { Banner } from '@/components/ui/Banner';
@@ -34,14 +34,24 @@ const exportName = (run: { id: string; label: string; ring: string; reduced: boo
   return ['kh', slug, run.ring + (run.reduced ? '-reduced' : ''), run.id.slice(0, 8)].filter(Boolean).join('-');
 };
 
-function Exports({ result, base }: { result: KhResultJson; base: string }) {
+/** What an export of this run (or sweep cell) says about it. */
+export const exportRecord = (run: RunDetail | RunDetail['children'][number], diagram: RunDetail['diagram'], result: KhResultJson): ExportRecord => ({
+  runId: run.id,
+  label: run.label,
+  diagram: { pd: diagram.pd, unknots: diagram.unknots },
+  source: run.source,
+  date: run.finishedAt ?? run.createdAt,
+  result,
+});
+
+export function Exports({ record, base }: { record: ExportRecord; base: string }) {
   const [note, setNote] = useState<string | null>(null);
   const save = (ext: string, text: string, mime: string) => void saveText(`${base}.${ext}`, text, mime).then(setNote);
   return (
     <View style={styles.exports}>
-      <Button variant="secondary" label="LaTeX table" onPress={() => save('tex', toLatexTable(result), 'text/x-tex')} />
-      <Button variant="secondary" label="CSV" onPress={() => save('csv', toCsv(result), 'text/csv')} />
-      <Button variant="secondary" label="JSON" onPress={() => save('json', toJson(result), 'application/json')} />
+      <Button variant="secondary" label="LaTeX table" onPress={() => save('tex', toLatexTable(record), 'text/x-tex')} />
+      <Button variant="secondary" label="CSV" onPress={() => save('csv', toCsv(record), 'text/csv')} />
+      <Button variant="secondary" label="JSON" onPress={() => save('json', toJson(record), 'application/json')} />
       {note ? <Text role="status" style={styles.muted}>{note}</Text> : null}
     </View>
   );
@@ -53,7 +63,7 @@ export function KhSummary({ result }: { result: KhResultJson }) {
   return (
     <View style={styles.facts}>
       <Fact name="Poincaré polynomial">
-        <TeX tex={poincareTeX(result.poincare)} text={result.poincareText} />
+        <TeX tex={poincareFormat(result.poincare, 'tex')} text={poincareFormat(result.poincare, 'text')} />
       </Fact>
       {euler ? (
         <Fact name="Euler characteristic">
@@ -97,7 +107,7 @@ export function RunResult({ run }: { run: RunDetail }) {
           </Section>
           <KhSummary result={run.result} />
           <Section title="Export">
-            <Exports result={run.result} base={exportName(run)} />
+            <Exports record={exportRecord(run, run.diagram, run.result)} base={exportName(run)} />
           </Section>
         </>
       ) : null}

@@ -9,7 +9,7 @@ import { setFraming } from '@/shared/drawing/sketch';
 import { simplify } from '@/shared/knot/moves/simplify';
 import type { Diagram } from '@/shared/knot/diagram';
 import type { LocalSketch } from '@/lib/store/types';
-import { braidToText, pdToText } from '@/lib/slate/codes';
+import { braidToText, pdToText } from '@/shared/text/codes';
 import { exportFiles } from '@/lib/slate/exports';
 import { savePng } from '@/lib/slate/png';
 import { docFromDiagram, docFromStored } from '@/lib/slate/record';

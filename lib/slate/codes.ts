@@ -4,7 +4,7 @@
 import { diagram, type Diagram } from '@/shared/knot/diagram';
 import { fromBraid, parseBraid } from '@/shared/knot/braid';
 import { fromDT, MAX_DT_CROSSINGS, parseDT } from '@/shared/knot/dt';
-import { parsePD, type PDCode } from '@/shared/knot/pd';
+import { parsePD } from '@/shared/knot/pd';
 
 export type CodeKind = 'pd' | 'dt' | 'braid';
 
@@ -26,23 +26,32 @@ function pdJson(text: string): string {
 
 const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
+/** "[1, -2, 1]" or "(4 6 2)" read as the list inside. */
+const unbracket = (text: string) => text.trim().replace(/^[[(]([^]*)[\])]$/, '$1');
+
 export function parseCode(kind: CodeKind, text: string): Parsed {
   if (text.trim() === '') return { ok: false, error: 'Paste or type a code first.' };
   try {
     if (kind === 'pd') return { ok: true, diagram: diagram(parsePD(pdJson(text))) };
     if (kind === 'dt') {
-      const code = parseDT(text);
+      const code = parseDT(unbracket(text));
       if (code.length > MAX_DT_CROSSINGS) return { ok: false, error: `DT codes of up to ${MAX_DT_CROSSINGS} crossings are read; this one has ${code.length}.` };
       return { ok: true, diagram: fromDT(code) };
     }
-    const word = parseBraid(text);
+    const word = parseBraid(unbracket(text));
     return { ok: true, diagram: fromBraid(word), braid: word };
   } catch (e) {
     return { ok: false, error: capital(e instanceof Error ? e.message : String(e)) + '.' };
   }
 }
 
-/** The PD code as JSON, the form parseCode (and the command line) reads back. */
-export const pdToText = (pd: PDCode): string => JSON.stringify(pd);
+const sourceWords: Record<CodeKind, string> = { pd: 'PD', dt: 'DT', braid: 'braid' };
 
-export const braidToText = (word: readonly number[]): string => word.join(' ');
+/** A code as a run keeps it ("braid 1 -2 1"): the kind's word, then the text on one line; parseSource reads it back. */
+export const sourceOf = (kind: CodeKind, text: string): string => `${sourceWords[kind]} ${text.trim().replace(/\s+/g, ' ')}`;
+
+export function parseSource(source: string): Parsed {
+  const [word, ...rest] = source.trim().split(' ');
+  const kind = (Object.keys(sourceWords) as CodeKind[]).find((k) => sourceWords[k] === word);
+  return kind ? parseCode(kind, rest.join(' ')) : { ok: false, error: `Not a code of a known kind: "${word}".` };
+}

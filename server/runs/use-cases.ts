@@ -43,27 +43,28 @@ function checked(d: RunDiagram): Diagram {
 }
 
 /** The diagram and group a request runs on, after the role checks. */
-async function target(deps: Deps, user: User, req: Start): Promise<{ diagram: RunDiagram; groupId: string | null; sketchId: string | null; label: string }> {
+async function target(deps: Deps, user: User, req: Start): Promise<{ diagram: RunDiagram; groupId: string | null; sketchId: string | null; label: string; source: string | null }> {
   if (req.sketchId !== undefined) {
     const viewer = await viewerOf(deps.db, user.id);
     const s = await findSketch(deps.db, req.sketchId);
     if (!s || s.deleted || !canSee(viewer, s)) throw notFound('No such sketch, or it is not shared with you');
     if (s.ownerId !== user.id && viewer.groups.get(s.groupId!) === 'viewer') throw viewersCannot();
     const { pd, unknots, framings } = s.diagram;
-    return { diagram: { pd, unknots, framings }, groupId: s.groupId, sketchId: s.id, label: req.label || s.title || 'Untitled sketch' };
+    return { diagram: { pd, unknots, framings }, groupId: s.groupId, sketchId: s.id, label: req.label || s.title || 'Untitled sketch', source: null };
   }
   if (req.groupId !== undefined) {
     const role: Role = await requireMember(deps.db, req.groupId, user.id);
     if (role === 'viewer') throw viewersCannot();
   }
   const d = req.diagram!;
-  return { diagram: { pd: d.pd, unknots: d.unknots ?? 0, framings: d.framings }, groupId: req.groupId ?? null, sketchId: null, label: req.label || `PD code, ${d.pd.length} crossings` };
+  return { diagram: { pd: d.pd, unknots: d.unknots ?? 0, framings: d.framings }, groupId: req.groupId ?? null, sketchId: null, label: req.label || `PD code, ${d.pd.length} crossings`, source: req.source ?? null };
 }
 
 interface NewRun {
   kind: Run['kind'];
   diagram: RunDiagram;
   label: string;
+  source: string | null;
   sketchId: string | null;
   groupId: string | null;
   ring: string;
@@ -85,6 +86,7 @@ function row(deps: Deps, user: User, n: NewRun, key: string): Run {
     parentRunId: n.parentRunId ?? null,
     diagram: n.diagram,
     diagramKey: key,
+    source: n.source,
     crossings: n.diagram.pd.length,
     ring: n.ring,
     reduced: n.reduced,
@@ -195,6 +197,7 @@ function summary(r: Run, names: Map<string, string>): RunSummary {
     reusedFrom: r.reusedFrom,
     cable: r.cable,
     sweep: r.sweep,
+    source: r.source,
   };
 }
 

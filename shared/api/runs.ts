@@ -41,6 +41,9 @@ export const RunDiagram = z.object({
 });
 export type RunDiagram = z.infer<typeof RunDiagram>;
 
+/** What a pasted diagram was written as: "braid <word>", "DT <code>" or "PD <code>", without a cut. */
+export const RunSource = z.string().trim().min(1).max(20_000);
+
 /** Cable sweep: every component takes each (r+, r-) with 1 <= r+ + r- <= maxStrands. */
 export const CableSweep = z.object({ maxStrands: z.int().min(1).max(4) });
 export type CableSweep = z.infer<typeof CableSweep>;
@@ -57,6 +60,8 @@ export const StartRunRequest = z
     sweep: CableSweep.optional(),
     /** Short description shown in the table, e.g. "braid 1 1 1"; default: the sketch title. */
     label: z.string().trim().max(120).optional(),
+    /** The text the diagram came from, in full (e.g. "braid 1 1 -2 ..."): shown with the result and in its exports. */
+    source: RunSource.optional(),
   })
   .refine((r) => (r.sketchId === undefined) !== (r.diagram === undefined), {
     message: 'Give either sketchId or diagram, not both',
@@ -92,6 +97,8 @@ export type KhGroupJson = z.infer<typeof KhGroupJson>;
 export const KhResultJson = z.object({
   ring: z.string(),
   reduced: z.boolean(),
+  /** Reduced: the marked component, from 0 (results stored before it was recorded: always 0). */
+  component: z.int().min(0).optional(),
   groups: z.array(KhGroupJson),
   poincare: z.array(z.tuple([z.int(), z.int(), z.int()])),
   poincareText: z.string(),
@@ -104,6 +111,8 @@ export const KhResultJson = z.object({
     .optional(),
   width: z.number(),
   thin: z.boolean(),
+  /** The program version that computed it (results stored before it was recorded have none). */
+  version: z.string().optional(),
 });
 export type KhResultJson = z.infer<typeof KhResultJson>;
 
@@ -142,6 +151,8 @@ export const RunSummary = z.object({
   reusedFrom: z.string().nullable(),
   cable: CableCell.nullable(),
   sweep: CableSweep.nullable(),
+  /** The text the diagram came from (a sweep cell: its sweep's), or null (a sketch's diagram). */
+  source: RunSource.nullable(),
 });
 export type RunSummary = z.infer<typeof RunSummary>;
 

@@ -55,14 +55,30 @@ export function grid(groups: readonly GroupLike[]): Grid {
   return { is, js, at: (i, j) => byKey.get(`${i},${j}`) };
 }
 
-/** The Poincare polynomial sum rank t^i q^j from its [i, j, rank] terms, as TeX. */
-export function poincareTeX(terms: readonly (readonly [number, number, number])[]): string {
+const SUPERSCRIPT: Record<string, string> = { '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹', '-': '⁻' };
+
+/** A power as each notation writes it; "unicode" is for places with neither TeX nor code (cards, notifications). */
+function monomial(v: string, e: number, n: Notation | 'unicode'): string {
+  if (e === 0) return '';
+  if (e === 1) return v;
+  if (n === 'tex') return `${v}^{${e}}`;
+  if (n === 'unicode') return v + [...String(e)].map((c) => SUPERSCRIPT[c]).join('');
+  return `${v}^${e}`;
+}
+
+/**
+ * The Poincare polynomial sum rank h^i q^j from its [i, j, rank] terms: h is the homological
+ * degree, never t, so it is not read as the t of V(t) (docs/conventions.md, Khovanov homology).
+ * "q + q^3 + h^2 q^5", "q + q^{3} + h^{2}q^{5}" or "q + q³ + h²q⁵".
+ */
+export function poincareFormat(terms: readonly (readonly [number, number, number])[], n: Notation | 'unicode'): string {
   if (terms.length === 0) return '0';
-  const mono = (v: string, e: number) => (e === 0 ? '' : e === 1 ? v : `${v}^{${e}}`);
+  const gap = n === 'text' ? ' ' : '';
   return terms
     .map(([i, j, r]) => {
-      const body = mono('t', i) + mono('q', j);
-      return r === 1 && body !== '' ? body : `${r}${body}`;
+      const body = [monomial('h', i, n), monomial('q', j, n)].filter((m) => m !== '').join(gap);
+      if (body === '') return String(r);
+      return r === 1 ? body : `${r}${gap}${body}`;
     })
     .join(' + ');
 }

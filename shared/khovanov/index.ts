@@ -7,7 +7,9 @@ import { integers, primeField, rationals, Ring } from '../linalg/ring';
 import { Laurent } from '../poly/laurent';
 import { EngineOptions, fastKhovanov, KhCancelled, Progress } from './engine';
 import { KhGroup } from './homology';
-import { eulerCharacteristic, expectedEuler, poincare, poincareText, width } from './summary';
+import { programVersion } from '../version';
+import { poincareFormat } from './format';
+import { eulerCharacteristic, expectedEuler, poincare, width } from './summary';
 
 export { KhCancelled };
 export type { KhGroup, Progress };
@@ -39,9 +41,11 @@ export interface KhResult {
   /** The canonical ring name: 'Z', 'Q' or 'F<p>'. */
   readonly ring: string;
   readonly reduced: boolean;
+  /** Reduced: the marked component, numbered from 0 in the order of docs/conventions.md (Framings and cables). */
+  readonly component?: number;
   /** Nonzero groups sorted by i then j; over a field `torsion` is []. */
   readonly groups: KhGroup[];
-  /** [i, j, rank] terms of sum rank t^i q^j (free ranks over Z), and the same as text. */
+  /** [i, j, rank] terms of sum rank h^i q^j (free ranks over Z), and the same as text. */
   readonly poincare: [number, number, number][];
   readonly poincareText: string;
   /** Graded Euler characteristic and what the Jones polynomial says it must be, as [exponent of q, coefficient]. */
@@ -49,6 +53,8 @@ export interface KhResult {
   /** Number of diagonals j - 2i carrying homology; thin = at most 2 (unreduced) or 1 (reduced). */
   readonly width: number;
   readonly thin: boolean;
+  /** The program version that computed it. */
+  readonly version: string;
 }
 
 export function parseRing(ring: KhRing): { name: string; ring: Ring<unknown> } {
@@ -98,5 +104,6 @@ export function khovanov(pd: PDCode, options: KhOptions): KhResult {
     const json = (l: typeof computed): [number, string][] => l.toPairs().map(([e, c]) => [e, c.toString()]);
     euler = { computed: json(computed), expected: json(expected), ok: computed.equals(expected) };
   }
-  return { ring: name, reduced, groups, poincare: poincare(groups), poincareText: poincareText(groups), euler, width: w, thin: w <= (reduced ? 1 : 2) };
+  const terms = poincare(groups);
+  return { ring: name, reduced, ...(reduced && { component }), groups, poincare: terms, poincareText: poincareFormat(terms, 'text'), euler, width: w, thin: w <= (reduced ? 1 : 2), version: programVersion };
 }

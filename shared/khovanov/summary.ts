@@ -4,19 +4,9 @@
 import { Laurent } from '../poly/laurent';
 import { KhGroup } from './homology';
 
-/** Terms [i, j, rank]: the Poincare polynomial sum rank t^i q^j (ranks of the free parts over Z). */
+/** Terms [i, j, rank]: the Poincare polynomial sum rank h^i q^j (ranks of the free parts over Z). */
 export function poincare(groups: readonly KhGroup[]): [number, number, number][] {
   return groups.filter((g) => g.free > 0).map((g) => [g.i, g.j, g.free]);
-}
-
-export function poincareText(groups: readonly KhGroup[]): string {
-  const terms = poincare(groups).map(([i, j, r]) => {
-    const t = i === 0 ? '' : i === 1 ? 't' : `t^${i}`;
-    const q = j === 0 ? '' : j === 1 ? 'q' : `q^${j}`;
-    const body = [t, q].filter((s) => s !== '').join(' ');
-    return r === 1 && body !== '' ? body : body === '' ? `${r}` : `${r} ${body}`;
-  });
-  return terms.length === 0 ? '0' : terms.join(' + ');
 }
 
 /** sum (-1)^i rank q^j; over a field dimensions give the same value (torsion cancels). */

@@ -106,7 +106,7 @@ describe('the result record', () => {
   it('summarises the right trefoil', () => {
     const r = kh([1, 1, 1]);
     expect(r.ring).toBe('Z');
-    expect(r.poincareText).toBe('q + q^3 + t^2 q^5 + t^3 q^9');
+    expect(r.poincareText).toBe('q + q^3 + h^2 q^5 + h^3 q^9');
     expect(r.poincare).toEqual([[0, 1, 1], [0, 3, 1], [2, 5, 1], [3, 9, 1]]);
     // Jones of the right trefoil t + t^3 - t^4 (docs/conventions.md): (q + q^-1)(q^2 + q^6 - q^8).
     expect(r.euler).toEqual({ computed: [[1, '1'], [3, '1'], [5, '1'], [9, '-1']], expected: [[1, '1'], [3, '1'], [5, '1'], [9, '-1']], ok: true });

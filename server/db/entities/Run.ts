@@ -44,6 +44,10 @@ export class Run {
   @Column({ type: 'varchar', length: 64 })
   diagramKey: string;
 
+  /** The text the diagram came from, in full (StartRunRequest.source); a sweep cell has its sweep's. */
+  @Column({ type: 'text', nullable: true })
+  source: string | null;
+
   @Column({ type: 'integer' })
   crossings: number;
 

@@ -6,6 +6,7 @@ import { Feed1796146642029 } from './1796146642029-Feed';
 import { Runs1796147000000 } from './1796147000000-Runs';
 import { SyncCompaction1796148686557 } from './1796148686557-SyncCompaction';
 import { AttachmentPhotos1796149446164 } from './1796149446164-AttachmentPhotos';
+import { RunSource1796152731904 } from './1796152731904-RunSource';
 
 export const migrations = [Foundation1796145751477, Sync1796145952708, Feed1796146642029, Runs1796147000000, SyncCompaction1796148686557,
-  AttachmentPhotos1796149446164];
+  AttachmentPhotos1796149446164, RunSource1796152731904];
