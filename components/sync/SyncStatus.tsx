@@ -1,4 +1,5 @@
-// The visible sync status (sync/SPEC.md S31) with "Sync now"; in conflict it opens them.
+// The visible sync status (sync/SPEC.md S31) with "Sync now"; in conflict it opens them; a
+// failure says why beside it.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { router } from 'expo-router';
 import { colors, radius, space, type } from '@/constants/theme';
@@ -6,7 +7,7 @@ import { useSyncStatus } from '@/hooks/useDevice';
 import type { SyncStatus as Status } from '@/sync/status';
 
 const tone = (s: Status) =>
-  s.kind === 'conflict' || s.kind === 'rejected'
+  s.kind === 'conflict' || s.kind === 'rejected' || s.kind === 'failed'
     ? { fg: colors.danger, bg: colors.dangerSoft }
     : s.kind === 'upToDate'
       ? { fg: colors.success, bg: colors.successSoft }
@@ -27,6 +28,7 @@ export function SyncStatus() {
       >
         <Text style={[styles.text, { color: t.fg }]}>{label}</Text>
       </Pressable>
+      {status.kind === 'failed' ? <Text style={styles.reason} numberOfLines={2}>{status.error}</Text> : null}
       {status.kind !== 'syncing' ? (
         <Pressable role="button" accessibilityLabel="Sync now" onPress={() => void syncNow()} style={styles.action}>
           <Text style={styles.actionText}>Sync now</Text>
@@ -37,9 +39,10 @@ export function SyncStatus() {
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
   pill: { borderRadius: radius.pill, paddingHorizontal: space.md, paddingVertical: 4 },
   text: { ...type.label },
+  reason: { ...type.small, color: colors.danger, flexShrink: 1 },
   action: { minHeight: 44, justifyContent: 'center', paddingHorizontal: space.sm },
   actionText: { ...type.label, color: colors.accent },
 });

@@ -4,6 +4,7 @@ import { useEffect } from 'react';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { SketchFields, SketchFieldsPatch } from '@/shared/api/sketches';
 import type { LocalComment, LocalGroup } from '@/lib/store/types';
+import type { DeviceStore } from '@/lib/store/tab-owner';
 import { useDevice } from '@/hooks/useDevice';
 import { useGroups } from './useGroups';
 
@@ -30,78 +31,39 @@ function useStoreRefresh() {
 
 const local = { staleTime: Infinity, networkMode: 'always' as const };
 
-export function useLocalSketches() {
+/** One read of this user's device store under its key, refreshed on every store change. */
+function useLocalQuery<T>(key: (userId: string) => readonly unknown[], read: (store: DeviceStore) => Promise<T>, enabled = true) {
   const device = useStoreRefresh();
-  return useQuery({
-    ...local,
-    queryKey: localKeys.sketches(device?.userId ?? ''),
-    queryFn: () => device!.store.list(),
-    enabled: !!device,
-  });
+  return useQuery({ ...local, queryKey: key(device?.userId ?? ''), queryFn: () => read(device!.store), enabled: !!device && enabled });
 }
 
-export function useLocalSketch(id: string) {
-  const device = useStoreRefresh();
-  return useQuery({
-    ...local,
-    queryKey: localKeys.sketch(device?.userId ?? '', id),
-    queryFn: () => device!.store.get(id),
-    enabled: !!device,
-  });
-}
+export const useLocalSketches = () => useLocalQuery(localKeys.sketches, (s) => s.list());
 
-export function useConflicts() {
-  const device = useStoreRefresh();
-  return useQuery({
-    ...local,
-    queryKey: localKeys.conflicts(device?.userId ?? ''),
-    queryFn: () => device!.store.conflicts(),
-    enabled: !!device,
-  });
-}
+export const useLocalSketch = (id: string) => useLocalQuery((u) => localKeys.sketch(u, id), (s) => s.get(id));
+
+export const useConflicts = () => useLocalQuery(localKeys.conflicts, (s) => s.conflicts());
 
 /**
  * My groups with my role: from the server when it answers, else as the device last saw them,
  * so the Slate can share and name groups offline.
  */
 export function useKnownGroups(): LocalGroup[] {
-  const device = useStoreRefresh();
+  const device = useDevice();
   const remote = useGroups();
   useEffect(() => {
     if (device && remote.data) void device.store.rememberGroups(remote.data);
   }, [device, remote.data]);
-  const cached = useQuery({
-    ...local,
-    queryKey: localKeys.groups(device?.userId ?? ''),
-    queryFn: () => device!.store.groups(),
-    enabled: !!device && !remote.data,
-  });
+  const cached = useLocalQuery(localKeys.groups, (s) => s.groups(), !remote.data);
   return remote.data ?? cached.data ?? [];
 }
 
 export const groupName = (groups: LocalGroup[], id: string) => groups.find((g) => g.id === id)?.name ?? 'a group';
 
 /** Comments written on this device for one sketch (S34), with their waiting / sent / refused state. */
-export function useLocalComments(sketchId: string) {
-  const device = useStoreRefresh();
-  return useQuery({
-    ...local,
-    queryKey: localKeys.comments(device?.userId ?? '', sketchId),
-    queryFn: () => device!.store.comments(sketchId),
-    enabled: !!device,
-  });
-}
+export const useLocalComments = (sketchId: string) => useLocalQuery((u) => localKeys.comments(u, sketchId), (s) => s.comments(sketchId));
 
 /** S24: this sketch's writes the server refused, kept with the reason until dismissed. */
-export function useRejected(sketchId: string) {
-  const device = useStoreRefresh();
-  return useQuery({
-    ...local,
-    queryKey: localKeys.rejected(device?.userId ?? '', sketchId),
-    queryFn: () => device!.store.rejected(sketchId),
-    enabled: !!device,
-  });
-}
+export const useRejected = (sketchId: string) => useLocalQuery((u) => localKeys.rejected(u, sketchId), (s) => s.rejected(sketchId));
 
 export function useSketchWrites() {
   const device = useDevice();

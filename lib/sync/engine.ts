@@ -15,8 +15,19 @@ export interface EngineOptions {
   pageSize?: number;
   periodMs?: number;
   random?: () => number;
-  timers?: { setTimeout: typeof setTimeout; clearTimeout: typeof clearTimeout };
+  timers?: Timers;
 }
+
+export interface Timers {
+  setTimeout(run: () => void, ms: number): unknown;
+  clearTimeout(handle: unknown): void;
+}
+
+/** Wrapped: a browser's setTimeout called as a method of another object throws "Illegal invocation". */
+const globalTimers: Timers = {
+  setTimeout: (run, ms) => setTimeout(run, ms),
+  clearTimeout: (handle) => clearTimeout(handle as ReturnType<typeof setTimeout>),
+};
 
 /** S34: why the server refused a comment, in the words the thread shows beside it. */
 const refusals: Record<number, string> = {
@@ -35,18 +46,18 @@ export class SyncEngine {
   private running: Promise<void> | null = null;
   private again = false;
   private failures = 0;
-  private timer: ReturnType<typeof setTimeout> | null = null;
+  private timer: unknown = null;
   private started = false;
   private readonly pageSize: number;
   private readonly periodMs: number;
   private readonly random: () => number;
-  private readonly timers: NonNullable<EngineOptions['timers']>;
+  private readonly timers: Timers;
 
   constructor(private readonly o: EngineOptions) {
     this.pageSize = o.pageSize ?? 200;
     this.periodMs = o.periodMs ?? 60_000;
     this.random = o.random ?? Math.random;
-    this.timers = o.timers ?? { setTimeout, clearTimeout };
+    this.timers = o.timers ?? globalTimers;
   }
 
   /** S29: on start, then every period while online. */

@@ -6,8 +6,6 @@ import type { StatusInput } from '@/sync/status';
 export interface SyncState extends StatusInput {
   /** S34: comments written offline, still to post; the status counts them as waiting too. */
   comments: number;
-  lastError: string | null;
-  lastSyncedAt: string | null;
 }
 
 export const initialSyncState: SyncState = {

@@ -97,3 +97,13 @@ export async function signedInPair(phoneUser: Person, wideUser: Person, timeoutM
   await signIn(pages[1], wideUser);
   return { browser, phone: { context: contexts[0], page: pages[0] }, wide: { context: contexts[1], page: pages[1] } };
 }
+
+/** "New sketch", then a title through Details: the Slate is open on the titled sketch. */
+export async function newTitledSketch(page: Page, title: string): Promise<void> {
+  await page.getByRole('button', { name: 'New sketch' }).first().click();
+  await page.getByTestId('slate-canvas').waitFor();
+  await page.getByRole('button', { name: 'Details', exact: true }).click();
+  await page.getByRole('textbox', { name: 'Title' }).fill(title);
+  await page.getByRole('button', { name: 'Save details' }).click();
+  await page.getByRole('heading', { name: title }).waitFor();
+}

@@ -4,7 +4,7 @@
 // docs/stack.md), a sketch made then survives another offline reload, and back online it syncs.
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { SESSION_KEY } from '@/lib/stored-session';
-import { PHONE, baseUrl, launch, person, shoot } from './helpers';
+import { PHONE, baseUrl, launch, newTitledSketch, person, shoot } from './helpers';
 
 const who = person('Tomas Talk', 'tomas.talk', 'seminar room no wifi 3');
 const TITLE = 'Kinked loop drawn at the talk';
@@ -100,14 +100,9 @@ test('offline: a reload opens the app from the cache, cross-origin isolated', as
 });
 
 test('offline: a sketch made after the offline reload survives another one', async () => {
-  await page.getByRole('button', { name: 'New sketch' }).first().click();
-  await page.getByTestId('slate-canvas').waitFor();
   // Details before drawing: saving details while the drawing waits for its autosave dropped the
   // drawing in this spec's first version (reported to the lead, not this spec's subject).
-  await page.getByRole('button', { name: 'Details', exact: true }).click();
-  await page.getByRole('textbox', { name: 'Title' }).fill(TITLE);
-  await page.getByRole('button', { name: 'Save details' }).click();
-  await page.getByRole('heading', { name: TITLE }).waitFor();
+  await newTitledSketch(page, TITLE);
   const box = (await page.getByTestId('slate-canvas').boundingBox())!;
   const points = loop({ x: box.x + box.width / 2, y: box.y + box.height / 2 }, Math.min(box.width, box.height) / 3);
   await page.mouse.move(points[0].x, points[0].y);

@@ -5,7 +5,7 @@ import { applyPulled, localOnly, outOfScope, rebase, sameViewer } from '@/sync/r
 import { pageOf } from '@/sync/cursor';
 import { canSee, canWrite, type Viewer } from '@/sync/scope';
 import { backoffDelay, backoffMaxMs } from '@/sync/backoff';
-import { statusLabel, statusOf } from '@/sync/status';
+import { statusLabel, statusOf, type StatusInput } from '@/sync/status';
 import type { Mutation, SyncRecord } from '@/shared/api/sync';
 
 const m = (clock: number, fields: Record<string, unknown>, op: Mutation['op'] = 'update') =>
@@ -129,12 +129,16 @@ describe('backoff and status', () => {
     expect(backoffDelay(4, 0)).toBe(4000);
     expect(backoffDelay(40, 0.999)).toBeLessThanOrEqual(backoffMaxMs);
   });
-  test('S8, S31: offline first, then syncing, conflict, refused, waiting, up to date', () => {
-    expect(statusLabel(statusOf({ online: false, syncing: false, waiting: 2, conflicts: 1, rejected: 0 }))).toBe('Offline, 2 changes waiting');
-    expect(statusOf({ online: true, syncing: true, waiting: 0, conflicts: 1, rejected: 0 }).kind).toBe('syncing');
-    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 1, conflicts: 1, rejected: 1 }))).toBe('1 conflict to resolve');
-    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 0, conflicts: 0, rejected: 2 }))).toBe('2 changes refused by the server');
-    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 1, conflicts: 0, rejected: 0 }))).toBe('1 change waiting');
-    expect(statusLabel(statusOf({ online: true, syncing: false, waiting: 0, conflicts: 0, rejected: 0 }))).toBe('Up to date');
+  test('S8, S31: offline first, then syncing, a failure, conflict, refused, waiting, not yet synced, up to date', () => {
+    const calm: StatusInput = { online: true, syncing: false, waiting: 0, conflicts: 0, rejected: 0, lastError: null, lastSyncedAt: '2026-01-01T00:00:00Z' };
+    const label = (s: Partial<StatusInput>) => statusLabel(statusOf({ ...calm, ...s }));
+    expect(label({ online: false, waiting: 2, conflicts: 1, lastError: 'down' })).toBe('Offline, 2 changes waiting');
+    expect(statusOf({ ...calm, syncing: true, conflicts: 1, lastError: 'down' }).kind).toBe('syncing');
+    expect(label({ waiting: 3, conflicts: 1, lastError: 'HTTP 500' })).toBe('Sync failed, 3 changes waiting');
+    expect(label({ waiting: 1, conflicts: 1, rejected: 1 })).toBe('1 conflict to resolve');
+    expect(label({ rejected: 2 })).toBe('2 changes refused by the server');
+    expect(label({ waiting: 1, lastSyncedAt: null })).toBe('1 change waiting');
+    expect(label({ lastSyncedAt: null })).toBe('Not synced yet');
+    expect(label({})).toBe('Up to date');
   });
 });

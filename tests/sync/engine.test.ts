@@ -28,8 +28,8 @@ function setup(failures: TransportError[]) {
     },
   };
   const timers = {
-    setTimeout: ((fn: () => void, ms: number) => (delays.push(ms), pending.push(fn), pending.length)) as unknown as typeof setTimeout,
-    clearTimeout: (() => undefined) as unknown as typeof clearTimeout,
+    setTimeout: (fn: () => void, ms: number) => (delays.push(ms), pending.push(fn), pending.length),
+    clearTimeout: () => undefined,
   };
   const engine = new SyncEngine({ store, transport, status, timers, random: () => 0, periodMs: 60_000 });
   return { store, status, engine, calls, delays, fire: () => pending.shift()?.() };
