@@ -7,7 +7,7 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { HealthResponse } from '@/shared/api/auth';
-import { syncPaths, syncPushLimit } from '@/shared/api/sync';
+import { syncPaths } from '@/shared/api/sync';
 import { areas, devAreas } from './areas';
 import type { Deps } from './deps';
 import { errorHandler, notFound } from './http/errors';
@@ -28,8 +28,9 @@ export function createApp(deps: Deps): Express {
   app.use(pinoHttp({ logger: deps.log }));
   // The web bundle is ~3.6 MB; gzip makes the first load on conference wifi about 4x smaller.
   app.use(compression());
-  app.use(syncPaths.push, express.json({ limit: syncPushLimit })); // a push carries whole diagrams
-  app.use(express.json({ limit: deps.config.jsonLimit }));
+  // A push (up to 8 MB) is parsed by its route after the token is checked (server/sync/routes.ts).
+  const json = express.json({ limit: deps.config.jsonLimit });
+  app.use((req, res, next) => (req.path === syncPaths.push ? next() : json(req, res, next)));
 
   app.get('/api/health', (_req, res) => {
     res.json({ ok: true } satisfies HealthResponse);

@@ -2,7 +2,7 @@
 // clock order, upload waiting photos, post comments written offline, then pull pages until up
 // to date. One round at a time; failed
 // rounds retry with exponential back-off.
-import { maxPushMutations, pushBatchBytes } from '@/shared/api/sync';
+import { maxPushMutations, pushBatchBytes, type PushResult } from '@/shared/api/sync';
 import { backoffDelay } from '@/sync/backoff';
 import type { SyncStore } from '@/lib/store/types';
 import type { SyncStatusStore } from './status-store';
@@ -132,12 +132,26 @@ export class SyncEngine {
   /** S8, S11: oldest first, batches under the count and size limits, until the outbox is empty. */
   private async pushAll(): Promise<void> {
     const deviceId = await this.o.store.deviceId();
+    let alone = false;
     for (;;) {
       const box = await this.o.store.outbox(maxPushMutations);
       if (box.length === 0) return;
       let bytes = 0;
-      const batch = box.filter((m, i) => (bytes += JSON.stringify(m).length) <= pushBatchBytes || i === 0);
-      const { results } = await this.o.transport.push({ deviceId, mutations: batch });
+      const batch = alone ? box.slice(0, 1) : box.filter((m, i) => (bytes += JSON.stringify(m).length) <= pushBatchBytes || i === 0);
+      let results: PushResult[];
+      try {
+        ({ results } = await this.o.transport.push({ deviceId, mutations: batch }));
+      } catch (e) {
+        // A 4xx (a body too large, a request the server cannot read) is refused again on every
+        // retry: the mutations go one by one, and one refused alone is set aside like a
+        // rejection (S24), so it never holds up the outbox.
+        if (!(e instanceof TransportError && e.kind === 'client')) throw e;
+        if (batch.length > 1) {
+          alone = true;
+          continue;
+        }
+        results = [{ mutationId: batch[0].mutationId, status: 'rejected', reason: 'invalid', message: e.message }];
+      }
       if (results.length !== batch.length) throw new TransportError('server', 'The push answer does not cover the batch');
       await this.o.store.settle(batch, results);
       this.o.status.setState(await this.o.store.counts());

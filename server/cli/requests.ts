@@ -2,6 +2,7 @@
 // validated with zod, answered as a plain JSON object. Shared by `batch` (one per line) and
 // `invariants --json`, so both speak the same contract (DEVELOPERS.md, Command line).
 import { z } from 'zod';
+import { diagramLimits, Framings, PdCode, Unknots } from '@/shared/api/sketches';
 import { cable, Diagram, diagram, fromBraid, fromDT, Laurent, orient, writhe } from '@/shared/knot';
 import { alexander } from '@/shared/knot/alexander';
 import { bracket } from '@/shared/knot/bracket';
@@ -39,19 +40,19 @@ export type Computable = (typeof computable)[number];
  */
 export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh' && c !== 's' && c !== 'pd' && c !== 'homfly');
 
-const label = z.number().int();
+// The limits of the API and sync (shared/api/sketches.ts): a braid letter or DT entry is a crossing.
 const code = {
-  pd: z.array(z.tuple([label, label, label, label])).optional(),
-  braid: z.array(z.number().int().refine((k) => k !== 0, 'braid letters are nonzero integers')).optional(),
-  dt: z.array(z.number().int()).optional(),
+  pd: PdCode.optional(),
+  braid: z.array(z.number().int().refine((k) => k !== 0, 'braid letters are nonzero integers')).max(diagramLimits.crossings).optional(),
+  dt: z.array(z.number().int()).max(diagramLimits.crossings).optional(),
   /** Crossingless unknot components beside the code (default 0; for an empty PD code 1). */
-  unknots: z.number().int().min(0).optional(),
+  unknots: Unknots.optional(),
 };
 const oneCode = (keys: string[]) => (r: Record<string, unknown>) => keys.filter((k) => r[k] !== undefined).length === 1;
 
 /** The diagram a cable is taken of: a code, with a framing per component (null = blackboard). */
 const CableOf = z
-  .object({ ...code, framings: z.array(z.number().int().nullable()).optional() })
+  .object({ ...code, framings: Framings.optional() })
   .strict()
   .refine(oneCode(['pd', 'braid', 'dt']), { message: 'give exactly one of "pd", "braid" or "dt"' });
 type CableOf = z.infer<typeof CableOf>;

@@ -17,7 +17,8 @@ export interface Outcome {
 }
 
 /** Ends a run; false when it had ended already (e.g. cancelled while its result came in). */
-export async function finishRun(deps: Deps, id: string, o: Outcome): Promise<boolean> {
+export async function finishRun(deps: Deps, id: string, outcome: Outcome): Promise<boolean> {
+  const o = selfChecked(outcome);
   const patch = {
     status: o.status,
     finishedAt: deps.now().toISOString(),
@@ -27,6 +28,15 @@ export async function finishRun(deps: Deps, id: string, o: Outcome): Promise<boo
   if (!(await updateIf(deps.db, id, live, patch))) return false;
   await afterChange(deps, id);
   return true;
+}
+
+/**
+ * A result whose graded Euler characteristic differs from the Jones polynomial's (the engine's
+ * self-check, shared/khovanov) is wrong: the run fails and keeps no result, so nothing reuses it.
+ */
+function selfChecked(o: Outcome): Outcome {
+  if (o.status !== 'done' || o.result?.euler?.ok !== false) return o;
+  return { status: 'failed', error: 'The self-check failed: the Euler characteristic of the computed homology differs from the Jones polynomial, so the result is not kept.' };
 }
 
 /** After a run's row changed: a sweep cell updates its sweep; a top-level end sends the mail. */

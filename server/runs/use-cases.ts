@@ -35,6 +35,7 @@ export function diagramKey(d: RunDiagram, reduced: boolean): string {
 }
 
 function checked(d: RunDiagram): Diagram {
+  if (d.pd.length === 0 && d.unknots === 0) throw badDiagram('The diagram is empty (no crossings, no unknots): draw or paste a link first');
   try {
     return diagram(d.pd, { unknots: d.unknots, framings: d.framings });
   } catch (err) {
@@ -49,8 +50,8 @@ async function target(deps: Deps, user: User, req: Start): Promise<{ diagram: Ru
     const s = await findSketch(deps.db, req.sketchId);
     if (!s || s.deleted || !canSee(viewer, s)) throw notFound('No such sketch, or it is not shared with you');
     if (s.ownerId !== user.id && viewer.groups.get(s.groupId!) === 'viewer') throw viewersCannot();
-    const { pd, unknots, framings } = s.diagram;
-    return { diagram: { pd, unknots, framings }, groupId: s.groupId, sketchId: s.id, label: req.label || s.title || 'Untitled sketch', source: null };
+    const { pd, unknots, framings } = req.diagram ?? s.diagram;
+    return { diagram: { pd, unknots, framings }, groupId: s.groupId, sketchId: s.id, label: req.label || s.title || 'Untitled sketch', source: req.diagram ? (req.source ?? null) : null };
   }
   if (req.groupId !== undefined) {
     const role: Role = await requireMember(deps.db, req.groupId, user.id);

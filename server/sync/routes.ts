@@ -1,5 +1,5 @@
-import { Router } from 'express';
-import { PullQuery, PushRequest, syncPaths } from '@/shared/api/sync';
+import express, { Router } from 'express';
+import { PullQuery, PushRequest, syncPaths, syncPushLimit } from '@/shared/api/sync';
 import { currentUser, requireAuth } from '../auth/middleware';
 import type { Deps } from '../deps';
 import { parse } from '../http/validate';
@@ -8,7 +8,8 @@ import * as sync from './use-cases';
 export function routes(deps: Deps): Router {
   const router = Router();
   const auth = requireAuth(deps);
-  router.post(syncPaths.push, auth, async (req, res) => {
+  // A push carries whole diagrams: its large body is read only once the token is good.
+  router.post(syncPaths.push, auth, express.json({ limit: syncPushLimit }), async (req, res) => {
     res.json(await sync.push(deps, currentUser(req), parse(PushRequest, req.body)));
   });
   router.get(syncPaths.pull, auth, async (req, res) => {

@@ -3,7 +3,7 @@
 // shapes, shared by the server routes and the app.
 import { z } from 'zod';
 import { isPrime } from '@/shared/linalg/ring';
-import { RecordId } from './sketches';
+import { Framings, PdCode, RecordId, Unknots } from './sketches';
 
 export const runPaths = {
   runs: '/api/runs', // POST start, GET list (?mine=1 | ?sketchId= | ?groupId=)
@@ -30,14 +30,11 @@ export const RunRing = z
     message: "Ring must be Z, Q or F<p> for a prime p (e.g. F2)",
   });
 
-const Label = z.int().min(-1_000_000).max(1_000_000);
-
-/** A diagram given directly (pasted PD code, or a braid closure the app converted). */
+/** A diagram given directly (pasted PD code, or a braid closure the app converted), in the limits of a sketch's. */
 export const RunDiagram = z.object({
-  pd: z.array(z.tuple([Label, Label, Label, Label])).max(2_000),
-  unknots: z.int().min(0).max(100).default(0),
-  /** One per component (PD components in orient() order, then the unknots); null = blackboard. */
-  framings: z.array(z.int().min(-1000).max(1000).nullable()).max(2_100).optional(),
+  pd: PdCode,
+  unknots: Unknots.default(0),
+  framings: Framings.optional(),
 });
 export type RunDiagram = z.infer<typeof RunDiagram>;
 
@@ -52,6 +49,7 @@ export const StartRunRequest = z
   .object({
     kind: RunKind.default('khovanov'),
     sketchId: RecordId.optional(),
+    /** With sketchId: the sketch's diagram as the device has it (what the run computes). */
     diagram: RunDiagram.optional(),
     /** For a pasted diagram: share the run with this group (members and above). Omit: private. */
     groupId: z.string().min(1).max(100).optional(),
@@ -63,8 +61,10 @@ export const StartRunRequest = z
     /** The text the diagram came from, in full (e.g. "braid 1 1 -2 ..."): shown with the result and in its exports. */
     source: RunSource.optional(),
   })
-  .refine((r) => (r.sketchId === undefined) !== (r.diagram === undefined), {
-    message: 'Give either sketchId or diagram, not both',
+  // Both: a run on the sketch that computes the diagram as the device shows it (the server's
+  // copy may be older than the latest edit).
+  .refine((r) => r.sketchId !== undefined || r.diagram !== undefined, {
+    message: 'Give sketchId, diagram, or both',
     path: ['diagram'],
   })
   .refine((r) => (r.kind === 'cable-sweep') === (r.sweep !== undefined), {

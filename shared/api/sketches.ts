@@ -12,6 +12,21 @@ export const RecordId = z.string().min(1).max(100);
 export const Sha256 = z.string().regex(/^[0-9a-f]{64}$/, 'Expected a SHA-256 hash in lowercase hex');
 
 const Label = z.int().min(-1_000_000).max(1_000_000);
+
+/**
+ * The one set of diagram limits of the API, sync and the command line. Unknots: the homology of
+ * 50 split circles has ranks up to C(50, 25) < 2^53, still counted exactly; framings: a cable of
+ * an r-strand component with framing f carries |f - writhe| r (r - 1) twist crossings, so beyond
+ * +-200 a cable is far over any run's crossing limit.
+ */
+export const diagramLimits = { crossings: 2_000, unknots: 50, framing: 200 } as const;
+export const PdCode = z.array(z.tuple([Label, Label, Label, Label])).max(diagramLimits.crossings);
+export const Unknots = z.int().min(0).max(diagramLimits.unknots);
+/** One per component (components in `orient()` order, unknots after them); null = blackboard. */
+export const Framings = z
+  .array(z.int().min(-diagramLimits.framing).max(diagramLimits.framing).nullable())
+  .max(2 * diagramLimits.crossings + diagramLimits.unknots);
+
 const Point = z.tuple([z.number(), z.number()]);
 
 export const Stroke = z.object({
@@ -19,6 +34,25 @@ export const Stroke = z.object({
   closed: z.boolean().optional(),
 });
 export type Stroke = z.infer<typeof Stroke>;
+
+/** The Slate's geometry is a few levels deep (components, strokes, points); a device sends no more. */
+export const geometryLimits = { depth: 32, values: 500_000 } as const;
+
+/**
+ * Why `value` is beyond geometryLimits, or null. A loop with an explicit stack rather than
+ * recursion, so a value nested thousands deep is measured, not a stack overflow.
+ */
+function geometryTooBig(value: unknown): string | null {
+  const stack: [unknown, number][] = [[value, 1]];
+  for (let seen = 0; stack.length; seen++) {
+    if (seen > geometryLimits.values) return `more than ${geometryLimits.values} values`;
+    const [v, depth] = stack.pop()!;
+    if (v === null || typeof v !== 'object') continue;
+    if (depth > geometryLimits.depth) return `nested more than ${geometryLimits.depth} deep`;
+    for (const child of Object.values(v)) stack.push([child, depth + 1]);
+  }
+  return null;
+}
 
 /**
  * The link diagram: PD code (docs/conventions.md), unknotted circles with no crossings that
@@ -28,13 +62,19 @@ export type Stroke = z.infer<typeof Stroke>;
  * drawing reopens exactly as it was left.
  */
 export const Diagram = z.object({
-  pd: z.array(z.tuple([Label, Label, Label, Label])).max(2_000),
-  unknots: z.int().min(0).max(1_000),
-  framings: z.array(z.int().nullable()).max(3_000),
+  pd: PdCode,
+  unknots: Unknots,
+  framings: Framings,
   strokes: z.array(Stroke).max(2_000),
   // Not z.json(): its recursive check costs ~1 ms per drawing, and the value always arrives
   // from JSON (request body, device store) so it is JSON by construction.
-  geometry: z.unknown().optional(),
+  geometry: z
+    .unknown()
+    .superRefine((g, ctx) => {
+      const why = geometryTooBig(g);
+      if (why) ctx.addIssue({ code: 'custom', message: `The drawing's geometry is ${why}` });
+    })
+    .optional(),
 });
 export type Diagram = z.infer<typeof Diagram>;
 
