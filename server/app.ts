@@ -16,6 +16,8 @@ import { setServiceWorkerHeaders } from './web/headers';
 export function createApp(deps: Deps): Express {
   const app = express();
   app.disable('x-powered-by');
+  // Behind a reverse proxy req.ip (the rate limits' key) comes from X-Forwarded-For; see README.
+  app.set('trust proxy', deps.config.trustProxy);
   app.use(
     helmet({
       // The Expo web export injects inline styles and scripts; a CSP would need per-build hashes.
@@ -25,7 +27,7 @@ export function createApp(deps: Deps): Express {
       crossOriginEmbedderPolicy: { policy: 'require-corp' },
     }),
   );
-  app.use(pinoHttp({ logger: deps.log }));
+  app.use(pinoHttp({ logger: deps.log, redact: ['req.headers.authorization', 'req.headers.cookie'] }));
   // The web bundle is ~3.6 MB; gzip makes the first load on conference wifi about 4x smaller.
   app.use(compression());
   // A push (up to 8 MB) is parsed by its route after the token is checked (server/sync/routes.ts).

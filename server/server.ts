@@ -7,6 +7,7 @@ import pino, { type Level } from 'pino';
 import { createApp } from './app';
 import { areas } from './areas';
 import { defaultConfig, type Config } from './config';
+import { keptJwtSecret } from './auth/secret';
 import { openDatabase } from './db/connect';
 import { seedDemo } from './demo/seed';
 import type { Deps } from './deps';
@@ -49,9 +50,10 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
   const log = pino({ level: options.logLevel ?? 'silent' });
   // publicUrl is filled in once the port is known, before the first request can arrive.
   const config = defaultConfig({ publicUrl: '', ...options.config });
-  const db = await openDatabase(options.dbPath ?? ':memory:');
+  const dbPath = options.dbPath ?? ':memory:';
+  const db = await openDatabase(dbPath);
   const mailbox = options.mailer || options.smtp ? null : await startSmtpFake();
-  const target = options.smtp ?? (mailbox && { host: mailbox.host, port: mailbox.port });
+  const target = options.smtp ?? (mailbox && { host: mailbox.host, port: mailbox.port, plain: true });
   const mailer = options.mailer ?? createSmtpMailer(target!, config.mailFrom);
   const deps: Deps = { db, config, mailer, mailbox, log, now: options.now ?? (() => new Date()) };
   const services: { stop(): Promise<void> }[] = [];
@@ -65,6 +67,7 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
   const app = createApp(deps);
   const http = createServer(app);
   try {
+    config.jwtSecret ||= await keptJwtSecret(dbPath);
     if (options.demo) demoRowsAdded = await seedDemo(deps);
     for (const area of areas) if (area.start) services.push(await area.start(deps));
     await new Promise<void>((resolve, reject) => {

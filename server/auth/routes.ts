@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { LoginRequest, RegisterRequest, authPaths } from '@/shared/api/auth';
 import type { Deps } from '../deps';
@@ -9,19 +9,27 @@ import { login, register } from './use-cases';
 
 export function routes(deps: Deps): Router {
   const router = Router();
-  // One budget for sign-in and sign-up together, per client address.
-  const limiter = rateLimit({
-    ...deps.config.authRateLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) =>
-      next(new AppError('rate_limited', 429, 'Too many sign-in attempts; wait a few minutes and try again')),
-  });
+  // Only failures count (a seminar behind one address signs in as often as it likes): per
+  // client address for sign-in and sign-up together, and per account for sign-in, so guessing
+  // one person's password from many addresses stops too.
+  const limit = (message: string, keyGenerator?: (req: Request) => string) =>
+    rateLimit({
+      ...deps.config.authRateLimit,
+      ...(keyGenerator && { keyGenerator }),
+      skipSuccessfulRequests: true,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      handler: (_req, _res, next) => next(new AppError('rate_limited', 429, message)),
+    });
+  const perAddress = limit('Too many failed sign-in attempts from your network; wait a few minutes and try again');
+  const perAccount = limit('Too many failed sign-ins to this account; wait a few minutes and try again', (req) =>
+    `account:${String(req.body?.email ?? '').trim().toLowerCase()}`,
+  );
 
-  router.post(authPaths.register, limiter, async (req, res) => {
+  router.post(authPaths.register, perAddress, async (req, res) => {
     res.status(201).json(await register(deps, parse(RegisterRequest, req.body)));
   });
-  router.post(authPaths.login, limiter, async (req, res) => {
+  router.post(authPaths.login, perAddress, perAccount, async (req, res) => {
     res.json(await login(deps, parse(LoginRequest, req.body)));
   });
   router.get(authPaths.me, requireAuth(deps), (req, res) => {

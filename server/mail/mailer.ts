@@ -19,6 +19,8 @@ export interface SmtpTarget {
   port: number;
   /** For a real relay; the local fake needs none. */
   auth?: { user: string; pass: string };
+  /** Only the local fake (plain SMTP on loopback): skip STARTTLS even when offered. */
+  plain?: boolean;
 }
 
 export function createSmtpMailer(target: SmtpTarget, from: string): Mailer {
@@ -26,8 +28,8 @@ export function createSmtpMailer(target: SmtpTarget, from: string): Mailer {
     host: target.host,
     port: target.port,
     secure: target.port === 465,
-    // The local fake speaks plain SMTP on loopback.
-    ignoreTLS: !target.auth,
+    // A relay, with or without credentials, gets STARTTLS whenever it offers it.
+    ignoreTLS: target.plain === true,
     auth: target.auth,
   });
   return {

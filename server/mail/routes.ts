@@ -3,7 +3,10 @@
 import { Router } from 'express';
 import { devMailPaths, type KeptMail } from '@/shared/api/dev-mail';
 import type { Deps } from '../deps';
+import { notFound } from '../http/errors';
 import { URL_PATTERN } from './smtp-fake';
+
+const isLoopback = (address = '') => address === '::1' || /^(::ffff:)?127\./.test(address);
 
 const escape = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
@@ -34,6 +37,12 @@ ${items || '<p>No mail yet.</p>'}</body></html>`;
 export function routes({ mailbox }: Deps): Router {
   const router = Router();
   if (!mailbox) return router;
+  // The kept mail holds every invitation link: only this machine may read it, whatever HOST
+  // says. The socket's address, not req.ip, so no X-Forwarded-For can pass for loopback.
+  router.use([devMailPaths.list, devMailPaths.page], (req, _res, next) => {
+    if (!isLoopback(req.socket.remoteAddress)) throw notFound();
+    next();
+  });
   router.get(devMailPaths.list, (_req, res) => {
     res.json(mailbox.list());
   });

@@ -26,20 +26,6 @@ export type PhotoStorage =
       forcePathStyle: boolean;
     };
 
-/** S3_BUCKET turns the S3 store on; S3_ENDPOINT, S3_REGION, S3_ACCESS_KEY_ID, S3_SECRET_ACCESS_KEY, S3_FORCE_PATH_STYLE refine it; else PHOTO_DIR (default data/photos). */
-export function photoStorageFromEnv(env: NodeJS.ProcessEnv): PhotoStorage {
-  if (!env.S3_BUCKET) return { kind: 'disk', dir: env.PHOTO_DIR ?? 'data/photos' };
-  return {
-    kind: 's3',
-    bucket: env.S3_BUCKET,
-    endpoint: env.S3_ENDPOINT,
-    region: env.S3_REGION ?? 'us-east-1',
-    accessKeyId: env.S3_ACCESS_KEY_ID,
-    secretAccessKey: env.S3_SECRET_ACCESS_KEY,
-    forcePathStyle: env.S3_FORCE_PATH_STYLE ? env.S3_FORCE_PATH_STYLE === 'true' : Boolean(env.S3_ENDPOINT),
-  };
-}
-
 /** Keys are made by the server (uuid or sha256/variant); anything else is refused so no path escapes the folder. */
 const checkKey = (key: string) => {
   if (!/^([0-9a-f-]{36}|[0-9a-f]{64})\/[a-z]+$/.test(key)) throw new Error(`bad photo key ${JSON.stringify(key)}`);
@@ -51,8 +37,9 @@ export function diskStore(dir: string): PhotoStore {
   const path = (key: string) => join(root, checkKey(key));
   return {
     async put(key, bytes) {
-      await mkdir(dirname(path(key)), { recursive: true });
-      await writeFile(path(key), bytes);
+      // Owner-only, like the database: photos are readable only through the access checks.
+      await mkdir(dirname(path(key)), { recursive: true, mode: 0o700 });
+      await writeFile(path(key), bytes, { mode: 0o600 });
     },
     async get(key) {
       return readFile(path(key)).catch((err: NodeJS.ErrnoException) => {

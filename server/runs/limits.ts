@@ -25,22 +25,3 @@ export const defaultRunLimits = (): RunLimits => ({
   maxSweepCells: 64,
   progressEveryMs: 250,
 });
-
-/** RUN_THREADS, RUN_MAX_CROSSINGS, RUN_MAX_MINUTES, RUN_MAX_MEMORY_MB override the defaults. */
-export function runLimitsFromEnv(env: NodeJS.ProcessEnv): RunLimits {
-  const base = defaultRunLimits();
-  const num = (name: string, fallback: number): number => {
-    const v = env[name];
-    if (v === undefined || v === '') return fallback;
-    const n = Number(v);
-    if (!Number.isFinite(n) || n <= 0) throw new Error(`${name} must be a positive number, got ${JSON.stringify(v)}`);
-    return n;
-  };
-  return {
-    ...base,
-    threads: Math.floor(num('RUN_THREADS', base.threads)),
-    maxCrossings: Math.floor(num('RUN_MAX_CROSSINGS', base.maxCrossings)),
-    maxWallMs: num('RUN_MAX_MINUTES', base.maxWallMs / 60_000) * 60_000,
-    maxMemoryMb: Math.floor(num('RUN_MAX_MEMORY_MB', base.maxMemoryMb)),
-  };
-}

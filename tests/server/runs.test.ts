@@ -9,7 +9,7 @@ import { RunList } from '@/shared/api/runs';
 import { fromBraid } from '@/shared/knot/braid';
 import { mirror } from '@/shared/knot/families';
 import { createRunPool } from '@/server/runs/pool';
-import { defaultRunLimits, runLimitsFromEnv, type RunLimits } from '@/server/runs/limits';
+import { defaultRunLimits, type RunLimits } from '@/server/runs/limits';
 import type { RunningServer } from '@/server/server';
 import { bearer, groupWith, signUp, testServer } from './helpers';
 import { ended, mailFor, read, slow, start, torus, trefoil, waitFor } from './runs-fixtures';
@@ -136,14 +136,6 @@ describe('limits', () => {
     expect(run.status).toBe('failed');
     expect(run.error).toBe('Ran out of memory: the computation needed more than the limit of 48 MB per run.');
   }, 120_000);
-});
-
-describe('limits from the environment', () => {
-  it('reads RUN_* variables and refuses nonsense', () => {
-    expect(runLimitsFromEnv({ RUN_THREADS: '3', RUN_MAX_CROSSINGS: '90', RUN_MAX_MINUTES: '2', RUN_MAX_MEMORY_MB: '512' })).toMatchObject({ threads: 3, maxCrossings: 90, maxWallMs: 120_000, maxMemoryMb: 512 });
-    expect(runLimitsFromEnv({})).toEqual(defaultRunLimits());
-    expect(() => runLimitsFromEnv({ RUN_THREADS: 'many' })).toThrow('RUN_THREADS must be a positive number, got "many"');
-  });
 });
 
 describe('a restart', () => {
