@@ -16,7 +16,7 @@ export function routes(deps: Deps): Router {
     const match = /^Bearer (\S+)$/.exec(req.get('authorization') ?? '');
     let userId: string | null = null;
     try {
-      userId = match && verifyToken(deps.config, match[1]);
+      userId = match && verifyToken(deps.config, match[1]).userId;
     } catch {
       // requireAuth answers bad tokens on the routes that need one
     }

@@ -1,5 +1,6 @@
-// requireAuth: the Bearer token must be valid and its user must still exist. Routes then read
-// the caller with currentUser(req).
+// requireAuth: the Bearer token must be valid, its user must still exist and the token must
+// carry the user's current token version (not revoked). Routes then read the caller with
+// currentUser(req).
 import type { Request, RequestHandler } from 'express';
 import type { User as UserDto } from '@/shared/api/auth';
 import type { Deps } from '../deps';
@@ -13,8 +14,10 @@ export function requireAuth({ db, config }: Deps): RequestHandler {
   return async (req, _res, next) => {
     const match = /^Bearer (\S+)$/.exec(req.get('authorization') ?? '');
     if (!match) throw unauthorized('Sign in first: send Authorization: Bearer <token>');
-    const user = await findUserById(db, verifyToken(config, match[1]));
+    const claims = verifyToken(config, match[1]);
+    const user = await findUserById(db, claims.userId);
     if (!user) throw unauthorized('The account of this token no longer exists');
+    if (user.tokenVersion !== claims.version) throw unauthorized('This session was signed out; sign in again');
     callers.set(req, { id: user.id, email: user.email, displayName: user.displayName });
     next();
   };

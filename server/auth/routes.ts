@@ -1,11 +1,11 @@
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import { LoginRequest, RegisterRequest, authPaths } from '@/shared/api/auth';
+import { ChangePasswordRequest, LoginRequest, RegisterRequest, authPaths } from '@/shared/api/auth';
 import type { Deps } from '../deps';
 import { AppError } from '../http/errors';
 import { parse } from '../http/validate';
 import { currentUser, requireAuth } from './middleware';
-import { login, register } from './use-cases';
+import { changePassword, login, register, signOutEverywhere } from './use-cases';
 
 export function routes(deps: Deps): Router {
   const router = Router();
@@ -34,6 +34,14 @@ export function routes(deps: Deps): Router {
   });
   router.get(authPaths.me, requireAuth(deps), (req, res) => {
     res.json(currentUser(req));
+  });
+  router.post(authPaths.signOutEverywhere, requireAuth(deps), async (req, res) => {
+    await signOutEverywhere(deps, currentUser(req).id);
+    res.status(204).end();
+  });
+  // A stolen token must not guess the password behind it: wrong guesses count per address.
+  router.post(authPaths.password, requireAuth(deps), perAddress, async (req, res) => {
+    res.json(await changePassword(deps, currentUser(req).id, parse(ChangePasswordRequest, req.body)));
   });
   return router;
 }

@@ -6,6 +6,10 @@ export const authPaths = {
   register: '/api/auth/register',
   login: '/api/auth/login',
   me: '/api/me',
+  /** POST, 204: every token of the caller (this one too) stops working. */
+  signOutEverywhere: '/api/auth/sign-out-everywhere',
+  /** POST ChangePasswordRequest -> AuthResponse with a new token; older tokens stop working. */
+  password: '/api/auth/password',
 } as const;
 
 /** Trimmed and lower-cased before the format check, so "  Ann@Uni.EDU " is ann@uni.edu. */
@@ -42,6 +46,12 @@ export const LoginRequest = z.object({
   password: z.string({ message: 'Password is required' }).min(1, 'Password is required').max(200),
 });
 export type LoginRequest = z.infer<typeof LoginRequest>;
+
+export const ChangePasswordRequest = z.object({
+  currentPassword: z.string({ message: 'Current password is required' }).min(1, 'Current password is required').max(200),
+  newPassword: NewPassword,
+});
+export type ChangePasswordRequest = z.infer<typeof ChangePasswordRequest>;
 
 export const User = z.object({
   id: z.string(),

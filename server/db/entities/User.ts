@@ -15,6 +15,10 @@ export class User {
   @Column({ type: 'varchar', length: 100 })
   passwordHash: string;
 
+  /** Repeated in every access token; bumped to revoke them all (auth/tokens.ts). */
+  @Column({ type: 'integer', default: 0 })
+  tokenVersion: number;
+
   @CreateDateColumn({ type: 'datetime' })
   createdAt: Date;
 }
