@@ -74,6 +74,8 @@ export const radius = { sm: 6, md: 10, lg: 14, pill: 999 } as const;
 
 /** Width at which the app switches from bottom tabs to a side rail with split panes. */
 export const WIDE_BREAKPOINT = 1024;
+/** A detail page wide enough, beside the list pane, for two columns of its own (a shared sketch and its discussion). */
+export const TWO_COLUMN_BREAKPOINT = 1280;
 /** Readable line length for forms and text columns. */
 export const COLUMN_MAX = 560;
 /** Smallest comfortable touch target (one-handed use on a phone). */

@@ -6,7 +6,7 @@ import { apiUrl } from '@/lib/api';
 import { colors, radius, space, type } from '@/constants/theme';
 import type { PressState } from '@/components/ui/press-state';
 import { Jones } from './Jones';
-import { StrokeThumb } from './StrokeThumb';
+import { DiagramPicture } from './DiagramPicture';
 import { superscripts } from './superscripts';
 import { when } from '@/lib/when';
 
@@ -20,7 +20,7 @@ export function FeedCard({ item, onOpen, active }: { item: FeedItem; onOpen: () 
       {item.photoThumbUrl ? (
         <Image source={{ uri: apiUrl(item.photoThumbUrl) }} style={styles.photo} accessibilityLabel="Board photo" />
       ) : (
-        <StrokeThumb strokes={item.strokes} size={PIC} crossings={inv.crossings} />
+        <DiagramPicture diagram={item.diagram} size={PIC} pictureKey={`${item.id}:${item.version}`} crossings={inv.crossings} label={`Picture of ${item.title || 'Untitled sketch'}`} />
       )}
       <View style={styles.body}>
         <Text style={styles.title} numberOfLines={2}>{item.title || 'Untitled sketch'}</Text>

@@ -6,7 +6,7 @@ import { router, usePathname } from 'expo-router';
 import { useKnownGroups, useLocalSketches } from '@/hooks/queries/useLocalSketches';
 import type { LocalGroup, LocalSketch } from '@/lib/store/types';
 import { summaryOf } from '@/lib/slate/summary';
-import { StrokeThumb } from '@/components/feed/StrokeThumb';
+import { DiagramPicture } from '@/components/feed/DiagramPicture';
 import { when } from '@/lib/when';
 import { TeX } from '@/components/runs/Math';
 import { Screen } from '@/components/ui/Screen';
@@ -37,7 +37,7 @@ function Row({ sketch, active, groups }: { sketch: LocalSketch; active: boolean;
   return (
     <Pressable role="link" accessibilityLabel={`Open ${sketch.title || 'Untitled sketch'}`} onPress={() => router.navigate(`/sketches/${sketch.id}`)}
       style={({ pressed, hovered }: { pressed: boolean; hovered?: boolean }) => [styles.row, active && styles.active, (pressed || hovered) && !active && styles.hover]}>
-      <StrokeThumb strokes={sketch.diagram.strokes} size={64} crossings={s.crossings} />
+      <DiagramPicture diagram={sketch.diagram} size={64} pictureKey={`${sketch.id}:${sketch.updatedAt}`} crossings={s.crossings} label={`Picture of ${sketch.title || 'Untitled sketch'}`} />
       <View style={styles.text}>
         <Text style={styles.title} numberOfLines={1}>{sketch.title || 'Untitled sketch'}</Text>
         <Text style={styles.meta} numberOfLines={1}>

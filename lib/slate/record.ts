@@ -3,8 +3,7 @@
 // unknots and framings read from the analysis are what other screens and the server use; the
 // smoothed paths go to diagram.strokes for thumbnails. A record with a PD code but no geometry
 // (typed on another device, or forked) is laid out afresh.
-import { z } from 'zod';
-import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
+import { SlateGeometry, type Diagram as StoredDiagram } from '@/shared/api/sketches';
 import type { Analysis } from '@/shared/drawing/analyse';
 import { emptySketch, type Sketch } from '@/shared/drawing/sketch';
 import { layoutPD, layoutToSketch } from '@/shared/layout';
@@ -18,21 +17,6 @@ export interface SlateDoc {
 }
 
 export const emptyDoc: SlateDoc = { sketch: emptySketch, colours: {} };
-
-const P = z.object({ x: z.number(), y: z.number() });
-const Geometry = z.object({
-  components: z.array(z.object({
-    id: z.string(),
-    seq: z.number(),
-    points: z.array(P),
-    closed: z.boolean(),
-    reversed: z.boolean(),
-    framing: z.number().int().nullable(),
-  })),
-  flips: z.array(z.object({ a: z.string(), b: z.string(), at: P })),
-  nextSeq: z.number(),
-  colours: z.record(z.string(), z.number().int()).optional(),
-});
 
 const round = (x: number) => Math.round(x * 10) / 10;
 
@@ -63,7 +47,7 @@ export function docFromDiagram(d: Diagram): SlateDoc {
 }
 
 export function docFromStored(stored: StoredDiagram): SlateDoc {
-  const g = Geometry.safeParse(stored.geometry);
+  const g = SlateGeometry.safeParse(stored.geometry);
   if (g.success) {
     const { colours = {}, ...sketch } = g.data;
     return { sketch, colours };

@@ -112,7 +112,7 @@ export const DEMO_SKETCHES: StorySketch[] = [
 
 const round = (x: number) => Math.round(x * 10) / 10;
 
-/** The stored diagram, with the laid-out strands as its strokes so the feed can draw it. */
+/** The stored diagram, with the laid-out drawing as its strokes and geometry, as the Slate stores it. */
 function stored(d: Diagram): StoredDiagram {
   const sketch = layoutToSketch(layoutPD(d.pd, d.unknots), d.framings);
   return {
@@ -120,6 +120,7 @@ function stored(d: Diagram): StoredDiagram {
     unknots: d.unknots,
     framings: [...d.framings],
     strokes: sketch.components.map((c) => ({ points: c.points.map((p) => [round(p.x), round(p.y)] as [number, number]), closed: c.closed })),
+    geometry: { components: sketch.components, flips: sketch.flips, nextSeq: sketch.nextSeq },
   };
 }
 

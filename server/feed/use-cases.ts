@@ -3,9 +3,9 @@
 // photos, comments, fork link and "same invariants as", and forking into my own sketchbook.
 import { randomUUID } from 'node:crypto';
 import type { User } from '@/shared/api/auth';
-import type { FeedItem, FeedPage, FeedQuery, ForkResponse, GroupSketch, InvariantSummary, ShareResponse, SketchRef } from '@/shared/api/feed';
+import type { FeedDiagram, FeedItem, FeedPage, FeedQuery, ForkResponse, GroupSketch, InvariantSummary, ShareResponse, SketchRef } from '@/shared/api/feed';
 import { canModerate, canPost } from '@/shared/api/feed-rules';
-import type { Stroke } from '@/shared/api/sketches';
+import { SlateGeometry } from '@/shared/api/sketches';
 import type { Mutation, PushResult } from '@/shared/api/sync';
 import { canSee } from '@/sync/scope';
 import { toDtos as commentDtos } from '../comments/use-cases';
@@ -25,16 +25,22 @@ import { sketchAccess } from './access';
 import * as repo from './repository';
 import { latestRuns, sameKhovanov } from './runs';
 
-/** A feed thumbnail needs the shape, not every sample: at most this many points per stroke. */
-const THUMB_POINTS = 48;
-const THUMB_STROKES = 60;
+/** A feed picture needs the shape, not every sample: at most about this many points per strand. */
+const PICTURE_POINTS = 96;
 
-function thinStrokes(strokes: Stroke[]): Stroke[] {
-  return strokes.slice(0, THUMB_STROKES).map((s) => {
-    const step = Math.max(1, Math.ceil(s.points.length / THUMB_POINTS));
-    const points = s.points.filter((_, i) => i % step === 0 || i === s.points.length - 1);
-    return { points: points.map(([x, y]) => [Math.round(x * 10) / 10, Math.round(y * 10) / 10]), ...(s.closed && { closed: true }) };
-  });
+function thinned<T>(points: T[]): T[] {
+  const step = Math.max(1, Math.ceil(points.length / PICTURE_POINTS));
+  return points.filter((_, i) => i % step === 0 || i === points.length - 1);
+}
+
+/** The Slate's drawing with thinned strands; null when the sketch was not drawn on the Slate. */
+function feedDiagram(d: Sketch['diagram']): FeedDiagram {
+  const g = SlateGeometry.safeParse(d.geometry);
+  const round = (x: number) => Math.round(x * 10) / 10;
+  const geometry = g.success
+    ? { ...g.data, components: g.data.components.map((c) => ({ ...c, points: thinned(c.points).map((p) => ({ x: round(p.x), y: round(p.y) })) })) }
+    : null;
+  return { pd: d.pd, unknots: d.unknots, framings: d.framings, geometry };
 }
 
 const summaryOf = (inv: SketchInvariant | undefined, s: Sketch): InvariantSummary => ({
@@ -61,7 +67,7 @@ async function feedItems(deps: Deps, groupId: string, rows: Sketch[]): Promise<F
     tags: s.tags,
     owner: { id: s.ownerId, displayName: users.get(s.ownerId)?.displayName ?? 'Former member' },
     updatedAt: s.updatedAt,
-    strokes: thinStrokes(s.diagram.strokes),
+    diagram: feedDiagram(s.diagram),
     photoThumbUrl: attached.get(s.id)?.[0]?.thumbUrl ?? (photos.has(s.id) ? thumbUrl(deps, photos.get(s.id)!.id) : null),
     invariants: summaryOf(invariants.get(s.id), s),
     latestRun: runs.get(s.id) ?? null,
@@ -112,7 +118,6 @@ export async function groupSketch(deps: Deps, caller: User, groupId: string, ske
     ...item,
     seenAt: s.seenAt,
     notes: s.notes,
-    pd: s.diagram.pd,
     // The sketch's own photos (attached on the owner's device) first, then those added in the feed.
     photos: [...((await attachmentPhotos(deps, [s])).get(s.id) ?? []), ...(await photoDtos(deps, await photosOf(deps.db, s.id)))],
     comments: await commentDtos(deps, await commentsOn(deps.db, s.id, groupId)),

@@ -4,7 +4,7 @@ import { z } from 'zod';
 import { Comment } from './comments';
 import { Photo } from './photos';
 import { Role } from './groups';
-import { RecordId, Stroke } from './sketches';
+import { Diagram, RecordId, SlateGeometry } from './sketches';
 import { normalTag } from './tags';
 
 export const feedPaths = {
@@ -45,6 +45,14 @@ export type RunSummary = z.infer<typeof RunSummary>;
 export const Person = z.object({ id: z.string(), displayName: z.string() });
 export type Person = z.infer<typeof Person>;
 
+/**
+ * What the feed draws a sketch from, as the Slate does (gaps at crossings, colours, framings):
+ * its code and framings, and its drawing when it was drawn on the Slate, each strand thinned to
+ * what a picture needs (null: typed or from an older app; then it is laid out from the code).
+ */
+export const FeedDiagram = Diagram.omit({ strokes: true, geometry: true }).extend({ geometry: SlateGeometry.nullable() });
+export type FeedDiagram = z.infer<typeof FeedDiagram>;
+
 export const FeedItem = z.object({
   id: RecordId,
   groupId: z.string(),
@@ -52,8 +60,7 @@ export const FeedItem = z.object({
   tags: z.array(z.string()),
   owner: Person,
   updatedAt: z.string(),
-  /** The drawn strokes, thinned for a thumbnail; empty for a typed PD code. */
-  strokes: z.array(Stroke),
+  diagram: FeedDiagram,
   /** Signed thumbnail URL of the first board photo, if any. */
   photoThumbUrl: z.string().nullable(),
   invariants: InvariantSummary,
@@ -82,7 +89,6 @@ export const GroupSketchAbilities = z.object({
 export const GroupSketch = FeedItem.extend({
   seenAt: z.string(),
   notes: z.string(),
-  pd: z.array(z.tuple([z.int(), z.int(), z.int(), z.int()])),
   photos: z.array(Photo),
   comments: z.array(Comment),
   /** The sketch this one was forked from, when the caller may still see it. */

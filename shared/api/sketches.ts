@@ -78,6 +78,24 @@ export const Diagram = z.object({
 });
 export type Diagram = z.infer<typeof Diagram>;
 
+const XY = z.object({ x: z.number(), y: z.number() });
+
+/** What `geometry` holds when the Slate wrote it (shared/drawing's Sketch plus hand-picked colours). */
+export const SlateGeometry = z.object({
+  components: z.array(z.object({
+    id: z.string(),
+    seq: z.number(),
+    points: z.array(XY),
+    closed: z.boolean(),
+    reversed: z.boolean(),
+    framing: z.number().int().nullable(),
+  })),
+  flips: z.array(z.object({ a: z.string(), b: z.string(), at: XY })),
+  nextSeq: z.number(),
+  colours: z.record(z.string(), z.number().int()).optional(),
+});
+export type SlateGeometry = z.infer<typeof SlateGeometry>;
+
 export const emptyDiagram = (): Diagram => ({ pd: [], unknots: 0, framings: [], strokes: [] });
 
 const IsoTime = z.iso.datetime({ offset: true });

@@ -12,7 +12,7 @@ const item: FeedItem = {
   tags: ['torus knot'],
   owner: { id: 'u1', displayName: 'Ada Lindqvist' },
   updatedAt: '2026-11-20T10:00:00.000Z',
-  strokes: [],
+  diagram: { pd: [], unknots: 0, framings: [], geometry: null },
   photoThumbUrl: null,
   // V of the positive trefoil is t + t^3 - t^4 (docs/conventions.md, from memory).
   invariants: { crossings: 3, components: 1, jones: [[1, 1], [3, 1], [4, -1]], jonesText: 't + t³ − t⁴' },

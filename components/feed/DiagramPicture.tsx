@@ -1,0 +1,90 @@
+// A sketch's picture as the Slate draws it (lib/slate/picture.ts): each strand in its chalk
+// colour, cut where it passes under, so a linked and an unlinked pair of circles look
+// different. With `marks` (a sketch's own page) each component also shows its orientation
+// arrow and a label "number: framing" ("bb" for the blackboard framing). A code with no
+// picture shows the crossing count instead.
+import { StyleSheet, Text, View } from 'react-native';
+import Svg, { G, Path, Text as SvgText } from 'react-native-svg';
+import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
+import { analyse } from '@/shared/drawing/analyse';
+import type { Point } from '@/shared/drawing/point';
+import { fitView, strandPictures, type StrandPicture } from '@/lib/slate/picture';
+import { docFromStored } from '@/lib/slate/record';
+import { fonts, radius, slate } from '@/constants/theme';
+
+export type PictureSource = Omit<StoredDiagram, 'strokes'>;
+
+// Lists re-render on every store change with new objects: the pictures are kept per caller's
+// key (a sketch id with its version), the last few hundred only.
+const cache = new Map<string, StrandPicture[] | null>();
+const CACHE_SIZE = 300;
+
+/** Room round the drawing; with marks, for the labels beside the arrows (lib/slate/picture.ts badgeOffset). */
+const marginFor = (size: number, marks: boolean) => (marks ? Math.max(56, size * 0.12) : size * 0.12);
+
+function picturesOf(d: PictureSource, size: number, margin: number): StrandPicture[] | null {
+  try {
+    const doc = docFromStored({ ...d, strokes: [] }); // lays out a typed code, as the Slate does
+    const points = doc.sketch.components.flatMap((c) => c.points);
+    if (points.length === 0) return null;
+    return strandPictures(doc, analyse(doc.sketch), fitView(points, size, size, margin));
+  } catch {
+    return null; // a code the layout cannot draw
+  }
+}
+
+function cached(key: string, d: PictureSource, size: number, marks: boolean): StrandPicture[] | null {
+  const k = `${key}:${size}:${marks}`;
+  if (!cache.has(k)) {
+    cache.set(k, picturesOf(d, size, marginFor(size, marks)));
+    if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value!);
+  }
+  return cache.get(k)!;
+}
+
+/** An arrowhead at `at` pointing along the unit vector `dir`, from a triangle in its own frame. */
+function arrowHead(at: Point, dir: Point): string {
+  const corners: [number, number][] = [[8, 0], [-4, 6], [-4, -6]];
+  return corners.map(([u, v], i) => `${i ? 'L' : 'M'}${(at.x + dir.x * u - dir.y * v).toFixed(1)} ${(at.y + dir.y * u + dir.x * v).toFixed(1)}`).join(' ') + ' Z';
+}
+
+export function DiagramPicture({ diagram, size, pictureKey, crossings, marks = false, label }: {
+  diagram: PictureSource;
+  size: number;
+  /** Unique for this drawing (e.g. sketch id and version): pictures are computed once per key. */
+  pictureKey: string;
+  crossings: number;
+  marks?: boolean;
+  label: string;
+}) {
+  const pictures = cached(pictureKey, diagram, size, marks);
+  const stroke = Math.max(1.6, size / 45);
+  return (
+    <View style={[styles.box, { width: size, height: size }]} aria-label={label} role="img">
+      {pictures ? (
+        <Svg width={size} height={size}>
+          {pictures.map((p) => (
+            <G key={p.id}>
+              {p.pieces.map((d, i) => (
+                <Path key={i} d={d} stroke={p.colour} strokeWidth={stroke} strokeLinecap="round" strokeLinejoin="round" fill="none" strokeDasharray={p.closed ? undefined : '2 6'} />
+              ))}
+              {marks && p.arrow ? <Path d={arrowHead(p.arrow.at, p.arrow.direction)} fill={p.colour} stroke={slate.surface} strokeWidth={1.2} /> : null}
+              {marks && p.badge && p.number !== null ? (
+                <SvgText x={p.badge.at.x} y={p.badge.at.y + 4} fontSize={12} fontFamily={fonts.mono} fill={p.colour} textAnchor="middle">
+                  {`${p.number}: ${p.badge.text}`}
+                </SvgText>
+              ) : null}
+            </G>
+          ))}
+        </Svg>
+      ) : (
+        <Text style={styles.code}>{crossings} ×</Text>
+      )}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { backgroundColor: slate.surface, borderRadius: radius.md, alignItems: 'center', justifyContent: 'center', overflow: 'hidden' },
+  code: { fontFamily: fonts.mono, fontSize: 13, color: slate.chalkDim },
+});

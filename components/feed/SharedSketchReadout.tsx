@@ -1,0 +1,59 @@
+// A shared sketch's mathematics as its owner saw it on the Slate: the picture (gaps, colours,
+// orientation arrows, each component's number and framing), the crossing and component count,
+// the framed-link data, the Jones polynomial, the PD code and the latest run.
+import { Image, StyleSheet, Text, View } from 'react-native';
+import { useRouter } from 'expo-router';
+import type { GroupSketch } from '@/shared/api/feed';
+import { apiUrl } from '@/lib/api';
+import { Section } from '@/components/ui/Section';
+import { colors, radius, space, type } from '@/constants/theme';
+import { DiagramPicture } from './DiagramPicture';
+import { FramedLink } from './FramedLink';
+import { Jones } from './Jones';
+import { superscripts } from './superscripts';
+
+const pdText = (pd: GroupSketch['diagram']['pd']) => pd.map((x) => `X[${x.join(',')}]`).join(' ');
+
+export function SharedSketchPicture({ s }: { s: GroupSketch }) {
+  const photo = s.photos[0];
+  return (
+    <View style={styles.picture}>
+      {photo ? (
+        <View style={[styles.hero, { aspectRatio: photo.width / photo.height }]}>
+          <Image source={{ uri: apiUrl(photo.url) }} style={StyleSheet.absoluteFill} resizeMode="cover" accessibilityLabel="Board photo" />
+        </View>
+      ) : null}
+      <DiagramPicture diagram={s.diagram} size={photo ? 180 : 300} pictureKey={`${s.id}:${s.version}`} crossings={s.invariants.crossings} marks
+        label={`Picture of ${s.title || 'Untitled sketch'}`} />
+    </View>
+  );
+}
+
+export function SharedSketchReadout({ s }: { s: GroupSketch }) {
+  const router = useRouter();
+  const { crossings, components } = s.invariants;
+  return (
+    <Section title="Readout">
+      <Text style={styles.readout}>
+        {crossings} crossings{components !== null ? ` · ${components} component${components === 1 ? '' : 's'}` : ''}
+      </Text>
+      <FramedLink diagram={s.diagram} />
+      {s.invariants.jones ? <Jones inv={s.invariants} lhs="V(t)" /> : <Text style={styles.muted}>No Jones polynomial: the diagram is too large or not a valid PD code.</Text>}
+      {s.diagram.pd.length ? <Text style={styles.code} selectable>{pdText(s.diagram.pd)}</Text> : null}
+      {s.latestRun ? (
+        <Text role="link" style={styles.run} onPress={() => router.push(`/runs/${s.latestRun!.id}`)}>
+          Latest run: {superscripts(s.latestRun.summary) || s.latestRun.kind} ›
+        </Text>
+      ) : null}
+    </Section>
+  );
+}
+
+const styles = StyleSheet.create({
+  picture: { gap: space.sm, alignItems: 'flex-start' },
+  hero: { width: '100%', maxWidth: 640, borderRadius: radius.lg, overflow: 'hidden', backgroundColor: colors.sunken },
+  readout: { ...type.body, color: colors.ink },
+  code: { ...type.code, color: colors.inkMuted },
+  run: { ...type.label, color: colors.success },
+  muted: { ...type.small, color: colors.inkMuted },
+});
