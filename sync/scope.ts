@@ -21,7 +21,10 @@ export const canSee = (v: Viewer, s: Scope): boolean =>
  */
 export function canWrite(v: Viewer, existing: Scope | null, groupId: string | null | undefined): boolean {
   if (existing && existing.ownerId !== v.userId) return false;
-  if (groupId === undefined || groupId === null) return true;
-  const role = v.groups.get(groupId);
+  // The group it is shared to after the write: the owner must still post there, so someone
+  // removed from the group (or made a viewer) no longer writes into it; taking it out is fine.
+  const group = groupId === undefined ? (existing?.groupId ?? null) : groupId;
+  if (group === null) return true;
+  const role = v.groups.get(group);
   return role !== undefined && role !== 'viewer';
 }

@@ -124,16 +124,16 @@ export async function groupSketch(deps: Deps, caller: User, groupId: string, ske
     forkedFrom: await forkedFrom(deps, caller, s.id),
     sameInvariants: await sameInvariants(deps, groupId, s, key),
     myRole: role,
-    can: { comment: canPost(role), moderate: canModerate(role), uploadPhoto: isOwner || canPost(role), fork: true, unshare: isOwner },
+    can: { comment: canPost(role), moderate: canModerate(role), uploadPhoto: canPost(role), fork: true, unshare: isOwner || canModerate(role) },
   };
 }
 
 /** The server writes sketches the way devices do: one sync mutation through push (S11, S23, S24). */
 const SERVER_DEVICE = 'server-feed';
 
-async function pushOne(deps: Deps, caller: User, m: Omit<Mutation, 'mutationId' | 'deviceId' | 'clock' | 'type'>): Promise<PushResult> {
+async function pushOne(deps: Deps, writer: Pick<User, 'id'>, m: Omit<Mutation, 'mutationId' | 'deviceId' | 'clock' | 'type'>): Promise<PushResult> {
   const mutation: Mutation = { mutationId: randomUUID(), deviceId: SERVER_DEVICE, clock: deps.now().getTime(), type: 'sketch', ...m };
-  const [result] = (await push(deps, caller, { deviceId: SERVER_DEVICE, mutations: [mutation] })).results;
+  const [result] = (await push(deps, writer, { deviceId: SERVER_DEVICE, mutations: [mutation] })).results;
   if (result.status === 'rejected') {
     throw result.reason === 'forbidden' ? forbidden(result.message ?? 'Not allowed') : new AppError('invalid_input', 400, result.message ?? 'Rejected');
   }
@@ -141,13 +141,16 @@ async function pushOne(deps: Deps, caller: User, m: Omit<Mutation, 'mutationId' 
 }
 
 export async function share(deps: Deps, caller: User, sketchId: string, groupId: string | null): Promise<ShareResponse> {
-  const { sketch, isOwner } = await sketchAccess(deps.db, caller.id, sketchId);
-  if (!isOwner) throw forbidden("Only the sketch's owner can share it or stop sharing it");
+  const { sketch, isOwner, role } = await sketchAccess(deps.db, caller.id, sketchId);
+  // Owners and admins of the group take any sketch off its feed (say, a removed member's), as a
+  // write in the owner's name; only the owner shares.
+  const moderates = groupId === null && role !== null && canModerate(role);
+  if (!isOwner && !moderates) throw forbidden("Only the sketch's owner can share it; the owner or an admin of the group can stop sharing it");
   if (groupId) {
     const role = await requireMember(deps.db, groupId, caller.id);
     if (!canPost(role)) throw forbidden('Viewers cannot share sketches to this group');
   }
-  const result = await pushOne(deps, caller, {
+  const result = await pushOne(deps, { id: sketch.ownerId }, {
     recordId: sketchId,
     op: 'update',
     baseVersion: sketch.version,

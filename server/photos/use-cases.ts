@@ -1,5 +1,5 @@
-// Board photos of a sketch. Whoever may see the sketch sees its photos; its owner and the
-// members (not viewers) of the group it is shared to add them; the uploader removes their own,
+// Board photos of a sketch. Whoever may see the sketch sees its photos; the members (not
+// viewers) of the group it is shared to add them, its owner too while it is private; the uploader removes their own,
 // owners and admins of the group remove any. Photos a device attached to the sketch record
 // (server/uploads) use the same pipeline, files and signed URLs, under their hash.
 import { randomUUID } from 'node:crypto';
@@ -45,8 +45,10 @@ export async function list(deps: Deps, caller: User, sketchId: string): Promise<
 }
 
 export async function upload(deps: Deps, caller: User, sketchId: string, file: Buffer): Promise<PhotoDto> {
-  const { isOwner, role } = await sketchAccess(deps.db, caller.id, sketchId);
-  if (!isOwner && !(role && canPost(role))) throw forbidden('Viewers cannot add photos');
+  const { sketch, isOwner, role } = await sketchAccess(deps.db, caller.id, sketchId);
+  // A shared sketch takes photos from those who post in its group, its owner too: an owner
+  // removed from the group (or made a viewer) adds none.
+  if (sketch.groupId ? !(role && canPost(role)) : !isOwner) throw forbidden('Only members of the group the sketch is shared to add photos (not viewers)');
   const img = await processPhoto(file); // before anything is stored
   const row: Photo = { id: randomUUID(), sketchId, uploaderId: caller.id, width: img.width, height: img.height, bytes: img.full.length, createdAt: deps.now() };
   await storePhoto(deps, row.id, img, () => inTransaction(deps.db, (m) => repo.insertPhoto(m, row)));

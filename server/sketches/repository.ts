@@ -15,8 +15,15 @@ export function visibleSketches(db: Db, v: Viewer, opts: { groupId?: string; inc
 
 export const findSketch = (db: Db, id: string) => db.getRepository(Sketch).findOneBy({ id });
 
-/** Whether a sketch the viewer may see lists this attachment hash (S27). */
+/**
+ * Whether a sketch the viewer may see lists this attachment hash and is owned by someone who
+ * uploaded those bytes (S27): listing a hash one only knows shares nothing.
+ */
 export async function seesAttachment(db: Db, v: Viewer, sha256: string): Promise<boolean> {
-  const qb = db.getRepository(Sketch).createQueryBuilder('s').where('s.attachments LIKE :h', { h: `%"${sha256}"%` });
+  const qb = db
+    .getRepository(Sketch)
+    .createQueryBuilder('s')
+    .where('s.attachments LIKE :h', { h: `%"${sha256}"%` })
+    .andWhere('EXISTS (SELECT 1 FROM attachment_uploaders u WHERE u.sha256 = :sha AND u.userId = s.ownerId)', { sha: sha256 });
   return (await whereVisible(qb, 's', v).getCount()) > 0;
 }

@@ -71,7 +71,7 @@ async function applyOne(em: EntityManager, v: Viewer, m: Mutation, head: { seq: 
   return result;
 }
 
-export function push(deps: Deps, user: User, req: PushRequest): Promise<{ results: PushResult[] }> {
+export function push(deps: Deps, user: Pick<User, 'id'>, req: PushRequest): Promise<{ results: PushResult[] }> {
   return inTransaction(deps.db, async (em) => {
     const viewer = await repo.viewerOf(em, user.id);
     const head = { seq: await repo.headSeq(em) };

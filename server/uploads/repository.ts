@@ -18,6 +18,12 @@ export async function markProcessed(db: Db, a: Omit<AttachmentMeta, 'createdAt'>
   await db.getRepository(Attachment).update({ sha256: a.sha256 }, { ...a, data: null });
 }
 
+/** `${sha256} ${userId}` for every upload of these hashes. */
+export async function uploadsOf(db: Db, hashes: string[]): Promise<Set<string>> {
+  const rows = hashes.length ? await db.getRepository(AttachmentUploader).findBy({ sha256: In(hashes) }) : [];
+  return new Set(rows.map((r) => `${r.sha256} ${r.userId}`));
+}
+
 export async function isUploader(db: Db, sha256: string, userId: string): Promise<boolean> {
   return (await db.getRepository(AttachmentUploader).countBy({ sha256, userId })) > 0;
 }

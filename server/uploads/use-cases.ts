@@ -66,12 +66,15 @@ export async function read(deps: Deps, user: User, sha256: string) {
 }
 
 /**
- * The photos each sketch lists in `attachments` that the server holds, in list order, as the
+ * The photos each sketch lists in `attachments` that the server holds and its owner uploaded, in list order, as the
  * feed shows photos: the owner's (only the owner writes a sketch, S23), with signed URLs.
  * Callers have checked that the caller may see these sketches.
  */
 export async function attachmentPhotos(deps: Deps, sketches: Pick<Sketch, 'id' | 'ownerId' | 'attachments'>[]): Promise<Map<string, Photo[]>> {
-  const rows = await repo.attachmentsIn(deps.db, [...new Set(sketches.flatMap((s) => s.attachments))]);
+  const hashes = [...new Set(sketches.flatMap((s) => s.attachments))];
+  const rows = await repo.attachmentsIn(deps.db, hashes);
+  // Only photos the sketch's owner uploaded: a hash listed by someone who never had the bytes shows nothing.
+  const uploaded = await repo.uploadsOf(deps.db, hashes);
   const byHash = new Map<string, repo.AttachmentMeta>();
   for (const r of rows) {
     const a = r.width === null ? await held(deps, r.sha256) : r;
@@ -89,5 +92,5 @@ export async function attachmentPhotos(deps: Deps, sketches: Pick<Sketch, 'id' |
     thumbUrl: signedPhotoUrl(deps.config.jwtSecret, a.sha256, 'thumb', now),
     createdAt: a.createdAt.toISOString(),
   });
-  return new Map(sketches.map((s) => [s.id, s.attachments.flatMap((h) => (byHash.has(h) ? [photoOf(s, byHash.get(h)!)] : []))]));
+  return new Map(sketches.map((s) => [s.id, s.attachments.flatMap((h) => (byHash.has(h) && uploaded.has(`${h} ${s.ownerId}`) ? [photoOf(s, byHash.get(h)!)] : []))]));
 }
