@@ -1,7 +1,8 @@
 // The Readout: the instant invariants of the diagram on the Slate, each marked while it is
 // being recomputed, with what to do when there is nothing to compute yet; the s-invariant
 // (hooks/useSInvariant, in a web worker) with the slice-genus bounds from s and the signature.
-import { StyleSheet, Text, View } from 'react-native';
+import { useState } from 'react';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { Marker } from '@/shared/drawing/crossings';
 import type { ReadoutState } from '@/hooks/useReadout';
 import type { SState } from '@/hooks/useSInvariant';
@@ -10,6 +11,7 @@ import { S_MAX_CROSSINGS } from './local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
 import { HOMFLY_DEVICE_LIMIT, nameTeX } from '@/lib/slate/readout';
 import { TeX } from '@/components/runs/Math';
+import { ConventionsSheet, chiralityNote } from './Conventions';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 
 type Props = {
@@ -40,6 +42,19 @@ function Row({ label, k, state, children }: { label: string; k: ReadoutKey; stat
     <Line label={label} testID={`readout-${k}`} stale={state.stale.has(k)} error={state.errors[k]} has={state.values[k] !== undefined}>
       {children}
     </Line>
+  );
+}
+
+/** "Conventions": the sheet saying which signs and chiralities the values follow. */
+function ConventionsLink() {
+  const [open, setOpen] = useState(false);
+  return (
+    <>
+      <Pressable role="button" accessibilityLabel="Conventions" onPress={() => setOpen(true)} style={styles.conventions}>
+        <Text style={styles.conventionsText}>Conventions ›</Text>
+      </Pressable>
+      <ConventionsSheet visible={open} onClose={() => setOpen(false)} />
+    </>
   );
 }
 
@@ -102,6 +117,7 @@ export function Readout({ state, s, empty, markers, openStrands }: Props) {
     );
   }
   const name = v.name;
+  const chirality = name && v.signature !== undefined ? chiralityNote(name.name, name.mirror, v.signature) : null;
   return (
     <View style={styles.box} testID="readout">
       <Text style={styles.kicker}>Readout</Text>
@@ -123,6 +139,8 @@ export function Readout({ state, s, empty, markers, openStrands }: Props) {
             <Text style={styles.nameText}>{v.components === 1 ? 'Not among the knots up to 8 crossings' : 'A link: no name guess'}</Text>
           ) : null}
         </View>
+        {chirality ? <Text style={styles.nameText} testID="readout-chirality">{chirality}</Text> : null}
+        <ConventionsLink />
       </View>
 
       <Row label="Jones polynomial" k="jones" state={state}>
@@ -175,6 +193,8 @@ const styles = StyleSheet.create({
   sub: { ...type.small, color: colors.inkMuted },
   nameRow: { flexDirection: 'row', alignItems: 'baseline', gap: space.sm, marginTop: space.xs },
   nameText: { ...type.small, color: colors.inkMuted, marginTop: space.xs },
+  conventions: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start' },
+  conventionsText: { ...type.label, color: colors.accent },
   row: { gap: 2 },
   labelCol: { flexDirection: 'row', alignItems: 'baseline', justifyContent: 'space-between' },
   label: { ...type.label, color: colors.inkMuted },

@@ -1,0 +1,39 @@
+// The Readout says which chirality the name table means and opens the conventions sheet: the
+// closure of the braid word 1 1 1 is the positive trefoil (docs/conventions.md, Braid word),
+// which our table calls 3_1, with signature -2 (docs/conventions.md, Signature).
+import type { Browser, Page } from 'playwright-core';
+import { PHONE, call, launch, person, shoot, signIn } from './helpers';
+
+const who = person('Clara Conventions', 'clara.conv', 'signs and mirrors 7');
+let browser: Browser;
+let page: Page;
+
+beforeAll(async () => {
+  await call('POST', '/api/auth/register', null, { email: who.email, password: who.password, displayName: who.name });
+  browser = await launch();
+  const context = await browser.newContext({ viewport: PHONE });
+  context.setDefaultTimeout(20_000);
+  page = await context.newPage();
+  await signIn(page, who);
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+test('the name line tells the chirality of 3_1 and the Readout opens the conventions', async () => {
+  await page.getByRole('button', { name: 'New sketch' }).first().click();
+  await page.getByRole('button', { name: 'Paste a code' }).click();
+  await page.getByRole('radio', { name: 'Braid word' }).click();
+  await page.getByRole('textbox', { name: 'Braid word' }).fill('1 1 1');
+  await page.getByRole('button', { name: 'Draw it' }).click();
+  await page.getByText(/invariants match 3_1/).waitFor();
+  await page.getByTestId('readout-chirality').getByText("Our table's 3_1 is the positive (right-handed) trefoil, with signature −2. Positive knots have negative signature here.").waitFor();
+  await page.getByTestId('readout-chirality').scrollIntoViewIfNeeded();
+  await shoot(page, 'conventions-00-readout-name');
+  await page.getByRole('button', { name: 'Conventions' }).click();
+  const sheet = page.getByRole('dialog', { name: 'Conventions' });
+  await sheet.getByText(/Positive knots have negative signature: the positive trefoil has signature −2/).waitFor();
+  await sheet.getByText(/3_1 is the positive trefoil/).waitFor();
+  await shoot(page, 'conventions-01-sheet');
+});
