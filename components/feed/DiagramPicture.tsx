@@ -1,8 +1,9 @@
 // A sketch's picture as the Slate draws it (lib/slate/picture.ts): each strand in its chalk
 // colour, cut where it passes under, so a linked and an unlinked pair of circles look
 // different. With `marks` (a sketch's own page) each component also shows its orientation
-// arrow and a label "number: framing" ("bb" for the blackboard framing). A code with no
-// picture shows the crossing count instead.
+// arrow and a label "number: framing" ("bb" for the blackboard framing). Until a code has a
+// picture, or when it has none, the box shows the crossing count.
+import { useEffect, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import Svg, { G, Path, Text as SvgText } from 'react-native-svg';
 import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
@@ -33,13 +34,46 @@ function picturesOf(d: PictureSource, size: number, margin: number): StrandPictu
   }
 }
 
-function cached(key: string, d: PictureSource, size: number, marks: boolean): StrandPicture[] | null {
+/**
+ * A code without a drawing is laid out (shared/layout), 0.1 to 0.6 s each here: one at a time,
+ * each in its own task after the list has rendered, so a feed of typed codes stays responsive.
+ * Past this many crossings the box keeps the crossing count.
+ */
+const LAYOUT_LIMIT = 40;
+const layouts: (() => void)[] = [];
+let layingOut = false;
+function nextLayout() {
+  const task = layouts.shift();
+  layingOut = task !== undefined;
+  if (task) setTimeout(() => (task(), nextLayout()), 0);
+}
+
+function compute(k: string, d: PictureSource, size: number, marks: boolean) {
+  cache.set(k, picturesOf(d, size, marginFor(size, marks)));
+  if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value!);
+}
+
+/** The pictures for this key: at once from a drawing, later (undefined until then) from a code. */
+function usePictures(key: string, d: PictureSource, size: number, marks: boolean): StrandPicture[] | null | undefined {
   const k = `${key}:${size}:${marks}`;
-  if (!cache.has(k)) {
-    cache.set(k, picturesOf(d, size, marginFor(size, marks)));
-    if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value!);
-  }
-  return cache.get(k)!;
+  const needsLayout = d.geometry == null && d.pd.length > 0;
+  if (!cache.has(k) && needsLayout && d.pd.length > LAYOUT_LIMIT) cache.set(k, null);
+  if (!cache.has(k) && !needsLayout) compute(k, d, size, marks);
+  const [, laidOut] = useState(0);
+  const ready = cache.has(k);
+  useEffect(() => {
+    if (ready) return;
+    let live = true;
+    layouts.push(() => {
+      if (!cache.has(k)) compute(k, d, size, marks);
+      if (live) laidOut((n) => n + 1);
+    });
+    if (!layingOut) nextLayout();
+    return () => {
+      live = false;
+    };
+  }, [k, ready, d, size, marks]);
+  return cache.get(k);
 }
 
 /** An arrowhead at `at` pointing along the unit vector `dir`, from a triangle in its own frame. */
@@ -57,7 +91,7 @@ export function DiagramPicture({ diagram, size, pictureKey, crossings, marks = f
   marks?: boolean;
   label: string;
 }) {
-  const pictures = cached(pictureKey, diagram, size, marks);
+  const pictures = usePictures(pictureKey, diagram, size, marks);
   const stroke = Math.max(1.6, size / 45);
   return (
     <View style={[styles.box, { width: size, height: size }]} aria-label={label} role="img">

@@ -23,7 +23,7 @@ export function SharedSketchPicture({ s }: { s: GroupSketch }) {
           <Image source={{ uri: apiUrl(photo.url) }} style={StyleSheet.absoluteFill} resizeMode="cover" accessibilityLabel="Board photo" />
         </View>
       ) : null}
-      <DiagramPicture diagram={s.diagram} size={photo ? 180 : 300} pictureKey={`${s.id}:${s.version}`} crossings={s.invariants.crossings} marks
+      <DiagramPicture diagram={s.diagram} size={photo ? 220 : 300} pictureKey={`${s.id}:${s.version}`} crossings={s.invariants.crossings} marks
         label={`Picture of ${s.title || 'Untitled sketch'}`} />
     </View>
   );
