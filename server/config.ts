@@ -4,6 +4,7 @@
 import { isIP } from 'node:net';
 import { z } from 'zod';
 import type { SmtpTarget } from './mail/mailer';
+import { defaultMailPacing, type MailPacing } from './notifications/pacer';
 import type { PhotoStorage } from './photos/store';
 import { defaultRunLimits, type RunLimits } from './runs/limits';
 
@@ -31,6 +32,10 @@ export interface Config {
   runs: RunLimits;
   /** Where board photos are kept: a local folder, or an S3-compatible bucket. */
   photos: PhotoStorage;
+  /** Comments one person may post per window (then 429). */
+  commentRateLimit: { windowMs: number; limit: number };
+  /** How notification e-mail to one person is paced into digests (notifications/pacer.ts). */
+  mailPacing: MailPacing;
 }
 
 export function defaultConfig(overrides: Partial<Config> = {}): Config {
@@ -48,6 +53,8 @@ export function defaultConfig(overrides: Partial<Config> = {}): Config {
     mailFrom: 'Overstrand <no-reply@overstrand.invalid>',
     runs: defaultRunLimits(),
     photos: { kind: 'disk', dir: 'data/photos' },
+    commentRateLimit: { windowMs: 60_000, limit: 20 },
+    mailPacing: defaultMailPacing(),
     ...overrides,
   };
 }
@@ -91,6 +98,7 @@ export const EnvSchema = z
     SMTP_PASSWORD: optional(z.string()),
     MAIL_FROM: optional(z.string()),
     AUTH_RATE_LIMIT: whole(1),
+    COMMENT_RATE_LIMIT: whole(1),
     TRUST_PROXY: trustProxy,
     WEB_DIR: optional(z.string()),
     DEMO: flag,
@@ -157,6 +165,7 @@ export function settingsFromEnv(raw: NodeJS.ProcessEnv): Settings {
       ...(env.JWT_SECRET && { jwtSecret: env.JWT_SECRET }),
       ...(env.MAIL_FROM && { mailFrom: env.MAIL_FROM }),
       ...(env.AUTH_RATE_LIMIT && { authRateLimit: { windowMs: 15 * 60 * 1000, limit: env.AUTH_RATE_LIMIT } }),
+      ...(env.COMMENT_RATE_LIMIT && { commentRateLimit: { windowMs: 60_000, limit: env.COMMENT_RATE_LIMIT } }),
       runs: {
         ...runs,
         threads: env.RUN_THREADS ?? runs.threads,

@@ -1,8 +1,7 @@
 import { Router, type Request } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import { ChangePasswordRequest, LoginRequest, RegisterRequest, authPaths } from '@/shared/api/auth';
 import type { Deps } from '../deps';
-import { AppError } from '../http/errors';
+import { limiter } from '../http/rate-limit';
 import { parse } from '../http/validate';
 import { currentUser, requireAuth } from './middleware';
 import { changePassword, login, register, signOutEverywhere } from './use-cases';
@@ -13,14 +12,7 @@ export function routes(deps: Deps): Router {
   // client address for sign-in and sign-up together, and per account for sign-in, so guessing
   // one person's password from many addresses stops too.
   const limit = (message: string, keyGenerator?: (req: Request) => string) =>
-    rateLimit({
-      ...deps.config.authRateLimit,
-      ...(keyGenerator && { keyGenerator }),
-      skipSuccessfulRequests: true,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: (_req, _res, next) => next(new AppError('rate_limited', 429, message)),
-    });
+    limiter(deps.config.authRateLimit, message, { skipSuccessfulRequests: true, ...(keyGenerator && { keyGenerator }) });
   const perAddress = limit('Too many failed sign-in attempts from your network; wait a few minutes and try again');
   const perAccount = limit('Too many failed sign-ins to this account; wait a few minutes and try again', (req) =>
     `account:${String(req.body?.email ?? '').trim().toLowerCase()}`,

@@ -4,6 +4,7 @@ import { CommentRequest, NewCommentRequest, commentPaths } from '@/shared/api/co
 import { RecordId } from '@/shared/api/sketches';
 import { currentUser, requireAuth } from '../auth/middleware';
 import type { Deps } from '../deps';
+import { limiter } from '../http/rate-limit';
 import { parse } from '../http/validate';
 import * as comments from './use-cases';
 
@@ -17,7 +18,14 @@ export function routes(deps: Deps): Router {
     const { id } = parse(SketchParams, req.params, 'path');
     res.json(await comments.list(deps, currentUser(req), id));
   });
-  router.post(commentPaths.comments(':id'), auth, async (req, res) => {
+  // Per author; only comments actually made count (a device resending a comment's id does not).
+  const { limit, windowMs } = deps.config.commentRateLimit;
+  const perAuthor = limiter(deps.config.commentRateLimit, `You are commenting very fast: at most ${limit} comments in ${windowMs / 1000} seconds; wait a moment and post again`, {
+    keyGenerator: (req) => currentUser(req).id,
+    skipSuccessfulRequests: true,
+    requestWasSuccessful: (_req, res) => res.statusCode !== 201,
+  });
+  router.post(commentPaths.comments(':id'), auth, perAuthor, async (req, res) => {
     const { id } = parse(SketchParams, req.params, 'path');
     const { body, id: commentId } = parse(NewCommentRequest, req.body);
     const { comment, created } = await comments.add(deps, currentUser(req), id, body, commentId);

@@ -29,9 +29,21 @@ const texts: Texts = {
   }),
 };
 
+/** Several notifications in one e-mail: each one's subject and link, newest last. */
+const FOOTER = 'You get these e-mails because of your Overstrand notification settings (Account > Notifications).';
+
+export function digestMail(to: string, items: { kind: NotificationKind; payload: NotificationPayload<NotificationKind> }[], base: string): OutgoingMail {
+  const entries = items.map(({ kind, payload }) => {
+    const { subject, lines } = (texts[kind] as (p: unknown, b: string) => Text)(payload, base);
+    return `- ${subject}\n  ${lines[lines.length - 1]}`;
+  });
+  const text = [`${items.length} notifications in the last few minutes:`, '', ...entries, '', `All of them: ${base}/account/notifications`, '', FOOTER].join('\n');
+  return { to, subject: `${items.length} new notifications on Overstrand`, text };
+}
+
 export function notificationMail<K extends NotificationKind>(to: string, kind: K, payload: NotificationPayload<K>, base: string): OutgoingMail {
   const { subject, lines } = (texts[kind] as (p: NotificationPayload<K>, b: string) => Text)(payload, base);
-  const all = [...lines, '', 'You get these e-mails because of your Overstrand notification settings (Account > Notifications).'];
+  const all = [...lines, '', FOOTER];
   const text = all.map((l) => (typeof l === 'string' ? l : commentPlainText(l.markdown))).join('\n');
   if (all.every((l) => typeof l === 'string')) return { to, subject, text };
   return { to, subject, text, html: all.map((l) => (typeof l !== 'string' ? md.render(l.markdown) : l ? `<p>${escape(l)}</p>` : '')).join('\n') };

@@ -31,3 +31,8 @@ export function routes(deps: Deps): Router {
   });
   return router;
 }
+
+/** On stop, the digests still waiting are sent rather than lost. */
+export async function start(deps: Deps): Promise<{ stop(): Promise<void> }> {
+  return { stop: () => notifications.pacerOf(deps).flush() };
+}

@@ -15,7 +15,7 @@ import type { Notification } from '../db/entities';
 import { inTransaction } from '../db/transaction';
 import type { Deps } from '../deps';
 import { notFound } from '../http/errors';
-import { notificationMail } from './mail';
+import { createPacer, type Pacer } from './pacer';
 import * as repo from './repository';
 
 const toDto = (n: Notification): NotificationDto =>
@@ -23,8 +23,9 @@ const toDto = (n: Notification): NotificationDto =>
 
 /**
  * Tells `userId` that something happened: stores an in-app notification and, if their setting
- * for `kind` is on, e-mails them. Call it after your own transaction has committed. A failed
- * e-mail is logged and does not fail the caller; the in-app notification is kept either way.
+ * for `kind` is on, e-mails them, paced (pacer.ts: bursts become one digest). Call it after your
+ * own transaction has committed. A failed e-mail is logged and does not fail the caller; the
+ * in-app notification is kept either way.
  * The payload is checked against shared/api/notifications.ts (a wrong one throws: a bug).
  */
 export async function notify<K extends NotificationKind>(deps: Deps, userId: string, kind: K, payload: NotificationPayload<K>): Promise<void> {
@@ -33,11 +34,15 @@ export async function notify<K extends NotificationKind>(deps: Deps, userId: str
   await inTransaction(deps.db, (m) => repo.insertNotification(m, row));
   const [user, settings] = [await findUserById(deps.db, userId), await repo.settingsOf(deps.db, userId)];
   if (!user || !settings.email[kind]) return;
-  try {
-    await deps.mailer.send(notificationMail(user.email, kind, checked, deps.config.publicUrl));
-  } catch (err) {
-    deps.log.error({ err, kind }, 'notification mail failed');
-  }
+  await pacerOf(deps).mail(user.email, { kind, payload: checked });
+}
+
+const pacers = new WeakMap<Deps, Pacer>();
+/** One pacer per running server (its mail waits in memory). */
+export function pacerOf(deps: Deps): Pacer {
+  let p = pacers.get(deps);
+  if (!p) pacers.set(deps, (p = createPacer(deps)));
+  return p;
 }
 
 export async function list(deps: Deps, caller: User, unreadOnly: boolean): Promise<NotificationList> {

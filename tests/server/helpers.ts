@@ -1,5 +1,5 @@
 // Shared set-up for the API tests: a server on port 0 with an in-memory database, fast
-// password hashing, a rate limit tests never reach, and the built-in SMTP fake.
+// password hashing, rate limits tests never reach, unpaced mail, and the built-in SMTP fake.
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import type { AuthResponse } from '@/shared/api/auth';
@@ -10,7 +10,13 @@ import { startServer, type RunningServer, type StartOptions } from '@/server/ser
 export function testServer(options: StartOptions = {}): Promise<RunningServer> {
   return startServer({
     ...options,
-    config: { bcryptRounds: 4, authRateLimit: { windowMs: 60_000, limit: 1_000_000 }, ...options.config },
+    config: {
+      bcryptRounds: 4,
+      authRateLimit: { windowMs: 60_000, limit: 1_000_000 },
+      commentRateLimit: { windowMs: 60_000, limit: 1_000_000 },
+      mailPacing: { quietMs: 0, maxWaitMs: 0, cap: 1 }, // every notification mailed at once
+      ...options.config,
+    },
   });
 }
 
