@@ -1,5 +1,5 @@
-// One shared sketch in the feed: picture, title, who and when, Readout summary, latest run,
-// number of comments. The whole card opens the sketch page.
+// One shared sketch in the feed: picture, title, who and when, Readout summary, latest run, s
+// when a run computed it, number of comments. The whole card opens the sketch page.
 import { Image, Pressable, StyleSheet, Text, View } from 'react-native';
 import type { FeedItem } from '@/shared/api/feed';
 import { apiUrl } from '@/lib/api';
@@ -29,6 +29,7 @@ export function FeedCard({ item, onOpen, active }: { item: FeedItem; onOpen: () 
         <View style={styles.jones}><Jones inv={inv} /></View>
         <View style={styles.foot}>
           {item.latestRun ? <Text style={styles.run} numberOfLines={1}>{superscripts(item.latestRun.summary) || item.latestRun.kind}</Text> : null}
+          {item.latestRun?.s !== undefined ? <Text style={styles.run}>{`s = ${item.latestRun.s}`}</Text> : null}
           <Text style={styles.count}>{item.commentCount} comment{item.commentCount === 1 ? '' : 's'}</Text>
           {item.tags.slice(0, 3).map((t) => <Text key={t} style={styles.tag}>#{t}</Text>)}
         </View>

@@ -6,7 +6,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { Marker } from '@/shared/drawing/crossings';
 import type { ReadoutState } from '@/hooks/useReadout';
 import type { SState } from '@/hooks/useSInvariant';
-import { sliceGenusBounds } from '@/shared/rasmussen';
+import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
 import { S_MAX_CROSSINGS } from './local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
 import { HOMFLY_DEVICE_LIMIT, nameTeX } from '@/lib/slate/readout';
@@ -83,8 +83,7 @@ function SRow({ s, signature }: { s: SState; signature?: number }) {
         <Text style={styles.num}>s = {minus(s.s ?? 0)}</Text>
         {b ? (
           <Text style={styles.note} testID="readout-slice-bounds">
-            Slice genus ≥ {Math.max(b.fromS, b.fromSignature)}: |s|/2 = {b.fromS}, |σ|/2 = {b.fromSignature}
-            {b.stronger === 'equal' ? ', the same bound' : b.stronger === 's' ? ', the bound from s is stronger' : ', the bound from σ is stronger'}
+            {sliceBoundsText(b)}
           </Text>
         ) : null}
       </View>

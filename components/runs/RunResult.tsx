@@ -1,12 +1,15 @@
 // A run's page: where it stands (status, progress, cancel), then its result: the bigraded
 // table, the Poincare polynomial, the Euler characteristic checked against the Jones
-// polynomial, thin or thick, and exports. A cable sweep shows a grid of small tables instead.
-import { useState } from 'react';
+// polynomial, thin or thick, the s-invariant with its slice-genus bounds when asked, and exports. A cable sweep shows a grid of small tables instead.
+import { useMemo, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { isFinished, type KhResultJson, type RunDetail } from '@/shared/api/runs';
+import { isFinished, type KhResultJson, type RunDetail, type SValues } from '@/shared/api/runs';
 import { toCsv, toJson, toLatexTable, type ExportRecord } from '@/shared/khovanov/export';
 import { poincareFormat } from '@/shared/khovanov/format';
+import { diagram as toDiagram } from '@/shared/knot/diagram';
+import { linkSignature } from '@/shared/knot/goeritz';
 import { Laurent } from '@/shared/poly/laurent';
+import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
 import { useCancelRun } from '@/hooks/queries/useRuns';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
@@ -81,6 +84,19 @@ export function KhSummary({ result }: { result: KhResultJson }) {
   );
 }
 
+/** s over Q and F2, and the slice-genus bounds from s (over Q) and the diagram's signature. */
+function SFact({ s, diagram }: { s: SValues; diagram: RunDetail['diagram'] }) {
+  const signature = useMemo(() => linkSignature(toDiagram(diagram.pd, { unknots: diagram.unknots })), [diagram]);
+  return (
+    <Fact name="Rasmussen s">
+      <View style={styles.euler}>
+        <Text style={styles.value} testID="run-s">{`s = ${s.Q} over Q, ${s.F2} over F2`}</Text>
+        <Text style={styles.muted}>{sliceBoundsText(sliceGenusBounds(s.Q, signature))}</Text>
+      </View>
+    </Fact>
+  );
+}
+
 export function RunResult({ run }: { run: RunDetail }) {
   const cancel = useCancelRun(run.id);
   const live = !isFinished(run.status);
@@ -94,6 +110,7 @@ export function RunResult({ run }: { run: RunDetail }) {
         <ProgressBar fraction={run.progress.fraction} status={run.status} label="Run progress" />
         <Text style={styles.muted}>
           {`${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${ringLabel(run)} · ${run.crossings} crossings · started by ${run.startedBy.displayName}`}
+          {run.computeS ? ' · with the s-invariant' : ''}
           {run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}
         </Text>
         {run.error ? <Banner tone={run.status === 'cancelled' ? 'info' : 'error'}>{run.error}</Banner> : null}
@@ -106,6 +123,7 @@ export function RunResult({ run }: { run: RunDetail }) {
             <KhTable groups={run.result.groups} ring={run.result.ring} label="Khovanov homology" />
           </Section>
           <KhSummary result={run.result} />
+          {run.result.s ? <SFact s={run.result.s} diagram={run.diagram} /> : null}
           <Section title="Export">
             <Exports record={exportRecord(run, run.diagram, run.result)} base={exportName(run)} />
           </Section>

@@ -59,6 +59,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   const [ring, setRing] = useState<(typeof rings)[number]>('Z');
   const [reduced, setReduced] = useState<'unreduced' | 'reduced'>('unreduced');
   const [kind, setKind] = useState<'kh' | 'sweep'>('kh');
+  const [alsoS, setAlsoS] = useState(false);
   const [invalid, setInvalid] = useState<string | null>(null);
   const [local, setLocal] = useState<{ fraction: number; result?: KhResultJson; error?: string } | null>(null);
   const start = useStartRun();
@@ -79,6 +80,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   const submit = () => {
     const body = request(input, code, ring, reduced === 'reduced', kind === 'sweep' ? 2 : 0);
     if (typeof body === 'string') return setInvalid(body);
+    body.computeS = alsoS && kind === 'kh';
     setInvalid(null);
     const open = { onSuccess: (run: { id: string }) => router.push(runPagePath(run.id)) };
     if (!onSketch || !sketchId) return start.mutate(body, open);
@@ -109,6 +111,12 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
       <Choice label="Ring" options={rings} value={ring} onChange={setRing} />
       <Choice label="Homology" options={['unreduced', 'reduced'] as const} value={reduced} onChange={setReduced} names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} />
       <Choice label="Computation" options={['kh', 'sweep'] as const} value={kind} onChange={setKind} names={{ kh: 'Khovanov homology', sweep: 'Cable sweep, r+ + r- ≤ 2' }} />
+      {kind === 'kh' ? (
+        // The server refuses it for a link, saying s is defined for knots here.
+        <Pressable role="checkbox" aria-checked={alsoS} aria-label="Also compute s" onPress={() => setAlsoS(!alsoS)} style={[styles.choice, styles.check, alsoS && styles.chosen]}>
+          <Text style={[styles.choiceText, alsoS && styles.chosenText]}>{`${alsoS ? '☑' : '☐'} Also compute s (Rasmussen invariant, knots only)`}</Text>
+        </Pressable>
+      ) : null}
       {start.error && !(onSketch && isApiError(start.error, 'not_found')) ? <Banner tone="error">{start.error.message}</Banner> : null}
       <Button label="Start run" busy={start.isPending} busyLabel="Starting…" onPress={submit} />
       {kind === 'kh' ? (
@@ -131,6 +139,7 @@ const styles = StyleSheet.create({
   label: { ...type.label, color: colors.inkMuted },
   choices: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   choice: { paddingHorizontal: space.md, paddingVertical: space.sm, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  check: { alignSelf: 'flex-start' },
   chosen: { backgroundColor: colors.accent, borderColor: colors.accent },
   choiceText: { ...type.small, color: colors.ink },
   chosenText: { color: colors.onAccent, fontFamily: fonts.medium },

@@ -1,7 +1,7 @@
 // Run results for the feed, read from the Runs area's table (server/runs) by plain SQL, so the
 // feed works before that table exists (no results) and without importing that area. Columns
 // used: runs.id, sketchId, status ('done' = a result), finishedAt, kind, parentRunId (a
-// sweep's cells are skipped), ring, reduced, result (JSON with poincareText).
+// sweep's cells are skipped), ring, reduced, result (JSON with poincareText, and s when computed).
 import type { DataSource, EntityManager } from 'typeorm';
 import type { RunSummary } from '@/shared/api/feed';
 
@@ -27,9 +27,9 @@ const marks = (n: number) => Array.from({ length: n }, () => '?').join(',');
 export async function latestRuns(db: Db, sketchIds: string[]): Promise<Map<string, RunSummary>> {
   const out = new Map<string, RunSummary>();
   if (sketchIds.length === 0 || !(await runsTable(db))) return out;
-  const rows: { id: string; sketchId: string; kind: string; ring: string; reduced: number; finishedAt: string; poincare: string | null }[] = await db.query(
+  const rows: { id: string; sketchId: string; kind: string; ring: string; reduced: number; finishedAt: string; poincare: string | null; s: number | null }[] = await db.query(
     `SELECT r."id" AS id, r."sketchId" AS sketchId, r."kind" AS kind, r."ring" AS ring, r."reduced" AS reduced, r."finishedAt" AS finishedAt,
-            json_extract(r."result", '$.poincareText') AS poincare
+            json_extract(r."result", '$.poincareText') AS poincare, json_extract(r."result", '$.s.Q') AS s
        FROM "runs" r WHERE ${DONE} AND r."sketchId" IN (${marks(sketchIds.length)}) ORDER BY r."finishedAt" DESC`,
     sketchIds,
   );
@@ -38,6 +38,9 @@ export async function latestRuns(db: Db, sketchIds: string[]): Promise<Map<strin
     const what = `${r.kind === 'cable-sweep' ? 'Cable sweep' : 'Kh'} over ${r.ring}${r.reduced ? ', reduced' : ''}`;
     const summary = r.poincare ? `${what}: ${r.poincare}` : what;
     if (!out.has(r.sketchId)) out.set(r.sketchId, { id: r.id, kind: r.kind, finishedAt: r.finishedAt, summary });
+    // Newest first: the first run that computed s gives it.
+    const latest = out.get(r.sketchId)!;
+    if (latest.s === undefined && r.s !== null) latest.s = r.s;
   }
   return out;
 }

@@ -12,6 +12,7 @@ export interface KhJob {
   diagram: RunDiagram;
   ring: string;
   reduced: boolean;
+  computeS: boolean;
   onProgress(p: Progress): void;
   signal: AbortSignal;
 }
@@ -37,10 +38,10 @@ export function createRunPool(limits: RunLimits): RunPool {
     resourceLimits: { maxOldGenerationSizeMb: limits.maxMemoryMb },
   });
   return {
-    async run({ diagram, ring, reduced, onProgress, signal }) {
+    async run({ diagram, ring, reduced, computeS, onProgress, signal }) {
       const { port1, port2 } = new MessageChannel();
       port1.on('message', onProgress);
-      const task: KhTask = { diagram, ring, reduced, progress: port2 };
+      const task: KhTask = { diagram, ring, reduced, computeS, progress: port2 };
       try {
         return (await pool.run(task, { transferList: [port2], signal })) as KhTaskResult;
       } finally {

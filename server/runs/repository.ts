@@ -38,8 +38,9 @@ export async function requeueInterrupted(db: Db, taken: readonly string[]): Prom
 }
 
 /** A finished computation of the same diagram (up to relabelling), ring and reduced flag. */
-export const findReusable = (db: Db, diagramKey: string, ring: string, reduced: boolean) =>
-  repo(db).findOne({ where: { diagramKey, ring, reduced, kind: 'khovanov', status: 'done' }, order: { createdAt: 'ASC' } });
+/** A done run of the same diagram, ring and reduced; when s is wanted, one that computed it. */
+export const findReusable = (db: Db, diagramKey: string, ring: string, reduced: boolean, computeS: boolean) =>
+  repo(db).findOne({ where: { diagramKey, ring, reduced, kind: 'khovanov', status: 'done', ...(computeS && { computeS }) }, order: { createdAt: 'ASC' } });
 
 /** Top-level runs (sweep cells are read through their sweep), newest first. */
 export function listTopLevel(db: Db, where: { startedBy?: string; sketchId?: string; groupId?: string }, take = 200) {

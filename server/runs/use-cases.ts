@@ -70,6 +70,7 @@ interface NewRun {
   groupId: string | null;
   ring: string;
   reduced: boolean;
+  computeS: boolean;
   parentRunId?: string;
   cable?: CableCell;
   sweep?: Run['sweep'];
@@ -91,6 +92,7 @@ function row(deps: Deps, user: User, n: NewRun, key: string): Run {
     crossings: n.diagram.pd.length,
     ring: n.ring,
     reduced: n.reduced,
+    computeS: n.computeS,
     sweep: n.sweep ?? null,
     cable: n.cable ?? null,
     progress: 0,
@@ -117,7 +119,7 @@ async function planComputation(deps: Deps, user: User, n: NewRun): Promise<{ run
     run.status = 'running';
     return { run, settle: () => finishRun(deps, run.id, { status: 'failed', error: `The diagram has ${run.crossings} crossings; this server computes at most ${max} per run.` }) };
   }
-  const stored = await findReusable(deps.db, key, n.ring, n.reduced);
+  const stored = await findReusable(deps.db, key, n.ring, n.reduced, n.computeS);
   if (!stored) return { run, settle: async () => undefined };
   Object.assign(run, { status: 'running', startedAt: run.createdAt, reusedFrom: stored.reusedFrom ?? stored.id });
   return { run, settle: () => finishRun(deps, run.id, { status: 'done', result: stored.result! }) };
@@ -127,7 +129,11 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   const t = await target(deps, user, req);
   const d = checked(t.diagram);
   const max = deps.config.runs.maxCrossings;
-  const base = { ...t, ring: req.ring, reduced: req.reduced };
+  // A cheap fact, checked before any work.
+  if (req.computeS && componentCount(d) !== 1) {
+    throw new AppError('invalid_input', 400, `s is defined for knots here; this link has ${componentCount(d)} components`, { computeS: 's is defined for knots here' });
+  }
+  const base = { ...t, ring: req.ring, reduced: req.reduced, computeS: req.computeS };
   let id: string;
   let queued: Run[];
   if (req.kind === 'khovanov') {
@@ -188,6 +194,7 @@ function summary(r: Run, names: Map<string, string>): RunSummary {
     crossings: r.crossings,
     ring: r.ring,
     reduced: r.reduced,
+    computeS: r.computeS,
     progress: { fraction: r.progress, objects: r.complexSize },
     error: r.error,
     createdAt: r.createdAt,

@@ -39,7 +39,14 @@ export const InvariantSummary = z.object({
 export type InvariantSummary = z.infer<typeof InvariantSummary>;
 
 /** The latest finished run of a sketch, when the server has runs. */
-export const RunSummary = z.object({ id: z.string(), kind: z.string(), finishedAt: z.string(), summary: z.string() });
+export const RunSummary = z.object({
+  id: z.string(),
+  kind: z.string(),
+  finishedAt: z.string(),
+  summary: z.string(),
+  /** The s-invariant over Q, when a finished run of the sketch computed it (this one or an earlier one). */
+  s: z.int().optional(),
+});
 export type RunSummary = z.infer<typeof RunSummary>;
 
 export const Person = z.object({ id: z.string(), displayName: z.string() });

@@ -60,6 +60,8 @@ export const StartRunRequest = z
     label: z.string().trim().max(120).optional(),
     /** The text the diagram came from, in full (e.g. "braid 1 1 -2 ..."): shown with the result and in its exports. */
     source: RunSource.optional(),
+    /** Also compute the Rasmussen s-invariant over Q and F2 (a Khovanov run of a knot only). */
+    computeS: z.boolean().default(false),
   })
   // Both: a run on the sketch that computes the diagram as the device shows it (the server's
   // copy may be older than the latest edit).
@@ -74,6 +76,10 @@ export const StartRunRequest = z
   .refine((r) => r.sketchId === undefined || r.groupId === undefined, {
     message: "A run on a sketch belongs to the sketch's group; do not give groupId",
     path: ['groupId'],
+  })
+  .refine((r) => !r.computeS || r.kind === 'khovanov', {
+    message: 's is computed on Khovanov runs of knots, not on a cable sweep',
+    path: ['computeS'],
   });
 /** What the app sends (defaults may be left out). */
 export type StartRunRequest = z.input<typeof StartRunRequest>;
@@ -92,6 +98,10 @@ export const RunListQuery = z
 
 export const KhGroupJson = z.object({ i: z.int(), j: z.int(), free: z.int().min(0), torsion: z.array(z.int()) });
 export type KhGroupJson = z.infer<typeof KhGroupJson>;
+
+/** The Rasmussen s-invariant over Q and over F2 (signs of docs/conventions.md: the positive trefoil has s = 2). */
+export const SValues = z.object({ Q: z.int(), F2: z.int() });
+export type SValues = z.infer<typeof SValues>;
 
 /** What a finished Khovanov run stores: the engine's result as JSON. */
 export const KhResultJson = z.object({
@@ -113,6 +123,8 @@ export const KhResultJson = z.object({
   thin: z.boolean(),
   /** The program version that computed it (results stored before it was recorded have none). */
   version: z.string().optional(),
+  /** When the run was asked to compute s (a knot). */
+  s: SValues.optional(),
 });
 export type KhResultJson = z.infer<typeof KhResultJson>;
 
@@ -153,6 +165,8 @@ export const RunSummary = z.object({
   sweep: CableSweep.nullable(),
   /** The text the diagram came from (a sweep cell: its sweep's), or null (a sketch's diagram). */
   source: RunSource.nullable(),
+  /** Asked to compute s as well (the result then carries it). */
+  computeS: z.boolean(),
 });
 export type RunSummary = z.infer<typeof RunSummary>;
 

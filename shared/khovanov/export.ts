@@ -1,7 +1,8 @@
 // Exports of a Khovanov result for papers and scripts: a LaTeX tabular (i across, j down), CSV
 // (one row per nonzero group) and JSON. Each carries what a reader needs to cite it: the full
 // input (PD code and the text it came from), the label, the ring, reduced or not (and at which
-// component), the grading convention, the date, the program version and the run id. The JSON
+// component), the grading convention, the date, the program version and the run id, and s when
+// the run computed it (in the header lines; the JSON's result holds it too). The JSON
 // reads back (readJsonExport), so a result can be started again from its export.
 
 import { z } from 'zod';
@@ -41,6 +42,8 @@ function header(e: ExportRecord): string[] {
     ...(e.source ? [`Given as: ${oneLine(e.source)}`] : []),
     `Grading: ${gradingConvention}`,
     `Poincare polynomial: ${poincareFormat(r.poincare, 'text')}`,
+    // docs/conventions.md (Rasmussen s-invariant) fixes the sign.
+    ...(r.s ? [`Rasmussen s: ${r.s.Q} over Q, ${r.s.F2} over F2 (signs: the positive trefoil has s = 2); slice genus >= |s|/2`] : []),
     `Computed ${e.date} by Overstrand ${r.version ?? '(version not recorded)'}${e.runId ? `, run ${e.runId}` : ', on a device'}`,
   ];
 }

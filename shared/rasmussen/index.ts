@@ -103,3 +103,9 @@ export function sliceGenusBounds(s: number, signature: number): SliceGenusBounds
   const fromSignature = Math.abs(signature) / 2;
   return { fromS, fromSignature, stronger: fromS > fromSignature ? 's' : fromS < fromSignature ? 'signature' : 'equal' };
 }
+
+/** "Slice genus ≥ 1: |s|/2 = 1, |σ|/2 = 1, the same bound", as the Readout and the run page say it. */
+export function sliceBoundsText(b: SliceGenusBounds): string {
+  const which = { equal: 'the same bound', s: 'the bound from s is stronger', signature: 'the bound from σ is stronger' }[b.stronger];
+  return `Slice genus ≥ ${Math.max(b.fromS, b.fromSignature)}: |s|/2 = ${b.fromS}, |σ|/2 = ${b.fromSignature}, ${which}`;
+}

@@ -33,3 +33,11 @@ test('the card shows crossings, Jones, the latest run and the comment count', ()
   expect(screen.getByText('2 comments')).toBeTruthy();
   expect(screen.getByRole('link', { name: 'Open Trefoil from the board' })).toBeTruthy();
 });
+
+test('the card shows s when a run computed it, and nothing of s otherwise', () => {
+  // docs/conventions.md: the positive trefoil has s = 2.
+  const view = render(<FeedCard item={{ ...item, latestRun: { ...item.latestRun!, s: 2 } }} onOpen={() => undefined} />);
+  expect(screen.getByText('s = 2')).toBeTruthy();
+  view.rerender(<FeedCard item={item} onOpen={() => undefined} />);
+  expect(screen.queryByText(/^s = /)).toBeNull();
+});

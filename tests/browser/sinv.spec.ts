@@ -92,3 +92,21 @@ test('the worker computes s of a 14-crossing knot in this browser (figure printe
   const warm = times.slice(1).map((t) => t.ms).sort((a, b) => a - b);
   console.log(`s of T(3,7) (14 crossings) in the browser's worker: first ${times[0].ms.toFixed(0)} ms, median of 5 warm ${warm[2].toFixed(0)} ms (goal <= 300 ms)`);
 });
+
+test('a Khovanov run of a knot that also computes s shows it with the bounds; a link is refused', async () => {
+  await page.getByRole('tab', { name: 'Runs' }).click();
+  await page.getByRole('radio', { name: 'Braid word' }).click();
+  // A link of two components (the Hopf link, Rolfsen 5.D): the server says s is defined for knots here.
+  await page.getByLabel('Braid word').fill('1 1');
+  await page.getByRole('checkbox', { name: 'Also compute s' }).click();
+  await page.getByRole('button', { name: 'Start run' }).click();
+  await page.getByText('s is defined for knots here; this link has 2 components').waitFor();
+  // T(3,4): s = (3-1)(4-1) = 6 (Rasmussen 2010); signature -6 (from memory: 8_19, Rolfsen's table).
+  await page.getByLabel('Braid word').fill('1 2 1 2 1 2 1 2');
+  await page.getByRole('button', { name: 'Start run' }).click();
+  await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
+  await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 60_000 });
+  await page.getByTestId('run-s').getByText('s = 6 over Q, 6 over F2').waitFor();
+  await page.getByText('Slice genus ≥ 3: |s|/2 = 3, |σ|/2 = 3, the same bound').waitFor();
+  await shoot(page, 'sinv-run');
+});

@@ -47,3 +47,15 @@ test('latest finished run, "has results", and same Khovanov result as a link', a
   const page = GroupSketch.parse((await api(server).get(`/api/groups/${c.group}/feed/${typedLater}`).set(auth(c.as.viewer))).body);
   expect(page.sameInvariants.map((s) => s.id)).toEqual([withRun]);
 });
+
+test('s is known from the newest run that computed it, even when a later run did not', async () => {
+  const kh = khovanov(trefoilPd, { ring: 'Z' });
+  const sketch = await sketchOf(server, c.as.member, { title: 'With s', diagram: { pd: trefoilPd, unknots: 0, framings: [null], strokes: [] }, groupId: c.group });
+  // docs/conventions.md: the positive trefoil has s = 2 (the stored value, as a run writes it).
+  await insertRun(sketch, 'done', '2026-12-02T10:00:00.000Z', { ...kh, s: { Q: 2, F2: 2 } });
+  await insertRun(sketch, 'done', '2026-12-02T11:00:00.000Z', kh);
+  const feed = FeedPage.parse((await api(server).get(`/api/groups/${c.group}/feed`).set(auth(c.as.viewer))).body);
+  expect(feed.items.find((i) => i.id === sketch)!.latestRun).toMatchObject({ finishedAt: '2026-12-02T11:00:00.000Z', s: 2 });
+  const none = feed.items.find((i) => i.latestRun && i.id !== sketch)!;
+  expect(none.latestRun!.s).toBeUndefined();
+});

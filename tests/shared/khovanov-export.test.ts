@@ -114,6 +114,16 @@ describe('exports', () => {
     const back = readJsonExport(toJson(record([1, 1, 1], khovanov(trefoilPD, { ring: 'Q', reduced: true }))));
     expect([back.reduced, back.reducedAt]).toEqual([true, 1]);
   });
+
+  it('LaTeX, CSV and JSON carry s when the run computed it, and say nothing of s otherwise', () => {
+    // docs/conventions.md (Rasmussen s-invariant): the positive trefoil has s = 2 over Q and F2.
+    const withS = record([1, 1, 1], { ...trefoil, s: { Q: 2, F2: 2 } });
+    const line = 'Rasmussen s: 2 over Q, 2 over F2 (signs: the positive trefoil has s = 2); slice genus >= |s|/2';
+    expect(toLatexTable(withS)).toContain(`% ${line}`);
+    expect(toCsv(withS)).toContain(`# ${line}`);
+    expect(readJsonExport(toJson(withS)).result.s).toEqual({ Q: 2, F2: 2 });
+    for (const text of [toLatexTable(r), toCsv(r), toJson(r)]) expect(text).not.toMatch(/Rasmussen|"s":/);
+  });
 });
 
 describe('program version', () => {

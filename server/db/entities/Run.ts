@@ -57,6 +57,10 @@ export class Run {
   @Column({ type: 'boolean' })
   reduced: boolean;
 
+  /** Also compute the s-invariant (a knot's Khovanov run); its result then carries s. */
+  @Column({ type: 'boolean', default: false })
+  computeS: boolean;
+
   @Column({ type: 'simple-json', nullable: true })
   sweep: CableSweep | null;
 

@@ -16,6 +16,7 @@ export interface Computation {
   diagram: RunDiagram;
   ring: string;
   reduced: boolean;
+  computeS: boolean;
 }
 
 /** The limits that travel with a computation (a queue worker obeys the server's). */
@@ -44,7 +45,7 @@ export async function execute(
     onProgress(p);
   };
   try {
-    const { result } = await pool.run({ diagram: c.diagram, ring: c.ring, reduced: c.reduced, onProgress: throttled, signal: ac.signal });
+    const { result } = await pool.run({ diagram: c.diagram, ring: c.ring, reduced: c.reduced, computeS: c.computeS, onProgress: throttled, signal: ac.signal });
     return { status: 'done', result };
   } catch (err) {
     if (ac.signal.reason === timedOut) {
