@@ -21,6 +21,8 @@ type Props = {
   empty: null | 'nothing' | 'open' | 'markers';
   markers: readonly Marker[];
   openStrands: number;
+  /** The number shown for each diagram component (the Slate numbers them in drawing order); default 1, 2, ... */
+  numbers?: readonly number[];
 };
 
 function Line({ label, testID, stale, error, has, children }: { label: string; testID: string; stale: boolean; error?: string; has: boolean; children: React.ReactNode }) {
@@ -91,8 +93,11 @@ function SRow({ s, signature }: { s: SState; signature?: number }) {
   );
 }
 
-export function Readout({ state, s, empty, markers, openStrands }: Props) {
+export function Readout({ state, s, empty, markers, openStrands, numbers }: Props) {
   const v = state.values;
+  const n = (k: number) => numbers?.[k] ?? k + 1;
+  const framings = (v.framings ?? []).map((f, k) => ({ ...f, k: n(k) })).sort((p, q) => p.k - q.k);
+  const linking = (v.linking ?? []).map((l) => ({ i: Math.min(n(l.i), n(l.j)), j: Math.max(n(l.i), n(l.j)), value: l.value })).sort((p, q) => p.i - q.i || p.j - q.j);
   if (empty) {
     return (
       <View style={styles.box} testID="readout">
@@ -172,12 +177,12 @@ export function Readout({ state, s, empty, markers, openStrands }: Props) {
       <SRow s={s} signature={v.signature} />
       <Row label="Framings" k="framings" state={state}>
         <Text style={styles.num}>
-          {(v.framings ?? []).map((f, i) => `${i + 1}: ${signed(f.value)}${f.blackboard ? ' bb' : ''}`).join('   ')}
+          {framings.map((f) => `${f.k}: ${signed(f.value)}${f.blackboard ? ' bb' : ''}`).join('   ')}
         </Text>
       </Row>
-      {v.linking && v.linking.length > 0 ? (
+      {linking.length > 0 ? (
         <Row label="Linking numbers" k="linking" state={state}>
-          <Text style={styles.num}>{v.linking.map((l) => `lk(${l.i + 1},${l.j + 1}) = ${signed(l.value)}`).join('   ')}</Text>
+          <Text style={styles.num}>{linking.map((l) => `lk(${l.i},${l.j}) = ${signed(l.value)}`).join('   ')}</Text>
         </Row>
       ) : null}
     </View>

@@ -1,5 +1,5 @@
 // What can be done from the Readout: copy the codes, bring a code or a family onto the Slate,
-// simplify, start a heavy run, export the picture.
+// simplify or make alternating, start a heavy run, export the picture.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '@/constants/theme';
 
@@ -7,6 +7,9 @@ export type ExportKind = 'svg' | 'png' | 'tikz';
 
 type Props = {
   hasDiagram: boolean;
+  /** The diagram has crossings to set alternating. */
+  canAlternate: boolean;
+  onAlternate: () => void;
   hasBraid: boolean;
   message: string | null;
   onCopyPD: () => void;
@@ -36,6 +39,7 @@ export function ReadoutActions(p: Props) {
           <Action label="Paste a code" onPress={p.onPaste} primary />
           <Action label="Families" onPress={p.onFamilies} primary />
           <Action label="Simplify" onPress={p.onSimplify} disabled={!p.hasDiagram} />
+          <Action label="Alternate" onPress={p.onAlternate} disabled={!p.canAlternate} />
         </View>
       </View>
       <View style={styles.group}>

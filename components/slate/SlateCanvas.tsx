@@ -21,8 +21,10 @@ type Drag =
   | { kind: 'move' | 'reshape'; id: string; index: number; origin: Point; from: SlateDoc }
   | { kind: 'pan'; origin: Point; from: ViewT };
 
-/** Hit radius of taps, in screen pixels. */
+/** Hit radii of taps, in screen pixels: on a strand or crossing; on the framing badge (a 44 px target); on the arrow. */
 const HIT = 18;
+const BADGE_HIT = 22;
+const ARROW_HIT = 14;
 /** How far along the strand a reshaping drag reaches, in screen pixels. */
 const reshapeRadius = 60;
 
@@ -37,6 +39,8 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
   const [size, setSize] = useState({ width: 0, height: 0 });
   const [live, setLive] = useState<Point[] | null>(null);
   const drag = useRef<Drag | null>(null);
+  /** Where the last finger went down, in canvas pixels. */
+  const downAt = useRef<Point | null>(null);
   // The gesture handlers are made once; they read the latest values through this ref.
   const latest = useRef({ analysis, doc, onFraming });
   latest.current = { analysis, doc, onFraming };
@@ -107,9 +111,9 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
   const tap = (screen: Point) => {
     const s = useSlate.getState();
     const { analysis: a, doc } = latest.current;
-    const badge = picturesRef.current.find((p) => p.badge && dist(p.badge.at, screen) <= HIT);
+    const badge = picturesRef.current.find((p) => p.badge && dist(p.badge.at, screen) <= BADGE_HIT);
     if (badge) return latest.current.onFraming(badge.id);
-    const arrow = picturesRef.current.find((p) => p.arrow && dist(p.arrow.at, screen) <= HIT);
+    const arrow = picturesRef.current.find((p) => p.arrow && dist(p.arrow.at, screen) <= ARROW_HIT);
     if (arrow) return s.apply({ ...doc, sketch: reverseComponent(doc.sketch, arrow.id) });
     const p = toWorld(s.view, screen);
     const x = crossingNear(a, p, HIT / s.view.k);
@@ -127,10 +131,22 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
       const v = zoomAbout(pinchFrom.view, pinchFrom.scale, pinchFrom.focal);
       useSlate.getState().setView({ ...v, x: v.x + pinchFrom.shift.x, y: v.y + pinchFrom.shift.y });
     };
+    // The stroke starts where the finger went down, not at the first move, which a quick stroke
+    // makes tens of pixels later; and it ends where the finger lifted. On the web the handler
+    // reports the down point late, so the surface's own pointerdown records it (below).
     const one = Gesture.Pan().runOnJS(true).maxPointers(1).minDistance(2)
-      .onStart((e) => begin({ x: e.x - e.translationX, y: e.y - e.translationY }))
+      .onBegin((e) => {
+        if (Platform.OS !== 'web') downAt.current = { x: e.x, y: e.y };
+      })
+      .onStart((e) => {
+        begin(downAt.current ?? { x: e.x - e.translationX, y: e.y - e.translationY });
+        update({ x: e.x, y: e.y });
+      })
       .onUpdate((e) => update({ x: e.x, y: e.y }))
-      .onEnd(() => end())
+      .onEnd((e) => {
+        update({ x: e.x, y: e.y });
+        end();
+      })
       .onFinalize(() => {
         if (drag.current) end();
       });
@@ -150,11 +166,16 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
     // The handlers read the store and refs, so one gesture object serves every render.
   }, []);
 
-  // Web: the wheel zooms about the pointer.
+  // Web: the wheel zooms about the pointer; a pointer going down is where a stroke starts.
   const surface = useRef<View>(null);
   useEffect(() => {
     if (Platform.OS !== 'web' || !surface.current) return;
     const node = surface.current as unknown as HTMLElement;
+    const onDown = (e: PointerEvent) => {
+      const r = node.getBoundingClientRect();
+      downAt.current = { x: e.clientX - r.left, y: e.clientY - r.top };
+    };
+    node.addEventListener('pointerdown', onDown, true);
     const onWheel = (e: WheelEvent) => {
       e.preventDefault();
       const r = node.getBoundingClientRect();
@@ -162,7 +183,10 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
       s.setView(zoomAbout(s.view, Math.exp(-e.deltaY / 400), { x: e.clientX - r.left, y: e.clientY - r.top }));
     };
     node.addEventListener('wheel', onWheel, { passive: false });
-    return () => node.removeEventListener('wheel', onWheel);
+    return () => {
+      node.removeEventListener('wheel', onWheel);
+      node.removeEventListener('pointerdown', onDown, true);
+    };
   }, []);
 
   const onLayout = (e: LayoutChangeEvent) => {
@@ -194,6 +218,12 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
                 <G>
                   <Rect x={p.badge.at.x - 15} y={p.badge.at.y - 10} width={30} height={20} rx={10} fill={slate.raised} stroke={p.colour} strokeWidth={1} strokeOpacity={p.badge.blackboard ? 0.5 : 1} />
                   <SvgText x={p.badge.at.x} y={p.badge.at.y + 4} fontSize={11} fontFamily={fonts.mono} fill={p.badge.blackboard ? slate.chalkDim : p.colour} textAnchor="middle">{p.badge.text}</SvgText>
+                </G>
+              ) : null}
+              {p.label ? (
+                <G aria-label={`Component ${p.label.text}`}>
+                  <Circle cx={p.label.at.x} cy={p.label.at.y} r={8} fill={slate.surface} fillOpacity={0.85} />
+                  <SvgText x={p.label.at.x} y={p.label.at.y + 4} fontSize={12} fontFamily={fonts.semibold} fill={p.colour} textAnchor="middle">{p.label.text}</SvgText>
                 </G>
               ) : null}
             </G>

@@ -4,6 +4,7 @@ import { useCallback, useEffect, useMemo, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { router, useFocusEffect, useIsFocused } from 'expo-router';
 import * as Clipboard from 'expo-clipboard';
+import { alternate, isDescending } from '@/shared/drawing/alternate';
 import { analyse } from '@/shared/drawing/analyse';
 import { setFraming } from '@/shared/drawing/sketch';
 import { simplify } from '@/shared/knot/moves/simplify';
@@ -12,6 +13,7 @@ import type { LocalSketch } from '@/lib/store/types';
 import { braidToText, pdToText } from '@/shared/text/codes';
 import { exportFiles } from '@/lib/slate/exports';
 import { savePng } from '@/lib/slate/png';
+import { drawingNumbers } from '@/lib/slate/picture';
 import { docFromDiagram, docFromStored } from '@/lib/slate/record';
 import { braidOf, currentDoc, useSlate } from '@/lib/slate/slate-store';
 import { useReadout } from '@/hooks/useReadout';
@@ -26,6 +28,7 @@ import { Readout } from '@/components/readout/Readout';
 import { ReadoutActions, type ExportKind } from '@/components/readout/ReadoutActions';
 import { PasteCodeDialog } from '@/components/readout/PasteCodeDialog';
 import { FamiliesDialog } from '@/components/readout/FamiliesDialog';
+import { DescendingNote } from './DescendingNote';
 import { SlateCanvas } from './SlateCanvas';
 import { SelectionBar, Toolbar } from './Toolbar';
 import { FramingDialog } from './FramingDialog';
@@ -70,10 +73,16 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const paste = useCallback(() => setOpen('paste'), []);
   useSlateShortcuts(paste, ready && open === null);
 
-  const numberOf = useCallback((id: string) => {
-    const k = analysis.diagram?.componentIds.indexOf(id) ?? -1;
-    return k >= 0 ? k + 1 : null;
-  }, [analysis]);
+  const numbers = useMemo(() => drawingNumbers(doc), [doc]);
+  const numberOf = useCallback((id: string) => numbers.get(id) ?? null, [numbers]);
+  const diagramNumbers = useMemo(() => analysis.diagram?.componentIds.map((id) => numbers.get(id) ?? 0), [analysis, numbers]);
+  const descending = useMemo(() => isDescending(analysis), [analysis]);
+  const alternateNow = () => {
+    const s = useSlate.getState();
+    const next = alternate(s.history.present.sketch);
+    if (next === s.history.present.sketch || next.flips === s.history.present.sketch.flips) return setMessage('Already alternating.');
+    s.apply({ ...s.history.present, sketch: next });
+  };
 
   const draw = (d: Diagram, word?: number[]) => {
     try {
@@ -108,15 +117,19 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const framingId = open && typeof open === 'object' ? open.framing : null;
   const framingComponent = framingId ? doc.sketch.components.find((c) => c.id === framingId) : undefined;
   const framingNumber = framingId ? numberOf(framingId) : null;
-  const blackboard = framingNumber && readout.values.framings && !readout.stale.has('framings') && framingComponent?.framing === null
-    ? readout.values.framings[framingNumber - 1]?.value ?? null : null;
+  const framingIndex = framingId ? analysis.diagram?.componentIds.indexOf(framingId) ?? -1 : -1;
+  const blackboard = framingIndex >= 0 && readout.values.framings && !readout.stale.has('framings') && framingComponent?.framing === null
+    ? readout.values.framings[framingIndex]?.value ?? null : null;
 
   const empty = diagram ? null : analysis.markers.length ? 'markers' : analysis.open.length ? 'open' : 'nothing';
   const readoutPane = (
     <>
-      <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} />
+      {descending ? <DescendingNote onAlternate={alternateNow} /> : null}
+      <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} numbers={diagramNumbers} />
       <ReadoutActions
         hasDiagram={!!diagram}
+        canAlternate={!!diagram && diagram.pd.length > 0}
+        onAlternate={alternateNow}
         hasBraid={!!braid}
         message={message}
         onCopyPD={() => diagram && void copy(pdToText(diagram.pd), 'PD code')}

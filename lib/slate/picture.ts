@@ -1,6 +1,6 @@
 // What the Slate canvas draws, computed from the document and its analysis: per component its
 // colour, its visible pieces (gaps cut at under-crossings) as SVG path data, its orientation
-// arrow and framing badge; the crossings (tap targets) and degeneracy markers. World units.
+// arrow, its number and its framing badge. World units in, screen pixels out.
 import { arrowOf } from '@/shared/drawing/pick';
 import type { Analysis } from '@/shared/drawing/analyse';
 import type { Point } from '@/shared/drawing/point';
@@ -12,7 +12,7 @@ import type { View } from './slate-store';
 export interface StrandPicture {
   id: string;
   colour: string;
-  /** 1-based number as in the Readout (diagram order), null for open strands. */
+  /** 1-based number in drawing order (as the Readout shows it), null for open strands. */
   number: number | null;
   closed: boolean;
   /** SVG path data of the visible pieces, in screen coordinates. */
@@ -20,12 +20,14 @@ export interface StrandPicture {
   arrow: { at: Point; direction: Point } | null;
   /** The framing badge beside the arrow: "bb" for the blackboard framing, else the integer. */
   badge: { at: Point; text: string; blackboard: boolean } | null;
+  /** The component's number, beside the arrow on the side away from the badge. */
+  label: { at: Point; text: string } | null;
   /** Open strands: their two ends, drawn as unfinished. */
   ends: Point[];
 }
 
 /** Sizes on screen, whatever the zoom (pixels). */
-export const screenSizes = { stroke: 3.4, gap: 8, badgeOffset: 24 };
+export const screenSizes = { stroke: 3.4, gap: 8, badgeOffset: 30, labelOffset: 15 };
 
 const fixed = (x: number) => Math.round(x * 10) / 10;
 
@@ -37,8 +39,18 @@ export const colourOf = (doc: SlateDoc, id: string): string => {
 
 export const framingText = (framing: number | null): string => (framing === null ? 'bb' : framing > 0 ? `+${framing}` : `${framing}`);
 
+/**
+ * Closed components numbered 1, 2, ... in the order they were first drawn (a stroke that
+ * continues a strand keeps the strand's place): the numbers the canvas, the selection and the
+ * Readout show.
+ */
+export function drawingNumbers(doc: SlateDoc): Map<string, number> {
+  const closed = doc.sketch.components.filter((c) => c.closed).sort((p, q) => p.seq - q.seq);
+  return new Map(closed.map((c, i) => [c.id, i + 1]));
+}
+
 export function strandPictures(doc: SlateDoc, a: Analysis, view: View): StrandPicture[] {
-  const order = a.diagram?.componentIds ?? [];
+  const numbers = drawingNumbers(doc);
   const screen = (p: Point) => toScreen(view, p);
   const pathData = (points: readonly Point[]) => points.map((p, i) => `${i ? 'L' : 'M'}${fixed(screen(p).x)} ${fixed(screen(p).y)}`).join(' ');
   const gaps = gapsAround(a.crossings, new Map(a.paths.map((p) => [p.id, p.length])), screenSizes.gap / view.k);
@@ -46,17 +58,18 @@ export function strandPictures(doc: SlateDoc, a: Analysis, view: View): StrandPi
     const c = doc.sketch.components.find((x) => x.id === path.id)!;
     const arrow = path.closed && path.points.length > 2 ? arrowOf(a, path) : null;
     const at = arrow && screen(arrow.at);
-    const d = screenSizes.badgeOffset;
-    const index = order.indexOf(path.id);
+    const { badgeOffset: d, labelOffset: l } = screenSizes;
+    const number = numbers.get(path.id) ?? null;
     return {
       id: path.id,
       colour: colourOf(doc, path.id),
-      number: index >= 0 ? index + 1 : null,
+      number,
       closed: path.closed,
       pieces: visiblePieces(path.points, path.closed, gaps.filter((g) => g.component === path.id)).map(pathData),
       arrow: arrow && at ? { at, direction: arrow.direction } : null,
       // Beside the arrow, off to its left as it travels.
       badge: arrow && at ? { at: { x: at.x + arrow.direction.y * d, y: at.y - arrow.direction.x * d }, text: framingText(c.framing), blackboard: c.framing === null } : null,
+      label: arrow && at && number ? { at: { x: at.x - arrow.direction.y * l, y: at.y + arrow.direction.x * l }, text: String(number) } : null,
       ends: path.closed || path.points.length === 0 ? [] : [screen(path.points[0]), screen(path.points[path.points.length - 1])],
     };
   });
