@@ -2,7 +2,7 @@
 // and drawn as text nodes, maths typeset by KaTeX on web; links open in the browser.
 import { Linking, StyleSheet, Text, View } from 'react-native';
 import { commentBlocks, type Span } from '@/shared/text/comment-markdown';
-import { TeX } from '@/components/runs/Math';
+import { TeX } from '@/components/ui/Math';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 
 function SpanText({ s }: { s: Span }) {

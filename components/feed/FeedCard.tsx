@@ -7,7 +7,6 @@ import { colors, radius, space, type } from '@/constants/theme';
 import type { PressState } from '@/components/ui/press-state';
 import { Jones } from './Jones';
 import { DiagramPicture } from './DiagramPicture';
-import { superscripts } from './superscripts';
 import { when } from '@/lib/when';
 
 const PIC = 84;
@@ -28,7 +27,7 @@ export function FeedCard({ item, onOpen, active }: { item: FeedItem; onOpen: () 
         <Text style={styles.crossings}>{inv.crossings} crossing{inv.crossings === 1 ? '' : 's'}</Text>
         <View style={styles.jones}><Jones inv={inv} /></View>
         <View style={styles.foot}>
-          {item.latestRun ? <Text style={styles.run} numberOfLines={1}>{superscripts(item.latestRun.summary) || item.latestRun.kind}</Text> : null}
+          {item.latestRun ? <Text style={styles.run} numberOfLines={1}>{item.latestRun.summary || item.latestRun.kind}</Text> : null}
           {item.latestRun?.s !== undefined ? <Text style={styles.run}>{`s = ${item.latestRun.s}`}</Text> : null}
           <Text style={styles.count}>{item.commentCount} comment{item.commentCount === 1 ? '' : 's'}</Text>
           {item.tags.slice(0, 3).map((t) => <Text key={t} style={styles.tag}>#{t}</Text>)}

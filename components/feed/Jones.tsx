@@ -1,5 +1,5 @@
 // The Jones polynomial of a feed item, typeset (KaTeX on web), from the summary the server sends.
-import { TeX } from '@/components/runs/Math';
+import { TeX } from '@/components/ui/Math';
 import type { InvariantSummary } from '@/shared/api/feed';
 import { Laurent } from '@/shared/poly/laurent';
 

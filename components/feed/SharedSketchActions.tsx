@@ -8,6 +8,7 @@ import { useFork, useShare } from '@/hooks/queries/useFeed';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
 import { colors, space, type } from '@/constants/theme';
+import { pdToText } from '@/shared/text/codes';
 
 export function SharedSketchActions({ s }: { s: GroupSketch }) {
   const router = useRouter();
@@ -23,7 +24,7 @@ export function SharedSketchActions({ s }: { s: GroupSketch }) {
           onPress={() => fork.mutate(s.id, { onSuccess: (r) => setForked(r.id) })} />
         {s.can.comment && pd.length ? (
           <Button variant="secondary" label="Start a run"
-            onPress={() => router.push(`/runs?sketchId=${encodeURIComponent(s.id)}&pd=${encodeURIComponent(JSON.stringify(pd))}`)} />
+            onPress={() => router.push(`/runs?sketchId=${encodeURIComponent(s.id)}&pd=${encodeURIComponent(pdToText(pd))}`)} />
         ) : null}
         {s.can.unshare ? (
           <Button variant="danger" label="Stop sharing" busy={share.isPending} busyLabel="Stopping…"

@@ -10,9 +10,8 @@ import { colors, radius, space, type } from '@/constants/theme';
 import { DiagramPicture } from './DiagramPicture';
 import { FramedLink } from './FramedLink';
 import { Jones } from './Jones';
-import { superscripts } from './superscripts';
+import { pdToText } from '@/shared/text/codes';
 
-const pdText = (pd: GroupSketch['diagram']['pd']) => pd.map((x) => `X[${x.join(',')}]`).join(' ');
 
 export function SharedSketchPicture({ s }: { s: GroupSketch }) {
   const photo = s.photos[0];
@@ -39,10 +38,10 @@ export function SharedSketchReadout({ s }: { s: GroupSketch }) {
       </Text>
       <FramedLink diagram={s.diagram} />
       {s.invariants.jones ? <Jones inv={s.invariants} lhs="V(t)" /> : <Text style={styles.muted}>No Jones polynomial: the diagram is too large or not a valid PD code.</Text>}
-      {s.diagram.pd.length ? <Text style={styles.code} selectable>{pdText(s.diagram.pd)}</Text> : null}
+      {s.diagram.pd.length ? <Text style={styles.code} selectable>{pdToText(s.diagram.pd)}</Text> : null}
       {s.latestRun ? (
         <Text role="link" style={styles.run} onPress={() => router.push(`/runs/${s.latestRun!.id}`)}>
-          Latest run: {superscripts(s.latestRun.summary) || s.latestRun.kind} ›
+          Latest run: {s.latestRun.summary || s.latestRun.kind} ›
         </Text>
       ) : null}
     </Section>

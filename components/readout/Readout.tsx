@@ -10,7 +10,7 @@ import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
 import { S_MAX_CROSSINGS } from './local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
 import { HOMFLY_DEVICE_LIMIT, nameTeX } from '@/lib/slate/readout';
-import { TeX } from '@/components/runs/Math';
+import { TeX } from '@/components/ui/Math';
 import { ConventionsSheet, chiralityNote } from './Conventions';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 

@@ -3,24 +3,26 @@
 // polynomial, thin or thick, the s-invariant with its slice-genus bounds when asked, and exports. A cable sweep shows a grid of small tables instead.
 import { useMemo, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { isFinished, type KhResultJson, type RunDetail, type SValues } from '@/shared/api/runs';
+import { isFinished, runPagePath, type KhResultJson, type RunDetail, type SValues } from '@/shared/api/runs';
 import { toCsv, toJson, toLatexTable, type ExportRecord } from '@/shared/khovanov/export';
 import { poincareFormat } from '@/shared/khovanov/format';
 import { diagram as toDiagram } from '@/shared/knot/diagram';
 import { linkSignature } from '@/shared/knot/goeritz';
 import { Laurent } from '@/shared/poly/laurent';
 import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
-import { useCancelRun } from '@/hooks/queries/useRuns';
+import { router } from 'expo-router';
+import { useCancelRun, useStartRun } from '@/hooks/queries/useRuns';
+import { pdToText } from '@/shared/text/codes';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
 import { Section } from '@/components/ui/Section';
 import { colors, fonts, space, type } from '@/constants/theme';
 import { KhTable } from './KhTable';
-import { TeX } from './Math';
+import { TeX } from '@/components/ui/Math';
 import { ProgressBar } from './ProgressBar';
 import { SweepGrid } from './SweepGrid';
-import { duration, ringLabel, statusLabel } from './format';
-import { saveText } from './save';
+import { duration, remaining, runDate, statusLabel } from './format';
+import { saveText } from '@/components/ui/save';
 
 function Fact({ name, children }: { name: string; children: React.ReactNode }) {
   return (
@@ -73,7 +75,7 @@ export function KhSummary({ result }: { result: KhResultJson }) {
           <View style={styles.euler}>
             <TeX tex={poly(euler.computed).format('q', 'latex')} text={poly(euler.computed).format('q')} />
             <Text style={[styles.value, { color: euler.ok ? colors.success : colors.danger }]}>
-              {euler.ok ? `= ${result.reduced ? 'V' : '(q + q⁻¹) V'}, as the Jones polynomial says ✓` : 'differs from the Jones polynomial'}
+              {`${euler.ok ? '=' : '≠'} ${result.reduced ? 'V' : '(q + q⁻¹) V'} at t^(1/2) = −q${euler.ok ? ', as the Jones polynomial says ✓' : ': it differs from the Jones polynomial, which gives'}`}
             </Text>
             {euler.ok ? null : <TeX tex={poly(euler.expected).format('q', 'latex')} text={poly(euler.expected).format('q')} />}
           </View>
@@ -97,6 +99,51 @@ function SFact({ s, diagram }: { s: SValues; diagram: RunDetail['diagram'] }) {
   );
 }
 
+/** Start the same computation again (a cancelled or failed run): on the sketch as it is now, or on the same diagram. */
+function RunAgain({ run }: { run: RunDetail }) {
+  const start = useStartRun();
+  const same = { kind: run.kind, ring: run.ring, reduced: run.reduced, sweep: run.sweep ?? undefined, computeS: run.computeS };
+  const body = run.sketchId
+    ? { ...same, sketchId: run.sketchId }
+    : { ...same, diagram: run.diagram, groupId: run.groupId ?? undefined, label: run.label, source: run.source ?? undefined };
+  return (
+    <>
+      {start.error ? <Banner tone="error">{start.error.message}</Banner> : null}
+      <Button variant="secondary" label="Run again" busy={start.isPending} busyLabel="Starting…" onPress={() => start.mutate(body, { onSuccess: (r) => router.push(runPagePath(r.id)) })} />
+    </>
+  );
+}
+
+/** Where the run stands: status, the share of the expected work done, the complex's size, time so far and, once meaningful, what remains. */
+function progressLine(run: RunDetail): string {
+  const parts = [`${Math.round(run.progress.fraction * 100)}%`];
+  if (run.progress.objects && !isFinished(run.status)) parts.push(`complex of ${run.progress.objects} objects`);
+  parts.push(isFinished(run.status) ? `took ${duration(run)}` : `${duration(run)} so far`);
+  const left = remaining(run);
+  if (left) parts.push(`about ${left} left`);
+  return parts.join(' · ');
+}
+
+/** What was computed, in full: the text it came from, its PD code, the ring, when and by whom. */
+function Input({ run }: { run: RunDetail }) {
+  const d = run.diagram;
+  return (
+    <View style={styles.facts}>
+      {run.source ? (
+        <Fact name="Given as">
+          <Text style={styles.code} selectable testID="run-source">{run.source}</Text>
+        </Fact>
+      ) : null}
+      <Fact name={`PD code · ${run.crossings} crossings${d.unknots ? ` and ${d.unknots} unknot${d.unknots === 1 ? '' : 's'}` : ''}`}>
+        <Text style={styles.code} selectable testID="run-pd">{pdToText(d.pd)}</Text>
+      </Fact>
+      <Fact name="Computed">
+        {`${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${run.ring}${run.reduced ? `, reduced at component ${(run.result?.component ?? 0) + 1}` : ''} · started ${runDate(run.createdAt)} by ${run.startedBy.displayName}${run.finishedAt ? ` · ended ${runDate(run.finishedAt)}` : ''}${run.computeS ? ' · with the s-invariant' : ''}${run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}`}
+      </Fact>
+    </View>
+  );
+}
+
 export function RunResult({ run }: { run: RunDetail }) {
   const cancel = useCancelRun(run.id);
   const live = !isFinished(run.status);
@@ -105,18 +152,15 @@ export function RunResult({ run }: { run: RunDetail }) {
       <View style={styles.status}>
         <View style={styles.statusLine}>
           <Text style={styles.statusText} testID="run-status">{statusLabel[run.status]}</Text>
-          <Text style={styles.muted}>{`${Math.round(run.progress.fraction * 100)}%${run.progress.objects ? ` · complex of ${run.progress.objects} objects` : ''} · ${duration(run)}`}</Text>
+          <Text style={styles.muted}>{progressLine(run)}</Text>
         </View>
         <ProgressBar fraction={run.progress.fraction} status={run.status} label="Run progress" />
-        <Text style={styles.muted}>
-          {`${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${ringLabel(run)} · ${run.crossings} crossings · started by ${run.startedBy.displayName}`}
-          {run.computeS ? ' · with the s-invariant' : ''}
-          {run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}
-        </Text>
         {run.error ? <Banner tone={run.status === 'cancelled' ? 'info' : 'error'}>{run.error}</Banner> : null}
         {cancel.error ? <Banner tone="error">{cancel.error.message}</Banner> : null}
         {live ? <Button variant="danger" label="Cancel run" busy={cancel.isPending} busyLabel="Cancelling…" onPress={() => cancel.mutate()} /> : null}
+        {run.status === 'cancelled' || run.status === 'failed' ? <RunAgain run={run} /> : null}
       </View>
+      <Input run={run} />
       {run.result ? (
         <>
           <Section title={`Khovanov homology over ${run.result.ring}${run.result.reduced ? ', reduced' : ''}`}>
@@ -146,5 +190,5 @@ const styles = StyleSheet.create({
   value: { ...type.body, color: colors.ink },
   euler: { gap: space.xs },
   exports: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center' },
-  code: { fontFamily: fonts.mono },
+  code: { fontFamily: fonts.mono, fontSize: 13, color: colors.ink },
 });

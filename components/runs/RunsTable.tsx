@@ -1,6 +1,7 @@
-// The Runs tab's table, compact enough for a phone or the wide list pane: status, progress,
-// diagram, ring, time, newest first. Headers sort (press again to reverse); the filter matches the
-// diagram label, ring and status. The open run (wide: shown on the right) is marked.
+// The Runs tab's table, compact enough for a phone or the wide list pane: status with its
+// progress, diagram, ring (and reduced), start date, time, newest first. Headers sort (press
+// again to reverse); the filter matches what the rows show (label, ring with "reduced", status,
+// kind, date). Short cells stay on one line, never cut inside a word. The open run is marked.
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { Link } from 'expo-router';
@@ -18,38 +19,43 @@ import { runPagePath } from '@/shared/api/runs';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { useFilterShortcut } from '@/components/shell/shortcuts';
 import { ProgressBar } from './ProgressBar';
-import { duration, ringLabel, statusLabel } from './format';
+import { duration, ringLabel, runDate, statusLabel } from './format';
 
 const col = createColumnHelper<RunSummary>();
 
 const columns = [
-  col.accessor('status', { header: 'Status', cell: (c) => <Text style={styles.cell}>{statusLabel[c.getValue()]}</Text> }),
-  col.accessor((r) => r.progress.fraction, {
-    id: 'progress',
-    header: 'Progress',
-    cell: (c) => <ProgressBar fraction={c.getValue()} status={c.row.original.status} label={`Progress of ${c.row.original.label}`} />,
+  col.accessor('status', {
+    header: 'Status',
+    cell: (c) => (
+      <View style={styles.status}>
+        <Text style={styles.cell} numberOfLines={1}>{statusLabel[c.getValue()]}</Text>
+        <ProgressBar fraction={c.row.original.progress.fraction} status={c.getValue()} label={`Progress of ${c.row.original.label}`} />
+      </View>
+    ),
   }),
   col.accessor('label', {
     header: 'Diagram',
     cell: (c) => (
-      <Link href={runPagePath(c.row.original.id)} style={[styles.link, !c.row.original.sketchId && styles.linkCode]}>
+      <Link href={runPagePath(c.row.original.id)} style={[styles.link, !c.row.original.sketchId && styles.linkCode]} numberOfLines={2}>
         {c.getValue()}
         <Text style={styles.muted}>{`  ${c.row.original.kind === 'cable-sweep' ? 'cable sweep · ' : ''}${c.row.original.crossings} crossings`}</Text>
       </Link>
     ),
   }),
   col.accessor((r) => ringLabel(r), { id: 'ring', header: 'Ring', cell: (c) => <Text style={styles.code}>{c.getValue()}</Text> }),
+  col.accessor('createdAt', { header: 'Started', cell: (c) => <Text style={styles.cell}>{runDate(c.getValue(), true)}</Text> }),
   col.accessor((r) => (r.startedAt ? (r.finishedAt ? Date.parse(r.finishedAt) : Date.now()) - Date.parse(r.startedAt) : -1), {
     id: 'time',
     header: 'Time',
-    cell: (c) => <Text style={styles.cell}>{duration(c.row.original)}</Text>,
+    cell: (c) => <Text style={styles.cell} numberOfLines={1}>{duration(c.row.original)}</Text>,
   }),
-  // Not shown: it only gives the default order, newest first.
-  col.accessor('createdAt', { header: 'Started' }),
 ];
 
-const widths: Record<string, number> = { status: 0.9, progress: 1.1, label: 2.4, ring: 0.8, time: 0.8 };
-const hidden = { createdAt: false };
+const widths: Record<string, number> = { status: 1.1, label: 2.3, ring: 1, createdAt: 1, time: 0.8 };
+
+/** What the filter looks in: the words each row shows. */
+const searchText = (r: RunSummary) =>
+  [r.label, ringLabel(r), statusLabel[r.status], r.kind === 'cable-sweep' ? 'cable sweep' : 'khovanov', runDate(r.createdAt, true), r.source ?? ''].join(' ').toLowerCase();
 
 export function RunsTable({ runs, openId }: { runs: RunSummary[]; openId?: string }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);
@@ -58,11 +64,10 @@ export function RunsTable({ runs, openId }: { runs: RunSummary[]; openId?: strin
   const table = useReactTable({
     data: runs,
     columns,
-    state: { sorting, globalFilter: filter, columnVisibility: hidden },
+    state: { sorting, globalFilter: filter },
     onSortingChange: setSorting,
     onGlobalFilterChange: setFilter,
-    globalFilterFn: (row, _id, value: string) =>
-      [row.original.label, row.original.ring, row.original.status, row.original.kind].join(' ').toLowerCase().includes(value.toLowerCase()),
+    globalFilterFn: (row, _id, value: string) => searchText(row.original).includes(value.trim().toLowerCase()),
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),
@@ -73,7 +78,7 @@ export function RunsTable({ runs, openId }: { runs: RunSummary[]; openId?: strin
         ref={filterField}
         value={filter}
         onChangeText={setFilter}
-        placeholder="Filter by diagram, ring or status"
+        placeholder="Filter by diagram, ring, reduced, status or date"
         placeholderTextColor={colors.inkFaint}
         aria-label="Filter runs"
         style={styles.filter}
@@ -117,7 +122,8 @@ const styles = StyleSheet.create({
   headRow: { borderBottomColor: colors.ink },
   open: { backgroundColor: colors.accentSoft },
   head: { ...type.label, color: colors.inkMuted },
-  cellBox: { justifyContent: 'center' },
+  cellBox: { justifyContent: 'center', minWidth: 0 },
+  status: { gap: space.xs },
   cell: { ...type.small, color: colors.ink },
   code: { fontFamily: fonts.mono, fontSize: 13, color: colors.ink },
   link: { ...type.small, color: colors.accent, fontFamily: fonts.medium },

@@ -1,13 +1,14 @@
-// Start a run from a pasted PD code or braid word: the code is checked here with the knot
-// core (same messages as the server), then sent as a diagram; the result page opens. Small
-// diagrams can also be computed on this device, offline (a web worker on web).
+// Start a run from a pasted PD, DT code or braid word: the code is read by the Slate's reader
+// (lib/slate/codes.ts: the same codes, the same messages), then sent as a diagram with the text
+// it came from; the result page opens. Small diagrams can also be computed on this device,
+// offline (a web worker on web).
 import { useEffect, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { router } from 'expo-router';
 import { isApiError } from '@/lib/api';
-import { runPagePath, type KhResultJson, type StartRunRequest } from '@/shared/api/runs';
-import { fromBraid, parseBraid } from '@/shared/knot/braid';
-import { parsePD } from '@/shared/knot/pd';
+import { codeKinds, parseCode, sourceOf, type CodeKind } from '@/lib/slate/codes';
+import { RunRing, runPagePath, type KhResultJson, type StartRunRequest } from '@/shared/api/runs';
+import { pdToText } from '@/shared/text/codes';
 import { useStartRun } from '@/hooks/queries/useRuns';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
@@ -18,8 +19,10 @@ import { KhTable } from './KhTable';
 import { LOCAL_MAX_CROSSINGS } from './local-kh';
 import { KhSummary } from './RunResult';
 
-type Input = 'pd' | 'braid';
-const rings = ['Z', 'Q', 'F2', 'F3'] as const;
+const rings = ['Z', 'Q', 'F2', 'F3', 'Fp'] as const;
+const sweeps = ['0', '2', '3', '4'] as const;
+const inputNames = Object.fromEntries(codeKinds.map((c) => [c.kind, c.label])) as Record<CodeKind, string>;
+const LABEL_MAX = 120;
 
 function Choice<T extends string>({ label, options, value, onChange, names }: { label: string; options: readonly T[]; value: T; onChange: (v: T) => void; names?: Record<T, string> }) {
   return (
@@ -36,30 +39,32 @@ function Choice<T extends string>({ label, options, value, onChange, names }: { 
   );
 }
 
-/** The request for the typed code, or the reason it is not a diagram. */
-function request(input: Input, code: string, ring: string, reduced: boolean, sweep: number): StartRunRequest | string {
-  try {
-    const diagram = input === 'pd' ? { pd: parsePD(code) as [number, number, number, number][] } : (() => {
-      const d = fromBraid(parseBraid(code));
-      return { pd: d.pd.map((x) => [...x] as [number, number, number, number]), unknots: d.unknots };
-    })();
-    const text = input === 'braid' ? `braid ${code.trim().replace(/\s+/g, ' ')}` : `PD ${JSON.stringify(diagram.pd)}`;
-    const label = text.length > 44 ? text.slice(0, 42) + '…' : text;
-    return sweep > 0 ? { kind: 'cable-sweep', diagram, ring, reduced, sweep: { maxStrands: sweep }, label } : { diagram, ring, reduced, label };
-  } catch (err) {
-    return err instanceof Error ? err.message : 'Not a diagram';
-  }
+/** The request for the typed code, or the reason it is not a diagram (or the ring not a ring). */
+function request(input: CodeKind, code: string, ring: string, reduced: boolean, sweep: number): StartRunRequest | string {
+  if (!RunRing.safeParse(ring).success) return `${ring.slice(1) || 'p'} is not a prime: F_p needs a prime p, e.g. F5.`;
+  const parsed = parseCode(input, code);
+  if (!parsed.ok) return parsed.error;
+  const d = parsed.diagram;
+  const diagram = { pd: d.pd.map((x) => [...x] as [number, number, number, number]), unknots: d.unknots };
+  // A PD code is its own input; a braid or DT code is kept as typed, in full, beside its PD code.
+  const source = input === 'pd' ? undefined : sourceOf(input, code);
+  const text = source ?? `PD ${pdToText(d.pd)}`;
+  const label = text.length > LABEL_MAX ? text.slice(0, LABEL_MAX - 1) + '…' : text;
+  const base = { diagram, ring, reduced, label, source };
+  return sweep > 0 ? { ...base, kind: 'cable-sweep', sweep: { maxStrands: sweep } } : base;
 }
 
 /** `sketchId` (from the Slate's "Start run"): the run is on that sketch as the server has it. */
 export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sketchId?: string }) {
-  const [input, setInput] = useState<Input>('pd');
+  const [input, setInput] = useState<CodeKind>('pd');
   const [code, setCode] = useState(initialPD ?? '');
   const [onSketch, setOnSketch] = useState(!!sketchId);
-  const [ring, setRing] = useState<(typeof rings)[number]>('Z');
+  const [ringChoice, setRingChoice] = useState<(typeof rings)[number]>('Z');
+  const [prime, setPrime] = useState('5');
+  const ring = ringChoice === 'Fp' ? `F${prime.trim()}` : ringChoice;
   const [reduced, setReduced] = useState<'unreduced' | 'reduced'>('unreduced');
-  const [kind, setKind] = useState<'kh' | 'sweep'>('kh');
   const [alsoS, setAlsoS] = useState(false);
+  const [sweep, setSweep] = useState<(typeof sweeps)[number]>('0');
   const [invalid, setInvalid] = useState<string | null>(null);
   const [local, setLocal] = useState<{ fraction: number; result?: KhResultJson; error?: string } | null>(null);
   const start = useStartRun();
@@ -78,13 +83,13 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
       .catch((err: Error) => setLocal({ fraction: 1, error: err.message }));
   };
   const submit = () => {
-    const body = request(input, code, ring, reduced === 'reduced', kind === 'sweep' ? 2 : 0);
+    const body = request(input, code, ring, reduced === 'reduced', Number(sweep));
     if (typeof body === 'string') return setInvalid(body);
-    body.computeS = alsoS && kind === 'kh';
+    body.computeS = alsoS && sweep === '0';
     setInvalid(null);
     const open = { onSuccess: (run: { id: string }) => router.push(runPagePath(run.id)) };
     if (!onSketch || !sketchId) return start.mutate(body, open);
-    const { diagram: _d, label: _l, ...rest } = body;
+    const { diagram: _d, label: _l, source: _s, ...rest } = body;
     start.mutate({ ...rest, sketchId }, {
       ...open,
       // Not synced to the server yet: run the code as pasted instead.
@@ -94,24 +99,31 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   return (
     <View style={styles.form}>
       {onSketch ? <Banner tone="info">On the sketch as it was last synced to the server; its PD code is below.</Banner> : null}
-      <Choice label="Input" options={['pd', 'braid'] as const} value={input} onChange={setInput} names={{ pd: 'PD code', braid: 'Braid word' }} />
+      <Choice label="Input" options={codeKinds.map((c) => c.kind)} value={input} onChange={setInput} names={inputNames} />
       <View style={styles.field}>
-        <Text style={styles.label}>{input === 'pd' ? 'PD code' : 'Braid word'}</Text>
+        <Text style={styles.label}>{inputNames[input]}</Text>
         <TextInput
           value={code}
           onChangeText={setCode}
           multiline
-          aria-label={input === 'pd' ? 'PD code' : 'Braid word'}
-          placeholder={input === 'pd' ? '[[4,2,5,1],[2,6,3,5],[6,4,1,3]]' : '1 1 1'}
+          aria-label={inputNames[input]}
+          placeholder={codeKinds.find((c) => c.kind === input)!.example}
           placeholderTextColor={colors.inkFaint}
           style={styles.code}
         />
         {invalid ? <Text role="alert" style={styles.error}>{invalid}</Text> : null}
       </View>
-      <Choice label="Ring" options={rings} value={ring} onChange={setRing} />
+      <Choice label="Ring" options={rings} value={ringChoice} onChange={setRingChoice} names={{ Z: 'Z', Q: 'Q', F2: 'F2', F3: 'F3', Fp: 'F_p, any prime' }} />
+      {ringChoice === 'Fp' ? (
+        <View style={styles.field}>
+          <Text style={styles.label}>Prime p</Text>
+          <TextInput value={prime} onChangeText={setPrime} inputMode="numeric" aria-label="Prime p" style={[styles.code, styles.prime]} />
+        </View>
+      ) : null}
       <Choice label="Homology" options={['unreduced', 'reduced'] as const} value={reduced} onChange={setReduced} names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} />
-      <Choice label="Computation" options={['kh', 'sweep'] as const} value={kind} onChange={setKind} names={{ kh: 'Khovanov homology', sweep: 'Cable sweep, r+ + r- ≤ 2' }} />
-      {kind === 'kh' ? (
+      <Choice label="Computation" options={sweeps} value={sweep} onChange={setSweep}
+        names={{ 0: 'Khovanov homology', 2: 'Cable sweep, r+ + r- ≤ 2', 3: 'Cable sweep, r+ + r- ≤ 3', 4: 'Cable sweep, r+ + r- ≤ 4' }} />
+      {sweep === '0' ? (
         // The server refuses it for a link, saying s is defined for knots here.
         <Pressable role="checkbox" aria-checked={alsoS} aria-label="Also compute s" onPress={() => setAlsoS(!alsoS)} style={[styles.choice, styles.check, alsoS && styles.chosen]}>
           <Text style={[styles.choiceText, alsoS && styles.chosenText]}>{`${alsoS ? '☑' : '☐'} Also compute s (Rasmussen invariant, knots only)`}</Text>
@@ -119,7 +131,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
       ) : null}
       {start.error && !(onSketch && isApiError(start.error, 'not_found')) ? <Banner tone="error">{start.error.message}</Banner> : null}
       <Button label="Start run" busy={start.isPending} busyLabel="Starting…" onPress={submit} />
-      {kind === 'kh' ? (
+      {sweep === '0' ? (
         <Button variant="secondary" label={`Compute on this device (up to ${LOCAL_MAX_CROSSINGS} crossings)`} busy={!!local && !local.result && !local.error} busyLabel="Computing on this device…" onPress={computeHere} />
       ) : null}
       {local?.error ? <Banner tone="error">{local.error}</Banner> : null}
@@ -143,6 +155,7 @@ const styles = StyleSheet.create({
   chosen: { backgroundColor: colors.accent, borderColor: colors.accent },
   choiceText: { ...type.small, color: colors.ink },
   chosenText: { color: colors.onAccent, fontFamily: fonts.medium },
+  prime: { minHeight: 0, width: 120 },
   code: { fontFamily: fonts.mono, fontSize: 14, minHeight: 72, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, padding: space.md, backgroundColor: colors.surface, color: colors.ink },
   error: { ...type.small, color: colors.danger },
 });

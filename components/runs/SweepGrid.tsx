@@ -1,7 +1,9 @@
 // A cable sweep's cells, each its own small Khovanov table: for a knot r+ across and r- down,
-// for a link one cell per combination of (r+, r-) per component.
+// for a link one cell per combination of (r+, r-) per component. Each cell opens as its own run
+// page (Poincare polynomial, Euler check, exports); a table wider than its card scrolls in it.
 import { StyleSheet, Text, View } from 'react-native';
-import type { RunDetail } from '@/shared/api/runs';
+import { Link } from 'expo-router';
+import { runPagePath, type RunDetail } from '@/shared/api/runs';
 import { Section } from '@/components/ui/Section';
 import { colors, radius, space, type } from '@/constants/theme';
 import { KhTable } from './KhTable';
@@ -16,7 +18,7 @@ function CellCard({ c }: { c: Cell }) {
   const name = `(${pairs(c)})`;
   return (
     <View style={styles.cell} testID={`cable-${c.cable!.flat().join('-')}`}>
-      <Text style={styles.title}>{`${name} · ${c.crossings} crossings`}</Text>
+      <Link href={runPagePath(c.id)} style={styles.title} aria-label={`Open the ${name} cable`}>{`${name} · ${c.crossings} crossings ›`}</Link>
       {c.result ? (
         <KhTable groups={c.result.groups} ring={c.result.ring} compact label={`Khovanov homology of the ${name} cable`} />
       ) : (
@@ -57,7 +59,7 @@ export function SweepGrid({ cells }: { cells: Cell[] }) {
 const styles = StyleSheet.create({
   grid: { gap: space.md },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
-  cell: { gap: space.xs, padding: space.sm, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface, maxWidth: '100%' },
-  title: { ...type.label, color: colors.ink },
+  cell: { gap: space.xs, padding: space.sm, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface, maxWidth: '100%', minWidth: 0, flexShrink: 1 },
+  title: { ...type.label, color: colors.accent },
   muted: { ...type.small, color: colors.inkMuted },
 });

@@ -8,11 +8,12 @@ import { colors } from '@/constants/theme';
 import { TabStack } from './TabStack';
 import { useIsWide } from './useIsWide';
 
-export function SplitPane({ list }: { list: React.ReactNode }) {
+/** `listHidden`: a detail that needs the whole width (a run's focus view) hides the list pane. */
+export function SplitPane({ list, listHidden = false }: { list: React.ReactNode; listHidden?: boolean }) {
   const wide = useIsWide();
   return (
     <View style={styles.row}>
-      {wide ? <View style={styles.list}>{list}</View> : null}
+      {wide && !listHidden ? <View style={styles.list}>{list}</View> : null}
       <View style={styles.detail}>
         <TabStack />
       </View>

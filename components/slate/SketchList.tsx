@@ -8,7 +8,7 @@ import type { LocalGroup, LocalSketch } from '@/lib/store/types';
 import { summaryOf } from '@/lib/slate/summary';
 import { DiagramPicture } from '@/components/feed/DiagramPicture';
 import { when } from '@/lib/when';
-import { TeX } from '@/components/runs/Math';
+import { TeX } from '@/components/ui/Math';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { EmptyState } from '@/components/ui/EmptyState';

@@ -22,7 +22,7 @@ import { useSlateAutosave } from '@/hooks/useSlateAutosave';
 import { useSlateShortcuts } from '@/hooks/useSlateShortcuts';
 import { useKnownGroups } from '@/hooks/queries/useLocalSketches';
 import { useShortcutRegistry } from '@/components/shell/shortcuts';
-import { saveText } from '@/components/runs/save';
+import { saveText } from '@/components/ui/save';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { Readout } from '@/components/readout/Readout';
 import { ReadoutActions, type ExportKind } from '@/components/readout/ReadoutActions';

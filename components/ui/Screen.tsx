@@ -2,8 +2,8 @@ import { ScrollView, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { COLUMN_MAX, colors, space } from '@/constants/theme';
 
-/** A scrolling page on paper with one readable column; `wide` lets lists use more width. */
-export function Screen({ children, wide = false }: { children: React.ReactNode; wide?: boolean }) {
+/** A scrolling page on paper with one readable column; `wide` lets lists use more width, 'full' all of it. */
+export function Screen({ children, wide = false }: { children: React.ReactNode; wide?: boolean | 'full' }) {
   const insets = useSafeAreaInsets();
   return (
     <ScrollView
@@ -11,7 +11,7 @@ export function Screen({ children, wide = false }: { children: React.ReactNode; 
       contentContainerStyle={[styles.content, { paddingTop: insets.top + space.xl }]}
       keyboardShouldPersistTaps="handled"
     >
-      <View style={[styles.column, { maxWidth: wide ? 880 : COLUMN_MAX }]}>{children}</View>
+      <View style={[styles.column, { maxWidth: wide === 'full' ? undefined : wide ? 880 : COLUMN_MAX }]}>{children}</View>
     </ScrollView>
   );
 }

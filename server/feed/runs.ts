@@ -1,9 +1,10 @@
 // Run results for the feed, read from the Runs area's table (server/runs) by plain SQL, so the
 // feed works before that table exists (no results) and without importing that area. Columns
 // used: runs.id, sketchId, status ('done' = a result), finishedAt, kind, parentRunId (a
-// sweep's cells are skipped), ring, reduced, result (JSON with poincareText, and s when computed).
+// sweep's cells are skipped), ring, reduced, result (JSON with the Poincare polynomial's terms `poincare`, and s when computed).
 import type { DataSource, EntityManager } from 'typeorm';
 import type { RunSummary } from '@/shared/api/feed';
+import { poincareFormat } from '@/shared/khovanov/format';
 
 type Db = DataSource | EntityManager;
 
@@ -29,14 +30,14 @@ export async function latestRuns(db: Db, sketchIds: string[]): Promise<Map<strin
   if (sketchIds.length === 0 || !(await runsTable(db))) return out;
   const rows: { id: string; sketchId: string; kind: string; ring: string; reduced: number; finishedAt: string; poincare: string | null; s: number | null }[] = await db.query(
     `SELECT r."id" AS id, r."sketchId" AS sketchId, r."kind" AS kind, r."ring" AS ring, r."reduced" AS reduced, r."finishedAt" AS finishedAt,
-            json_extract(r."result", '$.poincareText') AS poincare, json_extract(r."result", '$.s.Q') AS s
+            json_extract(r."result", '$.poincare') AS poincare, json_extract(r."result", '$.s.Q') AS s
        FROM "runs" r WHERE ${DONE} AND r."sketchId" IN (${marks(sketchIds.length)}) ORDER BY r."finishedAt" DESC`,
     sketchIds,
   );
   for (const r of rows) {
     // Not the run's label: it is the sketch's title, which the feed shows already.
     const what = `${r.kind === 'cable-sweep' ? 'Cable sweep' : 'Kh'} over ${r.ring}${r.reduced ? ', reduced' : ''}`;
-    const summary = r.poincare ? `${what}: ${r.poincare}` : what;
+    const summary = r.poincare ? `${what}: ${poincareFormat(JSON.parse(r.poincare) as [number, number, number][], 'unicode')}` : what;
     if (!out.has(r.sketchId)) out.set(r.sketchId, { id: r.id, kind: r.kind, finishedAt: r.finishedAt, summary });
     // Newest first: the first run that computed s gives it.
     const latest = out.get(r.sketchId)!;

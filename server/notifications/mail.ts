@@ -1,6 +1,7 @@
 // The e-mail twin of each notification kind: a subject and a short text with a link back.
 import katex from 'katex';
 import type { NotificationKind, NotificationPayload } from '@/shared/api/notifications';
+import { runPagePath } from '@/shared/api/runs';
 import { commentMarkdown, commentPlainText } from '@/shared/text/comment-markdown';
 import type { OutgoingMail } from '../mail/mailer';
 
@@ -20,8 +21,8 @@ const texts: Texts = {
     lines: [`${p.author} wrote:`, '', { markdown: p.excerpt }, '', `Open the sketch: ${base}/feed/${p.groupId}/${p.sketchId}`],
   }),
   run_finished: (p, base) => ({
-    subject: `Run ${p.status} on "${p.sketchTitle || 'Untitled sketch'}"`,
-    lines: [`Your run on "${p.sketchTitle || 'Untitled sketch'}" ${p.status}.`, '', p.summary, '', `Open the result: ${base}/runs/${p.runId}`],
+    subject: `Run ${p.status}: "${p.sketchTitle || 'Untitled sketch'}"${p.what ? `, ${p.what}` : ''}`,
+    lines: [`Your run on "${p.sketchTitle || 'Untitled sketch'}" ${p.status}.`, '', ...(p.details ?? [p.summary]), '', `Open the result: ${base}${runPagePath(p.runId)}`],
   }),
   invitation_accepted: (p, base) => ({
     subject: `${p.who} joined ${p.groupName}`,

@@ -3,6 +3,8 @@
 // of a top-level run is notified (in the app, and by e-mail with a link to the result page
 // unless they turned run e-mails off: server/notifications).
 import { isFinished, type KhResultJson, type RunStatus } from '@/shared/api/runs';
+import { groupText, poincareFormat } from '@/shared/khovanov/format';
+import { pdToText } from '@/shared/text/codes';
 import type { Run } from '../db/entities';
 import type { Deps } from '../deps';
 import { notify } from '../notifications/use-cases';
@@ -66,18 +68,41 @@ export async function refreshSweep(deps: Deps, sweepId: string): Promise<void> {
   }
 }
 
-/** What the notification says about the outcome, in one line. */
+const cut = (s: string, n: number) => (s.length > n ? s.slice(0, n - 1) + '…' : s);
+
+const whatOf = (run: Run) => `${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${run.ring}${run.reduced ? ', reduced' : ''}`;
+
+/** The app's one line about the outcome: the Poincare polynomial with real superscripts, kept short (the page has it all). */
 function summaryOf(run: Run): string {
-  const what = `${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${run.ring}${run.reduced ? ' (reduced)' : ''}`;
-  if (run.status !== 'done') return `${what}: ${run.error ?? run.status}`.slice(0, 500);
-  const kh = run.result ? `, Poincare polynomial ${run.result.poincareText}, ${run.result.thin ? 'thin' : 'thick'}` : '';
-  return `${what}${kh}${run.reusedFrom ? ' (a stored result of the same diagram, reused)' : ''}`.slice(0, 500);
+  const what = whatOf(run);
+  if (run.status !== 'done') return cut(`${what}: ${run.error ?? run.status}`, 300);
+  const kh = run.result ? `: Poincaré polynomial ${cut(poincareFormat(run.result.poincare, 'unicode'), 160)}, ${run.result.thin ? 'thin' : 'thick'}` : '';
+  return `${what}${kh}${run.reusedFrom ? ' (a stored result of the same diagram, reused)' : ''}`;
+}
+
+/** Over Z, the torsion of the table, group by group: "Z/2 at (3, 7)". */
+function torsionOf(result: KhResultJson): string {
+  const groups = result.groups.filter((g) => g.torsion.length > 0);
+  if (groups.length === 0) return 'Torsion: none';
+  const shown = groups.slice(0, 40).map((g) => `${groupText({ ...g, free: 0 }, result.ring)} at (${g.i}, ${g.j})`);
+  return `Torsion: ${shown.join('; ')}${groups.length > shown.length ? `; and ${groups.length - shown.length} more groups` : ''}`;
+}
+
+/** The mail's lines: what ran on what input, in full, then the result's polynomial and torsion. */
+function detailsOf(run: Run): string[] {
+  const input = [`${whatOf(run)}${run.reduced ? ` at component ${(run.result?.component ?? 0) + 1}` : ''}, ${run.crossings} crossings.`];
+  if (run.source) input.push(cut(`Given as: ${run.source}`, 4000));
+  input.push(cut(`PD code: ${pdToText(run.diagram.pd)}`, 4000));
+  if (run.status !== 'done') return [...input, '', run.error ?? run.status];
+  if (!run.result) return [...input, '', summaryOf(run)];
+  const r = run.result;
+  return [...input, '', cut(`Poincaré polynomial: ${poincareFormat(r.poincare, 'text')}`, 4000), ...(r.ring === 'Z' ? [cut(torsionOf(r), 4000)] : []), `${r.width} diagonal${r.width === 1 ? '' : 's'}: ${r.thin ? 'thin' : 'thick'}`];
 }
 
 /** Sent after the row is written and never holds up the run; a failure is logged. */
 function notifyStarter(deps: Deps, run: Run): void {
   const status = run.status === 'done' ? 'succeeded' : run.status === 'cancelled' ? 'cancelled' : 'failed';
-  notify(deps, run.startedBy, 'run_finished', { runId: run.id, sketchId: run.sketchId ?? '', sketchTitle: run.label, status, summary: summaryOf(run) }).catch(
+  notify(deps, run.startedBy, 'run_finished', { runId: run.id, sketchId: run.sketchId ?? '', sketchTitle: run.label, status, summary: summaryOf(run), what: whatOf(run), details: detailsOf(run) }).catch(
     (err: unknown) => deps.log.error({ err, runId: run.id }, 'run notification failed'),
   );
 }

@@ -5,6 +5,7 @@ import type { User } from '@/shared/api/auth';
 import type { Role } from '@/shared/api/groups';
 import { isFinished, type CableCell, type RunDetail, type RunDiagram, type RunSummary, type StartRunParsed } from '@/shared/api/runs';
 import { canonicalPD } from '@/shared/knot/canonical';
+import { pdToText } from '@/shared/text/codes';
 import { componentCount, diagram, type Diagram } from '@/shared/knot/diagram';
 import { canSee } from '@/sync/scope';
 import { Run } from '../db/entities';
@@ -165,9 +166,11 @@ async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promis
   const planned = [];
   for (const [k, cell] of cells.entries()) {
     const c = cables[k];
-    const label = `${n.label} (${cell.map(([p, m]) => `${p},${m}`).join(' | ')})`;
+    const name = `(${cell.map(([p, m]) => `${p},${m}`).join(' | ')})`;
     const diagram = { pd: c.pd.map((x) => [...x] as [number, number, number, number]), unknots: c.unknots, framings: [...c.framings] };
-    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label, diagram, parentRunId: sweep.id, cable: cell }));
+    // A cell's input is its cable, so its source names the cable and what it was taken of.
+    const source = `${name} cable of ${n.source ?? `PD ${pdToText(n.diagram.pd)}`}`;
+    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label: `${n.label} ${name}`, source, diagram, parentRunId: sweep.id, cable: cell }));
   }
   for (const { run } of planned) await insertRun(deps.db, run);
   for (const { settle } of planned) await settle();

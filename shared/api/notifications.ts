@@ -20,7 +20,12 @@ export const notificationPayloads = {
     sketchId: z.string(),
     sketchTitle: z.string(),
     status: z.enum(['succeeded', 'failed', 'cancelled']),
+    /** One short line for the app's list. */
     summary: z.string().max(500),
+    /** What ran, for the mail's subject: "Khovanov homology over Z, reduced" (older notifications have none). */
+    what: z.string().max(200).optional(),
+    /** The mail's body lines: the full input, the Poincare polynomial, the torsion. */
+    details: z.array(z.string().max(4000)).max(10).optional(),
   }),
   invitation_accepted: z.object({ groupId: z.string(), groupName: z.string(), who: z.string(), role: z.string() }),
 } as const;

@@ -193,7 +193,7 @@ describe('notifications', () => {
     const mailBefore = server.mailbox!.list().length;
     await notify(server.deps, c.as.viewer.id, 'run_finished', { runId: 'r1', sketchId: sketch, sketchTitle: 'Whitehead link?', status: 'succeeded', summary: 'Kh over Z, thin' });
     expect(NotificationList.parse((await notes('viewer')).body).items[0]).toMatchObject({ kind: 'run_finished', payload: { runId: 'r1', status: 'succeeded' } });
-    expect(server.mailbox!.list().slice(mailBefore).map((m) => m.subject)).toEqual(['Run succeeded on "Whitehead link?"']);
+    expect(server.mailbox!.list().slice(mailBefore).map((m) => m.subject)).toEqual(['Run succeeded: "Whitehead link?"']);
     // A malformed payload is a programming error, refused before anything is stored.
     await expect(notify(server.deps, c.as.viewer.id, 'run_finished', { runId: 'r2' } as never)).rejects.toThrow();
   });

@@ -3,6 +3,7 @@
 // Rows are written as server/runs stores them, with a result computed by the Khovanov engine.
 import { randomUUID } from 'node:crypto';
 import { khovanov } from '@/shared/khovanov';
+import { poincareFormat } from '@/shared/khovanov/format';
 import { FeedPage, GroupSketch } from '@/shared/api/feed';
 import type { RunningServer } from '@/server/server';
 import { api, auth, castServer, sketchOf, type Cast } from './feed-fixtures';
@@ -38,7 +39,7 @@ test('latest finished run, "has results", and same Khovanov result as a link', a
   const feed = FeedPage.parse((await api(server).get(`/api/groups/${c.group}/feed`).set(auth(c.as.viewer))).body);
   const item = feed.items.find((i) => i.id === withRun)!;
   expect(item.latestRun).toMatchObject({ kind: 'khovanov', finishedAt: '2026-12-01T11:00:00.000Z' });
-  expect(item.latestRun!.summary).toContain(kh.poincareText);
+  expect(item.latestRun!.summary).toBe(`Kh over Z: ${poincareFormat(kh.poincare, 'unicode')}`);
   expect(feed.items.find((i) => i.id === failed)!.latestRun).toBeNull();
 
   const results = FeedPage.parse((await api(server).get(`/api/groups/${c.group}/feed?hasResults=true`).set(auth(c.as.viewer))).body);

@@ -12,6 +12,7 @@ import { createRunPool } from '@/server/runs/pool';
 import { defaultRunLimits, type RunLimits } from '@/server/runs/limits';
 import type { RunningServer } from '@/server/server';
 import { bearer, groupWith, signUp, testServer } from './helpers';
+import { pdToText } from '@/shared/text/codes';
 import { ended, mailFor, read, slow, start, torus, trefoil, waitFor } from './runs-fixtures';
 
 // The positive trefoil over Z: Z at (0,1), (0,3), (2,5), (3,9) and Z/2 at (3,7)
@@ -52,19 +53,25 @@ describe('a run from start to end', () => {
   it('is queued, computed, stored, and its starter is mailed a link to the result', async () => {
     server = await testServer({ config: { runs: limits({}) } });
     const { token, user } = await signUp(server, 'Runner Rae');
-    const res = await start(server, token, { diagram: { pd: trefoil() }, ring: 'Z', label: 'braid 1 1 1' });
+    const res = await start(server, token, { diagram: { pd: trefoil() }, ring: 'Z', label: 'braid 1 1 1', source: 'braid 1 1 1' });
     expect(res.status).toBe(201);
     expect(['queued', 'running', 'done']).toContain(res.body.status);
     const run = await waitFor(server, token, res.body.id, ended);
-    expect(run).toMatchObject({ status: 'done', kind: 'khovanov', ring: 'Z', reduced: false, crossings: 3, label: 'braid 1 1 1', error: null, reusedFrom: null });
+    expect(run).toMatchObject({ status: 'done', kind: 'khovanov', ring: 'Z', reduced: false, crossings: 3, label: 'braid 1 1 1', source: 'braid 1 1 1', error: null, reusedFrom: null });
     expect(run.progress.fraction).toBe(1);
     expect(run.result!.groups).toEqual(TREFOIL_Z);
     expect(run.result!.euler!.ok).toBe(true);
     expect(run.startedAt! <= run.finishedAt!).toBe(true);
     expect(run.startedBy).toEqual({ id: user.id, displayName: 'Runner Rae' });
 
+    // The mail names the diagram and ring, gives the full input and, over Z, the torsion:
+    // Z/2 at (3, 7) for T(2,3), the positive trefoil (Bar-Natan 2002, math/0201043).
     const mail = await mailFor(server, (m) => m.to.includes(user.email));
-    expect(mail.subject).toMatch(/succeeded/);
+    expect(mail.subject).toBe('Run succeeded: "braid 1 1 1", Khovanov homology over Z');
+    expect(mail.text).toContain('Given as: braid 1 1 1');
+    expect(mail.text).toContain(`PD code: ${pdToText(trefoil())}`);
+    expect(mail.text).toContain('Torsion: Z/2 at (3, 7)');
+    expect(mail.text).toContain(`Poincaré polynomial: ${run.result!.poincareText}`);
     expect(mail.text).toContain(`${server.deps.config.publicUrl}/runs/${run.id}`);
 
     const mine = RunList.parse((await request(server.url).get('/api/runs?mine=1').set(bearer(token))).body);

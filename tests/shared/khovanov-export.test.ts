@@ -7,7 +7,7 @@ import { khovanov } from '@/shared/khovanov';
 import { gradingConvention, readJsonExport, toCsv, toJson, toLatexTable, type ExportRecord } from '@/shared/khovanov/export';
 import { grid, groupText, poincareFormat } from '@/shared/khovanov/format';
 import { fromBraid } from '@/shared/knot/braid';
-import { braidToText } from '@/shared/text/codes';
+import { braidToText, pdToText } from '@/shared/text/codes';
 import { programVersion } from '@/shared/version';
 import { parseSource, sourceOf } from '@/lib/slate/codes';
 import { arbBraid } from './arbitraries';
@@ -63,7 +63,7 @@ describe('exports', () => {
   it('LaTeX: says it needs amssymb, carries the input, one row per j and one column per i', () => {
     const tex = toLatexTable(r);
     expect(tex).toContain('% Needs \\usepackage{amssymb}');
-    expect(tex).toContain(`% PD code: ${JSON.stringify(trefoilPD)}`);
+    expect(tex).toContain(`% PD code: ${pdToText(trefoilPD)}`);
     expect(tex).toContain('% Given as: braid 1 1 1');
     expect(tex).toContain(`% Grading: ${gradingConvention}`);
     expect(tex).toContain(`% Computed 2026-12-02T10:00:00.000Z by Overstrand ${programVersion}, run run-1`);
@@ -79,7 +79,7 @@ describe('exports', () => {
     const csv = toCsv(record([1, 1, 1], reduced));
     const lines = csv.trim().split('\n');
     const comments = lines.filter((l) => l.startsWith('#'));
-    expect(comments.join('\n')).toContain(`PD code: ${JSON.stringify(trefoilPD)}`);
+    expect(comments.join('\n')).toContain(`PD code: ${pdToText(trefoilPD)}`);
     expect(comments[0]).toContain('over F3, reduced at component 1');
     const [header, ...rows] = lines.filter((l) => !l.startsWith('#'));
     expect(header).toBe('ring,reduced,reduced_at,i,j,free,torsion');
@@ -100,6 +100,7 @@ describe('exports', () => {
         const back = readJsonExport(toJson(e));
         expect(back).toMatchObject({ program: 'Overstrand', version: programVersion, runId: 'run-1', label: e.label, date: e.date, ring: 'Z', reduced: false, reducedAt: null, convention: gradingConvention });
         expect(back.input).toEqual({ pd: e.diagram.pd, unknots: e.diagram.unknots, source: e.source });
+        expect(JSON.parse(pdToText(e.diagram.pd))).toEqual(e.diagram.pd);
         // The source is the input too: read again, it gives the same PD code.
         const again = parseSource(back.input.source!);
         expect(again.ok && again.diagram.pd).toEqual(back.input.pd);

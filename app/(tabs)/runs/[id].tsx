@@ -1,6 +1,10 @@
 // One run: progress while it computes (polled), then its result. Linked from the finished-run e-mail.
+// Wide: a focus view hides the list pane and gives the page the whole width (big tables).
+import { useEffect } from 'react';
 import { router, useLocalSearchParams } from 'expo-router';
-import { ActivityIndicator, StyleSheet, Text } from 'react-native';
+import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
+import { Button } from '@/components/ui/Button';
+import { useRunFocus } from '@/components/runs/focus-store';
 import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { Banner } from '@/components/ui/Banner';
@@ -19,9 +23,18 @@ export default function RunPage() {
   // Wide: the runs stay in the list pane on the left, so there is nothing to go back to.
   const wide = useIsWide();
   const back = () => (router.canGoBack() ? router.back() : router.replace('/runs'));
+  const { focused, setFocused } = useRunFocus();
+  // Leaving the run (or the wide layout) brings the list pane back.
+  useEffect(() => () => setFocused(false), [setFocused]);
+  const focus = wide && focused;
   return (
-    <Screen wide>
-      <PageTitle kicker="Run" title={run.data ? titleOf(run.data) : 'Run'} onBack={wide ? undefined : back} backLabel="Runs" />
+    <Screen wide={focus ? 'full' : true}>
+      <PageTitle kicker="Run" title={run.data ? titleOf(run.data) : 'Run'} onBack={wide && !focus ? undefined : back} backLabel="Runs" />
+      {wide && run.data?.result ? (
+        <View style={styles.row}>
+          <Button variant="secondary" label={focus ? 'Show the runs list' : 'Focus: use the whole width'} onPress={() => setFocused(!focus)} />
+        </View>
+      ) : null}
       {run.data && !run.data.sketchId ? <Text style={styles.code} selectable>{run.data.label}</Text> : null}
       {run.isError ? <Banner tone="error">{run.error.message}</Banner> : null}
       {run.isPending ? <ActivityIndicator color={colors.accent} /> : null}
@@ -31,5 +44,6 @@ export default function RunPage() {
 }
 
 const styles = StyleSheet.create({
+  row: { flexDirection: 'row' },
   code: { ...type.code, color: colors.inkMuted },
 });
