@@ -12,12 +12,11 @@ type Answer = { status: number; body?: unknown };
 export function mockFetch(answer: (call: Call) => Answer | Promise<Answer>) {
   const calls: Call[] = [];
   global.fetch = jest.fn(async (url: string | URL | Request, init?: RequestInit) => {
-    const headers = (init?.headers ?? {}) as Record<string, string>;
     const call: Call = {
       method: init?.method ?? 'GET',
       path: String(url),
       body: init?.body ? JSON.parse(String(init.body)) : undefined,
-      auth: headers.Authorization ?? null,
+      auth: new Headers(init?.headers).get('Authorization'),
     };
     calls.push(call);
     const { status, body } = await answer(call);
