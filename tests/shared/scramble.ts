@@ -1,7 +1,9 @@
 // The same diagram written another way: labels renamed by a random bijection onto other integers,
-// crossings listed in a random order (Fisher-Yates shuffles; common practice).
+// crossings listed in a random order (Fisher-Yates shuffles; common practice). A component that
+// passes only over is oriented by its labels increasing along it (docs/conventions.md), so its
+// new labels keep that cyclic order, starting at a random place.
 import { Rng } from '@/shared/knot/moves/random';
-import { mapLabels, PDCode } from '@/shared/knot/pd';
+import { mapLabels, orient, PDCode } from '@/shared/knot/pd';
 
 function shuffle<T>(items: T[], rng: Rng): T[] {
   for (let k = items.length - 1; k > 0; k--) {
@@ -12,8 +14,17 @@ function shuffle<T>(items: T[], rng: Rng): T[] {
 }
 
 export function scramble(pd: PDCode, rng: Rng): { pd: PDCode; rename: Map<number, number> } {
-  const labels = [...new Set(pd.flat())];
-  const targets = shuffle(labels.map((_, k) => 5 * k - 40), rng);
-  const rename = new Map(labels.map((l, k) => [l, targets[k]]));
+  const under = new Set(pd.flatMap((x) => [x[0], x[2]]));
+  const targets = shuffle(Array.from({ length: 2 * pd.length }, (_, k) => 5 * k - 40), rng);
+  const rename = new Map<number, number>();
+  for (const walk of orient(pd).components) {
+    const mine = targets.splice(0, walk.length);
+    if (walk.every((l) => !under.has(l))) {
+      mine.sort((p, q) => p - q);
+      const turn = Math.floor(rng() * mine.length);
+      mine.push(...mine.splice(0, turn));
+    }
+    walk.forEach((l, k) => rename.set(l, mine[k]));
+  }
   return { pd: shuffle(pd.map((x) => mapLabels(x, (l) => rename.get(l)!)), rng), rename };
 }
