@@ -86,12 +86,23 @@ function flippedSet(found: readonly FoundCrossing[], ids: readonly string[], fli
 
 const unit = (p: Point): Point => scale(p, 1 / (Math.hypot(p.x, p.y) || 1));
 
-export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): Analysis {
+/** Which passage of each found crossing is under: true = its first passage. */
+export type UnderRule = (found: readonly FoundCrossing[], closed: readonly SketchComponent[]) => boolean[];
+
+export interface Reading {
+  readonly analysis: Analysis;
+  /** What toPD read, crossing by crossing (paths index `closed`). */
+  readonly overUnder: readonly OverUnder[];
+  readonly closed: readonly SketchComponent[];
+}
+
+/** The analysis of drawn components whose over/under is decided by `rule`. */
+export function readDrawing(components: readonly SketchComponent[], rule: UnderRule, options: Partial<DrawingOptions> = {}): Reading {
   const o = withDefaults(options);
-  const closed = sketch.components.filter((c) => c.closed && c.points.length >= 3);
+  const closed = components.filter((c) => c.closed && c.points.length >= 3);
   const ids = closed.map((c) => c.id);
   const { crossings: found, markers } = findCrossings(closed, o);
-  const flipped = flippedSet(found, ids, sketch.flips, o.flipRadius);
+  const firstUnder = rule(found, closed);
 
   const travel = (p: Passage): StrandPass => ({
     path: p.path,
@@ -100,9 +111,7 @@ export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): 
   });
   const overUnder: OverUnder[] = found.map((c, i) => {
     const [first, second] = c.passages;
-    const laterFirst = closed[first.path].seq > closed[second.path].seq;
-    const firstUnder = laterFirst !== flipped.has(i);
-    return firstUnder ? { over: travel(second), under: travel(first) } : { over: travel(first), under: travel(second) };
+    return firstUnder[i] ? { over: travel(second), under: travel(first) } : { over: travel(first), under: travel(second) };
   });
   const crossings: DrawnCrossing[] = found.map((c, i) => ({
     at: c.at,
@@ -113,23 +122,35 @@ export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): 
     overDirection: unit(overUnder[i].over.direction),
     underDirection: unit(overUnder[i].under.direction),
     sign: isPositive(overUnder[i]) ? 1 : -1,
-    flipped: flipped.has(i),
+    flipped: false,
   }));
-  const paths: DrawnPath[] = sketch.components.map((c) => ({
+  const paths: DrawnPath[] = components.map((c) => ({
     id: c.id,
     points: c.points,
     closed: c.closed,
     reversed: c.reversed,
     length: length(c.points, c.closed),
   }));
-  return {
+  const analysis: Analysis = {
     paths,
     crossings,
     gaps: gapsAround(crossings, new Map(paths.map((p) => [p.id, p.length])), o.gapRadius),
     markers,
-    open: sketch.components.filter((c) => !c.closed).map((c) => c.id),
+    open: components.filter((c) => !c.closed).map((c) => c.id),
     diagram: markers.length === 0 && closed.length > 0 ? diagramOf(toPD(overUnder, closed.length, closed.map((c) => c.reversed)), closed, overUnder) : null,
   };
+  return { analysis, overUnder, closed };
+}
+
+export function analyse(sketch: Sketch, options: Partial<DrawingOptions> = {}): Analysis {
+  const o = withDefaults(options);
+  let flipped = new Set<number>();
+  const byRank: UnderRule = (found, closed) => {
+    flipped = flippedSet(found, closed.map((c) => c.id), sketch.flips, o.flipRadius);
+    return found.map((c, i) => closed[c.passages[0].path].seq > closed[c.passages[1].path].seq !== flipped.has(i));
+  };
+  const { analysis } = readDrawing(sketch.components, byRank, o);
+  return { ...analysis, crossings: analysis.crossings.map((c, i) => (flipped.has(i) ? { ...c, flipped: true } : c)) };
 }
 
 function diagramOf(pd: DrawnDiagram['diagram']['pd'], closed: readonly SketchComponent[], overUnder: readonly OverUnder[]): DrawnDiagram {

@@ -6,27 +6,8 @@
 
 import type { Passage, Path } from './crossings';
 import type { DrawingOptions } from './options';
-import { dist, lerp, Point } from './point';
-
-/** Cumulative arc length at each point of a closed path; the last entry is the total length. */
-function arcsOf(points: readonly Point[]): number[] {
-  const arcs = [0];
-  for (let i = 1; i <= points.length; i++) arcs.push(arcs[i - 1] + dist(points[i - 1], points[i % points.length]));
-  return arcs;
-}
-
-function pointAt(points: readonly Point[], arcs: readonly number[], s: number): Point {
-  const total = arcs[arcs.length - 1];
-  const t = ((s % total) + total) % total;
-  let [i, j] = [0, points.length - 1]; // the last i with arcs[i] <= t
-  while (i < j) {
-    const m = (i + j + 1) >> 1;
-    if (arcs[m] <= t) i = m;
-    else j = m - 1;
-  }
-  const len = arcs[i + 1] - arcs[i];
-  return lerp(points[i], points[(i + 1) % points.length], len === 0 ? 0 : (t - arcs[i]) / len);
-}
+import { dist, Point } from './point';
+import { arcsOf, pointAt } from './polyline';
 
 /**
  * Whether the crossing of these two passages is a retrace: every point of the first strand
@@ -34,7 +15,7 @@ function pointAt(points: readonly Point[], arcs: readonly number[], s: number): 
  * the point that has travelled as far from the crossing (in either direction).
  */
 export function isRetrace(paths: readonly Path[], passages: readonly [Passage, Passage], o: DrawingOptions): boolean {
-  const [a, b] = passages.map((p) => ({ points: paths[p.path].points, arcs: arcsOf(paths[p.path].points), arc: p.arc }));
+  const [a, b] = passages.map((p) => ({ points: paths[p.path].points, arcs: arcsOf(paths[p.path].points, true), arc: p.arc }));
   const near = (p: Point, s: number) => {
     for (let r = s - o.retraceWidth; r <= s + o.retraceWidth; r += o.spacing / 2) {
       if (dist(p, pointAt(b.points, b.arcs, b.arc + r)) < o.retraceWidth || dist(p, pointAt(b.points, b.arcs, b.arc - r)) < o.retraceWidth) return true;

@@ -3,6 +3,7 @@
 // smoothed and evenly resampled, in drawing order; orientation is the drawing direction unless
 // the component is reversed (a flag, so reversing never changes which passage was drawn later).
 
+import type { Band } from './bands';
 import { DrawingOptions, withDefaults } from './options';
 import { add, dist, Point, scale } from './point';
 import { closeStroke } from './close';
@@ -33,6 +34,8 @@ export interface Sketch {
   readonly components: readonly SketchComponent[];
   readonly flips: readonly Flip[];
   readonly nextSeq: number;
+  /** Bands on the drawing (bands.ts); absent in drawings saved before bands existed. */
+  readonly bands?: readonly Band[];
 }
 
 export const emptySketch: Sketch = { components: [], flips: [], nextSeq: 1 };
@@ -111,11 +114,12 @@ export const setFraming = (s: Sketch, id: string, framing: number | null): Sketc
   return replace(s, id, (c) => ({ ...c, framing }));
 };
 
-/** Removes a component and the flips of its crossings. */
+/** Removes a component, the flips of its crossings and the bands attached to it. */
 export const deleteComponent = (s: Sketch, id: string): Sketch => ({
   ...s,
   components: s.components.filter((c) => c.id !== id),
   flips: s.flips.filter((f) => f.a !== id && f.b !== id),
+  ...(s.bands ? { bands: s.bands.filter((b) => b.from !== id && b.to !== id) } : {}),
 });
 
 /** Translates a component; flips of its self-crossings travel with it. */

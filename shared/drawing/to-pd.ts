@@ -25,25 +25,30 @@ export interface OverUnder {
 /** Positive crossing: seen on screen, the over direction is turned clockwise from the under. */
 export const isPositive = (c: OverUnder): boolean => cross(c.under.direction, c.over.direction) > 0;
 
-/**
- * The PD code of the crossings (PD crossing i is crossings[i]) on `paths` closed paths; paths
- * listed in `reversed` run against increasing arc. Paths without crossings get no labels.
- */
-export function toPD(crossings: readonly OverUnder[], paths: number, reversed: readonly boolean[]): PDCode {
+interface Labelling {
+  /** in/out labels of each passage: key crossing*2 + (under ? 0 : 1) */
+  readonly incoming: Map<number, number>;
+  readonly outgoing: Map<number, number>;
+  /** Per path, its passages in order of travel with the label of the edge leaving each. */
+  readonly along: { arc: number; out: number }[][];
+}
+
+// Each path's edges numbered consecutively along its direction of travel.
+function labelling(crossings: readonly OverUnder[], paths: number, reversed: readonly boolean[]): Labelling {
   // Passages along each path in order of travel.
-  const along: { crossing: number; role: 'over' | 'under' }[][] = Array.from({ length: paths }, () => []);
+  const passes: { crossing: number; role: 'over' | 'under' }[][] = Array.from({ length: paths }, () => []);
   const arcs: number[][] = Array.from({ length: paths }, () => []);
   crossings.forEach((c, i) => {
     for (const role of ['over', 'under'] as const) {
-      along[c[role].path].push({ crossing: i, role });
+      passes[c[role].path].push({ crossing: i, role });
       arcs[c[role].path].push(c[role].arc);
     }
   });
-  // in/out labels of each passage: key crossing*2 + (under ? 0 : 1)
   const incoming = new Map<number, number>();
   const outgoing = new Map<number, number>();
+  const along: { arc: number; out: number }[][] = [];
   let next = 1;
-  along.forEach((list, k) => {
+  passes.forEach((list, k) => {
     const order = list.map((_, i) => i).sort((i, j) => (reversed[k] ? arcs[k][j] - arcs[k][i] : arcs[k][i] - arcs[k][j]));
     const m = order.length;
     const labels = order.map((_, j) => next + j);
@@ -56,8 +61,18 @@ export function toPD(crossings: readonly OverUnder[], paths: number, reversed: r
       outgoing.set(key, labels[j]);
       incoming.set(key, labels[(j + m - 1) % m]);
     });
+    along.push(order.map((i, j) => ({ arc: arcs[k][i], out: labels[j] })));
     next += m;
   });
+  return { incoming, outgoing, along };
+}
+
+/**
+ * The PD code of the crossings (PD crossing i is crossings[i]) on `paths` closed paths; paths
+ * listed in `reversed` run against increasing arc. Paths without crossings get no labels.
+ */
+export function toPD(crossings: readonly OverUnder[], paths: number, reversed: readonly boolean[]): PDCode {
+  const { incoming, outgoing } = labelling(crossings, paths, reversed);
   return crossings.map((c, i): Crossing => {
     const a = incoming.get(i * 2)!;
     const cOut = outgoing.get(i * 2)!;
@@ -65,4 +80,15 @@ export function toPD(crossings: readonly OverUnder[], paths: number, reversed: r
     const overOut = outgoing.get(i * 2 + 1)!;
     return isPositive(c) ? [a, overOut, cOut, overIn] : [a, overIn, cOut, overOut];
   });
+}
+
+/**
+ * The label toPD gives the edge of `path` through arc length `arc` (drawing order): the edge
+ * leaving the last passage before it in order of travel. null for a path without crossings.
+ */
+export function edgeAt(crossings: readonly OverUnder[], paths: number, reversed: readonly boolean[], path: number, arc: number): number | null {
+  const list = labelling(crossings, paths, reversed).along[path];
+  if (list.length === 0) return null;
+  const before = list.filter((p) => (reversed[path] ? p.arc > arc : p.arc < arc));
+  return (before.length ? before[before.length - 1] : list[list.length - 1]).out;
 }

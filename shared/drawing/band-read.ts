@@ -1,0 +1,248 @@
+// From a drawing with bands to what the band mathematics (shared/knot/bands) takes, and to
+// the drawing after the band moves. Both are surgery on the drawing (band-trace.ts):
+// - the finger drawing: each band's first strand is pushed by a finger move along the core
+//   until its tip lies next to the second strand (an isotopy: the same link). The finger's two
+//   sides are the band's sides: they cross strands where the core does, over or under as the
+//   band does, and each other once per half twist. Each band is then a short saddle between
+//   the finger's tip and the second strand; its two PD edge labels are read off with the PD
+//   code (a curl, kink.ts, gives an end its own edge where it has none).
+// - the after drawing: each band replaced by its two sides, joining the two strands.
+// Over/under of every crossing follows its sources: strands as in the drawing, band against
+// strand as the band is set, band against band the higher-numbered one under, a twist as its
+// handedness says (docs/conventions.md, Bands).
+
+import { orient, PDCode } from '@/shared/knot/pd';
+import { Analysis, analyse, readDrawing, Reading, UnderRule } from './analyse';
+import { bandsOf } from './bands';
+import { bandHalfWidth, BandShape, bandShape, corePoint, coreNormal, offsetAt, sidePoint } from './band-shape';
+import { Cut, cutHalf, Join, Source, trace, Traced } from './band-trace';
+import { withKink } from './kink';
+import { DrawingOptions, withDefaults } from './options';
+import { add, dist, lerp, Point, scale } from './point';
+import { arcsOf, tangentAt } from './polyline';
+import { Sketch, SketchComponent } from './sketch';
+import { edgeAt } from './to-pd';
+
+export interface Saddle {
+  readonly a: number;
+  readonly b: number;
+}
+
+export interface BandDrawings {
+  /** The finger-moved drawing and, read from it, the band presentation. */
+  readonly finger: Analysis;
+  readonly presentation: { readonly pd: PDCode; readonly unknots: number; readonly saddles: readonly Saddle[] };
+  /** The drawing after the band moves and its diagram. */
+  readonly after: Analysis;
+  readonly afterDiagram: { readonly pd: PDCode; readonly unknots: number; readonly components: number };
+}
+
+// Points strictly between p and q, about `spacing` apart.
+const between = (p: Point, q: Point, spacing: number): Point[] => {
+  const steps = Math.max(1, Math.round(dist(p, q) / spacing));
+  return Array.from({ length: steps - 1 }, (_, i) => lerp(p, q, (i + 1) / steps));
+};
+
+// One side of a band from core arc s0 to s1 (either way round), with its sources. Side -1 is
+// sampled half a step off, so the two sides never share a vertex where a twist crosses them.
+function side(b: BandShape, k: number, s: 1 | -1, s0: number, s1: number, spacing: number): Traced {
+  const steps = Math.max(2, Math.round(Math.abs(s1 - s0) / spacing));
+  const shift = (i: number) => (s < 0 && i > 0 && i < steps ? 0.5 : 0);
+  const arcs = Array.from({ length: steps + 1 }, (_, i) => s0 + ((s1 - s0) * (i + shift(i))) / steps);
+  return { points: arcs.map((a) => sidePoint(b, s, a)), sources: arcs.map((arc) => ({ kind: 'band', band: k, side: s, arc })) };
+}
+
+const concat = (...parts: Traced[]): Traced => ({ points: parts.flatMap((p) => p.points), sources: parts.flatMap((p) => p.sources) });
+const bridge = (p: Point, q: Point, source: Source, spacing: number): Traced => {
+  const points = between(p, q, spacing);
+  return { points, sources: points.map(() => source) };
+};
+
+// Travel-order neighbours of a band end: the points where its cut leaves the strand.
+function endPoints(c: SketchComponent, index: number): { in: Point; out: Point } {
+  const n = c.points.length;
+  const step = c.reversed ? -cutHalf : cutHalf;
+  return { in: c.points[(index - step + 2 * n) % n], out: c.points[(index + step + 2 * n) % n] };
+}
+
+// The finger of band k: from its first strand's incoming end out along one side, round the tip,
+// back along the other side to the outgoing end.
+function fingerOf(b: BandShape, k: number, closed: readonly SketchComponent[], spacing: number): Join {
+  const ends = endPoints(closed[b.from.path], b.from.index);
+  const s = b.inSide;
+  const out = side(b, k, s, b.d0, b.d1, spacing);
+  const back = side(b, k, -s as 1 | -1, b.d1, b.d0, spacing);
+  const c = corePoint(b, b.d1);
+  const n = coreNormal(b, b.d1);
+  const t = tangentAt(b.core, b.arcs, b.d1);
+  const e = offsetAt(b, s, b.d1);
+  const capSteps = Math.max(4, Math.round((Math.PI * bandHalfWidth) / spacing / 2) * 2);
+  const cap = Array.from({ length: capSteps - 1 }, (_, i) => {
+    const phi = (Math.PI * (i + 1)) / capSteps;
+    return add(c, add(scale(n, e * Math.cos(phi)), scale(t, bandHalfWidth * Math.sin(phi))));
+  });
+  const tip: Traced = { points: cap, sources: cap.map((_, i): Source => (2 * (i + 1) === capSteps ? { kind: 'tip', band: k } : { kind: 'band', band: k, side: s, arc: b.d1 })) };
+  const edge: Source = { kind: 'band', band: k, side: s, arc: b.d0 };
+  return {
+    from: `${k}A:in`,
+    to: `${k}A:out`,
+    piece: concat(bridge(ends.in, out.points[0], edge, spacing), out, tip, back, bridge(back.points[back.points.length - 1], ends.out, { ...edge, side: -s as 1 | -1 }, spacing)),
+  };
+}
+
+// Band k replaced by its two sides: incoming end of the first strand to the outgoing end of the
+// second, and back (band-shape.ts checked that these are the ends the sides reach).
+function sides(b: BandShape, k: number, closed: readonly SketchComponent[], spacing: number): Join[] {
+  const a = endPoints(closed[b.from.path], b.from.index);
+  const z = endPoints(closed[b.to.path], b.to.index);
+  const s = b.inSide;
+  const there = side(b, k, s, b.d0, b.d1, spacing);
+  const back = side(b, k, -s as 1 | -1, b.d1, b.d0, spacing);
+  const src = (sd: 1 | -1, arc: number): Source => ({ kind: 'band', band: k, side: sd, arc });
+  const last = (t: Traced) => t.points[t.points.length - 1];
+  return [
+    { from: `${k}A:in`, to: `${k}B:out`, piece: concat(bridge(a.in, there.points[0], src(s, b.d0), spacing), there, bridge(last(there), z.out, src(s, b.d1), spacing)) },
+    { from: `${k}B:in`, to: `${k}A:out`, piece: concat(bridge(z.in, back.points[0], src(-s as 1 | -1, b.d1), spacing), back, bridge(last(back), a.out, src(-s as 1 | -1, b.d0), spacing)) },
+  ];
+}
+
+const circular = (x: number, y: number, total: number) => {
+  const d = Math.abs(x - y) % total;
+  return Math.min(d, total - d);
+};
+
+// Over/under of the surgered drawing's crossings from the sources of their two passages.
+function bySource(sketch: Sketch, closed: readonly SketchComponent[], shapes: readonly BandShape[], traced: readonly Traced[]): UnderRule {
+  const original = analyse(sketch).crossings;
+  const lengths = closed.map((c) => arcsOf(c.points, true)[c.points.length]);
+  const asBand = (s: Source): Source => (s.kind === 'tip' ? { kind: 'band', band: s.band, side: 1, arc: shapes[s.band].d1 } : s);
+  // Whether passage p (source s) is over passage q (source t).
+  const over = (s: Source, t: Source): boolean => {
+    if (s.kind === 'kink' || t.kind === 'kink') return t.kind === 'kink';
+    if (s.kind === 'strand' && t.kind === 'strand') {
+      // The drawn crossing these two passages are nearest to, along both strands.
+      let best = { score: Infinity, over: false };
+      for (const c of original) {
+        const score = (x: typeof s, id: string, arc: number) => (closed[x.path].id === id ? circular(x.arc, arc, lengths[x.path]) : Infinity);
+        const mine = score(s, c.over, c.overArc) + score(t, c.under, c.underArc);
+        const theirs = score(t, c.over, c.overArc) + score(s, c.under, c.underArc);
+        if (mine < best.score) best = { score: mine, over: true };
+        if (theirs < best.score) best = { score: theirs, over: false };
+      }
+      return best.over;
+    }
+    if (s.kind === 'strand' || t.kind === 'strand') {
+      const [strand, band] = s.kind === 'strand' ? [s, t] : [t, s];
+      if (strand.kind !== 'strand' || band.kind !== 'band') return false;
+      const id = closed[strand.path].id;
+      const nearest = shapes[band.band].crossings.filter((c) => c.component === id).reduce<{ under: boolean; d: number } | null>((m, c) => {
+        const d = Math.abs(c.arc - band.arc);
+        return m && m.d <= d ? m : { under: c.under, d };
+      }, null);
+      const bandOver = !(nearest?.under ?? false);
+      return s.kind === 'band' ? bandOver : !bandOver;
+    }
+    if (s.kind !== 'band' || t.kind !== 'band') return false;
+    if (s.band !== t.band) return s.band < t.band;
+    // A twist: the side arriving from offset +w passes over in a right-handed half twist.
+    const b = shapes[s.band];
+    const twist = b.twistStarts.reduce((best, start, i) => (Math.abs(start - s.arc) < Math.abs(b.twistStarts[best] - s.arc) ? i : best), 0);
+    const arriving = offsetAt(b, s.side, b.twistStarts[twist] ?? 0) > 0;
+    return arriving === (b.twistSign > 0);
+  };
+  return (found) =>
+    found.map((c) => {
+      const [p, q] = c.passages;
+      return !over(asBand(traced[p.path].sources[p.segment]), asBand(traced[q.path].sources[q.segment]));
+    });
+}
+
+const asComponents = (traced: readonly Traced[], prefix: string): SketchComponent[] =>
+  traced.map((t, i) => ({ id: `${prefix}${i + 1}`, seq: i + 1, points: t.points, closed: true, reversed: false, framing: null }));
+
+function read(sketch: Sketch, closed: readonly SketchComponent[], shapes: readonly BandShape[], traced: readonly Traced[], prefix: string, o: DrawingOptions): Reading {
+  return readDrawing(asComponents(traced, prefix), bySource(sketch, closed, shapes, traced), o);
+}
+
+// Where a source sits in the traced drawing: path and point index.
+function locate(traced: readonly Traced[], match: (s: Source) => number): { path: number; index: number } | null {
+  let best: { path: number; index: number; d: number } | null = null;
+  traced.forEach((t, path) =>
+    t.sources.forEach((s, index) => {
+      const d = match(s);
+      if (d < (best?.d ?? Infinity)) best = { path, index, d };
+    }),
+  );
+  return best;
+}
+
+/**
+ * The finger drawing with its band presentation and the after drawing, or the reason there is
+ * none (a band that cannot be read, or a drawing or surgery with a degeneracy). null when the
+ * sketch has no bands.
+ */
+export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {}): BandDrawings | { reason: string } | null {
+  const o = withDefaults(options);
+  const bands = bandsOf(sketch);
+  if (bands.length === 0) return null;
+  const base = analyse(sketch, o);
+  if (!base.diagram) return { reason: base.markers[0]?.message ?? 'Draw closed strands first.' };
+  const closed = sketch.components.filter((c) => c.closed && c.points.length >= 3);
+  const shapes: BandShape[] = [];
+  for (let k = 0; k < bands.length; k++) {
+    const shape = bandShape(closed, bands, k, o);
+    if ('reason' in shape) return shape;
+    shapes.push(shape);
+  }
+  const cutsA: Cut[] = shapes.map((b, k) => ({ id: `${k}A`, path: b.from.path, index: b.from.index }));
+  const cutsB: Cut[] = shapes.map((b, k) => ({ id: `${k}B`, path: b.to.path, index: b.to.index }));
+  let fingerTraced = trace(closed, cutsA, shapes.map((b, k) => fingerOf(b, k, closed, o.spacing)));
+  const afterTraced = trace(closed, [...cutsA, ...cutsB], shapes.flatMap((b, k) => sides(b, k, closed, o.spacing)));
+  if ('reason' in fingerTraced) return fingerTraced;
+  if ('reason' in afterTraced) return afterTraced;
+
+  const lengths = closed.map((c) => arcsOf(c.points, true)[c.points.length]);
+  const ends = (k: number) => {
+    const b = shapes[k];
+    const q = arcsOf(closed[b.to.path].points, true)[b.to.index];
+    return [
+      locate(fingerTraced as Traced[], (s) => (s.kind === 'tip' && s.band === k ? 0 : Infinity))!,
+      locate(fingerTraced as Traced[], (s) => (s.kind === 'strand' && s.path === b.to.path ? circular(s.arc, q, lengths[b.to.path]) : Infinity))!,
+    ];
+  };
+  const saddlesOf = (reading: Reading): (Saddle | null)[] => {
+    const reversed = reading.closed.map(() => false);
+    const label = (at: { path: number; index: number }) => edgeAt(reading.overUnder, reading.closed.length, reversed, at.path, arcsOf(reading.closed[at.path].points, true)[at.index]);
+    const all = shapes.map((_, k) => ends(k).map(label));
+    const used = all.flat();
+    return all.map(([a, b]) => (a !== null && b !== null && used.filter((x) => x === a || x === b).length === 2 && a !== b ? { a, b } : null));
+  };
+  let fingerReading = read(sketch, closed, shapes, fingerTraced, 'f', o);
+  let saddles = saddlesOf(fingerReading);
+  // Ends without an edge of their own get a curl just before them, then the drawing is read again.
+  for (let k = 0; k < shapes.length; k++) {
+    if (saddles[k]) continue;
+    for (const end of [0, 1]) {
+      const at = ends(k)[end];
+      const current = fingerTraced as Traced[];
+      fingerTraced = current.map((t, i) => (i === at.path ? withKink(current, at.path, at.index, o.spacing) : t));
+    }
+  }
+  if (saddles.some((s) => !s)) {
+    fingerReading = read(sketch, closed, shapes, fingerTraced, 'f', o);
+    saddles = saddlesOf(fingerReading);
+  }
+  const finger = fingerReading.analysis;
+  const after = read(sketch, closed, shapes, afterTraced, 'a', o).analysis;
+  const problem = finger.markers[0] ?? after.markers[0];
+  if (problem) return { reason: `With the bands: ${problem.message}` };
+  if (saddles.some((s) => !s)) return { reason: 'A band end has no room for its saddle: move it along its strand.' };
+  const fd = finger.diagram!.diagram;
+  const ad = after.diagram!.diagram;
+  return {
+    finger,
+    presentation: { pd: fd.pd, unknots: fd.unknots, saddles: saddles as Saddle[] },
+    after,
+    afterDiagram: { pd: ad.pd, unknots: ad.unknots, components: orient(ad.pd).components.length + ad.unknots },
+  };
+}
