@@ -27,7 +27,6 @@ import { edgeMap, resolve, State } from '../../khovanov/cube';
 import { F2Echelon, F2Vector, kernel, parity } from '../../linalg/f2';
 import { orient, PDCode } from '../pd';
 import { cycleCount, Stage } from './saddle';
-import { BandError } from './types';
 
 /** A generator of the cube complex: '0'/'1' per crossing in PD order, and the x-circles, each named by its smallest edge label. */
 export interface EnhancedState {
@@ -117,12 +116,11 @@ function boundaries(cube: Cube, r: number, q: number, at: Level): F2Echelon {
 /**
  * The class of the surface as its normal form in C^{0,chi}(K), chi counted without the
  * crossingless unknots. `stages` as bandStages gives them, the last a diagram of the unlink
- * (the caller certifies it). BandError when the code has more than maxCrossings crossings.
+ * (the caller certifies it, and keeps n small: the cube has 2^n resolutions).
  */
-export function classVector(stages: Stage[], saddles: { a: number; b: number }[], maxCrossings: number): ClassVector {
+export function classVector(stages: Stage[], saddles: { a: number; b: number }[]): ClassVector {
   const pd = stages[0].pd;
   const n = pd.length;
-  if (n > maxCrossings) throw new BandError(`the class is computed on the cube of resolutions, up to ${maxCrossings} crossings; this diagram has ${n}`);
   const signs = orient(pd).signs;
   const nMinus = signs.filter((s) => s < 0).length;
   const labels = [...new Set(pd.flat())].sort((p, q) => p - q);

@@ -54,12 +54,17 @@ export function bandCertificate(p: BandPresentation, opts: { maxCrossings?: numb
  * certified unlink, or when the code has more than maxCrossings (default CLASS_CROSSINGS).
  */
 export function surfaceClass(p: BandPresentation, opts: { maxCrossings?: number; unlinkCrossings?: number } = {}): SurfaceClass {
+  const maxCrossings = opts.maxCrossings ?? CLASS_CROSSINGS;
+  // The cheap fact first: the cube has 2^n resolutions.
+  if (p.pd.length > maxCrossings) throw new BandError(`the class is computed on the cube of resolutions, up to ${maxCrossings} crossings; this diagram has ${p.pd.length}`);
   const stages = bandStages(p);
+  // No crossings, so no edges and no bands: the unknots' disks, 1 x ... x 1.
+  if (p.pd.length === 0) return { h: 0, q: p.unknots, zero: false, support: [{ smoothing: '', x: [] }], basisSize: 1 };
   const cert = certify(p, stages, opts.unlinkCrossings);
   if (cert.unlink === 'none' || cert.unlink === 'too-large') {
     throw new BandError(`the class needs the bands to end at a certified unlink; the result is ${cert.unlink === 'none' ? 'not an unlink' : `too large to check (over ${cert.maxCrossings} crossings)`}`);
   }
-  const { support, basisSize } = classVector(stages, p.saddles, opts.maxCrossings ?? CLASS_CROSSINGS);
+  const { support, basisSize } = classVector(stages, p.saddles);
   return { h: 0, q: cert.chi, zero: support.length === 0, support, basisSize };
 }
 
