@@ -1,11 +1,13 @@
 // From a drawing with bands to what the band mathematics (shared/knot/bands) takes, and to
 // the drawing after the band moves. Both are surgery on the drawing (band-trace.ts):
 // - the finger drawing: each band's first strand is pushed by a finger move along the core
-//   until its tip lies next to the second strand (an isotopy: the same link). The finger's two
-//   sides are the band's sides: they cross strands where the core does, over or under as the
-//   band does, and each other once per half twist. Each band is then a short saddle between
-//   the finger's tip and the second strand; its two PD edge labels are read off with the PD
-//   code (a curl, kink.ts, gives an end its own edge where it has none).
+//   and on over the second strand (isotopies: a finger move, then a Reidemeister II move). The
+//   finger's two sides are the band's sides: they cross strands where the core does, over or
+//   under as the band does, and each other once per half twist. Each band is then a short
+//   saddle across the bigon between the finger's tip and the second strand (swinging it over
+//   that strand, hinged on it, brings it back to the band); the bigon's two sides are edges of
+//   their own, whose PD labels are read off with the PD code. The R2 also keeps the drawing
+//   connected where a band joins split pieces, so the bigon is a face of the code.
 // - the after drawing: each band replaced by its two sides, joining the two strands.
 // Over/under of every crossing follows its sources: strands as in the drawing, band against
 // strand as the band is set, band against band the higher-numbered one under, a twist as its
@@ -16,7 +18,6 @@ import { Analysis, analyse, readDrawing, Reading, UnderRule } from './analyse';
 import { bandsOf } from './bands';
 import { bandHalfWidth, BandShape, bandShape, corePoint, coreNormal, offsetAt, sidePoint } from './band-shape';
 import { Cut, cutHalf, Join, Source, trace, Traced } from './band-trace';
-import { withKink } from './kink';
 import { DrawingOptions, withDefaults } from './options';
 import { add, dist, lerp, Point, scale } from './point';
 import { arcsOf, tangentAt } from './polyline';
@@ -65,28 +66,57 @@ function endPoints(c: SketchComponent, index: number): { in: Point; out: Point }
   return { in: c.points[(index - step + 2 * n) % n], out: c.points[(index + step + 2 * n) % n] };
 }
 
-// The finger of band k: from its first strand's incoming end out along one side, round the tip,
-// back along the other side to the outgoing end.
+/** How far past the second strand a finger's tip reaches (the centre of its round end). */
+const overshoot = 12;
+
+// The stretch of side `sd` of band k from core arc d1 on over the second strand to the tip,
+// in that order: tip sources, since it passes over the second strand.
+function reach(b: BandShape, k: number, sd: 1 | -1, spacing: number): Traced {
+  const end = b.arcs[b.arcs.length - 1];
+  const t = tangentAt(b.core, b.arcs, end);
+  const n = coreNormal(b, end);
+  const off = offsetAt(b, sd, end);
+  const along = Math.max(1, Math.round((end - b.d1) / spacing));
+  const points = [
+    ...Array.from({ length: along }, (_, i) => sidePoint(b, sd, b.d1 + ((end - b.d1) * (i + 1)) / along)),
+    ...Array.from({ length: Math.round(overshoot / spacing) }, (_, i) => add(b.core[b.core.length - 1], add(scale(t, (i + 1) * spacing), scale(n, off)))),
+  ];
+  return { points, sources: points.map(() => ({ kind: 'tip', band: k, middle: false })) };
+}
+
+const backwards = (t: Traced): Traced => ({ points: [...t.points].reverse(), sources: [...t.sources].reverse() });
+
+// The finger of band k: from its first strand's incoming end out along one side, over the second
+// strand, round the tip, back along the other side to the outgoing end.
 function fingerOf(b: BandShape, k: number, closed: readonly SketchComponent[], spacing: number): Join {
   const ends = endPoints(closed[b.from.path], b.from.index);
   const s = b.inSide;
   const out = side(b, k, s, b.d0, b.d1, spacing);
   const back = side(b, k, -s as 1 | -1, b.d1, b.d0, spacing);
-  const c = corePoint(b, b.d1);
-  const n = coreNormal(b, b.d1);
-  const t = tangentAt(b.core, b.arcs, b.d1);
-  const e = offsetAt(b, s, b.d1);
+  const end = b.arcs[b.arcs.length - 1];
+  const t = tangentAt(b.core, b.arcs, end);
+  const n = coreNormal(b, end);
+  const c = add(b.core[b.core.length - 1], scale(t, overshoot));
+  const e = offsetAt(b, s, end);
   const capSteps = Math.max(4, Math.round((Math.PI * bandHalfWidth) / spacing / 2) * 2);
   const cap = Array.from({ length: capSteps - 1 }, (_, i) => {
     const phi = (Math.PI * (i + 1)) / capSteps;
     return add(c, add(scale(n, e * Math.cos(phi)), scale(t, bandHalfWidth * Math.sin(phi))));
   });
-  const tip: Traced = { points: cap, sources: cap.map((_, i): Source => (2 * (i + 1) === capSteps ? { kind: 'tip', band: k } : { kind: 'band', band: k, side: s, arc: b.d1 })) };
+  const tip: Traced = { points: cap, sources: cap.map((_, i): Source => ({ kind: 'tip', band: k, middle: 2 * (i + 1) === capSteps })) };
   const edge: Source = { kind: 'band', band: k, side: s, arc: b.d0 };
   return {
     from: `${k}A:in`,
     to: `${k}A:out`,
-    piece: concat(bridge(ends.in, out.points[0], edge, spacing), out, tip, back, bridge(back.points[back.points.length - 1], ends.out, { ...edge, side: -s as 1 | -1 }, spacing)),
+    piece: concat(
+      bridge(ends.in, out.points[0], edge, spacing),
+      out,
+      reach(b, k, s, spacing),
+      tip,
+      backwards(reach(b, k, -s as 1 | -1, spacing)),
+      back,
+      bridge(back.points[back.points.length - 1], ends.out, { ...edge, side: -s as 1 | -1 }, spacing),
+    ),
   };
 }
 
@@ -115,10 +145,10 @@ const circular = (x: number, y: number, total: number) => {
 function bySource(sketch: Sketch, closed: readonly SketchComponent[], shapes: readonly BandShape[], traced: readonly Traced[]): UnderRule {
   const original = analyse(sketch).crossings;
   const lengths = closed.map((c) => arcsOf(c.points, true)[c.points.length]);
-  const asBand = (s: Source): Source => (s.kind === 'tip' ? { kind: 'band', band: s.band, side: 1, arc: shapes[s.band].d1 } : s);
   // Whether passage p (source s) is over passage q (source t).
   const over = (s: Source, t: Source): boolean => {
-    if (s.kind === 'kink' || t.kind === 'kink') return t.kind === 'kink';
+    // A finger's tip passes over its second strand (and anything else near it).
+    if (s.kind === 'tip' || t.kind === 'tip') return s.kind === 'tip';
     if (s.kind === 'strand' && t.kind === 'strand') {
       // The drawn crossing these two passages are nearest to, along both strands.
       let best = { score: Infinity, over: false };
@@ -153,7 +183,7 @@ function bySource(sketch: Sketch, closed: readonly SketchComponent[], shapes: re
   return (found) =>
     found.map((c) => {
       const [p, q] = c.passages;
-      return !over(asBand(traced[p.path].sources[p.segment]), asBand(traced[q.path].sources[q.segment]));
+      return !over(traced[p.path].sources[p.segment], traced[q.path].sources[q.segment]);
     });
 }
 
@@ -196,7 +226,7 @@ export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {})
   }
   const cutsA: Cut[] = shapes.map((b, k) => ({ id: `${k}A`, path: b.from.path, index: b.from.index }));
   const cutsB: Cut[] = shapes.map((b, k) => ({ id: `${k}B`, path: b.to.path, index: b.to.index }));
-  let fingerTraced = trace(closed, cutsA, shapes.map((b, k) => fingerOf(b, k, closed, o.spacing)));
+  const fingerTraced = trace(closed, cutsA, shapes.map((b, k) => fingerOf(b, k, closed, o.spacing)));
   const afterTraced = trace(closed, [...cutsA, ...cutsB], shapes.flatMap((b, k) => sides(b, k, closed, o.spacing)));
   if ('reason' in fingerTraced) return fingerTraced;
   if ('reason' in afterTraced) return afterTraced;
@@ -206,7 +236,7 @@ export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {})
     const b = shapes[k];
     const q = arcsOf(closed[b.to.path].points, true)[b.to.index];
     return [
-      locate(fingerTraced as Traced[], (s) => (s.kind === 'tip' && s.band === k ? 0 : Infinity))!,
+      locate(fingerTraced as Traced[], (s) => (s.kind === 'tip' && s.band === k && s.middle ? 0 : Infinity))!,
       locate(fingerTraced as Traced[], (s) => (s.kind === 'strand' && s.path === b.to.path ? circular(s.arc, q, lengths[b.to.path]) : Infinity))!,
     ];
   };
@@ -217,26 +247,13 @@ export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {})
     const used = all.flat();
     return all.map(([a, b]) => (a !== null && b !== null && used.filter((x) => x === a || x === b).length === 2 && a !== b ? { a, b } : null));
   };
-  let fingerReading = read(sketch, closed, shapes, fingerTraced, 'f', o);
-  let saddles = saddlesOf(fingerReading);
-  // Ends without an edge of their own get a curl just before them, then the drawing is read again.
-  for (let k = 0; k < shapes.length; k++) {
-    if (saddles[k]) continue;
-    for (const end of [0, 1]) {
-      const at = ends(k)[end];
-      const current = fingerTraced as Traced[];
-      fingerTraced = current.map((t, i) => (i === at.path ? withKink(current, at.path, at.index, o.spacing) : t));
-    }
-  }
-  if (saddles.some((s) => !s)) {
-    fingerReading = read(sketch, closed, shapes, fingerTraced, 'f', o);
-    saddles = saddlesOf(fingerReading);
-  }
+  const fingerReading = read(sketch, closed, shapes, fingerTraced, 'f', o);
+  const saddles = saddlesOf(fingerReading);
   const finger = fingerReading.analysis;
   const after = read(sketch, closed, shapes, afterTraced, 'a', o).analysis;
   const problem = finger.markers[0] ?? after.markers[0];
   if (problem) return { reason: `With the bands: ${problem.message}` };
-  if (saddles.some((s) => !s)) return { reason: 'A band end has no room for its saddle: move it along its strand.' };
+  if (saddles.some((s) => !s)) return { reason: 'Two band ends are too close together on one strand: move one of them.' };
   const fd = finger.diagram!.diagram;
   const ad = after.diagram!.diagram;
   return {

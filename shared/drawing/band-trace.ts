@@ -12,9 +12,8 @@ import { SketchComponent } from './sketch';
 export type Source =
   | { readonly kind: 'strand'; readonly path: number; readonly arc: number }
   | { readonly kind: 'band'; readonly band: number; readonly side: 1 | -1; readonly arc: number }
-  /** The middle of a finger's tip, where its saddle attaches. */
-  | { readonly kind: 'tip'; readonly band: number }
-  | { readonly kind: 'kink' };
+  /** A finger's tip, past its second strand; `middle` marks where its saddle attaches. */
+  | { readonly kind: 'tip'; readonly band: number; readonly middle: boolean };
 
 export interface Traced {
   readonly points: Point[];

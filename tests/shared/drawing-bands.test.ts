@@ -6,6 +6,7 @@ import { readBands, BandDrawings } from '@/shared/drawing/band-read';
 import { analyse } from '@/shared/drawing/analyse';
 import { Point } from '@/shared/drawing/point';
 import { addStroke, emptySketch, reverseComponent, Sketch } from '@/shared/drawing/sketch';
+import { afterBands, bandCertificate } from '@/shared/knot/bands';
 import { Diagram } from '@/shared/knot/diagram';
 import { jones } from '@/shared/knot/jones';
 import { Laurent } from '@/shared/poly/laurent';
@@ -27,12 +28,16 @@ const band = (s: Sketch, p: Point, q: Point): Sketch => {
   if ('reason' in r) throw new Error(r.reason);
   return r.sketch;
 };
+const jonesOf = (d: { pd: Diagram['pd']; unknots: number }) => jones({ pd: d.pd, unknots: d.unknots, framings: [] });
+// Every reading is checked against the band mathematics: the saddles applied to the finger
+// drawing's PD code give the same link as the drawing after the band moves (same Jones).
 const read = (s: Sketch): BandDrawings => {
   const r = readBands(s);
   if (!r || 'reason' in r) throw new Error(r ? r.reason : 'no bands');
+  const pd = { ...r.presentation, saddles: [...r.presentation.saddles] };
+  expect(jonesOf(afterBands(pd)).equals(jonesOf(r.afterDiagram))).toBe(true);
   return r;
 };
-const jonesOf = (d: { pd: Diagram['pd']; unknots: number }) => jones({ pd: d.pd, unknots: d.unknots, framings: [] });
 const original = (s: Sketch) => jonesOf(analyse(s).diagram!.diagram);
 
 describe('bands on a drawn unknot', () => {
@@ -45,6 +50,8 @@ describe('bands on a drawn unknot', () => {
     expect(jonesOf(r.afterDiagram).equals(unlink(2))).toBe(true);
     // The finger move is an isotopy: still the unknot, one saddle on two distinct edges.
     expect(jonesOf(r.presentation).equals(unlink(1))).toBe(true);
+    // One band to the 2-component unlink: c = b + 1, a ribbon disk (Euler characteristic c - b).
+    expect(bandCertificate({ ...r.presentation, saddles: [...r.presentation.saddles] })).toMatchObject({ components: 2, chi: 1, ribbon: true });
     expect(r.presentation.saddles).toHaveLength(1);
     const { a, b } = r.presentation.saddles[0];
     expect(a).not.toBe(b);
