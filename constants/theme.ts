@@ -25,6 +25,9 @@ export const slate = {
   raised: '#2C343A',
   grid: '#37414858',
   chalkDim: '#9AA4AA',
+  /** Bands (Bands tool): a violet apart from every chalk colour, drawn as a translucent ribbon. */
+  band: '#C9A7FF',
+  bandRefused: '#FF8A73',
 } as const;
 
 /**

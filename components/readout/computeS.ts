@@ -2,16 +2,6 @@
 // debounces), and a request aborted before it starts is never computed.
 import { rasmussenS } from '@/shared/rasmussen';
 import type { SRequest } from './local-s';
+import { afterFrame } from './worker-call';
 
-export function computeS(req: SRequest, signal: AbortSignal): Promise<number> {
-  return new Promise((resolve, reject) => {
-    setTimeout(() => {
-      if (signal.aborted) return reject(new Error('superseded'));
-      try {
-        resolve(rasmussenS(req.pd, 'Q', { unknots: req.unknots }));
-      } catch (err) {
-        reject(err);
-      }
-    }, 0);
-  });
-}
+export const computeS = afterFrame((req: SRequest) => rasmussenS(req.pd, 'Q', { unknots: req.unknots }));

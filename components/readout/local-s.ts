@@ -8,5 +8,3 @@ export interface SRequest {
   pd: PDCode;
   unknots: number;
 }
-
-export type SMessage = { type: 'done'; s: number } | { type: 'error'; message: string };

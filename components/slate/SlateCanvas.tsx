@@ -12,12 +12,14 @@ import { dist, type Point } from '@/shared/drawing/point';
 import { addStroke, flipCrossing, moveComponent, reshapeComponent, reverseComponent } from '@/shared/drawing/sketch';
 import { carryFlips } from '@/shared/drawing/carry';
 import type { SlateDoc } from '@/lib/slate/record';
+import { finishBand, tapBand } from '@/lib/slate/band-actions';
 import { fitView, screenSizes, strandPictures, toScreen, toWorld, zoomAbout } from '@/lib/slate/picture';
 import { currentDoc, useSlate, type View as ViewT } from '@/lib/slate/slate-store';
 import { fonts, slate } from '@/constants/theme';
+import { BandLayer } from './BandLayer';
 
 type Drag =
-  | { kind: 'draw'; points: Point[] }
+  | { kind: 'draw' | 'band'; points: Point[] }
   | { kind: 'move' | 'reshape'; id: string; index: number; origin: Point; from: SlateDoc }
   | { kind: 'pan'; origin: Point; from: ViewT };
 
@@ -59,8 +61,8 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
   const begin = (screen: Point) => {
     const s = useSlate.getState();
     const p = toWorld(s.view, screen);
-    if (s.tool === 'draw') {
-      drag.current = { kind: 'draw', points: [p] };
+    if (s.tool === 'draw' || s.tool === 'bands') {
+      drag.current = { kind: s.tool === 'draw' ? 'draw' : 'band', points: [p] };
       return;
     }
     const hit = s.tool === 'flip' ? null : componentNear(latest.current.analysis, p, HIT / s.view.k);
@@ -76,7 +78,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
     const d = drag.current;
     const s = useSlate.getState();
     if (!d) return;
-    if (d.kind === 'draw') {
+    if ('points' in d) {
       d.points.push(toWorld(s.view, screen));
       setLive([...d.points]);
     } else if (d.kind === 'pan') {
@@ -103,6 +105,9 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
       const doc = s.history.present;
       const next = addStroke(doc.sketch, d.points);
       if (next !== doc.sketch) s.apply({ ...doc, sketch: next });
+    } else if (d.kind === 'band') {
+      setLive(null);
+      finishBand(d.points);
     } else if (d.kind !== 'pan') {
       if (s.preview) s.apply(s.preview);
     }
@@ -115,6 +120,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
     if (badge) return latest.current.onFraming(badge.id);
     const arrow = picturesRef.current.find((p) => p.arrow && dist(p.arrow.at, screen) <= ARROW_HIT);
     if (arrow) return s.apply({ ...doc, sketch: reverseComponent(doc.sketch, arrow.id) });
+    if (s.tool === 'bands' && tapBand(screen)) return;
     const p = toWorld(s.view, screen);
     const x = crossingNear(a, p, HIT / s.view.k);
     if (x !== null) {
@@ -195,6 +201,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
     setSize({ width, height });
   };
   const selectedPicture = pictures.find((p) => p.id === selected);
+  const selectedBand = useSlate((s) => s.selectedBand);
   const empty = doc.sketch.components.length === 0 && !live;
 
   return (
@@ -232,6 +239,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
             const at = toScreen(view, c.at);
             return <Circle key={`x${i}`} cx={at.x} cy={at.y} r={HIT - 4} stroke={slate.chalkDim} strokeDasharray="3 4" strokeWidth={1.2} fill="none" />;
           }) : null}
+          <BandLayer sketch={doc.sketch} view={view} active={tool === 'bands'} selected={selectedBand} />
           {analysis.markers.map((m, i) => {
             const at = toScreen(view, m.at);
             return (
@@ -241,7 +249,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
               </G>
             );
           })}
-          {live && live.length > 1 ? <Path d={pathOf(live.map((p) => toScreen(view, p)))} stroke={slate.chalkDim} strokeWidth={screenSizes.stroke} strokeLinecap="round" strokeLinejoin="round" fill="none" /> : null}
+          {live && live.length > 1 ? <Path d={pathOf(live.map((p) => toScreen(view, p)))} stroke={tool === 'bands' ? slate.band : slate.chalkDim} strokeWidth={screenSizes.stroke} strokeLinecap="round" strokeLinejoin="round" fill="none" /> : null}
         </Svg>
         {empty ? (
           <View pointerEvents="none" style={styles.hintBox}>

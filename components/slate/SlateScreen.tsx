@@ -20,6 +20,7 @@ import { useReadout } from '@/hooks/useReadout';
 import { useSInvariant } from '@/hooks/useSInvariant';
 import { useSlateAutosave } from '@/hooks/useSlateAutosave';
 import { useSlateShortcuts } from '@/hooks/useSlateShortcuts';
+import { useSlateBands } from '@/hooks/useSlateBands';
 import { useKnownGroups } from '@/hooks/queries/useLocalSketches';
 import { useShortcutRegistry } from '@/components/shell/shortcuts';
 import { saveText } from '@/components/ui/save';
@@ -28,9 +29,12 @@ import { Readout } from '@/components/readout/Readout';
 import { ReadoutActions, type ExportKind } from '@/components/readout/ReadoutActions';
 import { PasteCodeDialog } from '@/components/readout/PasteCodeDialog';
 import { FamiliesDialog } from '@/components/readout/FamiliesDialog';
+import { BandsReadout } from '@/components/readout/BandsReadout';
 import { DescendingNote } from './DescendingNote';
 import { SlateCanvas } from './SlateCanvas';
 import { SelectionBar, Toolbar } from './Toolbar';
+import { BandBar } from './BandBar';
+import { AfterBandsView } from './AfterBandsView';
 import { FramingDialog } from './FramingDialog';
 import { SketchDetails } from './SketchDetails';
 import { Dialog } from './Dialog';
@@ -59,6 +63,8 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const diagram = analysis.diagram?.diagram ?? null;
   const readout = useReadout(ready ? diagram : null, dragging);
   const sInvariant = useSInvariant(ready ? diagram : null, dragging);
+  const bands = useSlateBands(ready, dragging);
+  const showAfter = useSlate((s) => s.showAfter) && bands.drawings !== null;
   const [open, setOpen] = useState<Open>(null);
   // A refused share (S24) shows beside the label, so the owner opens Share to read why.
   const shareRefused = useRefusedShares(sketch.id).length > 0 ? 'share refused by the server' : null;
@@ -126,6 +132,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
     <>
       {descending ? <DescendingNote onAlternate={alternateNow} /> : null}
       <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} numbers={diagramNumbers} />
+      {diagram ? <BandsReadout state={bands.certificate} refused={bands.refused} s={sInvariant} signature={readout.values.signature} /> : null}
       <ReadoutActions
         hasDiagram={!!diagram}
         canAlternate={!!diagram && diagram.pd.length > 0}
@@ -166,9 +173,11 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
     <>
       <Toolbar />
       <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: Math.max(280, Math.round(height * 0.46)) }]}>
-        <SlateCanvas analysis={analysis} onFraming={(id) => setOpen({ framing: id })} />
+        {showAfter && !wide ? null : <SlateCanvas analysis={analysis} onFraming={(id) => setOpen({ framing: id })} />}
+        {showAfter ? <AfterBandsView drawings={bands.drawings} /> : null}
       </View>
       <SelectionBar numberOf={numberOf} onFraming={(id) => setOpen({ framing: id })} />
+      <BandBar afterComponents={bands.afterComponents} />
     </>
   );
 
@@ -229,6 +238,6 @@ const styles = StyleSheet.create({
   headerActions: { flexDirection: 'row', gap: space.xs },
   quiet: { minHeight: 40, minWidth: 40, paddingHorizontal: space.md, alignItems: 'center', justifyContent: 'center', borderRadius: 10 },
   quietText: { ...type.label, color: colors.accent, fontSize: 15 },
-  canvasWide: { flex: 1 },
+  canvasWide: { flex: 1, flexDirection: 'row', gap: 2 },
   canvasPhone: { marginHorizontal: 0 },
 });

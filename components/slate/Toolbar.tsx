@@ -11,9 +11,10 @@ const tools: { tool: Tool; label: string }[] = [
   { tool: 'flip', label: 'Flip' },
   { tool: 'move', label: 'Move' },
   { tool: 'reshape', label: 'Reshape' },
+  { tool: 'bands', label: 'Bands' },
 ];
 
-function Chip({ label, text, onPress, on = false, disabled = false }: { label: string; text?: string; onPress: () => void; on?: boolean; disabled?: boolean }) {
+export function Chip({ label, text, onPress, on = false, disabled = false }: { label: string; text?: string; onPress: () => void; on?: boolean; disabled?: boolean }) {
   return (
     <Pressable role="button" accessibilityLabel={label} aria-pressed={on} aria-disabled={disabled} disabled={disabled} onPress={onPress}
       style={({ pressed }) => [styles.chip, on && styles.chipOn, pressed && styles.chipPressed, disabled && styles.disabled]}>

@@ -5,7 +5,7 @@ import { create } from 'zustand';
 import { canRedo, canUndo, commit, historyOf, redo, undo, type History } from '@/shared/drawing/history';
 import { emptyDoc, type SlateDoc } from './record';
 
-export type Tool = 'draw' | 'flip' | 'move' | 'reshape';
+export type Tool = 'draw' | 'flip' | 'move' | 'reshape' | 'bands';
 
 export interface View {
   /** screen = world * k + (x, y) */
@@ -25,6 +25,12 @@ export interface SlateState {
   preview: SlateDoc | null;
   tool: Tool;
   selected: string | null;
+  /** The band whose controls are open (Bands tool). */
+  selectedBand: string | null;
+  /** Why the last band drawn was refused, until the next band gesture. */
+  bandNotice: string | null;
+  /** Show the drawing after the band moves instead of (or beside) the drawing. */
+  showAfter: boolean;
   view: View;
   /** The canvas size last seen (a resize keeps the drawing's centre where it was). */
   size: { width: number; height: number };
@@ -43,6 +49,9 @@ export interface SlateState {
   redo(): void;
   setTool(tool: Tool): void;
   select(id: string | null): void;
+  selectBand(id: string | null): void;
+  setBandNotice(notice: string | null): void;
+  setShowAfter(show: boolean): void;
   setView(view: View): void;
   resize(width: number, height: number): void;
   /** Refit the view to the drawing. */
@@ -58,13 +67,16 @@ export const useSlate = create<SlateState>((set) => ({
   preview: null,
   tool: 'draw',
   selected: null,
+  selectedBand: null,
+  bandNotice: null,
+  showAfter: false,
   view: identityView,
   size: { width: 0, height: 0 },
   braid: null,
   fitRequest: 0,
   fitted: -1,
   open: (sketchId, doc) =>
-    set((s) => ({ sketchId, history: historyOf(doc), opened: doc, view: identityView, preview: null, selected: null, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
+    set((s) => ({ sketchId, history: historyOf(doc), opened: doc, view: identityView, preview: null, selected: null, selectedBand: null, bandNotice: null, showAfter: false, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
   replace: (doc, braid) =>
     set((s) => ({ history: commit(s.history, doc), preview: null, selected: null, braid: braid ? { word: braid, doc } : null, fitRequest: s.fitRequest + 1 })),
   apply: (doc) => set((s) => ({ history: commit(s.history, doc), preview: null })),
@@ -73,6 +85,9 @@ export const useSlate = create<SlateState>((set) => ({
   redo: () => set((s) => ({ history: redo(s.history), preview: null })),
   setTool: (tool) => set({ tool }),
   select: (selected) => set({ selected }),
+  selectBand: (selectedBand) => set({ selectedBand }),
+  setBandNotice: (bandNotice) => set({ bandNotice }),
+  setShowAfter: (showAfter) => set({ showAfter }),
   setView: (view) => set({ view }),
   resize: (width, height) =>
     set((s) => {

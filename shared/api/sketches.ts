@@ -93,6 +93,15 @@ export const SlateGeometry = z.object({
   flips: z.array(z.object({ a: z.string(), b: z.string(), at: XY })),
   nextSeq: z.number(),
   colours: z.record(z.string(), z.number().int()).optional(),
+  /** Bands (shared/drawing/bands.ts); drawings saved before bands existed have none. */
+  bands: z.array(z.object({
+    id: z.string(),
+    from: z.string(),
+    to: z.string(),
+    core: z.array(XY).max(5_000),
+    twists: z.number().int().min(-diagramLimits.framing).max(diagramLimits.framing),
+    unders: z.array(z.object({ component: z.string(), at: XY })),
+  })).max(100).optional(),
 });
 export type SlateGeometry = z.infer<typeof SlateGeometry>;
 

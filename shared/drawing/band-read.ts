@@ -16,7 +16,7 @@
 import { orient, PDCode } from '@/shared/knot/pd';
 import { Analysis, analyse, readDrawing, Reading, UnderRule } from './analyse';
 import { bandsOf } from './bands';
-import { bandHalfWidth, BandShape, bandShape, corePoint, coreNormal, offsetAt, sidePoint } from './band-shape';
+import { bandHalfWidth, BandShape, bandShapes, closedOf, coreNormal, offsetAt, sidePoint } from './band-shape';
 import { Cut, cutHalf, Join, Source, trace, Traced } from './band-trace';
 import { DrawingOptions, withDefaults } from './options';
 import { add, dist, lerp, Point, scale } from './point';
@@ -217,10 +217,9 @@ export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {})
   if (bands.length === 0) return null;
   const base = analyse(sketch, o);
   if (!base.diagram) return { reason: base.markers[0]?.message ?? 'Draw closed strands first.' };
-  const closed = sketch.components.filter((c) => c.closed && c.points.length >= 3);
+  const closed = closedOf(sketch);
   const shapes: BandShape[] = [];
-  for (let k = 0; k < bands.length; k++) {
-    const shape = bandShape(closed, bands, k, o);
+  for (const shape of bandShapes(sketch, o)) {
     if ('reason' in shape) return shape;
     shapes.push(shape);
   }

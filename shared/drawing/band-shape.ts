@@ -7,11 +7,12 @@
 // no room for its twists) answers a reason instead of a shape.
 
 import type { Band } from './bands';
-import { DrawingOptions } from './options';
+import { bandsOf } from './bands';
+import { DrawingOptions, withDefaults } from './options';
 import { add, dist, dot, Point, scale, sub } from './point';
 import { arcsOf, pointAt, tangentAt } from './polyline';
 import { intersect } from './segments';
-import { nearestPointIndex, SketchComponent } from './sketch';
+import { nearestPointIndex, Sketch, SketchComponent } from './sketch';
 
 export const bandHalfWidth = 8;
 const twistLength = 30;
@@ -164,4 +165,15 @@ export function bandShape(closed: readonly SketchComponent[], bands: readonly Ba
     twistSign: band.twists < 0 ? -1 : 1,
     inSide,
   };
+}
+
+/** The closed components bands attach to, as analyse() reads them. */
+export const closedOf = (sketch: Sketch): SketchComponent[] => sketch.components.filter((c) => c.closed && c.points.length >= 3);
+
+/** Every band's shape, or why it has none. */
+export function bandShapes(sketch: Sketch, options: Partial<DrawingOptions> = {}): (BandShape | { reason: string })[] {
+  const o = withDefaults(options);
+  const closed = closedOf(sketch);
+  const bands = bandsOf(sketch);
+  return bands.map((_, k) => bandShape(closed, bands, k, o));
 }

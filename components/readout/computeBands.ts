@@ -1,0 +1,5 @@
+// Native: no web worker; the certificate is computed after a frame (worker-call.ts).
+import { certifyBands } from './local-bands';
+import { afterFrame } from './worker-call';
+
+export const computeBands = afterFrame(certifyBands);
