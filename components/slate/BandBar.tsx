@@ -1,4 +1,5 @@
-// Below the Slate with the Bands tool: why the last band was refused; the open band's half
+// Below the Slate with the Bands tool: why the last band was refused, or why the bands as they
+// stand cannot be read; the open band's half
 // twists (a stepper) and Delete; and the "After the bands" switch with the component count.
 import { StyleSheet, Text, View } from 'react-native';
 import { bandsOf, deleteBand, setBandTwists } from '@/shared/drawing/bands';
@@ -6,7 +7,7 @@ import { useSlate } from '@/lib/slate/slate-store';
 import { colors, space, type } from '@/constants/theme';
 import { Chip } from './Toolbar';
 
-export function BandBar({ afterComponents }: { afterComponents: number | null }) {
+export function BandBar({ afterComponents, refused }: { afterComponents: number | null; refused: string | null }) {
   const tool = useSlate((s) => s.tool);
   const notice = useSlate((s) => s.bandNotice);
   const selected = useSlate((s) => s.selectedBand);
@@ -21,6 +22,7 @@ export function BandBar({ afterComponents }: { afterComponents: number | null })
   return (
     <View style={styles.bar} testID="band-bar">
       {notice ? <Text style={styles.notice} role="alert">{notice}</Text> : null}
+      {refused && refused !== notice ? <Text style={styles.notice} testID="band-refused">{refused}</Text> : null}
       {band ? (
         <View style={styles.row}>
           <Text style={styles.text}>Band {k + 1}: half twists</Text>

@@ -177,7 +177,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
         {showAfter ? <AfterBandsView drawings={bands.drawings} /> : null}
       </View>
       <SelectionBar numberOf={numberOf} onFraming={(id) => setOpen({ framing: id })} />
-      <BandBar afterComponents={bands.afterComponents} />
+      <BandBar afterComponents={bands.afterComponents} refused={bands.refused} />
     </>
   );
 

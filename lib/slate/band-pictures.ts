@@ -47,7 +47,7 @@ export function bandPictures(sketch: Sketch, view: View): BandPicture[] {
       pieces: visiblePieces(core, false, gaps).map(data),
       width: 2 * bandHalfWidth * view.k,
       badge: { at: toScreen(view, middle) },
-      text: band.twists ? `${k + 1} · ${signed(band.twists)}½` : `${k + 1}`,
+      text: band.twists ? `${k + 1} · ${signed(band.twists)} half` : `${k + 1}`,
       crossings: crossings.map((c) => ({ at: toScreen(view, c.at), component: c.component, under: c.under })),
       problem: ok ? null : shape.reason,
     };
