@@ -1,6 +1,6 @@
 // A sketch's picture as the Slate draws it (lib/slate/picture.ts): each strand in its chalk
 // colour, cut where it passes under, so a linked and an unlinked pair of circles look
-// different. With `marks` (a sketch's own page) each component also shows its orientation
+// different; bands as translucent ribbons in the band colour. With `marks` (a sketch's own page) each component also shows its orientation
 // arrow and a label "number: framing" ("bb" for the blackboard framing). Until a code has a
 // picture, or when it has none, the box shows the crossing count.
 import { useEffect, useState } from 'react';
@@ -10,6 +10,7 @@ import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
 import { analyse } from '@/shared/drawing/analyse';
 import type { Point } from '@/shared/drawing/point';
 import { fitView, strandPictures, type StrandPicture } from '@/lib/slate/picture';
+import { bandPictures, type BandPicture } from '@/lib/slate/band-pictures';
 import { docFromStored } from '@/lib/slate/record';
 import { fonts, radius, slate } from '@/constants/theme';
 
@@ -17,18 +18,20 @@ export type PictureSource = Omit<StoredDiagram, 'strokes'>;
 
 // Lists re-render on every store change with new objects: the pictures are kept per caller's
 // key (a sketch id with its version), the last few hundred only.
-const cache = new Map<string, StrandPicture[] | null>();
+type Pictures = { strands: StrandPicture[]; bands: BandPicture[] };
+const cache = new Map<string, Pictures | null>();
 const CACHE_SIZE = 300;
 
 /** Room round the drawing; with marks, for the labels beside the arrows (lib/slate/picture.ts badgeOffset). */
 const marginFor = (size: number, marks: boolean) => (marks ? Math.max(56, size * 0.12) : size * 0.12);
 
-function picturesOf(d: PictureSource, size: number, margin: number): StrandPicture[] | null {
+function picturesOf(d: PictureSource, size: number, margin: number): Pictures | null {
   try {
     const doc = docFromStored({ ...d, strokes: [] }); // lays out a typed code, as the Slate does
     const points = doc.sketch.components.flatMap((c) => c.points);
     if (points.length === 0) return null;
-    return strandPictures(doc, analyse(doc.sketch), fitView(points, size, size, margin));
+    const view = fitView(points, size, size, margin);
+    return { strands: strandPictures(doc, analyse(doc.sketch), view), bands: bandPictures(doc.sketch, view) };
   } catch {
     return null; // a code the layout cannot draw
   }
@@ -54,7 +57,7 @@ function compute(k: string, d: PictureSource, size: number, marks: boolean) {
 }
 
 /** The pictures for this key: at once from a drawing, later (undefined until then) from a code. */
-function usePictures(key: string, d: PictureSource, size: number, marks: boolean): StrandPicture[] | null | undefined {
+function usePictures(key: string, d: PictureSource, size: number, marks: boolean): Pictures | null | undefined {
   const k = `${key}:${size}:${marks}`;
   const needsLayout = d.geometry == null && d.pd.length > 0;
   if (!cache.has(k) && needsLayout && d.pd.length > LAYOUT_LIMIT) cache.set(k, null);
@@ -97,7 +100,7 @@ export function DiagramPicture({ diagram, size, pictureKey, crossings, marks = f
     <View style={[styles.box, { width: size, height: size }]} aria-label={label} role="img">
       {pictures ? (
         <Svg width={size} height={size}>
-          {pictures.map((p) => (
+          {pictures.strands.map((p) => (
             <G key={p.id}>
               {p.pieces.map((d, i) => (
                 <Path key={i} d={d} stroke={p.colour} strokeWidth={stroke} strokeLinecap="round" strokeLinejoin="round" fill="none" strokeDasharray={p.closed ? undefined : '2 6'} />
@@ -110,6 +113,9 @@ export function DiagramPicture({ diagram, size, pictureKey, crossings, marks = f
               ) : null}
             </G>
           ))}
+          {pictures.bands.flatMap((b) => b.pieces.map((d, i) => (
+            <Path key={`${b.id}-${i}`} d={d} stroke={slate.band} strokeOpacity={0.4} strokeWidth={b.width} fill="none" />
+          )))}
         </Svg>
       ) : (
         <Text style={styles.code}>{crossings} ×</Text>

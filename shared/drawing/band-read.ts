@@ -174,11 +174,12 @@ function bySource(sketch: Sketch, closed: readonly SketchComponent[], shapes: re
     }
     if (s.kind !== 'band' || t.kind !== 'band') return false;
     if (s.band !== t.band) return s.band < t.band;
-    // A twist: the side arriving from offset +w passes over in a right-handed half twist.
+    // A twist: in a positive (right-handed) half twist the side arriving from offset +w passes
+    // under, so that with both sides oriented along the core the crossing is positive.
     const b = shapes[s.band];
     const twist = b.twistStarts.reduce((best, start, i) => (Math.abs(start - s.arc) < Math.abs(b.twistStarts[best] - s.arc) ? i : best), 0);
     const arriving = offsetAt(b, s.side, b.twistStarts[twist] ?? 0) > 0;
-    return arriving === (b.twistSign > 0);
+    return arriving !== (b.twistSign > 0);
   };
   return (found) =>
     found.map((c) => {

@@ -4,6 +4,8 @@
 import { addBand, setBandTwists, flipBandCrossing, bandsOf } from '@/shared/drawing/bands';
 import { readBands, BandDrawings } from '@/shared/drawing/band-read';
 import { analyse } from '@/shared/drawing/analyse';
+import { toSVG, toTikZ } from '@/shared/drawing/export';
+import { SlateGeometry } from '@/shared/api/sketches';
 import { Point } from '@/shared/drawing/point';
 import { addStroke, emptySketch, reverseComponent, Sketch } from '@/shared/drawing/sketch';
 import { afterBands, bandCertificate } from '@/shared/knot/bands';
@@ -92,6 +94,12 @@ describe('a band joining two circles', () => {
     expect(readBands(flipped)).toEqual({ reason: expect.stringMatching(/non-orientable/) });
     const r = read(setBandTwists(flipped, bandsOf(flipped)[0].id, 1));
     expect(jonesOf(r.afterDiagram).equals(unlink(1))).toBe(true);
+    // The one crossing after the move is the twist. Its sides, oriented along the core, make a
+    // positive crossing for a positive half twist (docs/conventions.md, Bands); the orientable
+    // band's sides run opposite ways, so the after drawing reads it negative.
+    expect(r.after.crossings.map((c) => c.sign)).toEqual([-1]);
+    const m = read(setBandTwists(flipped, bandsOf(flipped)[0].id, -1));
+    expect(m.after.crossings.map((c) => c.sign)).toEqual([1]);
   });
 });
 
@@ -109,5 +117,26 @@ describe('a band across another strand', () => {
     const u = read(under);
     expect(jonesOf(u.presentation).equals(original(s))).toBe(true);
     expect(jonesOf(u.afterDiagram).equals(unlink(3))).toBe(false);
+  });
+});
+
+describe('bands saved and exported', () => {
+  const s = band(drawn([ellipse(200, 200, 90, 140)]), { x: 112, y: 200 }, { x: 288, y: 200 });
+
+  test('the stored geometry keeps bands, and a drawing saved before bands still reads', () => {
+    const stored = JSON.parse(JSON.stringify({ ...s, colours: {} }));
+    const parsed = SlateGeometry.parse(stored);
+    expect(parsed.bands).toEqual(bandsOf(s));
+    const { bands: _, ...old } = stored;
+    expect(SlateGeometry.safeParse(old).success).toBe(true);
+    expect(readBands({ ...SlateGeometry.parse(old) })).toBeNull();
+  });
+
+  test('SVG and TikZ draw each band as a ribbon over the strands', () => {
+    const a = analyse(s);
+    const cores = bandsOf(s).map((b) => b.core);
+    expect(toSVG(a, { bands: cores }).match(/stroke-opacity="0.4" stroke-width="16"/g)).toHaveLength(1);
+    expect(toSVG(a)).not.toMatch(/stroke-opacity/);
+    expect(toTikZ(a, { bands: cores }).match(/opacity=0.4/g)).toHaveLength(1);
   });
 });
