@@ -1,8 +1,9 @@
 // The class of a band surface in Kh(K; F2) (shared/knot/bands/class.ts). Sources beside each
 // value; the presentations are built in bands-fixtures.ts.
-import { BandError, compareSurfaces, surfaceClass } from '@/shared/knot/bands';
-import { seededRng } from '@/shared/knot/moves';
-import { BandPresentation } from '@/shared/knot/bands';
+import { BandError, bandCertificate, BandPresentation, compareSurfaces, Saddle, surfaceClass } from '@/shared/knot/bands';
+import { diagram, Diagram } from '@/shared/knot/diagram';
+import { addKink, faces, pushAcross, Rng, seededRng } from '@/shared/knot/moves';
+import { orient, PDCode } from '@/shared/knot/pd';
 import { disks946, p33m3, ribbon, trefoil } from './bands-fixtures';
 import { scramble } from './scramble';
 
@@ -10,6 +11,34 @@ const renamed = (p: BandPresentation, seed: number): BandPresentation => {
   const { pd, rename } = scramble(p.pd, seededRng(seed));
   return { ...p, pd, saddles: p.saddles.map(({ a, b }) => ({ a: rename.get(a)!, b: rename.get(b)! })) };
 };
+
+/**
+ * Random R1 and R2 moves (adding a kink or a finger) that keep away from the bands: no kink on a
+ * band's edge, no finger in a face holding one. The moves keep the crossing order and slots of
+ * the old crossings, so a band's edge is found again at its old head slot.
+ */
+function movedAway(pd: PDCode, bands: Saddle[][], moves: number, rng: Rng): { pd: PDCode; bands: Saddle[][] } {
+  let d: Diagram = diagram(pd);
+  let current = bands;
+  const pick = <T>(list: readonly T[]): T => list[Math.floor(rng() * list.length)];
+  for (let k = 0; k < moves; k++) {
+    const busy = new Set(current.flat().flatMap(({ a, b }) => [a, b]));
+    const free = [...new Set(d.pd.flat())].filter((l) => !busy.has(l));
+    const quiet = faces(d.pd).filter((f) => f.length >= 2 && f.every((c) => !busy.has(d.pd[c.crossing][c.arrive])));
+    const heads = orient(d.pd).head;
+    const next = quiet.length > 0 && rng() < 0.5
+      ? (() => {
+          const f = pick(quiet);
+          const i = Math.floor(rng() * f.length);
+          return pushAcross(d, f, i, (i + 1 + Math.floor(rng() * (f.length - 1))) % f.length, rng() < 0.5);
+        })()
+      : addKink(d, pick(free), { sign: rng() < 0.5 ? 1 : -1, overFirst: rng() < 0.5 });
+    const at = (l: number): number => next.pd[heads.get(l)!.crossing][heads.get(l)!.position];
+    current = current.map((list) => list.map(({ a, b }) => ({ a: at(a), b: at(b) })));
+    d = next;
+  }
+  return { pd: d.pd, bands: current };
+}
 
 describe('the class of a ribbon disk', () => {
   // A ribbon disk is a ribbon concordance from the unknot plus a birth, and a ribbon concordance
@@ -50,6 +79,26 @@ describe('the two standard ribbon disks of 9_46', () => {
       expect(compareSurfaces(pd, 0, move(a), move(a2)).verdict).toBe('equal: no conclusion');
     }
   }, 60_000);
+});
+
+describe('invariance under Reidemeister moves away from the bands', () => {
+  // A Reidemeister move of K away from the bands is an isotopy of the surface's boundary; the
+  // classes move by the isomorphism it induces (Jacobsson 2004, arXiv math/0206303; Bar-Natan
+  // 2005, arXiv math/0410495), so being zero and differing are kept.
+  it('the 9_46 disks still differ, and a ribbon disk stays ribbon with a nonzero class', () => {
+    const rng = seededRng(946);
+    for (let trial = 0; trial < 3; trial++) {
+      const { pd, bands } = movedAway(p33m3.pd, [disks946.first[0].saddles, disks946.second[0].saddles], 2, rng);
+      expect(pd.length).toBeGreaterThan(9);
+      expect(compareSurfaces(pd, 0, bands[0], bands[1], { maxCrossings: 16 }).verdict).toBe('differ');
+    }
+    for (const { presentation: p } of ribbon.slice(0, 2)) {
+      const { pd, bands } = movedAway(p.pd, [p.saddles], 1, rng);
+      const moved = { pd, unknots: 0, saddles: bands[0] };
+      expect(bandCertificate(moved).ribbon).toBe(true);
+      expect(surfaceClass(moved, { maxCrossings: 16 })).toMatchObject({ q: 1, zero: false });
+    }
+  }, 120_000);
 });
 
 describe('other surfaces and refusals', () => {
