@@ -1,12 +1,13 @@
 // Band presentations: the saddle moves, the after-bands diagram and its certificates. Sources
 // beside each value; the presentations are built in bands-fixtures.ts.
-import { afterBands, BandError, bandCertificate, BandPresentation } from '@/shared/knot/bands';
+import { afterBands, BandError, bandCertificate, BandPresentation, surfaceClass } from '@/shared/knot/bands';
+import { fromBraid } from '@/shared/knot/braid';
 import { evaluateClosed, Frame } from '@/shared/knot/bands/movie';
 import { alexander } from '@/shared/knot/alexander';
 import { diagram } from '@/shared/knot/diagram';
 import { linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
 import { jones } from '@/shared/knot/jones';
-import { mirror } from '@/shared/knot/families';
+import { disjointUnion, mirror } from '@/shared/knot/families';
 import { seededRng } from '@/shared/knot/moves';
 import { guessName } from '@/shared/knot/names';
 import { Laurent } from '@/shared/poly/laurent';
@@ -78,6 +79,18 @@ describe('saddles on a PD code', () => {
     // n = 2 components, k = 1 surface component, c = 1, b = 1: chi = 0 and g = (2k - n - chi) / 2 = 0.
     const toUnknot = certs.find((c) => c.components === 1 && c.unlink !== 'none');
     expect(toUnknot).toMatchObject({ knotComponents: 2, surfaceComponents: 1, chi: 0, genusBound: 0, ribbon: false });
+  });
+});
+
+describe('bands between split pieces', () => {
+  // Two unknots with a kink each, side by side: a PD code does not place one piece in a face of
+  // the other, so any two of their edges may be joined (the connected sum's band).
+  const unlink = disjointUnion(fromBraid([1], 2), fromBraid([1], 2)); // [[1,1,2,2],[3,3,4,4]]
+  it('a band joining the two-component unlink gives the unknot: an annulus, chi 0, genus 0', () => {
+    expect(bandCertificate(on(unlink.pd, [1, 3]))).toMatchObject({ knotComponents: 2, components: 1, chi: 0, surfaceComponents: 1, genusBound: 0, ribbon: false, unlink: 'crossingless' });
+  });
+  it('its class is Delta(1) = 1 x + x 1, nonzero at q = 0 (Khovanov 2000, arXiv math/9908171)', () => {
+    expect(surfaceClass(on(unlink.pd, [1, 3]))).toMatchObject({ h: 0, q: 0, zero: false });
   });
 });
 
