@@ -113,6 +113,12 @@ describe('ribbon presentations', () => {
     expect(['crossingless', 'khovanov']).toContain(c.unlink);
   }, 60_000);
 
+  it('past the Khovanov check\'s crossing limit the result is "too-large", with no genus bound', () => {
+    const square = ribbon[0].presentation;
+    expect(bandCertificate(square).unlink).toBe('khovanov'); // its after-bands diagram keeps crossings
+    expect(bandCertificate(square, { maxCrossings: 0 })).toMatchObject({ unlink: 'too-large', genusBound: null, ribbon: false, maxCrossings: 0 });
+  });
+
   it('a relabelling of the code (with the bands renamed) keeps every certificate', () => {
     const rng = seededRng(18);
     for (const { presentation: p } of ribbon) {
