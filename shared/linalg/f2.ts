@@ -7,14 +7,14 @@
 
 export type F2Vector = readonly number[];
 
-/** u + v over F2: the symmetric difference of two ascending index lists. */
-export function xor(u: F2Vector, v: F2Vector): number[] {
+/** u + v over F2: the symmetric difference of two ascending index lists (of u's first `uLength` entries). */
+export function xor(u: F2Vector, v: F2Vector, uLength = u.length): number[] {
   const out: number[] = [];
   let i = 0;
   let j = 0;
-  while (i < u.length || j < v.length) {
-    if (j === v.length || (i < u.length && u[i] < v[j])) out.push(u[i++]);
-    else if (i === u.length || v[j] < u[i]) out.push(v[j++]);
+  while (i < uLength || j < v.length) {
+    if (j === v.length || (i < uLength && u[i] < v[j])) out.push(u[i++]);
+    else if (i === uLength || v[j] < u[i]) out.push(v[j++]);
     else {
       i++;
       j++;
@@ -55,17 +55,20 @@ export class F2Echelon {
   // Reduction from the top: adding the row of pivot m only changes indices below m.
   protected reduceTracked(v: F2Vector, tag: F2Vector, tags?: Map<number, F2Vector>): { vector: number[]; tag: F2Vector } {
     const kept: number[] = [];
+    // The part still to reduce is w's first `end` entries.
     let w: F2Vector = v;
+    let end = w.length;
     let t = tag;
-    while (w.length > 0) {
-      const m = w[w.length - 1];
+    while (end > 0) {
+      const m = w[end - 1];
       const row = this.rows.get(m);
       if (row) {
-        w = xor(w, row);
+        w = xor(w, row, end);
+        end = w.length;
         if (tags) t = xor(t, tags.get(m)!);
       } else {
         kept.push(m);
-        w = w.slice(0, -1);
+        end--;
       }
     }
     return { vector: kept.reverse(), tag: t };

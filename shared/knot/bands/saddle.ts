@@ -6,9 +6,13 @@
 // which common face is used (both sides give the same reconnection), and it is planar because
 // the band lies in the face. After the move, label a names the edge from a's tail to b's head
 // and b the edge from b's tail to a's head; later bands refer to these.
+// A PD code does not say in which face of one connected piece another piece lies, and a split
+// piece can be moved into any face (over everything else), turned so that any of its faces is
+// outermost and flipped: so edges of different pieces always bound a common face, coherently,
+// and the band between them is the connected sum's (families/sum.ts, the same exchange).
 
 import { faces } from '../moves/faces';
-import { orient, PDCode, Slot, writablePD } from '../pd';
+import { connectedPieces, orient, PDCode, Slot, writablePD } from '../pd';
 import { diagram } from '../diagram';
 import { BandError, BandPresentation, Saddle } from './types';
 
@@ -38,6 +42,9 @@ function saddle(stage: Stage, { a, b }: Saddle, band: number): Stage {
     if (!stage.heads.has(e)) throw new BandError(`band ${band}: there is no edge ${e}`);
   }
   if (a === b) throw new BandError(`band ${band} joins edge ${a} to itself; a band joins two different edges`);
+  const pieces = connectedPieces(stage.pd);
+  const piece = (e: number): number => pieces.findIndex((p) => p.includes(stage.heads.get(e)!.crossing));
+  if (piece(a) !== piece(b)) return exchangeHeads(stage, a, b);
   // For every face, the edges on its boundary and whether the face walk runs along each.
   let shared = false;
   for (const face of faces(stage.pd)) {

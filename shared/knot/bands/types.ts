@@ -10,7 +10,12 @@ export interface Saddle {
   b: number;
 }
 
-/** A link (PD code plus crossingless unknots, which bands cannot reach) and its bands in order. */
+/**
+ * A link (PD code plus crossingless unknots, which bands cannot reach: give such a component a
+ * kink first) and its bands in order. Band k names edges of the code after bands 1..k-1: after
+ * the band {a, b}, label a is the edge from a's tail to b's head and b the edge from b's tail to
+ * a's head (saddle.ts), so a later band on the far part of a's old edge names b.
+ */
 export interface BandPresentation {
   pd: PDCode;
   unknots: number;
