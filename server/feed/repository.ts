@@ -24,9 +24,8 @@ export async function feedSketches(db: Db, f: FeedFilter): Promise<Sketch[]> {
   if (f.ownerId) qb.andWhere('s.ownerId = :owner', { owner: f.ownerId });
   if (f.tag) qb.andWhere('EXISTS (SELECT 1 FROM json_each(s.tags) t WHERE lower(t.value) = :tag)', { tag: f.tag });
   if (f.hasResults !== undefined) {
-    const sql = await hasResultsSql(db, 's.id');
-    if (sql) qb.andWhere(f.hasResults ? sql : `NOT ${sql}`);
-    else if (f.hasResults) qb.andWhere('1 = 0'); // no runs yet, so nothing has results
+    const sql = hasResultsSql('s.id');
+    qb.andWhere(f.hasResults ? sql : `NOT ${sql}`);
   }
   return qb.orderBy('s.version', 'DESC').limit(f.take).getMany();
 }
