@@ -33,7 +33,7 @@ import { SlateCanvas } from './SlateCanvas';
 import { SelectionBar, Toolbar } from './Toolbar';
 import { FramingDialog } from './FramingDialog';
 import { SketchDetails } from './SketchDetails';
-import { Dialog } from './Dialog';
+import { Dialog } from '@/components/ui/Dialog';
 import { ShareControl, sharedLabel, useRefusedShares } from './ShareControl';
 import { colors, fonts, space, type } from '@/constants/theme';
 
