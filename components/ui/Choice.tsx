@@ -1,6 +1,6 @@
 // A segmented choice of a few options (radio semantics), used by dialogs and forms.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
-import { TOUCH, colors, radius, space, type } from '@/constants/theme';
+import { TOUCH, colors, radius, shadows, space, type } from '@/constants/theme';
 
 export function Choice<T extends string>({ label, options, value, onChange }: {
   label: string;
@@ -25,7 +25,7 @@ export function Choice<T extends string>({ label, options, value, onChange }: {
 const styles = StyleSheet.create({
   choice: { flexDirection: 'row', flexWrap: 'wrap', backgroundColor: colors.sunken, borderRadius: radius.md, padding: 3, gap: 3, alignSelf: 'flex-start' },
   option: { paddingHorizontal: space.md, minHeight: TOUCH, justifyContent: 'center', borderRadius: radius.sm },
-  optionOn: { backgroundColor: colors.surface, boxShadow: '0 1px 2px rgba(28,34,39,0.12)' } as object,
+  optionOn: { backgroundColor: colors.surface, boxShadow: shadows.chosen } as object,
   optionText: { ...type.label, color: colors.inkMuted },
   optionTextOn: { color: colors.ink },
 });

@@ -1,7 +1,7 @@
 // A centred card over a dimmed screen (Modal): the paste, families, framing, details and conventions sheets.
 import { useEffect } from 'react';
 import { Modal, Platform, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
-import { colors, radius, space, type } from '@/constants/theme';
+import { colors, radius, shadows, space, type } from '@/constants/theme';
 
 export function Dialog({ title, visible, onClose, children, wide = false }: {
   title: string;
@@ -36,8 +36,8 @@ export function Dialog({ title, visible, onClose, children, wide = false }: {
 }
 
 const styles = StyleSheet.create({
-  scrim: { flex: 1, backgroundColor: 'rgba(28,34,39,0.45)', alignItems: 'center', justifyContent: 'center', paddingHorizontal: space.lg, paddingVertical: 64 },
-  card: { width: '100%', maxHeight: '100%', backgroundColor: colors.surface, borderRadius: radius.lg, overflow: 'hidden', boxShadow: '0 12px 40px rgba(28,34,39,0.25)' } as object,
+  scrim: { flex: 1, backgroundColor: colors.scrim, alignItems: 'center', justifyContent: 'center', paddingHorizontal: space.lg, paddingVertical: 64 },
+  card: { width: '100%', maxHeight: '100%', backgroundColor: colors.surface, borderRadius: radius.lg, overflow: 'hidden', boxShadow: shadows.card } as object,
   head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', paddingLeft: space.xl, paddingRight: space.sm, paddingTop: space.md, borderBottomWidth: 1, borderBottomColor: colors.line, paddingBottom: space.sm },
   title: { ...type.title, color: colors.ink },
   close: { width: 44, height: 44, alignItems: 'center', justifyContent: 'center' },
