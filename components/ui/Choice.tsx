@@ -13,7 +13,7 @@ export function Choice<T extends string>({ label, options, value, onChange }: {
       {options.map((o) => {
         const on = o.value === value;
         return (
-          <Pressable key={o.value} role="radio" aria-checked={on} aria-label={o.label} onPress={() => onChange(o.value)} style={[styles.option, on && styles.optionOn]}>
+          <Pressable key={o.value} role="radio" aria-checked={on} onPress={() => onChange(o.value)} style={[styles.option, on && styles.optionOn]}>
             <Text style={[styles.optionText, on && styles.optionTextOn]}>{o.label}</Text>
           </Pressable>
         );
