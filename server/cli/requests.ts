@@ -14,6 +14,7 @@ import { linkingMatrix } from '@/shared/knot/linking';
 import { guessName } from '@/shared/knot/names';
 import { khovanov, KhRing } from '@/shared/khovanov';
 import { rasmussenS } from '@/shared/rasmussen';
+import { bandCertificate, compareSurfaces, Saddle, surfaceClass } from '@/shared/knot/bands';
 
 export const computable = [
   'components',
@@ -31,6 +32,8 @@ export const computable = [
   'kh',
   'pd',
   's',
+  'bands',
+  'surfaceClass',
 ] as const;
 export type Computable = (typeof computable)[number];
 
@@ -38,7 +41,7 @@ export type Computable = (typeof computable)[number];
  * What is computed when a request names nothing: everything but the PD code itself and what can
  * be slow on large diagrams (Khovanov homology, s, HOMFLY-PT by its skein tree).
  */
-export const defaultCompute: readonly Computable[] = computable.filter((c) => c !== 'kh' && c !== 's' && c !== 'pd' && c !== 'homfly');
+export const defaultCompute: readonly Computable[] = computable.filter((c) => !['kh', 's', 'pd', 'homfly', 'bands', 'surfaceClass'].includes(c));
 
 // The limits of the API and sync (shared/api/sketches.ts): a braid letter or DT entry is a crossing.
 const code = {
@@ -49,6 +52,9 @@ const code = {
   unknots: Unknots.optional(),
 };
 const oneCode = (keys: string[]) => (r: Record<string, unknown>) => keys.filter((k) => r[k] !== undefined).length === 1;
+
+// A band is a saddle between two edges of one face; a diagram has at most 2 * crossings edges.
+const Saddles = z.array(z.tuple([z.number().int(), z.number().int()])).max(diagramLimits.crossings);
 
 /** The diagram a cable is taken of: a code, with a framing per component (null = blackboard). */
 const CableOf = z
@@ -72,9 +78,15 @@ export const Request = z
     reduced: z.boolean().optional(),
     /** For "colourings": the modulus n (default 3). */
     n: z.number().int().min(2).optional(),
+    /** Bands as saddles [a, b] between edges of the request's PD code (shared/knot/bands). */
+    bands: Saddles.optional(),
+    /** For "surfaceClass": a second presentation on the same code, to compare classes with. */
+    compareBands: Saddles.optional(),
   })
   .strict()
-  .refine(oneCode(['pd', 'braid', 'dt', 'cable']), { message: 'give exactly one of "pd", "braid", "dt" or "cable"' });
+  .refine(oneCode(['pd', 'braid', 'dt', 'cable']), { message: 'give exactly one of "pd", "braid", "dt" or "cable"' })
+  .refine((r) => (r.bands === undefined && r.compareBands === undefined) || r.pd !== undefined, { message: '"bands" and "compareBands" name edges of the request\'s "pd" code' })
+  .refine((r) => !r.compute?.some((c) => c === 'bands' || c === 'surfaceClass') || r.bands !== undefined, { message: '"bands" and "surfaceClass" need "bands": [[a, b], ...]' });
 export type Request = z.infer<typeof Request>;
 
 export type Answer = Record<string, unknown>;
@@ -130,6 +142,19 @@ export function answer(r: Request): Answer {
   }
   // A link of several components throws "s is defined for knots here" (an {id, error} line).
   if (wanted.has('s')) out.s = { Q: rasmussenS(d.pd, 'Q', { unknots: d.unknots }), F2: rasmussenS(d.pd, 'F2', { unknots: d.unknots }) };
+  const saddles = (list: [number, number][]): Saddle[] => list.map(([a, b]) => ({ a, b }));
+  const presentation = { pd: d.pd, unknots: d.unknots, saddles: saddles(r.bands ?? []) };
+  if (wanted.has('bands')) {
+    const c = bandCertificate(presentation);
+    out.bands = { after: c.after, components: c.components, bands: c.bands, unlink: c.unlink, chi: c.chi, genusBound: c.genusBound, ribbon: c.ribbon };
+  }
+  if (wanted.has('surfaceClass')) {
+    // The crossing limit is checked before any work (surfaceClass, CLASS_CROSSINGS).
+    if (r.compareBands) {
+      const cmp = compareSurfaces(d.pd, d.unknots, presentation.saddles, saddles(r.compareBands));
+      out.surfaceClass = { ...cmp.a, compare: { verdict: cmp.verdict, other: cmp.b } };
+    } else out.surfaceClass = surfaceClass(presentation);
+  }
   return out;
 }
 

@@ -1,6 +1,7 @@
 // Reference computation: the full cube of resolutions with Khovanov's Frobenius algebra
 // A = R[x]/(x^2) (Khovanov 2000, arXiv math/9908171) in the gradings of Bar-Natan 2002
-// (arXiv math/0201043). Exponential in the crossings; used by the tests to check the engine.
+// (arXiv math/0201043). Exponential in the crossings; used by the tests to check the engine,
+// and its resolutions and edge maps by the class of a surface (shared/knot/bands/class.ts).
 
 import { orient, PDCode } from '../knot/pd';
 import { Ring } from '../linalg/ring';
@@ -21,26 +22,7 @@ export function cubeKhovanov<T>(pd: PDCode, ring: Ring<T>, marked?: number): KhG
   const labelIndex = new Map(labels.map((l, k) => [l, k]));
   const at = (l: number): number => labelIndex.get(l)!;
 
-  // Circles of a state: labels joined by the smoothing arcs; circle number per label.
-  const circlesOf = (state: number): { of: number[]; count: number } => {
-    const parent = labels.map((_, k) => k);
-    const find = (x: number): number => (parent[x] === x ? x : (parent[x] = find(parent[x])));
-    const join = (a: number, b: number): void => void (parent[find(labelIndex.get(a)!)] = find(labelIndex.get(b)!));
-    pd.forEach(([a, b, c, d], k) => {
-      const one = (state >> k) & 1;
-      join(a, one ? d : b);
-      join(c, one ? b : d);
-    });
-    const ids = new Map<number, number>();
-    const of = labels.map((_, k) => {
-      const r = find(k);
-      if (!ids.has(r)) ids.set(r, ids.size);
-      return ids.get(r)!;
-    });
-    return { of, count: n === 0 ? 1 : ids.size };
-  };
-
-  const states = Array.from({ length: 1 << n }, (_, s) => circlesOf(s));
+  const states = Array.from({ length: 1 << n }, (_, s) => resolve(pd, s, labelIndex));
   const markedCircle = (s: number): number => (marked === undefined ? -1 : n === 0 ? 0 : states[s].of[labelIndex.get(marked)!]);
   // Generators of a state: masks over its circles, bit set = x. Reduced keeps the marked bit set.
   const gens: Generator[] = [];
@@ -74,11 +56,38 @@ export function cubeKhovanov<T>(pd: PDCode, ring: Ring<T>, marked?: number): KhG
   return homology(ring, gens, entries);
 }
 
-type State = { of: number[]; count: number };
+/** The circles of one resolution: circle number of every label (by the label's index), and how many. */
+export type State = { of: number[]; count: number };
 
-// The image of a generator under the edge map that changes crossing x = [a,b,c,d] from its
-// 0-smoothing (a,b)(c,d) to its 1-smoothing (a,d)(b,c): a merge m or a split Delta.
-function edgeMap(from: State, to: State, [a, b, c]: readonly number[], mask: number, at: (l: number) => number): number[] {
+/**
+ * The circles of resolution `state` (bit k set: crossing k takes its 1-smoothing), labels
+ * joined by the smoothing arcs; `labelIndex` numbers the labels. The empty code is one circle.
+ */
+export function resolve(pd: PDCode, state: number, labelIndex: ReadonlyMap<number, number>): State {
+  const parent = Array.from({ length: labelIndex.size }, (_, k) => k);
+  const find = (x: number): number => (parent[x] === x ? x : (parent[x] = find(parent[x])));
+  const join = (a: number, b: number): void => void (parent[find(labelIndex.get(a)!)] = find(labelIndex.get(b)!));
+  pd.forEach(([a, b, c, d], k) => {
+    const one = (state >> k) & 1;
+    join(a, one ? d : b);
+    join(c, one ? b : d);
+  });
+  const ids = new Map<number, number>();
+  const of = parent.map((_, k) => {
+    const r = find(k);
+    if (!ids.has(r)) ids.set(r, ids.size);
+    return ids.get(r)!;
+  });
+  return { of, count: pd.length === 0 ? 1 : ids.size };
+}
+
+/**
+ * The image of a generator (a mask of x-labelled circles) under the edge map that changes
+ * crossing x = [a,b,c,d] from its 0-smoothing (a,b)(c,d) to its 1-smoothing (a,d)(b,c): a merge
+ * m of the circles through a and c, or a split Delta into the circles through a and b. Any
+ * saddle is one: pass [a, b, b] for the saddle that separates (or joins) edges a and b.
+ */
+export function edgeMap(from: State, to: State, [a, b, c]: readonly number[], mask: number, at: (l: number) => number): number[] {
   const ca = from.of[at(a)];
   const cc = from.of[at(c)];
   let out = 0;

@@ -164,3 +164,31 @@ describe('cables in requests', () => {
     expect(ask({ cable: { of: { braid: [1, 1, 1], framings: [0, 1] }, rPlus: 2, rMinus: 0 } }).error).toMatch(/2 framings given for 1 component/);
   });
 });
+
+describe('bands in requests', () => {
+  const ask = (request: object) => JSON.parse(answerLine(JSON.stringify({ id: 0, ...request })));
+  const trefoil = [[4, 2, 5, 1], [2, 6, 3, 5], [6, 4, 1, 3]]; // fromBraid([1, 1, 1], 2)
+  // P(3,3,-3) = 9_46 as pretzelLink([3, 3, -3]) builds it (tests/shared/bands-fixtures.ts).
+  const p946 = [[12, 1, 13, 2], [2, 11, 3, 12], [10, 3, 11, 4], [6, 13, 7, 14], [14, 5, 15, 6], [4, 15, 5, 16], [7, 1, 8, 18], [17, 9, 18, 8], [9, 17, 10, 16]];
+
+  it('answers "bands": two bands take the trefoil to the unknot, a genus-1 surface (tests/shared/bands.test.ts)', () => {
+    expect(ask({ pd: trefoil, bands: [[4, 6], [2, 6]], compute: ['bands'] })).toEqual({
+      id: 0,
+      bands: { after: { pd: [], unknots: 1, components: 1 }, components: 1, bands: 2, unlink: 'crossingless', chi: -1, genusBound: 1, ribbon: false },
+    });
+  });
+
+  it('answers "surfaceClass" with "compareBands": the two standard disks of 9_46 differ (Sundberg and Swann, arXiv 2103.01438)', () => {
+    const a = ask({ pd: p946, bands: [[2, 12]], compareBands: [[6, 14]], compute: ['surfaceClass'] });
+    expect(a.surfaceClass).toMatchObject({ h: 0, q: 1, zero: false, compare: { verdict: 'differ', other: { h: 0, q: 1, zero: false } } });
+    expect(a.surfaceClass.support[0]).toEqual({ smoothing: expect.stringMatching(/^[01]{9}$/), x: expect.any(Array) });
+  });
+
+  it('refuses bands without a PD code, a class without bands, a bad band and a code over the crossing limit', () => {
+    expect(ask({ braid: [1, 1, 1], bands: [[4, 6]], compute: ['bands'] }).error).toMatch(/name edges of the request's "pd" code/);
+    expect(ask({ pd: trefoil, compute: ['surfaceClass'] }).error).toMatch(/need "bands"/);
+    expect(ask({ pd: trefoil, bands: [[2, 5]], compute: ['bands'] }).error).toBe('band 1 would make the surface non-orientable: edges 2 and 5 run opposite ways around their common face');
+    const big = ask({ braid: new Array(16).fill(1), compute: ['pd'] }).pd;
+    expect(ask({ pd: big, bands: [[1, 3]], compute: ['surfaceClass'] }).error).toBe('the class is computed on the cube of resolutions, up to 14 crossings; this diagram has 16');
+  });
+});

@@ -1,0 +1,52 @@
+// The class of a ribbon disk of the pretzel knots P(p, -p, q) (ribbon: a band joins the p and
+// -p columns; the band used is the first orientable saddle of the generated code that is
+// certified ribbon), by the cube at two bidegrees; goal for 12 crossings <= 2 s, 14 is the
+// default limit. Also the sizes
+// that do not depend on load: the basis of C^{0,1}/B^{0,1} and the class's support.
+
+import { bandCertificate, BandPresentation, surfaceClass } from '@/shared/knot/bands';
+import { pretzelLink } from '@/shared/knot/families/pretzel';
+import { Line, median, round } from './timing';
+
+function ribbonBand(twists: number[]): BandPresentation {
+  const { pd } = pretzelLink(twists);
+  const labels = [...new Set(pd.flat())].sort((a, b) => a - b);
+  for (const a of labels) {
+    for (const b of labels) {
+      if (b <= a) continue;
+      const p = { pd, unknots: 0, saddles: [{ a, b }] };
+      try {
+        if (bandCertificate(p).ribbon) return p;
+      } catch {
+        // not an orientable saddle across a common face
+      }
+    }
+  }
+  throw new Error(`no one-band ribbon presentation of P(${twists.join(',')}) found`);
+}
+
+export function bandsBench(): Line[] {
+  const lines: Line[] = [];
+  const cases: [number[], number, string | undefined][] = [
+    [[3, -3, 6], 5, '<= 2 s'],
+    [[5, -5, 2], 5, '<= 2 s'],
+    [[5, -5, 4], 3, undefined],
+    // 16 crossings, past the default limit (CLASS_CROSSINGS = 14); P(7,-7,2) takes about a minute.
+    [[5, -5, 6], 1, undefined],
+  ];
+  for (const [twists, runs, goal] of cases) {
+    const p = ribbonBand(twists);
+    const name = `P(${twists.join(',')}) (${p.pd.length} crossings)`;
+    const times: number[] = [];
+    let c = surfaceClass(p, { maxCrossings: 16 });
+    for (let r = 0; r < runs; r++) {
+      const t = performance.now();
+      c = surfaceClass(p, { maxCrossings: 16 });
+      times.push(performance.now() - t);
+    }
+    lines.push({ name: `disk class of ${name}`, value: round(median(times)), unit: 'ms', goal });
+    lines.push({ name: `${name}: dim C^{0,1}/B^{0,1}`, value: c.basisSize, unit: 'generators' });
+    lines.push({ name: `${name}: support of the class`, value: c.support.length, unit: 'generators' });
+  }
+  return lines;
+}

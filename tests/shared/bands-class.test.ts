@@ -1,0 +1,118 @@
+// The class of a band surface in Kh(K; F2) (shared/knot/bands/class.ts). Sources beside each
+// value; the presentations are built in bands-fixtures.ts.
+import { BandError, bandCertificate, BandPresentation, compareSurfaces, Saddle, surfaceClass } from '@/shared/knot/bands';
+import { diagram, Diagram } from '@/shared/knot/diagram';
+import { addKink, faces, pushAcross, Rng, seededRng } from '@/shared/knot/moves';
+import { orient, PDCode } from '@/shared/knot/pd';
+import { disks946, p33m3, ribbon, trefoil } from './bands-fixtures';
+import { scramble } from './scramble';
+
+const renamed = (p: BandPresentation, seed: number): BandPresentation => {
+  const { pd, rename } = scramble(p.pd, seededRng(seed));
+  return { ...p, pd, saddles: p.saddles.map(({ a, b }) => ({ a: rename.get(a)!, b: rename.get(b)! })) };
+};
+
+/**
+ * Random R1 and R2 moves (adding a kink or a finger) that keep away from the bands: no kink on a
+ * band's edge, no finger in a face holding one. The moves keep the crossing order and slots of
+ * the old crossings, so a band's edge is found again at its old head slot.
+ */
+function movedAway(pd: PDCode, bands: Saddle[][], moves: number, rng: Rng): { pd: PDCode; bands: Saddle[][] } {
+  let d: Diagram = diagram(pd);
+  let current = bands;
+  const pick = <T>(list: readonly T[]): T => list[Math.floor(rng() * list.length)];
+  for (let k = 0; k < moves; k++) {
+    const busy = new Set(current.flat().flatMap(({ a, b }) => [a, b]));
+    const free = [...new Set(d.pd.flat())].filter((l) => !busy.has(l));
+    const quiet = faces(d.pd).filter((f) => f.length >= 2 && f.every((c) => !busy.has(d.pd[c.crossing][c.arrive])));
+    const heads = orient(d.pd).head;
+    const next = quiet.length > 0 && rng() < 0.5
+      ? (() => {
+          const f = pick(quiet);
+          const i = Math.floor(rng() * f.length);
+          return pushAcross(d, f, i, (i + 1 + Math.floor(rng() * (f.length - 1))) % f.length, rng() < 0.5);
+        })()
+      : addKink(d, pick(free), { sign: rng() < 0.5 ? 1 : -1, overFirst: rng() < 0.5 });
+    const at = (l: number): number => next.pd[heads.get(l)!.crossing][heads.get(l)!.position];
+    current = current.map((list) => list.map(({ a, b }) => ({ a: at(a), b: at(b) })));
+    d = next;
+  }
+  return { pd: d.pd, bands: current };
+}
+
+describe('the class of a ribbon disk', () => {
+  // A ribbon disk is a ribbon concordance from the unknot plus a birth, and a ribbon concordance
+  // induces an injection on Khovanov homology (Levine and Zemke, "Khovanov homology and ribbon
+  // concordances", 2019, arXiv 1903.01546): the class is nonzero, at q = chi = 1.
+  it.each(ribbon.map((r) => [r.name, r.presentation] as const))('%s: nonzero at (0, 1)', (_, p) => {
+    const c = surfaceClass(p);
+    expect(c).toMatchObject({ h: 0, q: 1, zero: false });
+    expect(c.support.length).toBeGreaterThan(0);
+    expect(c.support.length).toBeLessThanOrEqual(c.basisSize);
+  }, 60_000);
+
+  it('stays nonzero when the code is relabelled and its crossings reordered', () => {
+    ribbon.forEach(({ presentation: p }, k) => expect(surfaceClass(renamed(p, 100 + k)).zero).toBe(false));
+  }, 60_000);
+});
+
+describe('the two standard ribbon disks of 9_46', () => {
+  // Sundberg and Swann, "Relative Khovanov-Jacobsson classes", 2021, arXiv 2103.01438: the classes
+  // of the two disks differ. Here over F2.
+  it('have different classes', () => {
+    const [a, b] = [disks946.first[0], disks946.second[0]];
+    expect(compareSurfaces(p33m3.pd, 0, a.saddles, b.saddles).verdict).toBe('differ');
+  }, 60_000);
+
+  it('a band slid along its column (an isotopy) gives the same class', () => {
+    for (const [a, b] of [disks946.first, disks946.second]) {
+      expect(compareSurfaces(p33m3.pd, 0, a.saddles, b.saddles).verdict).toBe('equal: no conclusion');
+    }
+  }, 60_000);
+
+  it('the verdicts do not depend on the labels or the order of the crossings', () => {
+    for (const seed of [1, 2, 3]) {
+      const [a, b, a2] = [disks946.first[0], disks946.second[0], disks946.first[1]].map((p) => ({ ...p, pd: p33m3.pd }));
+      const { pd, rename } = scramble(p33m3.pd, seededRng(seed));
+      const move = (p: BandPresentation) => p.saddles.map(({ a: x, b: y }) => ({ a: rename.get(x)!, b: rename.get(y)! }));
+      expect(compareSurfaces(pd, 0, move(a), move(b)).verdict).toBe('differ');
+      expect(compareSurfaces(pd, 0, move(a), move(a2)).verdict).toBe('equal: no conclusion');
+    }
+  }, 60_000);
+});
+
+describe('invariance under Reidemeister moves away from the bands', () => {
+  // A Reidemeister move of K away from the bands is an isotopy of the surface's boundary; the
+  // classes move by the isomorphism it induces (Jacobsson 2004, arXiv math/0206303; Bar-Natan
+  // 2005, arXiv math/0410495), so being zero and differing are kept.
+  it('the 9_46 disks still differ, and a ribbon disk stays ribbon with a nonzero class', () => {
+    const rng = seededRng(946);
+    for (let trial = 0; trial < 3; trial++) {
+      const { pd, bands } = movedAway(p33m3.pd, [disks946.first[0].saddles, disks946.second[0].saddles], 2, rng);
+      expect(pd.length).toBeGreaterThan(9);
+      expect(compareSurfaces(pd, 0, bands[0], bands[1], { maxCrossings: 16 }).verdict).toBe('differ');
+    }
+    for (const { presentation: p } of ribbon.slice(0, 2)) {
+      const { pd, bands } = movedAway(p.pd, [p.saddles], 1, rng);
+      const moved = { pd, unknots: 0, saddles: bands[0] };
+      expect(bandCertificate(moved).ribbon).toBe(true);
+      expect(surfaceClass(moved, { maxCrossings: 16 })).toMatchObject({ q: 1, zero: false });
+    }
+  }, 120_000);
+});
+
+describe('other surfaces and refusals', () => {
+  it('the genus-1 surface of the positive trefoil has class 0: Kh^{0,-1} of the positive trefoil is 0', () => {
+    // Kh(positive trefoil) = q + q^3 + t^2 q^5 + t^3 q^9 over Q (Bar-Natan 2002, arXiv math/0201043; docs/conventions.md).
+    expect(surfaceClass({ pd: trefoil.pd, unknots: 0, saddles: [{ a: 4, b: 6 }, { a: 2, b: 6 }] })).toMatchObject({ h: 0, q: -1, zero: true, basisSize: 0 });
+  });
+
+  it('refuses bands that do not end at a certified unlink, and codes over the crossing limit before any work', () => {
+    expect(() => surfaceClass({ pd: trefoil.pd, unknots: 0, saddles: [{ a: 4, b: 6 }] })).toThrow(/certified unlink; the result is not an unlink/);
+    expect(() => surfaceClass(disks946.first[0], { maxCrossings: 8 })).toThrow(new BandError('the class is computed on the cube of resolutions, up to 8 crossings; this diagram has 9'));
+  });
+
+  it('a crossingless unknot with no bands: its disk, the class 1', () => {
+    expect(surfaceClass({ pd: [], unknots: 1, saddles: [] })).toMatchObject({ h: 0, q: 1, zero: false });
+  });
+});
