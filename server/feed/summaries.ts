@@ -22,7 +22,7 @@ class Summaries {
   private chain: Promise<void> = Promise.resolve();
   /** Sketches waiting for the pool, with the diagram to summarise. */
   private readonly waiting = new Map<string, { hash: string; diagram: Counted }>();
-  /** The sketch and diagram hash in the pool now; one at a time, so a request's job is never stuck behind a backfill. */
+  /** The sketch and diagram hash in the pool now; one at a time, so the pool's other thread is free for requests' jobs. */
   private computing: string | null = null;
   private stopped = false;
 

@@ -11,7 +11,7 @@ type Tasks = typeof tasks;
 export type JobName = keyof Tasks;
 
 export interface JobLimits {
-  /** Threads computing at once. */
+  /** Threads computing at once; two, so a request's job runs beside a feed summary (summaries.ts takes one at a time). */
   threads: number;
   /** Wall time of one job, from when it was submitted (queueing included). */
   maxWallMs: number;
@@ -19,7 +19,7 @@ export interface JobLimits {
   maxMemoryMb: number;
 }
 
-export const defaultJobLimits = (): JobLimits => ({ threads: 1, maxWallMs: 120_000, maxMemoryMb: 1024 });
+export const defaultJobLimits = (): JobLimits => ({ threads: 2, maxWallMs: 120_000, maxMemoryMb: 1024 });
 
 export interface JobPool {
   run<N extends JobName>(name: N, input: Parameters<Tasks[N]>[0]): Promise<ReturnType<Tasks[N]>>;

@@ -5,6 +5,7 @@
 // (accepted, 14 cables built in the job pool, cancelled at once).
 import { randomUUID } from 'node:crypto';
 import { AuthResponse } from '@/shared/api/auth';
+import { RunDetail } from '@/shared/api/runs';
 import { fromBraid } from '@/shared/knot/braid';
 import { torusLink } from '@/shared/knot/families/torus';
 import { insertGroup } from '@/server/groups/repository';
@@ -49,8 +50,8 @@ export async function freezeBench(): Promise<Line[]> {
     await probe('a sweep with framing 80 is refused', () => sweep(80));
     await probe('a sweep with framing 160 is refused', () => sweep(160));
     await probe('a sweep with framing 30 is accepted', async () => {
-      const { body } = await sweep(30);
-      await call('POST', `/api/runs/${body.id}/cancel`, {}, token);
+      const { id } = RunDetail.parse((await sweep(30)).body);
+      await call('POST', `/api/runs/${id}/cancel`, {}, token);
     });
     return lines;
   } finally {
