@@ -16,7 +16,7 @@ export interface Probe {
 const percentile = (sorted: number[], p: number) => sorted[Math.max(0, Math.ceil((p / 100) * sorted.length) - 1)];
 
 /** Probes `url`/api/health every `everyMs` while `work` runs and for at least `minMs`; latencies in ms. */
-export async function probeHealth<T>(url: string, work: () => Promise<T>, { everyMs = 50, minMs = 3_000 } = {}): Promise<{ value: T; probe: Probe }> {
+export async function probeHealth<T>(url: string, work: () => Promise<T>, { everyMs = 50, minMs = 5_000 } = {}): Promise<{ value: T; probe: Probe }> {
   // Node loads its fetch client on first use, synchronously: not a cost of the server's.
   await (await fetch(`${url}/api/health`)).text();
   const latencies: number[] = [];
