@@ -3,6 +3,9 @@
 const alias = { '^@/(.*)$': '<rootDir>/$1' };
 
 module.exports = {
+  // 5 s per test (the default) is tight for rendering and server tests on a busy 2-core CI
+  // machine; a test that hangs still fails, after 60 s.
+  testTimeout: 60_000,
   reporters: ['default', ['<rootDir>/tests/summary-reporter.js', { label: 'unit' }]],
   projects: [
     {

@@ -11,12 +11,21 @@ export const colors = {
   inkMuted: '#59636B',
   inkFaint: '#8A9298',
   accent: '#1F5F74',
+  accentPressed: '#184C5D',
   accentSoft: '#E1ECEF',
   onAccent: '#FFFFFF',
   danger: '#A4321F',
   dangerSoft: '#F8E7E2',
   success: '#2D6E47',
   successSoft: '#E3F0E7',
+  /** Behind a dialog or sheet. */
+  scrim: 'rgba(28,34,39,0.45)',
+} as const;
+
+/** Shadows of raised pieces: a dialog card, the chosen option of a segmented choice. */
+export const shadows = {
+  card: '0 12px 40px rgba(28,34,39,0.25)',
+  chosen: '0 1px 2px rgba(28,34,39,0.12)',
 } as const;
 
 /** The Slate: a dark board surface the chalk strands are drawn on. */
@@ -25,9 +34,12 @@ export const slate = {
   raised: '#2C343A',
   grid: '#37414858',
   chalkDim: '#9AA4AA',
+  /** A drawing problem marked on the canvas (a retrace, a crossing that cannot be read). */
+  warn: '#FF8A73',
+  warnFill: '#FF8A7333',
+  warnText: '#FFB3A3',
   /** Bands (Bands tool): a violet apart from every chalk colour, drawn as a translucent ribbon. */
   band: '#C9A7FF',
-  bandRefused: '#FF8A73',
 } as const;
 
 /**

@@ -16,7 +16,7 @@ export function useApiForm<S extends z.ZodType<FieldValues, FieldValues>>(opts: 
   const [banner, setBanner] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const form = useForm<z.input<S>, unknown, z.output<S>>({
-    resolver: zodResolver(opts.schema as never),
+    resolver: zodResolver(opts.schema),
     defaultValues: opts.defaultValues,
   });
   const submit = form.handleSubmit(async (values) => {

@@ -6,6 +6,7 @@ import { z } from 'zod';
 import type { SmtpTarget } from './mail/mailer';
 import { defaultMailPacing, type MailPacing } from './notifications/pacer';
 import type { PhotoStorage } from './photos/store';
+import { defaultJobLimits, type JobLimits } from './jobs/pool';
 import { defaultRunLimits, type RunLimits } from './runs/limits';
 
 export interface Config {
@@ -30,6 +31,8 @@ export interface Config {
   mailFrom: string;
   /** Limits of heavy runs and the size of their worker pool. */
   runs: RunLimits;
+  /** The job pool of short computations off the request thread (feed summaries, cables, keys). */
+  jobs: JobLimits;
   /** Where board photos are kept: a local folder, or an S3-compatible bucket. */
   photos: PhotoStorage;
   /** Comments one person may post per window (then 429). */
@@ -52,6 +55,7 @@ export function defaultConfig(overrides: Partial<Config> = {}): Config {
     webDir: null,
     mailFrom: 'Overstrand <no-reply@overstrand.invalid>',
     runs: defaultRunLimits(),
+    jobs: defaultJobLimits(),
     photos: { kind: 'disk', dir: 'data/photos' },
     commentRateLimit: { windowMs: 60_000, limit: 20 },
     mailPacing: defaultMailPacing(),

@@ -10,6 +10,7 @@ import { defaultConfig, type Config } from './config';
 import { keptJwtSecret } from './auth/secret';
 import { openDatabase } from './db/connect';
 import { seedDemo } from './demo/seed';
+import { createJobPool } from './jobs/pool';
 import type { Deps } from './deps';
 import { createSmtpMailer, type Mailer, type SmtpTarget } from './mail/mailer';
 import { startSmtpFake, type Mailbox } from './mail/smtp-fake';
@@ -55,10 +56,12 @@ export async function startServer(options: StartOptions = {}): Promise<RunningSe
   const mailbox = options.mailer || options.smtp ? null : await startSmtpFake();
   const target = options.smtp ?? (mailbox && { host: mailbox.host, port: mailbox.port, plain: true });
   const mailer = options.mailer ?? createSmtpMailer(target!, config.mailFrom);
-  const deps: Deps = { db, config, mailer, mailbox, log, now: options.now ?? (() => new Date()) };
+  const jobs = createJobPool(config.jobs);
+  const deps: Deps = { db, config, mailer, mailbox, log, jobs, now: options.now ?? (() => new Date()) };
   const services: { stop(): Promise<void> }[] = [];
   const closeAll = async () => {
     for (const s of services.splice(0)) await s.stop();
+    await jobs.destroy();
     await mailbox?.stop();
     await db.destroy();
   };

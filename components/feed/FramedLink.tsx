@@ -2,19 +2,28 @@
 // (blackboard resolved, marked "bb") and the linking number of each pair, numbered as on the
 // picture (docs/conventions.md, Framings and cables). Computed on the device from the code.
 import { StyleSheet, Text, View } from 'react-native';
+import { analyse } from '@/shared/drawing/analyse';
+import { framedText } from '@/lib/slate/framed-text';
+import { diagramNumbers } from '@/lib/slate/picture';
 import { readoutStages } from '@/lib/slate/readout';
+import { docFromStored } from '@/lib/slate/record';
 import type { PictureSource } from './DiagramPicture';
 import { colors, type } from '@/constants/theme';
 
 const framingStage = readoutStages.find((s) => s.keys.includes('framings'))!;
 
-const signed = (n: number) => (n > 0 ? `+${n}` : n < 0 ? `−${-n}` : '0');
+/** The Slate's numbers when the sketch was drawn there (its drawing order), else 1, 2, ... */
+function numbersOf(d: PictureSource): number[] | undefined {
+  if (d.geometry == null) return undefined;
+  const doc = docFromStored({ ...d, strokes: [] });
+  return diagramNumbers(doc, analyse(doc.sketch));
+}
 
 function framedData(d: PictureSource) {
   if (d.pd.length === 0 && d.unknots === 0) return null;
   try {
     const { framings = [], linking = [] } = framingStage.run({ pd: d.pd, unknots: d.unknots, framings: d.framings }, {});
-    return { framings, linking };
+    return framedText(framings, linking, numbersOf(d));
   } catch {
     return null; // not a valid PD code: the page says so beside the Jones polynomial
   }
@@ -25,10 +34,8 @@ export function FramedLink({ diagram }: { diagram: PictureSource }) {
   if (!data) return null;
   return (
     <View style={styles.box} testID="framed-link">
-      <Text style={styles.line}>
-        Framings: {data.framings.map((f, i) => `${i + 1}: ${signed(f.value)}${f.blackboard ? ' (bb)' : ''}`).join('   ')}
-      </Text>
-      {data.linking.length ? <Text style={styles.line}>Linking numbers: {data.linking.map((l) => `lk(${l.i + 1},${l.j + 1}) = ${signed(l.value)}`).join('   ')}</Text> : null}
+      <Text style={styles.line}>Framings: {data.framings}</Text>
+      {data.linking ? <Text style={styles.line}>Linking numbers: {data.linking}</Text> : null}
     </View>
   );
 }

@@ -37,7 +37,7 @@ export function SharedSketchReadout({ s }: { s: GroupSketch }) {
         {crossings} crossings{components !== null ? ` · ${components} component${components === 1 ? '' : 's'}` : ''}
       </Text>
       <FramedLink diagram={s.diagram} />
-      {s.invariants.jones ? <Jones inv={s.invariants} lhs="V(t)" /> : <Text style={styles.muted}>No Jones polynomial: the diagram is too large or not a valid PD code.</Text>}
+      {s.invariants.jones || s.invariants.computing ? <Jones inv={s.invariants} lhs="V(t)" /> : <Text style={styles.muted}>No Jones polynomial: the diagram is too large or not a valid PD code.</Text>}
       {s.diagram.pd.length ? <Text style={styles.code} selectable>{pdToText(s.diagram.pd)}</Text> : null}
       {s.latestRun ? (
         <Text role="link" style={styles.run} onPress={() => router.push(`/runs/${s.latestRun!.id}`)}>

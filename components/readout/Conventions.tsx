@@ -1,7 +1,7 @@
 // The conventions the Readout's values follow, in short (the full text is docs/conventions.md),
 // and the line under a knot's name saying which chirality the name table means by it.
 import { StyleSheet, Text, View } from 'react-native';
-import { Dialog } from '@/components/slate/Dialog';
+import { Dialog } from '@/components/ui/Dialog';
 import { colors, space, type } from '@/constants/theme';
 
 const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);

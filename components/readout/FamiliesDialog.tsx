@@ -6,8 +6,9 @@ import type { Diagram } from '@/shared/knot/diagram';
 import { buildFamily, familyList, type FamilyKind, type Placement } from '@/lib/slate/families';
 import { Button } from '@/components/ui/Button';
 import { Banner } from '@/components/ui/Banner';
-import { Choice, Dialog } from '@/components/slate/Dialog';
-import { Field } from '@/components/slate/Field';
+import { Choice } from '@/components/ui/Choice';
+import { Dialog } from '@/components/ui/Dialog';
+import { Field } from '@/components/ui/Field';
 import { colors, space, type } from '@/constants/theme';
 
 const initialValues = () => Object.fromEntries(familyList.flatMap((f) => f.fields.map((x) => [`${f.kind}.${x.key}`, x.initial])));

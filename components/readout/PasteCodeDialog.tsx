@@ -4,8 +4,9 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { Diagram } from '@/shared/knot/diagram';
 import { codeKinds, parseCode, type CodeKind } from '@/lib/slate/codes';
 import { Button } from '@/components/ui/Button';
-import { Choice, Dialog } from '@/components/slate/Dialog';
-import { Field } from '@/components/slate/Field';
+import { Choice } from '@/components/ui/Choice';
+import { Dialog } from '@/components/ui/Dialog';
+import { Field } from '@/components/ui/Field';
 import { colors, type } from '@/constants/theme';
 
 export function PasteCodeDialog({ visible, onClose, onDraw }: {

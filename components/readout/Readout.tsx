@@ -10,6 +10,7 @@ import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
 import { S_MAX_CROSSINGS } from './local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
 import { HOMFLY_DEVICE_LIMIT, nameTeX } from '@/lib/slate/readout';
+import { framedText, signed } from '@/lib/slate/framed-text';
 import { TeX } from '@/components/ui/Math';
 import { ConventionsSheet, chiralityNote } from './Conventions';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
@@ -60,7 +61,6 @@ function ConventionsLink() {
   );
 }
 
-const signed = (n: number) => (n > 0 ? `+${n}` : n < 0 ? `−${-n}` : '0');
 const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
 
 /** s (from its worker) with the two slice-genus bounds; for a link or a large diagram, why not. */
@@ -95,9 +95,7 @@ function SRow({ s, signature }: { s: SState; signature?: number }) {
 
 export function Readout({ state, s, empty, markers, openStrands, numbers }: Props) {
   const v = state.values;
-  const n = (k: number) => numbers?.[k] ?? k + 1;
-  const framings = (v.framings ?? []).map((f, k) => ({ ...f, k: n(k) })).sort((p, q) => p.k - q.k);
-  const linking = (v.linking ?? []).map((l) => ({ i: Math.min(n(l.i), n(l.j)), j: Math.max(n(l.i), n(l.j)), value: l.value })).sort((p, q) => p.i - q.i || p.j - q.j);
+  const framed = framedText(v.framings ?? [], v.linking ?? [], numbers);
   if (empty) {
     return (
       <View style={styles.box} testID="readout">
@@ -176,13 +174,11 @@ export function Readout({ state, s, empty, markers, openStrands, numbers }: Prop
       </Row>
       <SRow s={s} signature={v.signature} />
       <Row label="Framings" k="framings" state={state}>
-        <Text style={styles.num}>
-          {framings.map((f) => `${f.k}: ${signed(f.value)}${f.blackboard ? ' bb' : ''}`).join('   ')}
-        </Text>
+        <Text style={styles.num}>{framed.framings}</Text>
       </Row>
-      {linking.length > 0 ? (
+      {framed.linking ? (
         <Row label="Linking numbers" k="linking" state={state}>
-          <Text style={styles.num}>{linking.map((l) => `lk(${l.i},${l.j}) = ${signed(l.value)}`).join('   ')}</Text>
+          <Text style={styles.num}>{framed.linking}</Text>
         </Row>
       ) : null}
     </View>

@@ -12,29 +12,26 @@ import { pdToText } from '@/shared/text/codes';
 import { useStartRun } from '@/hooks/queries/useRuns';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
+import { Choice } from '@/components/ui/Choice';
 import { Section } from '@/components/ui/Section';
-import { colors, fonts, radius, space, type } from '@/constants/theme';
+import { TOUCH, colors, fonts, radius, space, type } from '@/constants/theme';
 import { computeLocally, warmUpLocal } from './computeLocally';
 import { KhTable } from './KhTable';
 import { LOCAL_MAX_CROSSINGS } from './local-kh';
 import { KhSummary } from './RunResult';
 
-const rings = ['Z', 'Q', 'F2', 'F3', 'Fp'] as const;
-const sweeps = ['0', '2', '3', '4'] as const;
+const ringNames = { Z: 'Z', Q: 'Q', F2: 'F2', F3: 'F3', Fp: 'F_p, any prime' } as const;
+const sweepNames = { '0': 'Khovanov homology', '2': 'Cable sweep, r+ + r- ≤ 2', '3': 'Cable sweep, r+ + r- ≤ 3', '4': 'Cable sweep, r+ + r- ≤ 4' } as const;
 const inputNames = Object.fromEntries(codeKinds.map((c) => [c.kind, c.label])) as Record<CodeKind, string>;
 const LABEL_MAX = 120;
 
-function Choice<T extends string>({ label, options, value, onChange, names }: { label: string; options: readonly T[]; value: T; onChange: (v: T) => void; names?: Record<T, string> }) {
+/** A visible caption over a segmented choice whose options are `names`' keys, in order. */
+function Labelled<T extends string>({ label, names, value, onChange }: { label: string; names: Record<T, string>; value: T; onChange: (v: T) => void }) {
+  const options = (Object.keys(names) as T[]).map((v) => ({ value: v, label: names[v] }));
   return (
     <View style={styles.field}>
       <Text style={styles.label}>{label}</Text>
-      <View role="radiogroup" aria-label={label} style={styles.choices}>
-        {options.map((o) => (
-          <Pressable key={o} role="radio" aria-checked={o === value} onPress={() => onChange(o)} style={[styles.choice, o === value && styles.chosen]}>
-            <Text style={[styles.choiceText, o === value && styles.chosenText]}>{names?.[o] ?? o}</Text>
-          </Pressable>
-        ))}
-      </View>
+      <Choice label={label} options={options} value={value} onChange={onChange} />
     </View>
   );
 }
@@ -59,12 +56,12 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   const [input, setInput] = useState<CodeKind>('pd');
   const [code, setCode] = useState(initialPD ?? '');
   const [onSketch, setOnSketch] = useState(!!sketchId);
-  const [ringChoice, setRingChoice] = useState<(typeof rings)[number]>('Z');
+  const [ringChoice, setRingChoice] = useState<keyof typeof ringNames>('Z');
   const [prime, setPrime] = useState('5');
   const ring = ringChoice === 'Fp' ? `F${prime.trim()}` : ringChoice;
   const [reduced, setReduced] = useState<'unreduced' | 'reduced'>('unreduced');
   const [alsoS, setAlsoS] = useState(false);
-  const [sweep, setSweep] = useState<(typeof sweeps)[number]>('0');
+  const [sweep, setSweep] = useState<keyof typeof sweepNames>('0');
   const [invalid, setInvalid] = useState<string | null>(null);
   const [local, setLocal] = useState<{ fraction: number; result?: KhResultJson; error?: string } | null>(null);
   const start = useStartRun();
@@ -99,7 +96,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   return (
     <View style={styles.form}>
       {onSketch ? <Banner tone="info">On the sketch as it was last synced to the server; its PD code is below.</Banner> : null}
-      <Choice label="Input" options={codeKinds.map((c) => c.kind)} value={input} onChange={setInput} names={inputNames} />
+      <Labelled label="Input" names={inputNames} value={input} onChange={setInput} />
       <View style={styles.field}>
         <Text style={styles.label}>{inputNames[input]}</Text>
         <TextInput
@@ -113,20 +110,19 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
         />
         {invalid ? <Text role="alert" style={styles.error}>{invalid}</Text> : null}
       </View>
-      <Choice label="Ring" options={rings} value={ringChoice} onChange={setRingChoice} names={{ Z: 'Z', Q: 'Q', F2: 'F2', F3: 'F3', Fp: 'F_p, any prime' }} />
+      <Labelled label="Ring" names={ringNames} value={ringChoice} onChange={setRingChoice} />
       {ringChoice === 'Fp' ? (
         <View style={styles.field}>
           <Text style={styles.label}>Prime p</Text>
           <TextInput value={prime} onChangeText={setPrime} inputMode="numeric" aria-label="Prime p" style={[styles.code, styles.prime]} />
         </View>
       ) : null}
-      <Choice label="Homology" options={['unreduced', 'reduced'] as const} value={reduced} onChange={setReduced} names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} />
-      <Choice label="Computation" options={sweeps} value={sweep} onChange={setSweep}
-        names={{ 0: 'Khovanov homology', 2: 'Cable sweep, r+ + r- ≤ 2', 3: 'Cable sweep, r+ + r- ≤ 3', 4: 'Cable sweep, r+ + r- ≤ 4' }} />
+      <Labelled label="Homology" names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} value={reduced} onChange={setReduced} />
+      <Labelled label="Computation" names={sweepNames} value={sweep} onChange={setSweep} />
       {sweep === '0' ? (
         // The server refuses it for a link, saying s is defined for knots here.
-        <Pressable role="checkbox" aria-checked={alsoS} aria-label="Also compute s" onPress={() => setAlsoS(!alsoS)} style={[styles.choice, styles.check, alsoS && styles.chosen]}>
-          <Text style={[styles.choiceText, alsoS && styles.chosenText]}>{`${alsoS ? '☑' : '☐'} Also compute s (Rasmussen invariant, knots only)`}</Text>
+        <Pressable role="checkbox" aria-checked={alsoS} aria-label="Also compute s" onPress={() => setAlsoS(!alsoS)} style={[styles.check, alsoS && styles.checked]}>
+          <Text style={[styles.checkText, alsoS && styles.checkedText]}>{`${alsoS ? '☑' : '☐'} Also compute s (Rasmussen invariant, knots only)`}</Text>
         </Pressable>
       ) : null}
       {start.error && !(onSketch && isApiError(start.error, 'not_found')) ? <Banner tone="error">{start.error.message}</Banner> : null}
@@ -149,12 +145,10 @@ const styles = StyleSheet.create({
   form: { gap: space.lg },
   field: { gap: space.xs },
   label: { ...type.label, color: colors.inkMuted },
-  choices: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  choice: { paddingHorizontal: space.md, paddingVertical: space.sm, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
-  check: { alignSelf: 'flex-start' },
-  chosen: { backgroundColor: colors.accent, borderColor: colors.accent },
-  choiceText: { ...type.small, color: colors.ink },
-  chosenText: { color: colors.onAccent, fontFamily: fonts.medium },
+  check: { alignSelf: 'flex-start', minHeight: TOUCH, justifyContent: 'center', paddingHorizontal: space.md, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  checked: { backgroundColor: colors.accent, borderColor: colors.accent },
+  checkText: { ...type.small, color: colors.ink },
+  checkedText: { color: colors.onAccent, fontFamily: fonts.medium },
   prime: { minHeight: 0, width: 120 },
   code: { fontFamily: fonts.mono, fontSize: 14, minHeight: 72, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, padding: space.md, backgroundColor: colors.surface, color: colors.ink },
   error: { ...type.small, color: colors.danger },

@@ -47,7 +47,7 @@ export function ShortcutSheet({ onClose }: { onClose: () => void }) {
 }
 
 const styles = StyleSheet.create({
-  scrim: { flex: 1, alignItems: 'center', justifyContent: 'center', padding: space.lg, backgroundColor: 'rgba(28,34,39,0.35)' },
+  scrim: { flex: 1, alignItems: 'center', justifyContent: 'center', padding: space.lg, backgroundColor: colors.scrim },
   card: { width: '100%', maxWidth: 440, maxHeight: '90%', borderRadius: radius.lg, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line },
   head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', paddingHorizontal: space.lg, paddingTop: space.lg },
   title: { ...type.heading, color: colors.ink },

@@ -14,7 +14,7 @@ export function BandLayer({ sketch, view, active, selected }: { sketch: Sketch; 
   return (
     <G>
       {pictures.map((p) => {
-        const colour = p.problem ? slate.bandRefused : slate.band;
+        const colour = p.problem ? slate.warn : slate.band;
         const w = p.text.length * 7 + 14;
         return (
           <G key={p.id} aria-label={`Band ${p.number}`}>

@@ -2,8 +2,8 @@
 import { useEffect, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { Button } from '@/components/ui/Button';
-import { Dialog } from './Dialog';
-import { Field } from './Field';
+import { Dialog } from '@/components/ui/Dialog';
+import { Field } from '@/components/ui/Field';
 import { colors, space, type } from '@/constants/theme';
 
 export function FramingDialog({ visible, number, framing, blackboard, onClose, onSet }: {

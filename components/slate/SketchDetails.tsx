@@ -8,8 +8,8 @@ import { useDevice } from '@/hooks/useDevice';
 import { useSketchWrites } from '@/hooks/queries/useLocalSketches';
 import { Button } from '@/components/ui/Button';
 import { Banner } from '@/components/ui/Banner';
-import { Dialog } from './Dialog';
-import { Field } from './Field';
+import { Dialog } from '@/components/ui/Dialog';
+import { Field } from '@/components/ui/Field';
 import { tagsFrom } from '@/shared/api/tags';
 import { colors, radius, space, type } from '@/constants/theme';
 

@@ -17,7 +17,7 @@ import { Banner } from '@/components/ui/Banner';
 import { SlateArt } from '@/components/shell/SlateArt';
 import { SyncStatus } from '@/components/sync/SyncStatus';
 import { sharedLabel } from './ShareControl';
-import { Choice } from './Dialog';
+import { Choice } from '@/components/ui/Choice';
 import { useSession } from '@/hooks/useSession';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 

@@ -244,8 +244,8 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
             const at = toScreen(view, m.at);
             return (
               <G key={`m${i}`}>
-                <Circle cx={at.x} cy={at.y} r={16} stroke="#FF8A73" strokeWidth={2.4} fill="#FF8A7333" />
-                <SvgText x={at.x} y={at.y + 5} fontSize={15} fontFamily={fonts.semibold} fill="#FFB3A3" textAnchor="middle">!</SvgText>
+                <Circle cx={at.x} cy={at.y} r={16} stroke={slate.warn} strokeWidth={2.4} fill={slate.warnFill} />
+                <SvgText x={at.x} y={at.y + 5} fontSize={15} fontFamily={fonts.semibold} fill={slate.warnText} textAnchor="middle">!</SvgText>
               </G>
             );
           })}

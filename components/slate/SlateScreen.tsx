@@ -13,7 +13,7 @@ import type { LocalSketch } from '@/lib/store/types';
 import { braidToText, pdToText } from '@/shared/text/codes';
 import { exportFiles } from '@/lib/slate/exports';
 import { savePng } from '@/lib/slate/png';
-import { drawingNumbers } from '@/lib/slate/picture';
+import { diagramNumbers, drawingNumbers } from '@/lib/slate/picture';
 import { docFromDiagram, docFromStored } from '@/lib/slate/record';
 import { braidOf, currentDoc, useSlate } from '@/lib/slate/slate-store';
 import { useReadout } from '@/hooks/useReadout';
@@ -37,7 +37,7 @@ import { BandBar } from './BandBar';
 import { AfterBandsView } from './AfterBandsView';
 import { FramingDialog } from './FramingDialog';
 import { SketchDetails } from './SketchDetails';
-import { Dialog } from './Dialog';
+import { Dialog } from '@/components/ui/Dialog';
 import { ShareControl, sharedLabel, useRefusedShares } from './ShareControl';
 import { colors, fonts, space, type } from '@/constants/theme';
 
@@ -81,7 +81,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
 
   const numbers = useMemo(() => drawingNumbers(doc), [doc]);
   const numberOf = useCallback((id: string) => numbers.get(id) ?? null, [numbers]);
-  const diagramNumbers = useMemo(() => analysis.diagram?.componentIds.map((id) => numbers.get(id) ?? 0), [analysis, numbers]);
+  const componentNumbers = useMemo(() => diagramNumbers(doc, analysis), [doc, analysis]);
   const descending = useMemo(() => isDescending(analysis), [analysis]);
   const alternateNow = () => {
     const s = useSlate.getState();
@@ -131,7 +131,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const readoutPane = (
     <>
       {descending ? <DescendingNote onAlternate={alternateNow} /> : null}
-      <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} numbers={diagramNumbers} />
+      <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} numbers={componentNumbers} />
       {diagram ? <BandsReadout state={bands.certificate} refused={bands.refused} s={sInvariant} signature={readout.values.signature} /> : null}
       <ReadoutActions
         hasDiagram={!!diagram}

@@ -37,8 +37,8 @@ export function describe(field: string, value: unknown): string {
 function ConflictCard({ conflict }: { conflict: LocalConflict }) {
   const { resolve } = useSketchWrites();
   const sketch = useLocalSketch(conflict.recordId).data ?? undefined; // deleted ones too
-  const fields = Object.keys(conflict.losing);
-  const current = (f: string) => (sketch as unknown as Record<string, unknown> | undefined)?.[f];
+  const fields = Object.keys(conflict.losing) as (keyof SketchFieldsPatch)[];
+  const current = (f: keyof SketchFieldsPatch) => sketch?.[f];
   const choose = (chosen: SketchFieldsPatch) => resolve.mutate({ conflictId: conflict.id, chosen });
   return (
     <Section title={sketch?.title || 'Untitled sketch'} note="Edited on two devices before they synced.">

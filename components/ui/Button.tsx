@@ -43,7 +43,7 @@ export function Button({ label, onPress, variant = 'primary', busy = false, busy
 }
 
 const tones: Record<Variant, { bg: string; fg: string; border: string; pressed: string }> = {
-  primary: { bg: colors.accent, fg: colors.onAccent, border: colors.accent, pressed: '#184C5D' },
+  primary: { bg: colors.accent, fg: colors.onAccent, border: colors.accent, pressed: colors.accentPressed },
   secondary: { bg: colors.surface, fg: colors.accent, border: colors.line, pressed: colors.accentSoft },
   quiet: { bg: 'transparent', fg: colors.accent, border: 'transparent', pressed: colors.accentSoft },
   danger: { bg: colors.surface, fg: colors.danger, border: colors.line, pressed: colors.dangerSoft },

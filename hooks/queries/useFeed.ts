@@ -29,6 +29,9 @@ export const feedKeys = {
   mySketches: () => [...feedKeys.all(), 'my-sketches'] as const,
 };
 
+/** While the server computes a Jones polynomial (off its request thread), the page asks again this often. */
+const COMPUTING_POLL_MS = 3_000;
+
 function feedPath(groupId: string, f: FeedFilters, cursor: number | null): string {
   const q = new URLSearchParams();
   if (cursor) q.set('cursor', String(cursor));
@@ -46,11 +49,16 @@ export function useFeed(groupId: string | null, filters: FeedFilters) {
     initialPageParam: null as number | null,
     queryFn: ({ pageParam }) => api('GET', feedPath(groupId!, filters, pageParam), FeedPage),
     getNextPageParam: (last) => last.nextCursor,
+    refetchInterval: (q) => (q.state.data?.pages.some((p) => p.items.some((i) => i.invariants.computing)) ? COMPUTING_POLL_MS : false),
   });
 }
 
 export function useGroupSketch(groupId: string, sketchId: string) {
-  return useQuery({ queryKey: feedKeys.sketch(groupId, sketchId), queryFn: () => api('GET', feedPaths.groupSketch(groupId, sketchId), GroupSketch) });
+  return useQuery({
+    queryKey: feedKeys.sketch(groupId, sketchId),
+    queryFn: () => api('GET', feedPaths.groupSketch(groupId, sketchId), GroupSketch),
+    refetchInterval: (q) => (q.state.data?.invariants.computing ? COMPUTING_POLL_MS : false),
+  });
 }
 
 /** After any change on a sketch page: the page and the feed (comment counts, thumbnails). */

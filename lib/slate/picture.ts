@@ -49,6 +49,12 @@ export function drawingNumbers(doc: SlateDoc): Map<string, number> {
   return new Map(closed.map((c, i) => [c.id, i + 1]));
 }
 
+/** The number shown for each component of the drawing's diagram (in the diagram's order), or undefined without a diagram. */
+export function diagramNumbers(doc: SlateDoc, a: Analysis): number[] | undefined {
+  const numbers = drawingNumbers(doc);
+  return a.diagram?.componentIds.map((id) => numbers.get(id) ?? 0);
+}
+
 export function strandPictures(doc: SlateDoc, a: Analysis, view: View): StrandPicture[] {
   const numbers = drawingNumbers(doc);
   const screen = (p: Point) => toScreen(view, p);

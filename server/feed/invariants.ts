@@ -1,13 +1,14 @@
 // The Readout summary the feed shows for a stored diagram: crossings, components and the Jones
-// polynomial, computed with the knot core (shared/knot). `key` groups sketches with the same
-// crossing count and Jones polynomial ("same invariants as").
+// polynomial, computed with the knot core (shared/knot) in the job pool (server/jobs) when the
+// sketch is written (server/feed/summaries.ts). `key` groups sketches with the same crossing
+// count and Jones polynomial ("same invariants as").
 import { createHash } from 'node:crypto';
 import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
 import { diagram } from '@/shared/knot/diagram';
 import { jones } from '@/shared/knot/jones';
 import { orient } from '@/shared/knot/pd';
 
-/** Above this the feed leaves Jones to a run rather than block the server on a read. */
+/** Above this the feed leaves Jones to a run: tangle contraction grows fast beyond it. */
 export const feedJonesMaxCrossings = 120;
 
 export interface Summary {
@@ -22,7 +23,7 @@ export interface Summary {
  * Degenerate inputs: an empty diagram (nothing drawn) has no Jones polynomial here (null), an
  * invalid PD code gives null components and Jones, a large one null Jones.
  */
-export function summarise(d: StoredDiagram): Summary {
+export function summarise(d: Pick<StoredDiagram, 'pd' | 'unknots'>): Summary {
   const crossings = d.pd.length;
   const none = { crossings, components: null, jones: null, jonesText: null, key: null };
   if (crossings === 0 && d.unknots === 0) return { ...none, components: 0 };

@@ -1,9 +1,8 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import { In } from 'typeorm';
+import { In, IsNull, Not } from 'typeorm';
 import { Comment, Photo, Sketch, SketchFork, SketchInvariant, User } from '../db/entities';
 import { inTransaction } from '../db/transaction';
 import { hasResultsSql } from './runs';
-import { summarise } from './invariants';
 
 type Db = DataSource | EntityManager;
 
@@ -24,9 +23,8 @@ export async function feedSketches(db: Db, f: FeedFilter): Promise<Sketch[]> {
   if (f.ownerId) qb.andWhere('s.ownerId = :owner', { owner: f.ownerId });
   if (f.tag) qb.andWhere('EXISTS (SELECT 1 FROM json_each(s.tags) t WHERE lower(t.value) = :tag)', { tag: f.tag });
   if (f.hasResults !== undefined) {
-    const sql = await hasResultsSql(db, 's.id');
-    if (sql) qb.andWhere(f.hasResults ? sql : `NOT ${sql}`);
-    else if (f.hasResults) qb.andWhere('1 = 0'); // no runs yet, so nothing has results
+    const sql = hasResultsSql('s.id');
+    qb.andWhere(f.hasResults ? sql : `NOT ${sql}`);
   }
   return qb.orderBy('s.version', 'DESC').limit(f.take).getMany();
 }
@@ -56,22 +54,43 @@ export async function firstPhotos(db: Db, sketchIds: string[]): Promise<Map<stri
   return new Map(rows.map((p) => [p.sketchId, p])); // later rows (older photos) win
 }
 
-/**
- * The Readout summary of each sketch at its current version, computed once per version and
- * kept in sketch_invariants. `rows` need id and version; diagrams are loaded only when stale.
- */
-export async function invariantsOf(db: DataSource, rows: Pick<Sketch, 'id' | 'version'>[]): Promise<Map<string, SketchInvariant>> {
-  const ids = rows.map((r) => r.id);
-  const cached = ids.length ? await db.getRepository(SketchInvariant).findBy({ sketchId: In(ids) }) : [];
-  const out = new Map(cached.map((c) => [c.sketchId, c]));
-  const stale = rows.filter((r) => out.get(r.id)?.version !== r.version).map((r) => r.id);
-  if (stale.length === 0) return out;
-  const sketches = await db.getRepository(Sketch).find({ where: { id: In(stale) }, select: { id: true, version: true, diagram: true } });
-  const fresh = sketches.map((s): SketchInvariant => ({ sketchId: s.id, version: s.version, ...summarise(s.diagram) }));
-  await inTransaction(db, (m) => m.getRepository(SketchInvariant).upsert(fresh, ['sketchId']));
-  for (const f of fresh) out.set(f.sketchId, f);
-  return out;
+/** The stored summaries of these sketches, whatever version they are of. */
+export async function storedSummaries(db: Db, ids: readonly string[]): Promise<Map<string, SketchInvariant>> {
+  const rows = ids.length ? await db.getRepository(SketchInvariant).findBy({ sketchId: In([...ids]) }) : [];
+  return new Map(rows.map((r) => [r.sketchId, r]));
 }
+
+/** The summary of each sketch at its current version; `stale` are those without one yet. */
+export async function currentSummaries(db: Db, rows: Pick<Sketch, 'id' | 'version'>[]): Promise<{ current: Map<string, SketchInvariant>; stale: string[] }> {
+  const stored = await storedSummaries(db, rows.map((r) => r.id));
+  const current = new Map(rows.filter((r) => stored.get(r.id)?.version === r.version).map((r) => [r.id, stored.get(r.id)!]));
+  return { current, stale: rows.filter((r) => !current.has(r.id)).map((r) => r.id) };
+}
+
+/** Live shared sketches among `ids`, with what a summary needs (the feed shows no others). */
+export const sharedDiagrams = (db: Db, ids: readonly string[]) =>
+  ids.length
+    ? db.getRepository(Sketch).find({ where: { id: In([...ids]), groupId: Not(IsNull()), deleted: false }, select: { id: true, version: true, diagram: true } })
+    : Promise.resolve([]);
+
+/** Live shared sketches with no summary of their current version. */
+export async function sketchesWithoutSummary(db: Db): Promise<string[]> {
+  const rows: { id: string }[] = await db
+    .getRepository(Sketch)
+    .createQueryBuilder('s')
+    .select('s.id', 'id')
+    .leftJoin(SketchInvariant, 'i', 'i.sketchId = s.id')
+    .where('s.groupId IS NOT NULL AND s.deleted = :no AND (i.version IS NULL OR i.version != s.version)', { no: false })
+    .getRawMany();
+  return rows.map((r) => r.id);
+}
+
+/** The summary is of the same diagram at a newer version. */
+export const moveSummary = (db: DataSource, sketchId: string, version: number) =>
+  inTransaction(db, (m) => m.getRepository(SketchInvariant).update({ sketchId }, { version }));
+
+export const saveSummary = (db: DataSource, row: SketchInvariant) =>
+  inTransaction(db, (m) => m.getRepository(SketchInvariant).upsert(row, ['sketchId']));
 
 /** Live sketches of a group (id and version only). */
 export const groupSketchVersions = (db: Db, groupId: string) =>

@@ -6,6 +6,7 @@ import { currentUser, requireAuth } from '../auth/middleware';
 import type { Deps } from '../deps';
 import { GroupParams } from '../groups/routes';
 import { parse } from '../http/validate';
+import { summariesOf } from './summaries';
 import * as feed from './use-cases';
 
 const SketchParams = z.object({ id: RecordId });
@@ -36,4 +37,11 @@ export function routes(deps: Deps): Router {
     res.status(201).json(await feed.fork(deps, currentUser(req), id));
   });
   return router;
+}
+
+/** Started with the server: summaries missing for shared sketches go to the job pool; stopped before the database closes. */
+export async function start(deps: Deps): Promise<{ stop(): Promise<void> }> {
+  const summaries = summariesOf(deps);
+  await summaries.start();
+  return summaries;
 }

@@ -1,5 +1,5 @@
-// Run results for the feed, read from the Runs area's table (server/runs) by plain SQL, so the
-// feed works before that table exists (no results) and without importing that area. Columns
+// Run results for the feed, read from the Runs area's table (server/runs, created by the
+// migrations before any request) by plain SQL, so the feed does not import that area. Columns
 // used: runs.id, sketchId, status ('done' = a result), finishedAt, kind, parentRunId (a
 // sweep's cells are skipped), ring, reduced, result (JSON with the Poincare polynomial's terms `poincare`, and s when computed).
 import type { DataSource, EntityManager } from 'typeorm';
@@ -8,26 +8,16 @@ import { poincareFormat } from '@/shared/khovanov/format';
 
 type Db = DataSource | EntityManager;
 
-const NEEDED = ['id', 'sketchId', 'status', 'finishedAt', 'kind', 'parentRunId', 'ring', 'reduced', 'result'];
-
-async function runsTable(db: Db): Promise<boolean> {
-  const rows: { name: string }[] = await db.query(`SELECT name FROM pragma_table_info('runs')`);
-  const have = new Set(rows.map((r) => r.name));
-  return NEEDED.every((n) => have.has(n));
-}
-
 const DONE = `r."status" = 'done' AND r."parentRunId" IS NULL`;
 
-/** SQL for "this sketch has a finished run", or null when there is no runs table. */
-export async function hasResultsSql(db: Db, sketchColumn: string): Promise<string | null> {
-  return (await runsTable(db)) ? `EXISTS (SELECT 1 FROM "runs" r WHERE r."sketchId" = ${sketchColumn} AND ${DONE})` : null;
-}
+/** SQL for "this sketch has a finished run". */
+export const hasResultsSql = (sketchColumn: string): string => `EXISTS (SELECT 1 FROM "runs" r WHERE r."sketchId" = ${sketchColumn} AND ${DONE})`;
 
 const marks = (n: number) => Array.from({ length: n }, () => '?').join(',');
 
 export async function latestRuns(db: Db, sketchIds: string[]): Promise<Map<string, RunSummary>> {
   const out = new Map<string, RunSummary>();
-  if (sketchIds.length === 0 || !(await runsTable(db))) return out;
+  if (sketchIds.length === 0) return out;
   const rows: { id: string; sketchId: string; kind: string; ring: string; reduced: number; finishedAt: string; poincare: string | null; s: number | null }[] = await db.query(
     `SELECT r."id" AS id, r."sketchId" AS sketchId, r."kind" AS kind, r."ring" AS ring, r."reduced" AS reduced, r."finishedAt" AS finishedAt,
             json_extract(r."result", '$.poincare') AS poincare, json_extract(r."result", '$.s.Q') AS s
@@ -48,7 +38,7 @@ export async function latestRuns(db: Db, sketchIds: string[]): Promise<Map<strin
 
 /** Sketches among `candidates` with a finished run giving the same Khovanov Poincaré polynomial (same ring, reduced or not) as one of `sketchId`'s. */
 export async function sameKhovanov(db: Db, sketchId: string, candidates: string[]): Promise<Set<string>> {
-  if (candidates.length === 0 || !(await runsTable(db))) return new Set();
+  if (candidates.length === 0) return new Set();
   const rows: { sketchId: string }[] = await db.query(
     `SELECT DISTINCT o."sketchId" AS sketchId FROM "runs" r JOIN "runs" o
         ON o."ring" = r."ring" AND o."reduced" = r."reduced"

@@ -24,6 +24,7 @@ import { push } from '../sync/use-cases';
 import { sketchAccess } from './access';
 import * as repo from './repository';
 import { latestRuns, sameKhovanov } from './runs';
+import { summariesOf } from './summaries';
 
 /** A feed picture needs the shape, not every sample: at most about this many points per strand. */
 const PICTURE_POINTS = 96;
@@ -48,7 +49,15 @@ const summaryOf = (inv: SketchInvariant | undefined, s: Sketch): InvariantSummar
   components: inv?.components ?? null,
   jones: inv?.jones ? JSON.parse(inv.jones) : null,
   jonesText: inv?.jonesText ?? null,
+  computing: inv === undefined,
 });
+
+/** The stored summaries at each sketch's version; those not in yet go to the job pool (summaries.ts), never computed here. */
+async function summariesFor(deps: Deps, rows: Pick<Sketch, 'id' | 'version'>[]): Promise<Map<string, SketchInvariant>> {
+  const { current, stale } = await repo.currentSummaries(deps.db, rows);
+  if (stale.length) void summariesOf(deps).refresh(stale);
+  return current;
+}
 
 async function feedItems(deps: Deps, groupId: string, rows: Sketch[]): Promise<FeedItem[]> {
   const ids = rows.map((s) => s.id);
@@ -57,7 +66,7 @@ async function feedItems(deps: Deps, groupId: string, rows: Sketch[]): Promise<F
     await repo.commentCounts(deps.db, groupId, ids),
     await attachmentPhotos(deps, rows),
     await repo.firstPhotos(deps.db, ids),
-    await repo.invariantsOf(deps.db, rows),
+    await summariesFor(deps, rows),
     await latestRuns(deps.db, ids),
   ];
   return rows.map((s) => ({
@@ -95,7 +104,7 @@ async function refsOf(deps: Deps, rows: Pick<Sketch, 'id' | 'title' | 'ownerId'>
  */
 async function sameInvariants(deps: Deps, groupId: string, s: Sketch, key: string | null): Promise<SketchRef[]> {
   const others = (await repo.groupSketchVersions(deps.db, groupId)).filter((o) => o.id !== s.id);
-  const inv = key ? await repo.invariantsOf(deps.db, others) : new Map<string, SketchInvariant>();
+  const inv = key ? await summariesFor(deps, others) : new Map<string, SketchInvariant>();
   const kh = await sameKhovanov(deps.db, s.id, others.map((o) => o.id));
   return refsOf(deps, others.filter((o) => (key && inv.get(o.id)?.key === key) || kh.has(o.id)));
 }
@@ -112,7 +121,7 @@ export async function groupSketch(deps: Deps, caller: User, groupId: string, ske
   const s = await findSketch(deps.db, sketchId);
   if (!s || s.deleted || s.groupId !== groupId) throw notFound('No such sketch in this group');
   const [item] = await feedItems(deps, groupId, [s]);
-  const key = (await repo.invariantsOf(deps.db, [s])).get(s.id)?.key ?? null;
+  const key = (await summariesFor(deps, [s])).get(s.id)?.key ?? null;
   const isOwner = s.ownerId === caller.id;
   return {
     ...item,

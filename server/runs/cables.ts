@@ -1,9 +1,12 @@
 // The cells of a cable sweep and the cable diagram of each. Every component takes each
 // (r+, r-) with 1 <= r+ + r- <= maxStrands; a link's cells are all combinations, first
-// component varying slowest.
-import type { CableCell } from '@/shared/api/runs';
-import type { Diagram } from '@/shared/knot/diagram';
+// component varying slowest. Building cables is work for the job pool (cellCables); the
+// request checks cableCrossings, which needs only the base diagram, first.
+import type { CableCell, RunDiagram } from '@/shared/api/runs';
+import { blackboardFramings, framingsOf, type Diagram } from '@/shared/knot/diagram';
 import { cable } from '@/shared/knot/families/cable';
+import { orient, writablePD } from '@/shared/knot/pd';
+import { diagramKey } from './keys';
 
 export function sweepCells(components: number, maxStrands: number): CableCell[] {
   const pairs: [number, number][] = [];
@@ -43,4 +46,38 @@ export function cableOf(d: Diagram, cell: CableCell): Diagram {
     cur = cable({ ...cur, framings }, at, rPlus, rMinus);
   });
   return cur;
+}
+
+/**
+ * Crossings of cableOf(d, cell), from the base diagram's numbers alone (derived from
+ * shared/knot/families/cable.ts): with r_k = r+ + r- strands on component k, a crossing of
+ * component a under component b becomes the r_a x r_b grid of their copies, and component k
+ * gets |f_k - w_k| full twists of its r_k strands, r_k (r_k - 1) crossings each (f_k its
+ * framing, w_k its writhe, the blackboard framing). So
+ *   crossings = sum over crossings x of r_under(x) r_over(x) + sum over k of |f_k - w_k| r_k (r_k - 1).
+ * Cabling one component after another changes neither term of the others. Linear in d.
+ */
+export function cableCrossings(d: Diagram, cell: CableCell): number {
+  const o = orient(d.pd);
+  const r = cell.map(([plus, minus]) => plus + minus);
+  const framings = framingsOf(d, o);
+  const writhes = blackboardFramings(d, o);
+  let n = 0;
+  for (const x of d.pd) n += r[o.componentOf.get(x[0])!] * r[o.componentOf.get(x[1])!];
+  r.forEach((rk, k) => (n += Math.abs(framings[k] - writhes[k]) * rk * (rk - 1)));
+  return n;
+}
+
+export interface CellCable extends RunDiagram {
+  /** diagramKey of the cable. */
+  key: string;
+}
+
+/** Every cell's cable with its reuse key: the job (server/jobs) a sweep runs off the request thread. */
+export function cellCables({ diagram, cells, reduced }: { diagram: Diagram; cells: CableCell[]; reduced: boolean }): CellCable[] {
+  return cells.map((cell) => {
+    const c = cableOf(diagram, cell);
+    const out = { pd: writablePD(c.pd), unknots: c.unknots, framings: [...c.framings] };
+    return { ...out, key: diagramKey(out, reduced) };
+  });
 }

@@ -1,20 +1,20 @@
 // The rules of runs: who may start, read and cancel them, what a request is checked against,
 // and when a stored result is reused instead of computing again.
-import { createHash, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import type { User } from '@/shared/api/auth';
 import type { Role } from '@/shared/api/groups';
 import { isFinished, type CableCell, type RunDetail, type RunDiagram, type RunSummary, type StartRunParsed } from '@/shared/api/runs';
-import { canonicalPD } from '@/shared/knot/canonical';
 import { pdToText } from '@/shared/text/codes';
 import { componentCount, diagram, type Diagram } from '@/shared/knot/diagram';
 import { canSee } from '@/sync/scope';
 import { Run } from '../db/entities';
+import { inTransaction } from '../db/transaction';
 import type { Deps } from '../deps';
 import { requireMember } from '../groups/access';
 import { AppError, forbidden, notFound } from '../http/errors';
 import { findSketch } from '../sketches/repository';
 import { viewerOf } from '../sync/repository';
-import { cableOf, compareCells, sweepCells, sweepSize } from './cables';
+import { cableCrossings, compareCells, sweepCells, sweepSize } from './cables';
 import { afterChange, finishRun, refreshSweep } from './lifecycle';
 import { childrenOf, displayNames, findReusable, findRun, insertRun, listTopLevel, updateIf } from './repository';
 import { schedulerOf } from './scheduler';
@@ -24,16 +24,6 @@ type Start = StartRunParsed;
 const noSuchRun = () => notFound('No such run, or it is not shared with you');
 const viewersCannot = () => forbidden('Viewers can read runs but not start or cancel them');
 const badDiagram = (message: string) => new AppError('invalid_input', 400, message, { diagram: message });
-
-/**
- * The reuse key: SHA-256 of the canonical PD code (shared/knot/canonical.ts: least relabelling
- * over all starting edges, so any relabelling or reordering of the same diagram gives the same
- * key) with the unknot count and, for reduced runs, the marked component labelled first.
- */
-export function diagramKey(d: RunDiagram, reduced: boolean): string {
-  const canonical = canonicalPD(d.pd, reduced && d.pd.length > 0 ? 0 : undefined);
-  return createHash('sha256').update(JSON.stringify({ pd: canonical, unknots: d.unknots })).digest('hex');
-}
 
 function checked(d: RunDiagram): Diagram {
   if (d.pd.length === 0 && d.unknots === 0) throw badDiagram('The diagram is empty (no crossings, no unknots): draw or paste a link first');
@@ -107,19 +97,22 @@ function row(deps: Deps, user: User, n: NewRun, key: string): Run {
   } satisfies Run);
 }
 
+interface Planned {
+  run: Run;
+  settle: () => Promise<unknown>;
+}
+
+const overLimit = (what: string, crossings: number, max: number, fix = '') =>
+  badDiagram(`${what} has ${crossings} crossings; this server computes at most ${max} per run.${fix}`);
+
 /**
- * A Khovanov computation's row, and how it ends at once when it does: reused when a stored
- * result fits, failed when over the crossing limit; otherwise it stays queued. Rows are inserted
- * before any of them ends, so a sweep never sees some of its cells missing.
+ * A Khovanov computation's row (its diagram within the crossing limit, `key` its diagramKey),
+ * and how it ends at once when it does: reused when a stored result fits; otherwise it stays
+ * queued. Rows are inserted before any of them ends, so a sweep never sees some of its cells
+ * missing.
  */
-async function planComputation(deps: Deps, user: User, n: NewRun): Promise<{ run: Run; settle: () => Promise<unknown> }> {
-  const key = diagramKey(n.diagram, n.reduced);
+async function planComputation(deps: Deps, user: User, n: NewRun, key: string): Promise<Planned> {
   const run = row(deps, user, n, key);
-  const max = deps.config.runs.maxCrossings;
-  if (run.crossings > max) {
-    run.status = 'running';
-    return { run, settle: () => finishRun(deps, run.id, { status: 'failed', error: `The diagram has ${run.crossings} crossings; this server computes at most ${max} per run.` }) };
-  }
   const stored = await findReusable(deps.db, key, n.ring, n.reduced, n.computeS);
   if (!stored) return { run, settle: async () => undefined };
   Object.assign(run, { status: 'running', startedAt: run.createdAt, reusedFrom: stored.reusedFrom ?? stored.id });
@@ -138,8 +131,9 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   let id: string;
   let queued: Run[];
   if (req.kind === 'khovanov') {
-    if (d.pd.length > max) throw badDiagram(`The diagram has ${d.pd.length} crossings; this server computes at most ${max} per run.`);
-    const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov' });
+    if (d.pd.length > max) throw overLimit('The diagram', d.pd.length, max);
+    const key = await deps.jobs.run('runKey', { diagram: t.diagram, reduced: req.reduced });
+    const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov' }, key);
     await insertRun(deps.db, run);
     await settle();
     [id, queued] = [run.id, [run]];
@@ -150,29 +144,39 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   return getRun(deps, user, id);
 }
 
+/**
+ * A sweep: the cell count and every cable's crossing count (cableCrossings, from the base
+ * diagram alone) are checked before anything is built; the cables and their keys are built in
+ * the job pool; the sweep and its cells are inserted in one transaction.
+ */
 async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promise<{ id: string; queued: Run[] }> {
   const components = componentCount(d);
   const { maxStrands } = n.sweep!;
   const size = sweepSize(components, maxStrands);
-  const maxCells = deps.config.runs.maxSweepCells;
+  const { maxSweepCells: maxCells, maxCrossings: max } = deps.config.runs;
   if (size > maxCells) {
     throw new AppError('invalid_input', 400, `A sweep up to ${maxStrands} strands per component of ${components === 1 ? 'a knot' : `a ${components}-component link`} has ${size} cables; this server allows at most ${maxCells}. Lower maxStrands.`, { sweep: `At most ${maxCells} cables` });
   }
   const cells = sweepCells(components, maxStrands);
-  const cables = cells.map((cell) => cableOf(d, cell));
-  const sweep = row(deps, user, n, diagramKey(n.diagram, false));
-  Object.assign(sweep, { status: 'running', startedAt: sweep.createdAt });
-  await insertRun(deps.db, sweep);
-  const planned = [];
-  for (const [k, cell] of cells.entries()) {
-    const c = cables[k];
-    const name = `(${cell.map(([p, m]) => `${p},${m}`).join(' | ')})`;
-    const diagram = { pd: c.pd.map((x) => [...x] as [number, number, number, number]), unknots: c.unknots, framings: [...c.framings] };
-    // A cell's input is its cable, so its source names the cable and what it was taken of.
-    const source = `${name} cable of ${n.source ?? `PD ${pdToText(n.diagram.pd)}`}`;
-    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label: `${n.label} ${name}`, source, diagram, parentRunId: sweep.id, cable: cell }));
+  const nameOf = (cell: CableCell) => `(${cell.map(([p, m]) => `${p},${m}`).join(' | ')})`;
+  for (const cell of cells) {
+    const crossings = cableCrossings(d, cell);
+    if (crossings > max) throw overLimit(`The ${nameOf(cell)} cable`, crossings, max, ' Lower maxStrands, or the framing (each full twist of r strands adds r(r-1) crossings).');
   }
-  for (const { run } of planned) await insertRun(deps.db, run);
+  const cables = await deps.jobs.run('cables', { diagram: d, cells, reduced: n.reduced });
+  const sweep = row(deps, user, n, await deps.jobs.run('runKey', { diagram: n.diagram, reduced: false }));
+  Object.assign(sweep, { status: 'running', startedAt: sweep.createdAt });
+  const planned: Planned[] = [];
+  for (const [k, cell] of cells.entries()) {
+    const { key, ...diagram } = cables[k];
+    // A cell's input is its cable, so its source names the cable and what it was taken of.
+    const source = `${nameOf(cell)} cable of ${n.source ?? `PD ${pdToText(n.diagram.pd)}`}`;
+    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label: `${n.label} ${nameOf(cell)}`, source, diagram, parentRunId: sweep.id, cable: cell }, key));
+  }
+  await inTransaction(deps.db, async (m) => {
+    await insertRun(m, sweep);
+    for (const { run } of planned) await insertRun(m, run);
+  });
   for (const { settle } of planned) await settle();
   await refreshSweep(deps, sweep.id);
   return { id: sweep.id, queued: planned.map((p) => p.run) };

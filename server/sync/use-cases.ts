@@ -19,6 +19,7 @@ import { policies } from '@/sync/policy';
 import { canSee, canWrite, type Viewer } from '@/sync/scope';
 import { inTransaction } from '../db/transaction';
 import type { Deps } from '../deps';
+import { summariesOf } from '../feed/summaries';
 import * as repo from './repository';
 
 const reject = (m: Mutation, reason: PushResult['reason'], message: string): PushResult => ({
@@ -71,7 +72,14 @@ async function applyOne(em: EntityManager, v: Viewer, m: Mutation, head: { seq: 
   return result;
 }
 
-export function push(deps: Deps, user: Pick<User, 'id'>, req: PushRequest): Promise<{ results: PushResult[] }> {
+/** After the push commits, the written sketches' feed summaries are brought up to date (off the request thread). */
+export async function push(deps: Deps, user: Pick<User, 'id'>, req: PushRequest): Promise<{ results: PushResult[] }> {
+  const out = await pushInTransaction(deps, user, req);
+  await summariesOf(deps).refresh(req.mutations.filter((m, k) => m.type === 'sketch' && out.results[k].status === 'applied').map((m) => m.recordId));
+  return out;
+}
+
+function pushInTransaction(deps: Deps, user: Pick<User, 'id'>, req: PushRequest): Promise<{ results: PushResult[] }> {
   return inTransaction(deps.db, async (em) => {
     const viewer = await repo.viewerOf(em, user.id);
     const head = { seq: await repo.headSeq(em) };

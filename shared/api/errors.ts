@@ -20,6 +20,7 @@ export const errorCodes = [
   'unsupported_type', // 415: an upload that is not one of the accepted kinds (checked by content)
   'rate_limited', // 429: too many attempts, try later
   'mail_failed', // 502: the e-mail (e.g. an invitation) could not be sent; nothing was kept
+  'busy', // 503: a short computation the request needed took longer than the server allows
   'internal', // 500: a bug on our side; details are in the server log only
 ] as const;
 

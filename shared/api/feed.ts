@@ -35,6 +35,8 @@ export const InvariantSummary = z.object({
   /** Laurent JSON terms [exponent, coefficient] (shared/poly/laurent.ts), and the same as text. */
   jones: z.array(z.tuple([z.number(), z.union([z.number(), z.string()])])).nullable(),
   jonesText: z.string().nullable(),
+  /** The server computes it off the request thread when the sketch is written: not in yet (components and Jones null until then). */
+  computing: z.boolean(),
 });
 export type InvariantSummary = z.infer<typeof InvariantSummary>;
 

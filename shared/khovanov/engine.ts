@@ -3,7 +3,7 @@
 // isomorphisms cancelled after each step (simplify.ts); the closed complex is then a complex
 // of free modules whose homology is computed exactly (homology.ts).
 
-import { orient, PDCode } from '../knot/pd';
+import { orient, PDCode, withLabelAt } from '../knot/pd';
 import { Ring } from '../linalg/ring';
 import { khovanovTheory, Theory } from './cobordism';
 import { TangleComplex } from './complex';
@@ -66,7 +66,7 @@ export function localComplex<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
     const head = o.head.get(options.marked);
     if (!head) throw new RangeError(`edge ${options.marked} is not in the PD code`);
     const fresh = Math.max(...pd.flat()) + 1;
-    code = pd.map((x, k) => (k === head.crossing ? (x.map((l, p) => (p === head.position ? fresh : l)) as unknown as typeof x) : x));
+    code = pd.map((x, k) => (k === head.crossing ? withLabelAt(x, head.position, fresh) : x));
   }
 
   // The empty tangle: one object, the empty matching (Kh of the empty link is R at (0,0)).

@@ -36,105 +36,130 @@ interface Gluing {
 }
 
 /**
- * The complex of the tangle with crossing x added. Slots 0..n-1 are the old boundary points,
- * n..n+3 the crossing's a, b, c, d; slots with the same label are glued.
+ * How the old tangle's boundary slots 0..n-1 and the crossing's slots n..n+3 (a, b, c, d) are
+ * wired: slots with the same label are glued, the others are the new boundary.
  */
-export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComplex<T> {
-  const { ring } = old;
-  const n = old.boundary.length;
-  const labelOf = [...old.boundary, ...x];
+interface Wiring {
+  readonly n: number;
+  readonly labelOf: number[];
+  /** The slot glued to each slot, or -1 for a slot on the new boundary. */
+  readonly partner: number[];
+  readonly freeSlots: number[];
+  /** Position of each free slot on the new boundary (-1 for glued slots). */
+  readonly newPos: number[];
+}
+
+function wiring(boundary: readonly number[], x: Crossing): Wiring {
+  const labelOf = [...boundary, ...x];
   const slotsOf = new Map<number, number[]>();
   labelOf.forEach((l, slot) => slotsOf.set(l, [...(slotsOf.get(l) ?? []), slot]));
-  const join = labelOf.map((l, slot) => {
+  const partner = labelOf.map((l, slot) => {
     const s = slotsOf.get(l)!;
     return s.length === 2 ? (s[0] === slot ? s[1] : s[0]) : -1;
   });
-  const freeSlots = labelOf.map((_, slot) => slot).filter((slot) => join[slot] < 0);
+  const freeSlots = labelOf.map((_, slot) => slot).filter((slot) => partner[slot] < 0);
   const newPos = new Array<number>(labelOf.length).fill(-1);
   freeSlots.forEach((slot, k) => (newPos[slot] = k));
-  const cx = new TangleComplex(ring, freeSlots.map((slot) => labelOf[slot]), old.theory);
+  return { n: boundary.length, labelOf, partner, freeSlots, newPos };
+}
+
+/** The old matching `old` beside smoothing s of the crossing: the new matching and its closed loops. */
+function smoothedSide(w: Wiring, old: Matching, s: number, matchingId: (m: number[]) => number): Side {
+  const arc = (u: number): number => (u < w.n ? old[u] : w.n + SMOOTHING[s][u - w.n]);
+  const seen = new Array<boolean>(w.labelOf.length).fill(false);
+  const matching = new Array<number>(w.freeSlots.length);
+  for (const u of w.freeSlots) {
+    if (seen[u]) continue;
+    let v = arc(u);
+    seen[u] = seen[v] = true;
+    while (w.partner[v] >= 0) {
+      const next = w.partner[v];
+      v = arc(next);
+      seen[next] = seen[v] = true;
+    }
+    matching[w.newPos[u]] = w.newPos[v];
+    matching[w.newPos[v]] = w.newPos[u];
+  }
+  const loopOf = new Array<number>(w.labelOf.length).fill(-1);
+  let loops = 0;
+  for (let u = 0; u < w.labelOf.length; u++) {
+    if (seen[u]) continue;
+    let cur = u;
+    do {
+      const v = arc(cur);
+      seen[cur] = seen[v] = true;
+      loopOf[cur] = loopOf[v] = loops;
+      cur = w.partner[v];
+    } while (cur !== u);
+    loops++;
+  }
+  return { mat: matchingId(matching), loopOf, loops };
+}
+
+/**
+ * The surface between old matchings p -> q with the crossing's smoothings sb -> st, glued along
+ * the wiring, seen from the new complex's bottom and top sides.
+ */
+function glueSides(w: Wiring, p: Matching, q: Matching, sb: number, st: number, bottom: Side, top: Side, newCircles: { of: number[] }): Gluing {
+  const oldDiscs = cycles(p, q);
+  const crossingDiscs = cycles(SMOOTHING[sb], SMOOTHING[st]);
+  const disc = (slot: number): number => (slot < w.n ? oldDiscs.of[slot] : oldDiscs.count + crossingDiscs.of[slot - w.n]);
+  const arcs: [number, number][] = [];
+  w.partner.forEach((other, slot) => {
+    if (slot < other) arcs.push([disc(slot), disc(other)]);
+  });
+  const { comp, euler } = glue(oldDiscs.count + crossingDiscs.count, arcs);
+  const circles = new Array<number>(euler.length).fill(0);
+  const boundary = new Array<number>(euler.length).fill(0);
+  newCircles.of.forEach((c, k) => {
+    const piece = comp[disc(w.freeSlots[k])];
+    if (!((boundary[piece] >> c) & 1)) circles[piece]++;
+    boundary[piece] |= 1 << c;
+  });
+  const loopPieces = (s: Side): number[] => {
+    const out = new Array<number>(s.loops).fill(-1);
+    s.loopOf.forEach((loop, slot) => {
+      if (loop >= 0 && out[loop] < 0) out[loop] = comp[disc(slot)];
+    });
+    out.forEach((piece) => circles[piece]++);
+    return out;
+  };
+  const bottomLoops = loopPieces(bottom);
+  const topLoops = loopPieces(top);
+  return {
+    pieces: euler.map((e, c) => ({ genus: genus(e, circles[c]), boundary: boundary[c] })),
+    compPQ: comp.slice(0, oldDiscs.count),
+    bottomLoops,
+    topLoops,
+    memo: [],
+  };
+}
+
+/** The complex of the tangle with crossing x added. */
+export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComplex<T> {
+  const { ring } = old;
+  const w = wiring(old.boundary, x);
+  const cx = new TangleComplex(ring, w.freeSlots.map((slot) => w.labelOf[slot]), old.theory);
+  const matchingId = (m: number[]) => cx.matchingId(m);
 
   const sides = new Map<number, Side>();
   const side = (mat: number, s: number): Side => {
     const key = 2 * mat + s;
-    const cached = sides.get(key);
-    if (cached) return cached;
-    const p = old.matchings[mat];
-    const arc = (u: number): number => (u < n ? p[u] : n + SMOOTHING[s][u - n]);
-    const seen = new Array<boolean>(labelOf.length).fill(false);
-    const matching = new Array<number>(freeSlots.length);
-    for (const u of freeSlots) {
-      if (seen[u]) continue;
-      let v = arc(u);
-      seen[u] = seen[v] = true;
-      while (join[v] >= 0) {
-        const w = join[v];
-        v = arc(w);
-        seen[w] = seen[v] = true;
-      }
-      matching[newPos[u]] = newPos[v];
-      matching[newPos[v]] = newPos[u];
-    }
-    const loopOf = new Array<number>(labelOf.length).fill(-1);
-    let loops = 0;
-    for (let u = 0; u < labelOf.length; u++) {
-      if (seen[u]) continue;
-      let cur = u;
-      do {
-        const v = arc(cur);
-        seen[cur] = seen[v] = true;
-        loopOf[cur] = loopOf[v] = loops;
-        cur = join[v];
-      } while (cur !== u);
-      loops++;
-    }
-    const result = { mat: cx.matchingId(matching), loopOf, loops };
-    sides.set(key, result);
-    return result;
+    let found = sides.get(key);
+    if (!found) sides.set(key, (found = smoothedSide(w, old.matchings[mat], s, matchingId)));
+    return found;
   };
-
   const gluings = new Map<number, Gluing>();
   const gluing = (pMat: number, qMat: number, sb: number, st: number): Gluing => {
     const key = 4 * (pMat * old.matchings.length + qMat) + 2 * sb + st;
-    const cached = gluings.get(key);
-    if (cached) return cached;
-    const bottom = side(pMat, sb);
-    const top = side(qMat, st);
-    const pq = cycles(old.matchings[pMat], old.matchings[qMat]);
-    const xs = cycles(SMOOTHING[sb], SMOOTHING[st]);
-    const disc = (slot: number): number => (slot < n ? pq.of[slot] : pq.count + xs.of[slot - n]);
-    const arcs: [number, number][] = [];
-    join.forEach((partner, slot) => {
-      if (slot < partner) arcs.push([disc(slot), disc(partner)]);
-    });
-    const { comp, euler } = glue(pq.count + xs.count, arcs);
-    const circles = new Array<number>(euler.length).fill(0);
-    const boundary = new Array<number>(euler.length).fill(0);
-    const nc = cycles(cx.matchings[bottom.mat], cx.matchings[top.mat]);
-    nc.of.forEach((c, k) => {
-      const piece = comp[disc(freeSlots[k])];
-      if (!((boundary[piece] >> c) & 1)) circles[piece]++;
-      boundary[piece] |= 1 << c;
-    });
-    const loopComps = (s: Side): number[] => {
-      const out = new Array<number>(s.loops).fill(-1);
-      s.loopOf.forEach((loop, slot) => {
-        if (loop >= 0 && out[loop] < 0) out[loop] = comp[disc(slot)];
-      });
-      out.forEach((piece) => circles[piece]++);
-      return out;
-    };
-    const bottomLoops = loopComps(bottom);
-    const topLoops = loopComps(top);
-    const result: Gluing = {
-      pieces: euler.map((e, c) => ({ genus: genus(e, circles[c]), boundary: boundary[c] })),
-      compPQ: comp.slice(0, pq.count),
-      bottomLoops,
-      topLoops,
-      memo: [],
-    };
-    gluings.set(key, result);
-    return result;
+    let found = gluings.get(key);
+    if (!found) {
+      const bottom = side(pMat, sb);
+      const top = side(qMat, st);
+      found = glueSides(w, old.matchings[pMat], old.matchings[qMat], sb, st, bottom, top, cycles(cx.matchings[bottom.mat], cx.matchings[top.mat]));
+      gluings.set(key, found);
+    }
+    return found;
   };
 
   // New objects: loop bit 1 = the {-1} summand (x), bit 0 = the {+1} summand (1); the caps
@@ -160,8 +185,8 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
       for (let sigma = 0; sigma < from.length; sigma++) {
         for (let tau = 0; tau < to.length; tau++) {
           const terms = surface(old.theory, g, mask, sigma, tau);
-          for (let n = 0; n < terms.length; n++) {
-            const [m, k] = terms[n];
+          for (let t = 0; t < terms.length; t++) {
+            const [m, k] = terms[t];
             cx.addTerm(from[sigma], to[tau], m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
           }
         }

@@ -10,8 +10,10 @@ export type WritablePD = [number, number, number, number][];
 
 export const writablePD = (pd: PDCode): WritablePD => pd.map(([a, b, c, d]) => [a, b, c, d]);
 
-/** The crossing with every label replaced by f(label). */
-export const mapLabels = (x: Crossing, f: (label: number) => number): Crossing => [f(x[0]), f(x[1]), f(x[2]), f(x[3])];
+/** The crossing with every label replaced by f(label, its position 0-3). */
+export const mapLabels = (x: Crossing, f: (label: number, position: number) => number): Crossing => [f(x[0], 0), f(x[1], 1), f(x[2], 2), f(x[3], 3)];
+/** `x` with the label at `position` replaced by `label`. */
+export const withLabelAt = (x: Crossing, position: number, label: number): Crossing => mapLabels(x, (l, p) => (p === position ? label : l));
 
 /** Where one occurrence of an edge label sits: crossing index and position 0..3 (a..d). */
 export interface Slot {

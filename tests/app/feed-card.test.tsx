@@ -14,7 +14,7 @@ const item: FeedItem = {
   diagram: { pd: [], unknots: 0, framings: [], geometry: null },
   photoThumbUrl: null,
   // V of the positive trefoil is t + t^3 - t^4 (docs/conventions.md, from memory).
-  invariants: { crossings: 3, components: 1, jones: [[1, 1], [3, 1], [4, -1]], jonesText: 't + t³ − t⁴' },
+  invariants: { crossings: 3, components: 1, jones: [[1, 1], [3, 1], [4, -1]], jonesText: 't + t³ − t⁴', computing: false },
   latestRun: { id: 'r1', kind: 'khovanov', finishedAt: '2026-11-20T11:00:00.000Z', summary: 'Kh over Z: q + q³ + h²q⁵ + h³q⁹' },
   commentCount: 2,
   version: 7,
@@ -35,4 +35,10 @@ test('the card shows s when a run computed it, and nothing of s otherwise', () =
   expect(screen.getByText('s = 2')).toBeTruthy();
   view.rerender(<FeedCard item={item} onOpen={() => undefined} />);
   expect(screen.queryByText(/^s = /)).toBeNull();
+});
+
+test('the card says the Jones polynomial is computing while the server has not got it yet', () => {
+  render(<FeedCard item={{ ...item, invariants: { crossings: 3, components: null, jones: null, jonesText: null, computing: true } }} onOpen={() => undefined} />);
+  expect(screen.getByText('Jones polynomial: computing…')).toBeTruthy();
+  expect(screen.queryByText(/^V = /)).toBeNull();
 });

@@ -12,6 +12,7 @@ const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['sinv', () => import('./sinv.bench').then((m) => m.sinvBench())],
   ['homfly', () => import('./homfly.bench').then((m) => m.homflyBench())],
   ['bands', () => import('./bands.bench').then((m) => m.bandsBench())],
+  ['freeze', () => import('./freeze.bench').then((m) => m.freezeBench())],
 ];
 
 async function main(): Promise<void> {

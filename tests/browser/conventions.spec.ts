@@ -2,14 +2,14 @@
 // closure of the braid word 1 1 1 is the positive trefoil (docs/conventions.md, Braid word),
 // which our table calls 3_1, with signature -2 (docs/conventions.md, Signature).
 import type { Browser, Page } from 'playwright-core';
-import { PHONE, call, launch, person, shoot, signIn } from './helpers';
+import { PHONE, launch, person, register, shoot, signIn } from './helpers';
 
 const who = person('Clara Conventions', 'clara.conv', 'signs and mirrors 7');
 let browser: Browser;
 let page: Page;
 
 beforeAll(async () => {
-  await call('POST', '/api/auth/register', null, { email: who.email, password: who.password, displayName: who.name });
+  await register(who);
   browser = await launch();
   const context = await browser.newContext({ viewport: PHONE });
   context.setDefaultTimeout(20_000);

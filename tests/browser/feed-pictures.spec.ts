@@ -141,11 +141,12 @@ test('the shared page shows Bruno the framing, the component numbers and the lin
   await brunoPage.getByRole('link', { name: `Open ${LINKED}` }).click();
   await brunoPage.getByRole('heading', { name: LINKED }).waitFor();
   const framed = brunoPage.getByTestId('framed-link');
-  // Numbered in the diagram's order; circle a carries framing -1, b the blackboard framing,
-  // which is 0 without self-crossings (docs/conventions.md, Framings and cables).
-  const [na, nb] = ['a', 'b'].map((id) => linked.order.indexOf(id) + 1);
-  const parts = [`${na}: −1`, `${nb}: 0 (bb)`].sort();
-  await framed.getByText(`Framings: ${parts.join('   ')}`).waitFor();
+  // Numbered in drawing order, as on the Slate and the picture (a was drawn first); circle a
+  // carries framing -1, b the blackboard framing, which is 0 without self-crossings
+  // (docs/conventions.md, Framings and cables).
+  const [na, nb] = [1, 2];
+  expect(linked.order).toEqual(['b', 'a']); // the code lists b first: the numbers are not its order
+  await framed.getByText(`Framings: ${na}: −1   ${nb}: 0 bb`).waitFor();
   // The Hopf link has linking number ±1 (Rolfsen, Knots and Links, ch. 5D, from memory); the
   // sign is half the sum of the crossing signs (docs/conventions.md).
   expect(Math.abs(linked.lk)).toBe(1);

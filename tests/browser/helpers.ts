@@ -69,19 +69,23 @@ export async function call(method: string, path: string, token: string | null, b
   return json;
 }
 
+/** Signs `who` up through the API; answers the token. */
+export async function register(who: Person): Promise<string> {
+  return ((await call('POST', '/api/auth/register', null, { email: who.email, password: who.password, displayName: who.name })) as { token: string }).token;
+}
+
 /**
  * Registers both people, makes `owner` the owner of a new group named `name` and `member` a
  * member of it (invited by e-mail, accepted through the kept mail's link). Answers their tokens.
  */
 export async function groupOfTwo(owner: Person, member: Person, name: string) {
-  const a = await call('POST', '/api/auth/register', null, { email: owner.email, password: owner.password, displayName: owner.name });
-  const b = await call('POST', '/api/auth/register', null, { email: member.email, password: member.password, displayName: member.name });
-  const group = await call('POST', '/api/groups', a.token, { name });
-  await call('POST', `/api/groups/${group.id}/invitations`, a.token, { email: member.email, role: 'member' });
+  const [ownerToken, memberToken] = [await register(owner), await register(member)];
+  const group = await call('POST', '/api/groups', ownerToken, { name });
+  await call('POST', `/api/groups/${group.id}/invitations`, ownerToken, { email: member.email, role: 'member' });
   const mail = (await call('GET', '/api/dev/mail', null)) as { to: string[]; links: string[] }[];
   const link = mail.filter((m) => m.to.includes(member.email)).pop()!.links.find((l) => l.includes('/invite/'))!;
-  await call('POST', `/api/invitations/${new URL(link).pathname.split('/').pop()}/accept`, b.token);
-  return { ownerToken: a.token as string, memberToken: b.token as string, groupId: group.id as string };
+  await call('POST', `/api/invitations/${new URL(link).pathname.split('/').pop()}/accept`, memberToken);
+  return { ownerToken, memberToken, groupId: group.id as string };
 }
 
 /**

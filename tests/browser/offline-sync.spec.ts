@@ -3,7 +3,7 @@
 // unreachable and find them kept; then let the network back and see them reach the server
 // and a second signed-in browser context.
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { PHONE, WIDE, baseUrl, launch, shoot, uniqueEmail } from './helpers';
+import { PHONE, WIDE, baseUrl, launch, shoot, uniqueEmail, register } from './helpers';
 
 const who = { name: 'Olga Offline', email: uniqueEmail('olga.offline'), password: 'no signal here 7' };
 const FIRST = 'Figure-eight from the talk';
@@ -37,13 +37,7 @@ async function setDetails(p: Page, title: string) {
 }
 
 beforeAll(async () => {
-  const res = await fetch(baseUrl + '/api/auth/register', {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: who.email, password: who.password, displayName: who.name }),
-  });
-  if (!res.ok) throw new Error(`register: ${res.status}`);
-  token = ((await res.json()) as { token: string }).token;
+  token = await register(who);
   browser = await launch();
   phone = await browser.newContext({ viewport: PHONE });
   phone.setDefaultTimeout(15_000);

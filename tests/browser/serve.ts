@@ -8,7 +8,9 @@ async function main() {
   const server = await startServer({
     dbPath,
     // Every spec signs in several times from one address; the production limit would trip.
-    config: { webDir: 'dist', authRateLimit: { windowMs: 60_000, limit: 1000 }, bcryptRounds: 4 },
+    // Specs read each e-mail as soon as it is sent: no digests (pacing has its own tests in
+    // tests/server/comment-quotas.test.ts).
+    config: { webDir: 'dist', authRateLimit: { windowMs: 60_000, limit: 1000 }, bcryptRounds: 4, mailPacing: { quietMs: 0, maxWaitMs: 0, cap: 50 } },
   });
   process.stdout.write(JSON.stringify({ url: server.url }) + '\n');
   const stop = () => void server.stop().then(() => process.exit(0));

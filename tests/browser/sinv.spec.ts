@@ -4,7 +4,7 @@
 // 14-crossing knot in this browser (goal <= 300 ms).
 import type { Browser, Page } from 'playwright-core';
 import { torusLink } from '@/shared/knot/families';
-import { PHONE, baseUrl, launch, person, shoot, signIn } from './helpers';
+import { PHONE, launch, person, register, shoot, signIn } from './helpers';
 
 const who = person('Sami Invariant', 'sami.inv', 'slice genus 4');
 
@@ -14,12 +14,7 @@ let page: Page;
 let workerUrl = '';
 
 beforeAll(async () => {
-  const res = await fetch(baseUrl + '/api/auth/register', {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: who.email, password: who.password, displayName: who.name }),
-  });
-  if (!res.ok) throw new Error(`register: ${res.status}`);
+  await register(who);
   browser = await launch();
   const context = await browser.newContext({ viewport: PHONE });
   context.setDefaultTimeout(20_000);

@@ -3,7 +3,7 @@
 // drawn; screenshots at phone and wide size.
 import sharp from 'sharp';
 import type { Browser, Page } from 'playwright-core';
-import { PHONE, baseUrl, launch, person, shoot, signIn } from './helpers';
+import { PHONE, baseUrl, launch, person, shoot, signIn, register } from './helpers';
 
 const who = person('Sofia Slate', 'sofia.slate', 'chalk and board 5');
 
@@ -57,12 +57,7 @@ async function settled(p: Page) {
 }
 
 beforeAll(async () => {
-  const res = await fetch(baseUrl + '/api/auth/register', {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: who.email, password: who.password, displayName: who.name }),
-  });
-  if (!res.ok) throw new Error(`register: ${res.status}`);
+  await register(who);
   browser = await launch();
   const context = await browser.newContext({ viewport: PHONE, permissions: ['clipboard-read', 'clipboard-write'] });
   context.setDefaultTimeout(15_000);

@@ -3,7 +3,7 @@
 // it (lib/store/tab-owner.ts). Both create and list sketches; the status line of neither says
 // "Up to date" before a sync has succeeded; when the first tab closes, the second takes over.
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { PHONE, baseUrl, call, launch, newTitledSketch, person, shoot, signIn } from './helpers';
+import { PHONE, baseUrl, launch, newTitledSketch, person, register, shoot, signIn } from './helpers';
 
 const who = person('Rhea Tabs', 'rhea.tabs', 'two tabs one sketchbook 4');
 
@@ -27,7 +27,7 @@ async function newSketch(page: Page, title: string): Promise<void> {
 }
 
 beforeAll(async () => {
-  await call('POST', '/api/auth/register', null, { email: who.email, password: who.password, displayName: who.name });
+  await register(who);
   browser = await launch();
   context = await browser.newContext({ viewport: PHONE });
   context.setDefaultTimeout(20_000);

@@ -3,6 +3,7 @@
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import sharp from 'sharp';
+import { FeedPage } from '@/shared/api/feed';
 import type { SketchFields } from '@/shared/api/sketches';
 import type { Role } from '@/shared/api/groups';
 import type { RunningServer } from '@/server/server';
@@ -58,6 +59,18 @@ export async function sketchOf(server: RunningServer, who: Account, over: Partia
 
 export const api = (server: RunningServer) => request(server.url);
 export const auth = (a: Account) => bearer(a.token);
+
+/**
+ * The group's feed once no item's summary is still computing (the server computes them off the
+ * request thread after a write, server/feed/summaries.ts).
+ */
+export async function summarisedFeed(server: RunningServer, who: Account, groupId: string, timeoutMs = 30_000): Promise<FeedPage> {
+  for (const t0 = Date.now(); ; await new Promise((r) => setTimeout(r, 50))) {
+    const page = FeedPage.parse((await api(server).get(`/api/groups/${groupId}/feed?limit=50`).set(auth(who))).body);
+    if (!page.items.some((i) => i.invariants.computing)) return page;
+    if (Date.now() - t0 > timeoutMs) throw new Error(`feed summaries still computing after ${timeoutMs} ms`);
+  }
+}
 
 /** A real photo: a gradient JPEG carrying EXIF with a GPS position, as a phone camera writes it. */
 export function cameraJpeg(width = 640, height = 480): Promise<Buffer> {

@@ -3,7 +3,7 @@
 // role x action matrix with a non-member who never sees the group's data.
 import { FeedPage, ForkResponse, GroupSketch, ShareResponse } from '@/shared/api/feed';
 import type { RunningServer } from '@/server/server';
-import { api, auth, castServer, everyone, memberWrite, sketchOf, type Cast, type Who } from './feed-fixtures';
+import { api, auth, castServer, everyone, memberWrite, sketchOf, summarisedFeed, type Cast, type Who } from './feed-fixtures';
 import { pullAll } from './sync-fixtures';
 
 let server: RunningServer;
@@ -81,7 +81,7 @@ describe('the feed', () => {
   });
 
   it('is newest first with the Readout summary, owner and comment count', async () => {
-    const page = FeedPage.parse((await feedOf('viewer', '?limit=50')).body);
+    const page = await summarisedFeed(server, c.as.viewer, c.group);
     const mine = page.items.filter((i) => ids.includes(i.id));
     expect(mine.map((i) => i.title)).toEqual(['Figure eight', 'Trefoil B', 'Trefoil A']);
     const a = mine.find((i) => i.title === 'Trefoil A')!;
@@ -130,6 +130,7 @@ describe('the feed', () => {
 
   it('the sketch page lists same-invariant sketches of this group only, and what my role may do', async () => {
     const [a, b, eight] = ids;
+    await summarisedFeed(server, c.as.viewer, c.group);
     const page = (who: Who, id: string, group = c.group) => api(server).get(`/api/groups/${group}/feed/${id}`).set(auth(c.as[who]));
     const asViewer = GroupSketch.parse((await page('viewer', a)).body);
     // Earlier tests' sketches are trefoils too (the fixture's default diagram); the other group's never shows.

@@ -48,4 +48,4 @@ it('reuses a stored result for s only when it computed s', async () => {
   expect((await waitFor(server, token, withS.id, ended)).result!.s).toEqual({ Q: 2, F2: 2 });
   const again = (await start(server, token, { diagram: { pd: trefoil() }, computeS: true })).body;
   expect(again).toMatchObject({ status: 'done', reusedFrom: withS.id, result: { s: { Q: 2, F2: 2 } } });
-});
+}, 60_000);

@@ -114,7 +114,7 @@ describe('the queue', () => {
     expect(again.body.error.code).toBe('run_finished');
     const mail = await mailFor(server, (m) => m.to.includes(user.email) && /cancelled/.test(m.subject));
     expect(mail.text).toContain(`/runs/${a.id}`);
-  });
+  }, 60_000);
 });
 
 describe('limits', () => {

@@ -112,7 +112,7 @@ describe('invariance', () => {
     });
   });
 
-  it('s is unchanged by random Markov moves on braid words', () => {
+  it('s is unchanged by random Markov moves on braid words (over Q and F2)', () => {
     const rng = seededRng(11);
     const words = Array.from({ length: 40 }, () => randomWord(rnd, 3, 8))
       .filter((w) => isKnot(fromBraid(w)))
@@ -121,7 +121,9 @@ describe('invariance', () => {
     for (const word of words) {
       let b: Braid = { word, strands: 3 };
       for (let m = 0; m < 5; m++) b = randomMarkovMove(b, rng);
-      expect([word.join(' '), s(fromBraid(b.word, b.strands))]).toEqual([word.join(' '), s(fromBraid(word))]);
+      for (const field of S_FIELDS) {
+        expect([word.join(' '), field, s(fromBraid(b.word, b.strands), field)]).toEqual([word.join(' '), field, s(fromBraid(word), field)]);
+      }
     }
   });
 });

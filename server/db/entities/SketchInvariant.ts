@@ -1,8 +1,10 @@
 import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
 
 /**
- * Readout summary of a sketch at one version, computed from its PD code on first read. `key`
- * (crossings + Jones) finds sketches with the same invariants; null when not computable.
+ * Readout summary of a sketch at one version, computed from its PD code in the job pool when
+ * the sketch is written (server/feed/summaries.ts). `diagramHash` names the diagram it
+ * summarises (null on rows from before it was kept); `key` (crossings + Jones) finds sketches
+ * with the same invariants, null when not computable.
  */
 @Entity('sketch_invariants')
 export class SketchInvariant {
@@ -11,6 +13,9 @@ export class SketchInvariant {
 
   @Column({ type: 'integer' })
   version: number;
+
+  @Column({ type: 'varchar', length: 64, nullable: true })
+  diagramHash: string | null;
 
   @Column({ type: 'integer' })
   crossings: number;

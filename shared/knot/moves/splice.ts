@@ -3,7 +3,7 @@
 
 import { assemble, Framed } from '../assemble';
 import { Diagram } from '../diagram';
-import { orient, PDError, Slot, slotsOf } from '../pd';
+import { mapLabels, orient, PDError, Slot, slotsOf } from '../pd';
 
 /**
  * Removes the crossings `remove`; each pair in `joins` is (label entering the removed part,
@@ -27,7 +27,7 @@ export function splice(d: Diagram, remove: readonly number[], joins: readonly (r
   const joined = new Set(joins.flat());
   const kept = d.pd.map((_, i) => i).filter((i) => !gone.has(i));
   const index = new Map(kept.map((old, i) => [old, i]));
-  const pd = kept.map((i) => d.pd[i].map((l) => find(l)) as unknown as typeof d.pd[number]);
+  const pd = kept.map((i) => mapLabels(d.pd[i], (l) => find(l)));
   const heads = new Map<number, Slot>();
   for (const [label, h] of o.head) {
     if (index.has(h.crossing)) heads.set(find(label), { crossing: index.get(h.crossing)!, position: h.position });

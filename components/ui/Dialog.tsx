@@ -1,7 +1,7 @@
-// A centred card over a dimmed screen (Modal): the paste, families, framing and details forms.
+// A centred card over a dimmed screen (Modal): the paste, families, framing, details and conventions sheets.
 import { useEffect } from 'react';
 import { Modal, Platform, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
-import { colors, radius, space, type } from '@/constants/theme';
+import { colors, radius, shadows, space, type } from '@/constants/theme';
 
 export function Dialog({ title, visible, onClose, children, wide = false }: {
   title: string;
@@ -35,38 +35,12 @@ export function Dialog({ title, visible, onClose, children, wide = false }: {
   );
 }
 
-/** A segmented choice of a few options. */
-export function Choice<T extends string>({ label, options, value, onChange }: {
-  label: string;
-  options: readonly { value: T; label: string }[];
-  value: T;
-  onChange: (v: T) => void;
-}) {
-  return (
-    <View role="radiogroup" aria-label={label} style={styles.choice}>
-      {options.map((o) => {
-        const on = o.value === value;
-        return (
-          <Pressable key={o.value} role="radio" aria-checked={on} aria-label={o.label} onPress={() => onChange(o.value)} style={[styles.option, on && styles.optionOn]}>
-            <Text style={[styles.optionText, on && styles.optionTextOn]}>{o.label}</Text>
-          </Pressable>
-        );
-      })}
-    </View>
-  );
-}
-
 const styles = StyleSheet.create({
-  scrim: { flex: 1, backgroundColor: 'rgba(28,34,39,0.45)', alignItems: 'center', justifyContent: 'center', paddingHorizontal: space.lg, paddingVertical: 64 },
-  card: { width: '100%', maxHeight: '100%', backgroundColor: colors.surface, borderRadius: radius.lg, overflow: 'hidden', boxShadow: '0 12px 40px rgba(28,34,39,0.25)' } as object,
+  scrim: { flex: 1, backgroundColor: colors.scrim, alignItems: 'center', justifyContent: 'center', paddingHorizontal: space.lg, paddingVertical: 64 },
+  card: { width: '100%', maxHeight: '100%', backgroundColor: colors.surface, borderRadius: radius.lg, overflow: 'hidden', boxShadow: shadows.card } as object,
   head: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', paddingLeft: space.xl, paddingRight: space.sm, paddingTop: space.md, borderBottomWidth: 1, borderBottomColor: colors.line, paddingBottom: space.sm },
   title: { ...type.title, color: colors.ink },
   close: { width: 44, height: 44, alignItems: 'center', justifyContent: 'center' },
   closeText: { fontSize: 26, color: colors.inkMuted },
   body: { padding: space.xl, gap: space.lg },
-  choice: { flexDirection: 'row', flexWrap: 'wrap', backgroundColor: colors.sunken, borderRadius: radius.md, padding: 3, gap: 3, alignSelf: 'flex-start' },
-  option: { paddingHorizontal: space.md, minHeight: 36, justifyContent: 'center', borderRadius: radius.sm },
-  optionOn: { backgroundColor: colors.surface, boxShadow: '0 1px 2px rgba(28,34,39,0.12)' } as object,
-  optionText: { ...type.label, color: colors.inkMuted },
-  optionTextOn: { color: colors.ink },
 });
