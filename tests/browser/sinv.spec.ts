@@ -72,7 +72,7 @@ test('the worker computes s of a 14-crossing knot in this browser (figure printe
       const once = () =>
         new Promise<{ ms: number; s: unknown }>((resolve) => {
           const t = performance.now();
-          w.onmessage = (e: MessageEvent<{ s: unknown }>) => resolve({ ms: performance.now() - t, s: e.data.s });
+          w.onmessage = (e: MessageEvent<{ value: unknown }>) => resolve({ ms: performance.now() - t, s: e.data.value });
           w.postMessage({ pd, unknots: 0 });
         });
       const out = [];
