@@ -16,11 +16,11 @@
 import { orient, PDCode } from '@/shared/knot/pd';
 import { Analysis, analyse, readDrawing, Reading, UnderRule } from './analyse';
 import { bandsOf } from './bands';
-import { bandHalfWidth, BandShape, bandShapes, closedOf, coreNormal, offsetAt, sidePoint } from './band-shape';
+import { bandHalfWidth, BandShape, bandShapes, closedOf, corePoint, offsetAt, sidePoint } from './band-shape';
 import { Cut, cutHalf, Join, Source, trace, Traced } from './band-trace';
 import { DrawingOptions, withDefaults } from './options';
-import { add, dist, lerp, Point, scale } from './point';
-import { arcsOf, tangentAt } from './polyline';
+import { add, dist, dot, lerp, Point, scale, sub } from './point';
+import { arcsOf } from './polyline';
 import { Sketch, SketchComponent } from './sketch';
 import { edgeAt } from './to-pd';
 
@@ -69,18 +69,26 @@ function endPoints(c: SketchComponent, index: number): { in: Point; out: Point }
 /** How far past the second strand a finger's tip reaches (the centre of its round end). */
 const overshoot = 12;
 
-// The stretch of side `sd` of band k from core arc d1 on over the second strand to the tip,
-// in that order: tip sources, since it passes over the second strand.
-function reach(b: BandShape, k: number, sd: 1 | -1, spacing: number): Traced {
-  const end = b.arcs[b.arcs.length - 1];
-  const t = tangentAt(b.core, b.arcs, end);
-  const n = coreNormal(b, end);
-  const off = offsetAt(b, sd, end);
-  const along = Math.max(1, Math.round((end - b.d1) / spacing));
-  const points = [
-    ...Array.from({ length: along }, (_, i) => sidePoint(b, sd, b.d1 + ((end - b.d1) * (i + 1)) / along)),
-    ...Array.from({ length: Math.round(overshoot / spacing) }, (_, i) => add(b.core[b.core.length - 1], add(scale(t, (i + 1) * spacing), scale(n, off)))),
-  ];
+// The finger's end crosses the second strand square to it, whatever angle the core meets it
+// at: the strand's unit tangent at the band's end and its normal towards the core.
+function endFrame(b: BandShape, closed: readonly SketchComponent[]): { q: Point; t: Point; n: Point } {
+  const strand = closed[b.to.path];
+  const m = strand.points.length;
+  const q = strand.points[b.to.index];
+  const d = sub(strand.points[(b.to.index + 1) % m], strand.points[(b.to.index + m - 1) % m]);
+  const t = scale(d, 1 / (Math.hypot(d.x, d.y) || 1));
+  const n = { x: -t.y, y: t.x };
+  return { q, t, n: dot(sub(corePoint(b, b.d1), q), n) < 0 ? scale(n, -1) : n };
+}
+
+// Side `sd` of band k from core arc d1 on over the second strand, square to it, in that order:
+// tip sources, since it passes over the second strand. `along` is the side's place along the strand.
+function reach(b: BandShape, k: number, sd: 1 | -1, f: { q: Point; t: Point; n: Point }, along: 1 | -1, spacing: number): Traced {
+  const lane = add(f.q, scale(f.t, along * bandHalfWidth));
+  const before = add(lane, scale(f.n, bandHalfWidth + 4));
+  const start = sidePoint(b, sd, b.d1);
+  const steps = Math.round((bandHalfWidth + 4 + overshoot) / spacing);
+  const points = [...between(start, before, spacing), before, ...Array.from({ length: steps }, (_, i) => lerp(before, add(lane, scale(f.n, -overshoot)), (i + 1) / steps))];
   return { points, sources: points.map(() => ({ kind: 'tip', band: k, middle: false })) };
 }
 
@@ -93,15 +101,14 @@ function fingerOf(b: BandShape, k: number, closed: readonly SketchComponent[], s
   const s = b.inSide;
   const out = side(b, k, s, b.d0, b.d1, spacing);
   const back = side(b, k, -s as 1 | -1, b.d1, b.d0, spacing);
-  const end = b.arcs[b.arcs.length - 1];
-  const t = tangentAt(b.core, b.arcs, end);
-  const n = coreNormal(b, end);
-  const c = add(b.core[b.core.length - 1], scale(t, overshoot));
-  const e = offsetAt(b, s, end);
+  const f = endFrame(b, closed);
+  // Which side of the band's end lies towards +t along the strand.
+  const along: 1 | -1 = dot(sub(sidePoint(b, s, b.d1), sidePoint(b, -s as 1 | -1, b.d1)), f.t) > 0 ? 1 : -1;
+  const c = add(f.q, scale(f.n, -overshoot));
   const capSteps = Math.max(4, Math.round((Math.PI * bandHalfWidth) / spacing / 2) * 2);
   const cap = Array.from({ length: capSteps - 1 }, (_, i) => {
     const phi = (Math.PI * (i + 1)) / capSteps;
-    return add(c, add(scale(n, e * Math.cos(phi)), scale(t, bandHalfWidth * Math.sin(phi))));
+    return add(c, add(scale(f.t, along * bandHalfWidth * Math.cos(phi)), scale(f.n, -bandHalfWidth * Math.sin(phi))));
   });
   const tip: Traced = { points: cap, sources: cap.map((_, i): Source => ({ kind: 'tip', band: k, middle: 2 * (i + 1) === capSteps })) };
   const edge: Source = { kind: 'band', band: k, side: s, arc: b.d0 };
@@ -111,9 +118,9 @@ function fingerOf(b: BandShape, k: number, closed: readonly SketchComponent[], s
     piece: concat(
       bridge(ends.in, out.points[0], edge, spacing),
       out,
-      reach(b, k, s, spacing),
+      reach(b, k, s, f, along, spacing),
       tip,
-      backwards(reach(b, k, -s as 1 | -1, spacing)),
+      backwards(reach(b, k, -s as 1 | -1, f, -along as 1 | -1, spacing)),
       back,
       bridge(back.points[back.points.length - 1], ends.out, { ...edge, side: -s as 1 | -1 }, spacing),
     ),
@@ -142,8 +149,7 @@ const circular = (x: number, y: number, total: number) => {
 };
 
 // Over/under of the surgered drawing's crossings from the sources of their two passages.
-function bySource(sketch: Sketch, closed: readonly SketchComponent[], shapes: readonly BandShape[], traced: readonly Traced[]): UnderRule {
-  const original = analyse(sketch).crossings;
+function bySource(original: Analysis['crossings'], closed: readonly SketchComponent[], shapes: readonly BandShape[], traced: readonly Traced[]): UnderRule {
   const lengths = closed.map((c) => arcsOf(c.points, true)[c.points.length]);
   // Whether passage p (source s) is over passage q (source t).
   const over = (s: Source, t: Source): boolean => {
@@ -191,8 +197,8 @@ function bySource(sketch: Sketch, closed: readonly SketchComponent[], shapes: re
 const asComponents = (traced: readonly Traced[], prefix: string): SketchComponent[] =>
   traced.map((t, i) => ({ id: `${prefix}${i + 1}`, seq: i + 1, points: t.points, closed: true, reversed: false, framing: null }));
 
-function read(sketch: Sketch, closed: readonly SketchComponent[], shapes: readonly BandShape[], traced: readonly Traced[], prefix: string, o: DrawingOptions): Reading {
-  return readDrawing(asComponents(traced, prefix), bySource(sketch, closed, shapes, traced), o);
+function read(original: Analysis['crossings'], closed: readonly SketchComponent[], shapes: readonly BandShape[], traced: readonly Traced[], prefix: string, o: DrawingOptions): Reading {
+  return readDrawing(asComponents(traced, prefix), bySource(original, closed, shapes, traced), o);
 }
 
 // Where a source sits in the traced drawing: path and point index.
@@ -247,10 +253,10 @@ export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {})
     const used = all.flat();
     return all.map(([a, b]) => (a !== null && b !== null && used.filter((x) => x === a || x === b).length === 2 && a !== b ? { a, b } : null));
   };
-  const fingerReading = read(sketch, closed, shapes, fingerTraced, 'f', o);
+  const fingerReading = read(base.crossings, closed, shapes, fingerTraced, 'f', o);
   const saddles = saddlesOf(fingerReading);
   const finger = fingerReading.analysis;
-  const after = read(sketch, closed, shapes, afterTraced, 'a', o).analysis;
+  const after = read(base.crossings, closed, shapes, afterTraced, 'a', o).analysis;
   const problem = finger.markers[0] ?? after.markers[0];
   if (problem) return { reason: `With the bands: ${problem.message}` };
   if (saddles.some((s) => !s)) return { reason: 'Two band ends are too close together on one strand: move one of them.' };

@@ -5,6 +5,8 @@
 // from the knot core), the others being on the Slate already.
 
 import { analyse } from '@/shared/drawing/analyse';
+import { readBands } from '@/shared/drawing/band-read';
+import { addBand } from '@/shared/drawing/bands';
 import { addStroke, flipCrossing, Sketch } from '@/shared/drawing/sketch';
 import { layoutPD } from '@/shared/layout/layout';
 import { layoutToSketch } from '@/shared/layout/to-sketch';
@@ -37,7 +39,27 @@ function layoutLines(runs: number): Line[] {
 }
 
 export function drawingBench(runs = 30): Line[] {
-  return [...strokeLines(runs), ...layoutLines(5)];
+  return [...strokeLines(runs), ...layoutLines(5), ...bandLines(10)];
+}
+
+// Reading bands (finger drawing, saddles, after drawing): a tall ellipse with k bands across it.
+function bandLines(runs: number): Line[] {
+  return [2, 6].map((k) => {
+    const ellipse = Array.from({ length: 241 }, (_, i) => ({ x: 200 + 100 * Math.cos((2 * Math.PI * i) / 240), y: 400 + 380 * Math.sin((2 * Math.PI * i) / 240) }));
+    const s = Array.from({ length: k }, (_, i) => 400 - 300 + (600 * (i + 0.5)) / k).reduce((acc, y) => {
+      const half = 100 * Math.sqrt(1 - ((y - 400) / 380) ** 2);
+      const r = addBand(acc, Array.from({ length: 21 }, (_, j) => ({ x: 200 - half + (2 * half * j) / 20, y })));
+      if ('reason' in r) throw new Error(r.reason);
+      return r.sketch;
+    }, addStroke({ components: [], flips: [], nextSeq: 1 }, ellipse));
+    const times = Array.from({ length: runs }, () => {
+      const t0 = performance.now();
+      const r = readBands(s);
+      if (!r || 'reason' in r || r.afterDiagram.components !== k + 1) throw new Error(`bench bands: ${r && 'reason' in r ? r.reason : 'wrong count'}`);
+      return performance.now() - t0;
+    });
+    return { name: `bands: finger and after drawings, an unknot with ${k} bands (median of ${runs})`, value: round(median(times)), unit: 'ms' };
+  });
 }
 
 function strokeLines(runs: number): Line[] {

@@ -120,6 +120,21 @@ describe('a band across another strand', () => {
   });
 });
 
+describe('two bands whose cores cross', () => {
+  test('the finger drawing is still the unknot and agrees with the band mathematics', () => {
+    const e = ellipse(200, 200, 90, 140);
+    const at = (y: number, side: 1 | -1) => ({ x: 200 + side * 90 * Math.sqrt(1 - ((y - 200) / 140) ** 2), y });
+    const s = band(band(drawn([e]), at(130, -1), at(270, 1)), at(270, -1), at(130, 1));
+    const r = read(s);
+    expect(jonesOf(r.presentation).equals(unlink(1))).toBe(true);
+    expect(r.presentation.saddles).toHaveLength(2);
+    // The cores cross, so the fingers' sides cross four times (plus the two R2s at their tips);
+    // each band changes the number of components by one (common practice): 1 or 3 after two.
+    expect(r.presentation.pd.length).toBeGreaterThanOrEqual(4);
+    expect([1, 3]).toContain(r.afterDiagram.components);
+  });
+});
+
 describe('bands saved and exported', () => {
   const s = band(drawn([ellipse(200, 200, 90, 140)]), { x: 112, y: 200 }, { x: 288, y: 200 });
 
