@@ -15,6 +15,8 @@ export interface Step {
   target: Int32Array;
   /** loops[2 s + h]: the loops that smoothing closes (0, 1 or 2). */
   loops: Uint8Array;
+  /** The largest sum of 2^loops over the terms arriving at one state (a bound for bracket-sum.ts). */
+  inWeight: number;
 }
 
 export interface StateGraph {
@@ -56,11 +58,12 @@ export function stateGraph(pd: PDCode, order: readonly number[]): StateGraph {
     const q8 = new Uint8Array(q.buffer);
     const common = Math.min(words, table.words);
     for (let s = 0; s < size; s++) {
+      // Most boundary points keep their place and partner: start from the old row. Both
+      // smoothings rewrite the same entries, so one copy serves both.
+      for (let i = 0; i < common; i++) q[i] = rows[s * words + i];
+      for (let i = common; i < table.words; i++) q[i] = 0;
+      for (let i = g.boundary.length; i < 4 * common; i++) q8[i] = 0;
       for (let h = 0; h < 2; h++) {
-        // Most boundary points keep their place and partner: start from the old row.
-        for (let i = 0; i < common; i++) q[i] = rows[s * words + i];
-        for (let i = common; i < table.words; i++) q[i] = 0;
-        for (let i = g.boundary.length; i < 4 * common; i++) q8[i] = 0;
         const l = join(g, bytes, 4 * s * words, h, q8);
         const t = table.indexOf(q);
         target[2 * s + h] = t;
@@ -70,7 +73,9 @@ export function stateGraph(pd: PDCode, order: readonly number[]): StateGraph {
         else if (nextCls[t] !== c) stride = 2;
       }
     }
-    steps.push({ size: table.size, target, loops });
+    const weight = new Float64Array(table.size);
+    for (let k = 0; k < target.length; k++) weight[target[k]] += 2 ** loops[k];
+    steps.push({ size: table.size, target, loops, inWeight: Math.max(...weight) });
     [boundary, rows, words, size, cls] = [g.boundary, table.rows, table.words, table.size, Int8Array.from(nextCls)];
   }
   return { steps, stride };
@@ -104,27 +109,32 @@ interface Glueing {
 function glueing(boundary: readonly number[], x: readonly number[]): Glueing {
   const m = boundary.length;
   const glue = new Int32Array(m + 4).fill(-1);
-  const where = new Map(boundary.map((l, i) => [l, i]));
-  x.forEach((label, s) => {
-    const i = where.get(label);
-    const twin = x.findIndex((l, t) => l === label && t !== s);
-    if (i !== undefined) [glue[i], glue[m + s]] = [m + s, i];
-    else if (twin >= 0) glue[m + s] = m + twin; // a kink: the crossing meets itself
-  });
-  const all = Array.from({ length: m + 4 }, (_, v) => v);
-  const glued = all.filter((v) => glue[v] >= 0);
+  const glued: number[] = [];
+  for (let s = 0; s < 4; s++) {
+    const i = boundary.indexOf(x[s]);
+    if (i >= 0) [glue[i], glue[m + s]] = [m + s, i];
+    else if (x.indexOf(x[s]) !== s) [glue[m + x.indexOf(x[s])], glue[m + s]] = [m + s, m + x.indexOf(x[s])]; // a kink
+  }
+  for (let v = 0; v < m + 4; v++) if (glue[v] >= 0) glued.push(v);
   const width = m + 4 - glued.length;
   // Matchings are stored in bytes; a cut this wide is far beyond any contraction anyway.
   if (width > 256) throw new RangeError(`a cut of ${width} ends is beyond the bracket's contraction`);
+  // Old free points below the new width stay; the other free nodes fill the remaining places in turn.
   const newIndex = new Int32Array(m + 4).fill(-1);
-  const stays = all.filter((v) => v < Math.min(m, width) && glue[v] < 0);
-  stays.forEach((v) => (newIndex[v] = v));
-  const places = all.filter((i) => i < width && !(i < m && glue[i] < 0 && i < width));
-  const starts = all.filter((v) => glue[v] < 0 && (v >= m || v >= width));
-  starts.forEach((v, k) => (newIndex[v] = places[k]));
-  const labels = [...boundary, ...x];
+  const starts: number[] = [];
+  let place = 0;
+  const stays = (v: number) => v < m && v < width && glue[v] < 0;
+  for (let v = 0; v < m + 4; v++) {
+    if (glue[v] >= 0) continue;
+    if (stays(v)) newIndex[v] = v;
+    else {
+      while (stays(place)) place++;
+      newIndex[v] = place++;
+      starts.push(v);
+    }
+  }
   const next = new Array<number>(width);
-  all.forEach((v) => newIndex[v] >= 0 && (next[newIndex[v]] = labels[v]));
+  for (let v = 0; v < m + 4; v++) if (newIndex[v] >= 0) next[newIndex[v]] = v < m ? boundary[v] : x[v - m];
   return {
     m,
     glue,
@@ -187,47 +197,38 @@ class MatchTable {
   readonly words: number;
   rows: Int32Array;
   size = 0;
-  private hashes: Int32Array;
+  /** Pairs (hash, index) with index -1 for a free pair: a probe reads one place in memory. */
   private slots: Int32Array;
 
   constructor(width: number, expected: number) {
     this.words = Math.max(1, Math.ceil(width / 4));
     this.rows = new Int32Array(this.words * Math.max(expected, 1));
-    this.hashes = new Int32Array(Math.max(expected, 1));
-    this.slots = new Int32Array(2 ** Math.ceil(Math.log2(2 * expected + 2))).fill(-1);
+    this.slots = new Int32Array(2 * 2 ** Math.ceil(Math.log2(2 * expected + 2))).fill(-1);
   }
 
   /** The index of matching q, added if it is new. */
   indexOf(q: Int32Array): number {
-    const { words } = this;
+    const { words, slots, rows } = this;
     let hash = 0x811c9dc5 | 0;
     for (let i = 0; i < words; i++) hash = Math.imul(hash ^ q[i], 16777619);
     // A multiplication mixes only upwards: fold the high bits into the low ones the slot uses.
     hash = Math.imul(hash ^ (hash >>> 16), 0x45d9f3b);
     hash ^= hash >>> 16;
-    const mask = this.slots.length - 1;
+    const mask = slots.length / 2 - 1;
     for (let at = hash & mask; ; at = (at + 1) & mask) {
-      const k = this.slots[at];
+      const k = slots[2 * at + 1];
       if (k < 0) {
-        this.slots[at] = this.add(q, hash);
-        return this.size - 1;
+        // At most `expected` matchings arrive (two successors per state), so nothing grows and
+        // the slots stay at most half full.
+        slots[2 * at] = hash;
+        slots[2 * at + 1] = this.size;
+        for (let i = 0; i < words; i++) rows[this.size * words + i] = q[i];
+        return this.size++;
       }
-      if (this.hashes[k] === hash && this.same(k, q)) return k;
+      if (slots[2 * at] !== hash) continue;
+      let same = true;
+      for (let i = 0; i < words && same; i++) same = rows[k * words + i] === q[i];
+      if (same) return k;
     }
-  }
-
-  private same(k: number, q: Int32Array): boolean {
-    const base = k * this.words;
-    for (let i = 0; i < this.words; i++) if (this.rows[base + i] !== q[i]) return false;
-    return true;
-  }
-
-  // The table holds at most `expected` matchings (each state has two successors), so the
-  // arrays sized for it never grow and the slots stay at most half full.
-  private add(q: Int32Array, hash: number): number {
-    const base = this.size * this.words;
-    for (let i = 0; i < this.words; i++) this.rows[base + i] = q[i];
-    this.hashes[this.size] = hash;
-    return this.size++;
   }
 }

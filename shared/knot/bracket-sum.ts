@@ -33,16 +33,17 @@ export function closedSum(graph: StateGraph, precision = DOUBLES): Strided {
   const unit = 2 ** precision.limbBits;
   let at: Windows = { off: Int32Array.of(0), len: Int32Array.of(1), start: Int32Array.of(0), total: 1 };
   let limbs: Float64Array[] = [Float64Array.of(1)];
-  let peaks: Float64Array[] = [Float64Array.of(1)];
+  let peaks = [1]; // largest |entry| of each limb
   for (const step of steps) {
     const next = windows(step, at, stride);
-    if (!fits(step, peaks, limit)) {
+    // First the bound from the largest entry alone, then the one state by state, then carry.
+    if (!peaks.every((p) => p * step.inWeight < limit) && !fits(step, limbs, at, limit)) {
       limbs = carry(limbs, unit);
-      peaks = limbs.map((limb) => peaksOf(limb, at));
-      if (!fits(step, peaks, limit)) throw new RangeError('too many states meet at one matching for an exact sum');
+      if (!fits(step, limbs, at, limit)) throw new RangeError('too many states meet at one matching for an exact sum');
     }
-    const sums = limbs.map((limb) => accumulate(step, at, next, stride, limb));
-    [at, limbs, peaks] = [next, sums, sums.map((limb) => peaksOf(limb, next))];
+    limbs = limbs.map((limb) => accumulate(step, at, next, stride, limb));
+    peaks = limbs.map((limb) => limb.reduce((p, x) => Math.max(p, Math.abs(x)), 0));
+    at = next;
   }
   // The last step leaves one state, the empty matching.
   const c = Array.from({ length: at.len[0] }, (_, i) => limbs.reduce((sum, limb, r) => sum + (BigInt(limb[at.start[0] + i]) << BigInt(r * precision.limbBits)), 0n));
@@ -86,22 +87,17 @@ function windows(step: Step, at: Windows, stride: number): Windows {
  * Whether every partial sum of the step stays below limit in every limb: an entry of a term
  * with l loops adds up to 2^l entries of its source ((-1 - A^4) and (1 + 2 A^4 + A^8)).
  */
-function fits(step: Step, peaks: Float64Array[], limit: number): boolean {
+function fits(step: Step, limbs: Float64Array[], at: Windows, limit: number): boolean {
   const { size, target, loops } = step;
-  return peaks.every((peak) => {
+  return limbs.every((limb) => {
+    const peak = new Float64Array(at.len.length);
+    for (let s = 0; s < peak.length; s++) {
+      for (let i = at.start[s]; i < at.start[s] + at.len[s]; i++) peak[s] = Math.max(peak[s], Math.abs(limb[i]));
+    }
     const bound = new Float64Array(size);
     for (let k = 0; k < target.length; k++) bound[target[k]] += peak[k >> 1] * 2 ** loops[k];
     return bound.every((b) => b < limit);
   });
-}
-
-/** Largest |entry| of each state's window. */
-function peaksOf(limb: Float64Array, at: Windows): Float64Array {
-  const peak = new Float64Array(at.len.length);
-  for (let s = 0; s < peak.length; s++) {
-    for (let i = at.start[s]; i < at.start[s] + at.len[s]; i++) peak[s] = Math.max(peak[s], Math.abs(limb[i]));
-  }
-  return peak;
 }
 
 /** The same numbers with every limb but the top one in [-unit/2, unit/2], a new top limb if the old one was larger. */

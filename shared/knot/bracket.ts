@@ -68,9 +68,15 @@ function greedyOrder(pd: PDCode): number[] {
     let best = -1;
     let bestScore = -Infinity;
     for (const i of left) {
-      const shared = pd[i].filter((l) => opened.has(l));
-      const oldest = Math.min(...shared.map((l) => opened.get(l)!), pd.length);
-      const score = shared.length * (pd.length + 1) - oldest;
+      let shared = 0;
+      let oldest = pd.length;
+      for (const l of pd[i]) {
+        const at = opened.get(l);
+        if (at === undefined) continue;
+        shared++;
+        oldest = Math.min(oldest, at);
+      }
+      const score = shared * (pd.length + 1) - oldest;
       if (score > bestScore) [best, bestScore] = [i, score];
     }
     left.delete(best);
