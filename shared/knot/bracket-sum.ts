@@ -3,7 +3,7 @@
 // double holds every integer below 2^53, so a coefficient is kept as limbs
 // x0 + x1 2^32 + x2 2^64 + ...; before each step a bound on every partial sum, computed from
 // the actual sizes of the states' limbs, says whether the step stays exact, and if not the
-// carries are propagated first (adding a limb when the top one is large): lazy carry
+// carries are propagated first (adding a limb when the top one is too large): lazy carry
 // propagation, common practice for multi-precision sums. Big integers appear only at the end.
 
 import { SHIFTS, StateGraph, Step } from './bracket-states';
@@ -36,9 +36,11 @@ export function closedSum(graph: StateGraph, precision = DOUBLES): Strided {
   let peaks = [1]; // largest |entry| of each limb
   for (const step of steps) {
     const next = windows(step, at, stride);
-    // First the bound from the largest entry alone, then the one state by state, then carry.
+    // First the bound from the largest entries alone, then the one state by state; if that
+    // fails, carry into the top limb, and only if that is not enough into a new one.
     if (!peaks.every((p) => p * step.inWeight < limit) && !fits(step, limbs, at, limit)) {
-      limbs = carry(limbs, unit);
+      limbs = carry(limbs, unit, false);
+      if (!fits(step, limbs, at, limit)) limbs = carry(limbs, unit, true);
       if (!fits(step, limbs, at, limit)) throw new RangeError('too many states meet at one matching for an exact sum');
     }
     limbs = limbs.map((limb) => accumulate(step, at, next, stride, limb));
@@ -100,11 +102,10 @@ function fits(step: Step, limbs: Float64Array[], at: Windows, limit: number): bo
   });
 }
 
-/** The same numbers with every limb but the top one in [-unit/2, unit/2], a new top limb if the old one was larger. */
-function carry(limbs: Float64Array[], unit: number): Float64Array[] {
+/** The same numbers with every limb but the top one in [-unit/2, unit/2]; with grow, a new top limb takes the old top's carries. */
+function carry(limbs: Float64Array[], unit: number, grow: boolean): Float64Array[] {
   const out = limbs.map((limb) => Float64Array.from(limb));
-  const top = out[out.length - 1];
-  if (top.some((x) => Math.abs(x) > unit / 2)) out.push(new Float64Array(top.length));
+  if (grow) out.push(new Float64Array(out[0].length));
   for (let r = 0; r + 1 < out.length; r++) {
     const [low, high] = [out[r], out[r + 1]];
     for (let i = 0; i < low.length; i++) {
