@@ -2,8 +2,9 @@
 // crossing of the order, the states are the crossingless matchings of the boundary of the
 // region contracted so far (Temperley-Lieb diagrams when the region is a disk), and each of the
 // crossing's two smoothings sends a state to a state of the next step, closing 0, 1 or 2 loops.
-// This graph depends on the code and the order only, so it is built once and replayed by
-// bracket.ts for each modulus; matchings are rows of bytes in a hash table, no strings.
+// This graph depends on the code and the order only; bracket-sum.ts sums the polynomials
+// along it. Matchings are rows of bytes in a hash table (no strings), and a boundary point
+// keeps its place from step to step, so a smoothing rewrites only a few bytes of a row.
 
 import { PDCode } from './pd';
 
@@ -75,7 +76,7 @@ export function stateGraph(pd: PDCode, order: readonly number[]): StateGraph {
     }
     const weight = new Float64Array(table.size);
     for (let k = 0; k < target.length; k++) weight[target[k]] += 2 ** loops[k];
-    steps.push({ size: table.size, target, loops, inWeight: Math.max(...weight) });
+    steps.push({ size: table.size, target, loops, inWeight: weight.reduce((a, b) => Math.max(a, b), 0) });
     [boundary, rows, words, size, cls] = [g.boundary, table.rows, table.words, table.size, Int8Array.from(nextCls)];
   }
   return { steps, stride };

@@ -19,7 +19,11 @@ export function bracket(d: Diagram): Laurent {
   return bracketOfPD(d.pd, d.unknots);
 }
 
-/** <pd> times (-A^2 - A^-2)^unknots; the empty code with no unknots is taken as the empty link, 1. */
+/**
+ * <pd> times (-A^2 - A^-2)^unknots; the empty code with no unknots is taken as the empty link, 1.
+ * Any code with every label twice will do (planarity only speeds it up); a RangeError if the
+ * order's cut exceeds 256 ends, far beyond what a contraction can finish anyway.
+ */
 export function bracketOfPD(pd: PDCode, unknots = 0): Laurent {
   if (pd.length === 0) return loopFactor().pow(Math.max(unknots - 1, 0));
   const graph = stateGraph(pd, cheaperOrder(pd));
