@@ -32,7 +32,7 @@ export interface StateGraph {
 }
 
 /** Smoothing h joins slot s of a crossing to slot SMOOTHINGS[h][s]: A joins a-b and c-d, A^-1 joins a-d and b-c. */
-export const SMOOTHINGS: readonly (readonly number[])[] = [
+const SMOOTHINGS: readonly (readonly number[])[] = [
   [1, 0, 3, 2],
   [3, 2, 1, 0],
 ];

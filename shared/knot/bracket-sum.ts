@@ -16,7 +16,7 @@ export interface Precision {
   limbBits: number;
 }
 
-export const DOUBLES: Precision = { exactBits: 53, limbBits: 32 };
+const DOUBLES: Precision = { exactBits: 53, limbBits: 32 };
 
 /** Coefficient i is that of A^(off + stride i). */
 export interface Strided {
