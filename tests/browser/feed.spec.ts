@@ -48,7 +48,9 @@ test('Ada shares her sketch to the group and adds a board photo', async () => {
   await adaPage.getByRole('button', { name: `Share ${title}` }).click();
   await adaPage.getByRole('heading', { name: title }).waitFor();
   // Readout summary of the positive trefoil: Jones t + t^3 - t^4 (docs/conventions.md).
-  await adaPage.getByRole('math', { name: 'V(t) = t + t³ − t⁴' }).waitFor(); // typeset; its text is the label
+  // Typeset; its text is the label. The server computes it off its request thread once the
+  // share arrives (a worker thread that may still be starting), and the page asks every 3 s.
+  await adaPage.getByRole('math', { name: 'V(t) = t + t³ − t⁴' }).waitFor({ timeout: 30_000 });
 
   // A "photo of the board": chalk curves on slate, with a GPS position in its EXIF as a phone would write.
   const board = `<svg xmlns="http://www.w3.org/2000/svg" width="800" height="600"><rect width="800" height="600" fill="#2b3a36"/>
