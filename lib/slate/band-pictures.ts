@@ -1,7 +1,8 @@
 // What the canvas draws for each band: its ribbon along the core (cut where the band passes
 // under a strand), its number with its half twists, and its core/strand crossings (the Bands
 // tool's tap targets). World units in, screen pixels out.
-import { bandHalfWidth, bandShapes } from '@/shared/drawing/band-shape';
+import { bandShapes } from '@/shared/drawing/band-shape';
+import { defaultOptions } from '@/shared/drawing/options';
 import { bandsOf } from '@/shared/drawing/bands';
 import { visiblePieces } from '@/shared/drawing/pieces';
 import { arcsOf, pointAt } from '@/shared/drawing/polyline';
@@ -45,7 +46,7 @@ export function bandPictures(sketch: Sketch, view: View): BandPicture[] {
       id: band.id,
       number: k + 1,
       pieces: visiblePieces(core, false, gaps).map(data),
-      width: 2 * bandHalfWidth * view.k,
+      width: 2 * defaultOptions.bandHalfWidth * view.k,
       badge: { at: toScreen(view, middle) },
       text: band.twists ? `${k + 1} · ${signed(band.twists)} half` : `${k + 1}`,
       crossings: crossings.map((c) => ({ at: toScreen(view, c.at), component: c.component, under: c.under })),

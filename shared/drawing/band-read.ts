@@ -16,8 +16,8 @@
 import { orient, PDCode } from '@/shared/knot/pd';
 import { Analysis, analyse, readDrawing, Reading, UnderRule } from './analyse';
 import { bandsOf } from './bands';
-import { bandHalfWidth, BandShape, bandShapes, closedOf, corePoint, offsetAt, sidePoint } from './band-shape';
-import { Cut, cutHalf, Join, Source, trace, Traced } from './band-trace';
+import { BandShape, bandShapes, closedOf, corePoint, offsetAt, sidePoint } from './band-shape';
+import { Cut, Join, Source, trace, Traced } from './band-trace';
 import { DrawingOptions, withDefaults } from './options';
 import { add, dist, dot, lerp, Point, scale, sub } from './point';
 import { arcsOf } from './polyline';
@@ -59,10 +59,13 @@ const bridge = (p: Point, q: Point, source: Source, spacing: number): Traced => 
   return { points, sources: points.map(() => source) };
 };
 
+/** Points a band's cut removes either side of its end: about its half width. */
+const cutHalf = (b: BandShape, spacing: number) => Math.ceil(b.halfWidth / spacing);
+
 // Travel-order neighbours of a band end: the points where its cut leaves the strand.
-function endPoints(c: SketchComponent, index: number): { in: Point; out: Point } {
+function endPoints(c: SketchComponent, index: number, half: number): { in: Point; out: Point } {
   const n = c.points.length;
-  const step = c.reversed ? -cutHalf : cutHalf;
+  const step = c.reversed ? -half : half;
   return { in: c.points[(index - step + 2 * n) % n], out: c.points[(index + step + 2 * n) % n] };
 }
 
@@ -84,10 +87,10 @@ function endFrame(b: BandShape, closed: readonly SketchComponent[]): { q: Point;
 // Side `sd` of band k from core arc d1 on over the second strand, square to it, in that order:
 // tip sources, since it passes over the second strand. `along` is the side's place along the strand.
 function reach(b: BandShape, k: number, sd: 1 | -1, f: { q: Point; t: Point; n: Point }, along: 1 | -1, spacing: number): Traced {
-  const lane = add(f.q, scale(f.t, along * bandHalfWidth));
-  const before = add(lane, scale(f.n, bandHalfWidth + 4));
+  const lane = add(f.q, scale(f.t, along * b.halfWidth));
+  const before = add(lane, scale(f.n, b.halfWidth + 4));
   const start = sidePoint(b, sd, b.d1);
-  const steps = Math.round((bandHalfWidth + 4 + overshoot) / spacing);
+  const steps = Math.round((b.halfWidth + 4 + overshoot) / spacing);
   const points = [...between(start, before, spacing), before, ...Array.from({ length: steps }, (_, i) => lerp(before, add(lane, scale(f.n, -overshoot)), (i + 1) / steps))];
   return { points, sources: points.map(() => ({ kind: 'tip', band: k, middle: false })) };
 }
@@ -97,7 +100,7 @@ const backwards = (t: Traced): Traced => ({ points: [...t.points].reverse(), sou
 // The finger of band k: from its first strand's incoming end out along one side, over the second
 // strand, round the tip, back along the other side to the outgoing end.
 function fingerOf(b: BandShape, k: number, closed: readonly SketchComponent[], spacing: number): Join {
-  const ends = endPoints(closed[b.from.path], b.from.index);
+  const ends = endPoints(closed[b.from.path], b.from.index, cutHalf(b, spacing));
   const s = b.inSide;
   const out = side(b, k, s, b.d0, b.d1, spacing);
   const back = side(b, k, -s as 1 | -1, b.d1, b.d0, spacing);
@@ -105,10 +108,10 @@ function fingerOf(b: BandShape, k: number, closed: readonly SketchComponent[], s
   // Which side of the band's end lies towards +t along the strand.
   const along: 1 | -1 = dot(sub(sidePoint(b, s, b.d1), sidePoint(b, -s as 1 | -1, b.d1)), f.t) > 0 ? 1 : -1;
   const c = add(f.q, scale(f.n, -overshoot));
-  const capSteps = Math.max(4, Math.round((Math.PI * bandHalfWidth) / spacing / 2) * 2);
+  const capSteps = Math.max(4, Math.round((Math.PI * b.halfWidth) / spacing / 2) * 2);
   const cap = Array.from({ length: capSteps - 1 }, (_, i) => {
     const phi = (Math.PI * (i + 1)) / capSteps;
-    return add(c, add(scale(f.t, along * bandHalfWidth * Math.cos(phi)), scale(f.n, -bandHalfWidth * Math.sin(phi))));
+    return add(c, add(scale(f.t, along * b.halfWidth * Math.cos(phi)), scale(f.n, -b.halfWidth * Math.sin(phi))));
   });
   const tip: Traced = { points: cap, sources: cap.map((_, i): Source => ({ kind: 'tip', band: k, middle: 2 * (i + 1) === capSteps })) };
   const edge: Source = { kind: 'band', band: k, side: s, arc: b.d0 };
@@ -130,8 +133,8 @@ function fingerOf(b: BandShape, k: number, closed: readonly SketchComponent[], s
 // Band k replaced by its two sides: incoming end of the first strand to the outgoing end of the
 // second, and back (band-shape.ts checked that these are the ends the sides reach).
 function sides(b: BandShape, k: number, closed: readonly SketchComponent[], spacing: number): Join[] {
-  const a = endPoints(closed[b.from.path], b.from.index);
-  const z = endPoints(closed[b.to.path], b.to.index);
+  const a = endPoints(closed[b.from.path], b.from.index, cutHalf(b, spacing));
+  const z = endPoints(closed[b.to.path], b.to.index, cutHalf(b, spacing));
   const s = b.inSide;
   const there = side(b, k, s, b.d0, b.d1, spacing);
   const back = side(b, k, -s as 1 | -1, b.d1, b.d0, spacing);
@@ -230,8 +233,8 @@ export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {})
     if ('reason' in shape) return shape;
     shapes.push(shape);
   }
-  const cutsA: Cut[] = shapes.map((b, k) => ({ id: `${k}A`, path: b.from.path, index: b.from.index }));
-  const cutsB: Cut[] = shapes.map((b, k) => ({ id: `${k}B`, path: b.to.path, index: b.to.index }));
+  const cutsA: Cut[] = shapes.map((b, k) => ({ id: `${k}A`, path: b.from.path, index: b.from.index, half: cutHalf(b, o.spacing) }));
+  const cutsB: Cut[] = shapes.map((b, k) => ({ id: `${k}B`, path: b.to.path, index: b.to.index, half: cutHalf(b, o.spacing) }));
   const fingerTraced = trace(closed, cutsA, shapes.map((b, k) => fingerOf(b, k, closed, o.spacing)));
   const afterTraced = trace(closed, [...cutsA, ...cutsB], shapes.flatMap((b, k) => sides(b, k, closed, o.spacing)));
   if ('reason' in fingerTraced) return fingerTraced;

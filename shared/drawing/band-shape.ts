@@ -1,7 +1,7 @@
 // The geometry of one band on a drawing: where its core meets its two strands, where its two
 // sides leave the first strand and reach the second, where the core crosses strands (and
 // whether the band passes under there), where its half twists sit, and whether it is
-// orientable. The sides run at +-bandHalfWidth along the core's normal; a half twist swaps them
+// orientable. The sides run at +-halfWidth (DrawingOptions.bandHalfWidth) along the core's normal; a half twist swaps them
 // over `twistLength` of core with a cosine profile, so the sides cross once in its middle.
 // Degenerate input (a band whose core crosses itself, too short to leave its strands, or with
 // no room for its twists) answers a reason instead of a shape.
@@ -14,7 +14,6 @@ import { arcsOf, pointAt, tangentAt } from './polyline';
 import { intersect } from './segments';
 import { nearestPointIndex, Sketch, SketchComponent } from './sketch';
 
-export const bandHalfWidth = 8;
 const twistLength = 30;
 /** Twists keep this far (along the core) from crossings and from the band's ends. */
 const twistMargin = 20;
@@ -28,6 +27,7 @@ export interface CoreCrossing {
 
 export interface BandShape {
   readonly number: number;
+  readonly halfWidth: number;
   readonly core: readonly Point[];
   readonly arcs: readonly number[];
   /** The strands at the core's ends: index into the closed components and point index there. */
@@ -52,9 +52,9 @@ export function offsetAt(b: BandShape, side: 1 | -1, s: number): number {
   let f = 1;
   for (const t of b.twistStarts) {
     if (s >= t + twistLength) f = -f;
-    else if (s > t) return side * bandHalfWidth * f * Math.cos((Math.PI * (s - t)) / twistLength);
+    else if (s > t) return side * b.halfWidth * f * Math.cos((Math.PI * (s - t)) / twistLength);
   }
-  return side * bandHalfWidth * f;
+  return side * b.halfWidth * f;
 }
 
 export const corePoint = (b: BandShape, s: number): Point => pointAt(b.core, b.arcs, s, false);
@@ -70,14 +70,14 @@ export function travelAt(c: SketchComponent, i: number): Point {
 
 // Arcs where the core first gets (from its start) and last is (towards its end) 2w from the
 // strand near its attaching point.
-function sidesReach(core: readonly Point[], arcs: readonly number[], strand: SketchComponent, index: number, fromStart: boolean): number {
+function sidesReach(core: readonly Point[], arcs: readonly number[], strand: SketchComponent, index: number, fromStart: boolean, w: number): number {
   const n = strand.points.length;
   const near = Array.from({ length: 41 }, (_, k) => strand.points[(index + k - 20 + n) % n]);
   const total = arcs[arcs.length - 1];
   for (let s = 0; s <= total; s += 1.5) {
     const at = fromStart ? s : total - s;
     const p = pointAt(core, arcs, at, false);
-    if (Math.min(...near.map((q) => dist(p, q))) >= 2 * bandHalfWidth) return at;
+    if (Math.min(...near.map((q) => dist(p, q))) >= 2 * w) return at;
   }
   return fromStart ? total : 0;
 }
@@ -121,9 +121,10 @@ export function bandShape(closed: readonly SketchComponent[], bands: readonly Ba
   const to = { path: toPath, index: nearestPointIndex(b, band.core[band.core.length - 1]) };
   const core = [a.points[from.index], ...band.core.slice(1, -1), b.points[to.index]];
   const arcs = arcsOf(core, false);
-  const d0 = sidesReach(core, arcs, a, from.index, true);
-  const d1 = sidesReach(core, arcs, b, to.index, false);
-  if (d1 - d0 < 2 * bandHalfWidth) return { reason: `Band ${number} is too short: draw it longer, away from its strands.` };
+  const w = o.bandHalfWidth;
+  const d0 = sidesReach(core, arcs, a, from.index, true, w);
+  const d1 = sidesReach(core, arcs, b, to.index, false, w);
+  if (d1 - d0 < 2 * w) return { reason: `Band ${number} is too short: draw it longer, away from its strands.` };
   for (let i = 0; i + 1 < core.length; i++) {
     if (coreHits(core.slice(i + 2), arcsOf(core.slice(i + 2), false), 0, Infinity, [core[i], core[i + 1]], false).length) {
       return { reason: `Band ${number} crosses itself: draw its core without loops.` };
@@ -154,6 +155,7 @@ export function bandShape(closed: readonly SketchComponent[], bands: readonly Ba
   }
   return {
     number,
+    halfWidth: w,
     core,
     arcs,
     from,

@@ -25,6 +25,8 @@ export interface Cut {
   readonly path: number;
   /** Point index in drawing order. */
   readonly index: number;
+  /** Points removed on each side of it. */
+  readonly half: number;
 }
 
 export interface Join {
@@ -34,9 +36,6 @@ export interface Join {
   /** The points strictly between the two ends. */
   readonly piece: Traced;
 }
-
-/** Points a cut removes on each side of its point. */
-export const cutHalf = 3;
 
 // A closed component in order of travel, each point with its drawing-order arc.
 function travelled(c: SketchComponent, path: number): Traced {
@@ -59,7 +58,7 @@ export function trace(closed: readonly SketchComponent[], cuts: readonly Cut[], 
   const pieces = new Map<string, { path: number; from: number; to: number; end: string }>();
   for (let k = 0; k < closed.length; k++) {
     const n = closed[k].points.length;
-    const mine = cuts.filter((c) => c.path === k).map((c) => ({ id: c.id, at: travelIndex(closed[k], c.index) })).sort((p, q) => p.at - q.at);
+    const mine = cuts.filter((c) => c.path === k).map((c) => ({ id: c.id, half: c.half, at: travelIndex(closed[k], c.index) })).sort((p, q) => p.at - q.at);
     if (mine.length === 0) {
       out.push(paths[k]);
       continue;
@@ -67,8 +66,8 @@ export function trace(closed: readonly SketchComponent[], cuts: readonly Cut[], 
     for (let i = 0; i < mine.length; i++) {
       const next = mine[(i + 1) % mine.length];
       const gap = (next.at - mine[i].at + n) % n || n;
-      if (gap <= 2 * cutHalf + 1) return { reason: 'Two bands are attached too close together: move one end along its strand.' };
-      pieces.set(`${mine[i].id}:out`, { path: k, from: mine[i].at + cutHalf, to: mine[i].at + gap - cutHalf, end: `${next.id}:in` });
+      if (gap <= mine[i].half + next.half + 1) return { reason: 'Two bands are attached too close together: move one end along its strand.' };
+      pieces.set(`${mine[i].id}:out`, { path: k, from: mine[i].at + mine[i].half, to: mine[i].at + gap - next.half, end: `${next.id}:in` });
     }
   }
   const joinFrom = new Map(joins.map((j) => [j.from, j]));

@@ -5,7 +5,7 @@
 import { Analysis } from './analyse';
 import { Point } from './point';
 import { gapsAround, visiblePieces } from './pieces';
-import { bandHalfWidth } from './band-shape';
+import { defaultOptions } from './options';
 
 export interface ExportOptions {
   /** One colour per component, cycled (CSS colours for SVG, any xcolor name/HTML for TikZ). */
@@ -50,7 +50,7 @@ export function toSVG(a: Analysis, options: ExportOptions = {}): string {
   const b = bounds(a, options.padding ?? 10, options.bands);
   const ribbons = (options.bands ?? []).map((core) => {
     const d = core.map((p, i) => `${i === 0 ? 'M' : 'L'}${fixed(p.x)} ${fixed(p.y)}`).join(' ');
-    return `<path d="${d}" fill="none" stroke="${options.bandColor ?? '#9b6bdf'}" stroke-opacity="0.4" stroke-width="${2 * bandHalfWidth}"/>`;
+    return `<path d="${d}" fill="none" stroke="${options.bandColor ?? '#9b6bdf'}" stroke-opacity="0.4" stroke-width="${2 * defaultOptions.bandHalfWidth}"/>`;
   });
   const paths = piecesOf(a, options.gap ?? 2.5 * width).map(({ component, points }) => {
     const d = points.map((p, i) => `${i === 0 ? 'M' : 'L'}${fixed(p.x)} ${fixed(p.y)}`).join(' ');
@@ -80,7 +80,7 @@ export function toTikZ(a: Analysis, options: ExportOptions & { size?: number } =
     ({ component, points }) => `  \\draw[${colors[component % colors.length]}, line width=${options.strokeWidth ?? 1}pt] ${points.map(coord).join(' -- ')};`,
   );
   const ribbons = (options.bands ?? []).map(
-    (core) => `  \\draw[${options.bandColor ?? 'violet'}, opacity=0.4, line width=${fixed(2 * bandHalfWidth * k)}cm, line cap=butt] ${core.map(coord).join(' -- ')};`,
+    (core) => `  \\draw[${options.bandColor ?? 'violet'}, opacity=0.4, line width=${fixed(2 * defaultOptions.bandHalfWidth * k)}cm, line cap=butt] ${core.map(coord).join(' -- ')};`,
   );
   return ['\\begin{tikzpicture}[line cap=round, line join=round]', ...lines, ...ribbons, '\\end{tikzpicture}'].join('\n');
 }

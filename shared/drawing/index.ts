@@ -30,7 +30,7 @@ export { crossingNear, componentNear, arrowOf } from './pick';
 export { carryFlips } from './carry';
 export { addBand, deleteBand, setBandTwists, flipBandCrossing, bandsOf, bandSnapRadius } from './bands';
 export type { Band, BandUnder, BandEdit } from './bands';
-export { bandShapes, bandHalfWidth } from './band-shape';
+export { bandShapes } from './band-shape';
 export type { BandShape, CoreCrossing } from './band-shape';
 export { readBands } from './band-read';
 export type { BandDrawings, Saddle } from './band-read';

@@ -19,6 +19,8 @@ export interface DrawingOptions {
   readonly gapRadius: number;
   /** A stored flip still applies to a crossing of the same strands within this distance. */
   readonly flipRadius: number;
+  /** Half the width of a band: its sides run this far either side of its core. */
+  readonly bandHalfWidth: number;
 }
 
 export const defaultOptions: DrawingOptions = {
@@ -31,6 +33,7 @@ export const defaultOptions: DrawingOptions = {
   minCrossingGap: 10,
   gapRadius: 5,
   flipRadius: 24,
+  bandHalfWidth: 8,
 };
 
 export const withDefaults = (options: Partial<DrawingOptions> = {}): DrawingOptions => ({ ...defaultOptions, ...options });
