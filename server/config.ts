@@ -30,6 +30,8 @@ export interface Config {
   mailFrom: string;
   /** Limits of heavy runs and the size of their worker pool. */
   runs: RunLimits;
+  /** Redis of the BullMQ run queue (runs/queue/bullmq.ts); null: the server's own pool computes. */
+  redisUrl: string | null;
   /** Where board photos are kept: a local folder, or an S3-compatible bucket. */
   photos: PhotoStorage;
   /** Comments one person may post per window (then 429). */
@@ -52,6 +54,7 @@ export function defaultConfig(overrides: Partial<Config> = {}): Config {
     webDir: null,
     mailFrom: 'Overstrand <no-reply@overstrand.invalid>',
     runs: defaultRunLimits(),
+    redisUrl: null,
     photos: { kind: 'disk', dir: 'data/photos' },
     commentRateLimit: { windowMs: 60_000, limit: 20 },
     mailPacing: defaultMailPacing(),
@@ -84,8 +87,17 @@ const trustProxy = optional(
   }),
 );
 
+const redisUrl = z.url({ protocol: /^rediss?$/, error: 'expected a redis:// or rediss:// URL' });
+
+/** What the server and a queue worker (`npm run worker`) both read. */
+const runFields = {
+  RUN_THREADS: whole(1),
+  RUN_MAX_MEMORY_MB: whole(1),
+};
+
 export const EnvSchema = z
   .object({
+    ...runFields,
     NODE_ENV: optional(z.string()),
     PORT: whole(0, 65535),
     HOST: optional(z.string()),
@@ -102,10 +114,10 @@ export const EnvSchema = z
     TRUST_PROXY: trustProxy,
     WEB_DIR: optional(z.string()),
     DEMO: flag,
-    RUN_THREADS: whole(1),
     RUN_MAX_CROSSINGS: whole(1),
     RUN_MAX_MINUTES: positive,
-    RUN_MAX_MEMORY_MB: whole(1),
+    RUN_MAX_QUEUED_PER_USER: whole(1),
+    REDIS_URL: optional(redisUrl),
     PHOTO_DIR: optional(z.string()),
     S3_BUCKET: optional(z.string()),
     S3_ENDPOINT: optional(z.url({ error: 'expected a URL' })),
@@ -134,17 +146,19 @@ export interface Settings {
 }
 
 /** Parses the environment; throws one Error naming every bad variable and why. */
+function parseEnv<S extends z.ZodType>(schema: S, raw: NodeJS.ProcessEnv): z.infer<S> {
+  const parsed = schema.safeParse(raw);
+  if (parsed.success) return parsed.data;
+  const lines = parsed.error.issues.map((i) => {
+    const name = String(i.path[0] ?? '');
+    const got = name in raw ? ` (got ${JSON.stringify(raw[name])})` : '';
+    return `  ${name}: ${i.message}${name === 'JWT_SECRET' || name === 'SMTP_PASSWORD' ? '' : got}`;
+  });
+  throw new Error(`Bad environment settings:\n${lines.join('\n')}`);
+}
+
 export function settingsFromEnv(raw: NodeJS.ProcessEnv): Settings {
-  const parsed = EnvSchema.safeParse(raw);
-  if (!parsed.success) {
-    const lines = parsed.error.issues.map((i) => {
-      const name = String(i.path[0] ?? '');
-      const got = name in raw ? ` (got ${JSON.stringify(raw[name])})` : '';
-      return `  ${name}: ${i.message}${name === 'JWT_SECRET' || name === 'SMTP_PASSWORD' ? '' : got}`;
-    });
-    throw new Error(`Bad environment settings:\n${lines.join('\n')}`);
-  }
-  const env = parsed.data;
+  const env = parseEnv(EnvSchema, raw);
   const production = env.NODE_ENV === 'production';
   const runs = defaultRunLimits();
   return {
@@ -172,7 +186,9 @@ export function settingsFromEnv(raw: NodeJS.ProcessEnv): Settings {
         maxCrossings: env.RUN_MAX_CROSSINGS ?? runs.maxCrossings,
         maxWallMs: env.RUN_MAX_MINUTES ? env.RUN_MAX_MINUTES * 60_000 : runs.maxWallMs,
         maxMemoryMb: env.RUN_MAX_MEMORY_MB ?? runs.maxMemoryMb,
+        maxLivePerUser: env.RUN_MAX_QUEUED_PER_USER ?? runs.maxLivePerUser,
       },
+      redisUrl: env.REDIS_URL ?? null,
       photos: env.S3_BUCKET
         ? {
             kind: 's3',
@@ -185,5 +201,35 @@ export function settingsFromEnv(raw: NodeJS.ProcessEnv): Settings {
           }
         : { kind: 'disk', dir: env.PHOTO_DIR ?? 'data/photos' },
     },
+  };
+}
+
+export const WorkerEnvSchema = z.object({
+  ...runFields,
+  REDIS_URL: z.preprocess((v) => (v === '' ? undefined : v), z.url({ protocol: /^rediss?$/, error: (i) => (i.input === undefined ? "must be set: the Redis of the server's run queue, e.g. redis://queue-host:6379" : 'expected a redis:// or rediss:// URL') })),
+  WORKER_NAME: optional(z.string().max(200)),
+  WORKER_LOCK_SECONDS: whole(1),
+});
+
+/** What `npm run worker` starts from (server/worker/main.ts). */
+export interface WorkerSettings {
+  redisUrl: string;
+  threads: number;
+  maxMemoryMb: number;
+  /** Shown on the run page as who computed it; default host and process id. */
+  name: string | undefined;
+  /** A worker silent this long is taken for dead and its jobs go to another (BullMQ lockDuration). */
+  lockMs: number;
+}
+
+export function workerSettingsFromEnv(raw: NodeJS.ProcessEnv): WorkerSettings {
+  const env = parseEnv(WorkerEnvSchema, raw);
+  const runs = defaultRunLimits();
+  return {
+    redisUrl: env.REDIS_URL,
+    threads: env.RUN_THREADS ?? runs.threads,
+    maxMemoryMb: env.RUN_MAX_MEMORY_MB ?? runs.maxMemoryMb,
+    name: env.WORKER_NAME,
+    lockMs: (env.WORKER_LOCK_SECONDS ?? 30) * 1000,
   };
 }

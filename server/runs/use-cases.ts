@@ -16,7 +16,7 @@ import { findSketch } from '../sketches/repository';
 import { viewerOf } from '../sync/repository';
 import { cableOf, compareCells, sweepCells, sweepSize } from './cables';
 import { afterChange, finishRun, refreshSweep } from './lifecycle';
-import { childrenOf, displayNames, findReusable, findRun, insertRun, listTopLevel, updateIf } from './repository';
+import { childrenOf, countLive, displayNames, findReusable, findRun, insertRun, listTopLevel, updateIf } from './repository';
 import { schedulerOf } from './scheduler';
 
 type Start = StartRunParsed;
@@ -75,6 +75,8 @@ interface NewRun {
   parentRunId?: string;
   cable?: CableCell;
   sweep?: Run['sweep'];
+  /** Place in the starter's line (Run.turn); a sweep's cells take consecutive turns. */
+  turn?: number;
 }
 
 function row(deps: Deps, user: User, n: NewRun, key: string): Run {
@@ -101,6 +103,8 @@ function row(deps: Deps, user: User, n: NewRun, key: string): Run {
     result: null,
     error: null,
     reusedFrom: null,
+    turn: n.turn ?? 1,
+    worker: null,
     createdAt: deps.now().toISOString(),
     startedAt: null,
     finishedAt: null,
@@ -126,6 +130,21 @@ async function planComputation(deps: Deps, user: User, n: NewRun): Promise<{ run
   return { run, settle: () => finishRun(deps, run.id, { status: 'done', result: stored.result! }) };
 }
 
+/**
+ * The fair-share quota: a person may have at most maxLivePerUser computations queued or running
+ * (a sweep's cells count, checked on its size before any cable is built). Answers how many they
+ * have, which also gives the turn of the next.
+ */
+async function withinQuota(deps: Deps, user: User, wanted: number): Promise<number> {
+  const live = await countLive(deps.db, user.id);
+  const max = deps.config.runs.maxLivePerUser;
+  if (live + wanted > max) {
+    const these = wanted === 1 ? '' : `This sweep has ${wanted} cables and `;
+    throw new AppError('run_quota', 429, `${these}you have ${live} run${live === 1 ? '' : 's'} queued or running; this server allows each person at most ${max} at once (sweep cells count). Wait for some to finish, or cancel some.`);
+  }
+  return live;
+}
+
 export async function startRun(deps: Deps, user: User, req: Start): Promise<RunDetail> {
   const t = await target(deps, user, req);
   const d = checked(t.diagram);
@@ -139,7 +158,8 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   let queued: Run[];
   if (req.kind === 'khovanov') {
     if (d.pd.length > max) throw badDiagram(`The diagram has ${d.pd.length} crossings; this server computes at most ${max} per run.`);
-    const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov' });
+    const live = await withinQuota(deps, user, 1);
+    const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov', turn: live + 1 });
     await insertRun(deps.db, run);
     await settle();
     [id, queued] = [run.id, [run]];
@@ -158,6 +178,7 @@ async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promis
   if (size > maxCells) {
     throw new AppError('invalid_input', 400, `A sweep up to ${maxStrands} strands per component of ${components === 1 ? 'a knot' : `a ${components}-component link`} has ${size} cables; this server allows at most ${maxCells}. Lower maxStrands.`, { sweep: `At most ${maxCells} cables` });
   }
+  const live = await withinQuota(deps, user, size);
   const cells = sweepCells(components, maxStrands);
   const cables = cells.map((cell) => cableOf(d, cell));
   const sweep = row(deps, user, n, diagramKey(n.diagram, false));
@@ -170,7 +191,7 @@ async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promis
     const diagram = { pd: c.pd.map((x) => [...x] as [number, number, number, number]), unknots: c.unknots, framings: [...c.framings] };
     // A cell's input is its cable, so its source names the cable and what it was taken of.
     const source = `${name} cable of ${n.source ?? `PD ${pdToText(n.diagram.pd)}`}`;
-    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label: `${n.label} ${name}`, source, diagram, parentRunId: sweep.id, cable: cell }));
+    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label: `${n.label} ${name}`, source, diagram, parentRunId: sweep.id, cable: cell, turn: live + k + 1 }));
   }
   for (const { run } of planned) await insertRun(deps.db, run);
   for (const { settle } of planned) await settle();
@@ -209,6 +230,7 @@ function summary(r: Run, names: Map<string, string>): RunSummary {
     cable: r.cable,
     sweep: r.sweep,
     source: r.source,
+    worker: r.worker,
   };
 }
 
