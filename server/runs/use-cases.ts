@@ -139,8 +139,9 @@ async function withinQuota(deps: Deps, user: User, wanted: number): Promise<numb
   const live = await countLive(deps.db, user.id);
   const max = deps.config.runs.maxLivePerUser;
   if (live + wanted > max) {
-    const these = wanted === 1 ? '' : `This sweep has ${wanted} cables and `;
-    throw new AppError('run_quota', 429, `${these}you have ${live} run${live === 1 ? '' : 's'} queued or running; this server allows each person at most ${max} at once (sweep cells count). Wait for some to finish, or cancel some.`);
+    const have = `${live} run${live === 1 ? '' : 's'} queued or running`;
+    const what = wanted === 1 ? `You have ${have}` : `This sweep has ${wanted} cables and you have ${have}`;
+    throw new AppError('run_quota', 429, `${what}; this server allows each person at most ${max} at once (sweep cells count). Wait for some to finish, or cancel some.`);
   }
   return live;
 }
