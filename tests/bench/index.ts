@@ -11,6 +11,7 @@ const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['sync', () => import('./sync.bench').then((m) => m.syncBench())],
   ['sinv', () => import('./sinv.bench').then((m) => m.sinvBench())],
   ['homfly', () => import('./homfly.bench').then((m) => m.homflyBench())],
+  ['queue', () => import('./queue.bench').then((m) => m.queueBench())],
 ];
 
 async function main(): Promise<void> {
