@@ -84,6 +84,13 @@ async function embeddedResult(pd: ReturnType<typeof torus>, ring: string) {
 
 
 describe('through the queue', () => {
+  it('does not start a server whose Redis does not answer, and says what to do', async () => {
+    const nobody = 'redis://127.0.0.1:9'; // the discard port: nothing answers there
+    await expect(testServer({ config: { redisUrl: nobody } })).rejects.toThrow(
+      'Redis at 127.0.0.1:9 (REDIS_URL) does not answer within 5 s: start it, or unset REDIS_URL to compute runs in the server itself',
+    );
+  });
+
   it('computes on worker processes what the embedded pool computes, and names the worker', async () => {
     await worker('w1');
     const server = await queueServer();

@@ -16,6 +16,8 @@ type RunJob = Job<JobData, JobResult>;
 
 /** BullMQ's largest priority; turns beyond it share it (and go oldest first). */
 const MAX_PRIORITY = 2_097_152;
+/** How long the server waits for Redis at start. */
+const CONNECT_MS = 5_000;
 /** Finished jobs stay in Redis this long, for a server that was down to pick up their outcome. */
 const KEEP_SECONDS = 7 * 24 * 3600;
 
@@ -51,8 +53,15 @@ export class BullmqScheduler implements Scheduler {
     this.events.on('failed', ({ jobId }) => record('failure', jobId, () => this.ended(jobId)));
     this.events.on('stalled', ({ jobId }) => record('stall', jobId, () => this.requeued(jobId)));
     this.events.on('error', (err) => this.deps.log.error({ err }, 'run queue events'));
-    void this.events.run();
-    await Promise.all([this.queue.waitUntilReady(), this.events.waitUntilReady()]);
+    this.queue.on('error', (err) => this.deps.log.error({ err }, 'run queue'));
+    this.events.run().catch((err: unknown) => this.deps.log.error({ err }, 'run queue events stopped'));
+    try {
+      await reachable(Promise.all([this.queue.waitUntilReady(), this.events.waitUntilReady(), this.redis.ping()]), this.deps.config.redisUrl!);
+    } catch (err) {
+      this.redis.disconnect();
+      this.eventsRedis.disconnect();
+      throw err;
+    }
     await this.reconcile();
   }
 
@@ -136,6 +145,19 @@ export class BullmqScheduler implements Scheduler {
       }
     }
     if (requeued > 0) this.deps.log.info({ runs: requeued }, 'runs missing from the queue queued again');
+  }
+}
+
+/** A server whose queue does not answer does not start (it would accept runs nobody computes). */
+async function reachable(ready: Promise<unknown>, url: string): Promise<void> {
+  let timer: NodeJS.Timeout | undefined;
+  const late = new Promise<never>((_, reject) => {
+    timer = setTimeout(() => reject(new Error(`Redis at ${new URL(url).host} (REDIS_URL) does not answer within ${CONNECT_MS / 1000} s: start it, or unset REDIS_URL to compute runs in the server itself`)), CONNECT_MS);
+  });
+  try {
+    await Promise.race([ready, late]);
+  } finally {
+    clearTimeout(timer);
   }
 }
 
