@@ -145,6 +145,9 @@ export interface Settings {
   config: Partial<Config>;
 }
 
+/** Never echoed in an error (a Redis URL may carry its password). */
+const SECRETS = ['JWT_SECRET', 'SMTP_PASSWORD', 'REDIS_URL'];
+
 /** Parses the environment; throws one Error naming every bad variable and why. */
 function parseEnv<S extends z.ZodType>(schema: S, raw: NodeJS.ProcessEnv): z.infer<S> {
   const parsed = schema.safeParse(raw);
@@ -152,7 +155,7 @@ function parseEnv<S extends z.ZodType>(schema: S, raw: NodeJS.ProcessEnv): z.inf
   const lines = parsed.error.issues.map((i) => {
     const name = String(i.path[0] ?? '');
     const got = name in raw ? ` (got ${JSON.stringify(raw[name])})` : '';
-    return `  ${name}: ${i.message}${name === 'JWT_SECRET' || name === 'SMTP_PASSWORD' ? '' : got}`;
+    return `  ${name}: ${i.message}${SECRETS.includes(name) ? '' : got}`;
   });
   throw new Error(`Bad environment settings:\n${lines.join('\n')}`);
 }

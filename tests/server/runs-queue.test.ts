@@ -13,7 +13,7 @@ import type { RunDetail } from '@/shared/api/runs';
 import request from 'supertest';
 import { bearer, signUp, testServer } from './helpers';
 import { startRedis, startWorker, type RedisProcess, type WorkerProcess } from './queue-processes';
-import { TREFOIL_Z, ended, read, slow, start, torus, trefoil, waitFor } from './runs-fixtures';
+import { TREFOIL_Z, ended, mailFor, read, slow, start, torus, trefoil, waitFor } from './runs-fixtures';
 
 jest.setTimeout(180_000);
 
@@ -94,13 +94,25 @@ describe('through the queue', () => {
   it('computes on worker processes what the embedded pool computes, and names the worker', async () => {
     await worker('w1');
     const server = await queueServer();
-    const { token } = await signUp(server, 'Queue Quinn');
+    const { token, user } = await signUp(server, 'Queue Quinn');
     const res = await start(server, token, { diagram: { pd: trefoil() }, ring: 'Z' });
     expect(res.status).toBe(201);
     const run = await waitFor(server, token, res.body.id, ended);
     expect(run).toMatchObject({ status: 'done', worker: 'w1', error: null });
     expect(run.result!.groups).toEqual(TREFOIL_Z);
     expect(run.result!.euler!.ok).toBe(true);
+    const mail = await mailFor(server, (m) => m.to.includes(user.email));
+    expect(mail.subject).toBe('Run succeeded: "PD code, 3 crossings", Khovanov homology over Z');
+  });
+
+  it("obeys the server's time limit on the worker", async () => {
+    await worker('w1');
+    const server = await testServer({ config: { redisUrl: redis.url, runs: limits({ maxWallMs: 1500 }) } });
+    servers.push(server);
+    const { token } = await signUp(server);
+    const run = await waitFor(server, token, (await start(server, token, { diagram: { pd: slow() }, ring: 'Q' })).body.id, ended);
+    expect(run).toMatchObject({ status: 'failed', worker: 'w1' });
+    expect(run.error).toMatch(/^Stopped after the time limit of 1.5 s per run/);
   });
 
   it('spreads a sweep over two worker processes, cell for cell the same as the embedded pool', async () => {
@@ -211,6 +223,29 @@ describe('restarts', () => {
       const run = await read(after, token, id);
       expect(run).toMatchObject({ status: 'done', worker: 'w1' });
       expect(run.result).toEqual(await embeddedResult(medium(), 'Q'));
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
+  it("the server restarted after Redis lost its data: runs whose job is gone are queued again", async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'overstrand-queue-'));
+    try {
+      const dbPath = join(dir, 'db.sqlite');
+      const before = await queueServer({ dbPath });
+      const { token } = await signUp(before, 'Forgotten Flo');
+      const id = (await start(before, token, { diagram: { pd: trefoil() }, ring: 'Z' })).body.id;
+      await waitForJob(id, 'prioritized', 5_000);
+      await before.stop();
+      servers.splice(servers.indexOf(before), 1);
+      const connection = connect(redis.url);
+      await connection.flushall();
+      await connection.quit();
+      expect(await jobState(id)).toBe('unknown');
+
+      const after = await queueServer({ dbPath });
+      await worker('w1');
+      expect(await waitFor(after, token, id, ended)).toMatchObject({ status: 'done', worker: 'w1' });
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }
