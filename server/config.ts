@@ -33,6 +33,8 @@ export interface Config {
   runs: RunLimits;
   /** The job pool of short computations off the request thread (feed summaries, cables, keys). */
   jobs: JobLimits;
+  /** Redis of the BullMQ run queue (runs/queue/bullmq.ts); null: the server's own pool computes. */
+  redisUrl: string | null;
   /** Where board photos are kept: a local folder, or an S3-compatible bucket. */
   photos: PhotoStorage;
   /** Comments one person may post per window (then 429). */
@@ -56,6 +58,7 @@ export function defaultConfig(overrides: Partial<Config> = {}): Config {
     mailFrom: 'Overstrand <no-reply@overstrand.invalid>',
     runs: defaultRunLimits(),
     jobs: defaultJobLimits(),
+    redisUrl: null,
     photos: { kind: 'disk', dir: 'data/photos' },
     commentRateLimit: { windowMs: 60_000, limit: 20 },
     mailPacing: defaultMailPacing(),
@@ -88,8 +91,17 @@ const trustProxy = optional(
   }),
 );
 
+const redisUrl = z.url({ protocol: /^rediss?$/, error: 'expected a redis:// or rediss:// URL' });
+
+/** What the server and a queue worker (`npm run worker`) both read. */
+const runFields = {
+  RUN_THREADS: whole(1),
+  RUN_MAX_MEMORY_MB: whole(1),
+};
+
 export const EnvSchema = z
   .object({
+    ...runFields,
     NODE_ENV: optional(z.string()),
     PORT: whole(0, 65535),
     HOST: optional(z.string()),
@@ -106,10 +118,10 @@ export const EnvSchema = z
     TRUST_PROXY: trustProxy,
     WEB_DIR: optional(z.string()),
     DEMO: flag,
-    RUN_THREADS: whole(1),
     RUN_MAX_CROSSINGS: whole(1),
     RUN_MAX_MINUTES: positive,
-    RUN_MAX_MEMORY_MB: whole(1),
+    RUN_MAX_QUEUED_PER_USER: whole(1),
+    REDIS_URL: optional(redisUrl),
     PHOTO_DIR: optional(z.string()),
     S3_BUCKET: optional(z.string()),
     S3_ENDPOINT: optional(z.url({ error: 'expected a URL' })),
@@ -137,18 +149,23 @@ export interface Settings {
   config: Partial<Config>;
 }
 
+/** Never echoed in an error (a Redis URL may carry its password). */
+const SECRETS = ['JWT_SECRET', 'SMTP_PASSWORD', 'REDIS_URL'];
+
 /** Parses the environment; throws one Error naming every bad variable and why. */
+function parseEnv<S extends z.ZodType>(schema: S, raw: NodeJS.ProcessEnv): z.infer<S> {
+  const parsed = schema.safeParse(raw);
+  if (parsed.success) return parsed.data;
+  const lines = parsed.error.issues.map((i) => {
+    const name = String(i.path[0] ?? '');
+    const got = name in raw ? ` (got ${JSON.stringify(raw[name])})` : '';
+    return `  ${name}: ${i.message}${SECRETS.includes(name) ? '' : got}`;
+  });
+  throw new Error(`Bad environment settings:\n${lines.join('\n')}`);
+}
+
 export function settingsFromEnv(raw: NodeJS.ProcessEnv): Settings {
-  const parsed = EnvSchema.safeParse(raw);
-  if (!parsed.success) {
-    const lines = parsed.error.issues.map((i) => {
-      const name = String(i.path[0] ?? '');
-      const got = name in raw ? ` (got ${JSON.stringify(raw[name])})` : '';
-      return `  ${name}: ${i.message}${name === 'JWT_SECRET' || name === 'SMTP_PASSWORD' ? '' : got}`;
-    });
-    throw new Error(`Bad environment settings:\n${lines.join('\n')}`);
-  }
-  const env = parsed.data;
+  const env = parseEnv(EnvSchema, raw);
   const production = env.NODE_ENV === 'production';
   const runs = defaultRunLimits();
   return {
@@ -176,7 +193,9 @@ export function settingsFromEnv(raw: NodeJS.ProcessEnv): Settings {
         maxCrossings: env.RUN_MAX_CROSSINGS ?? runs.maxCrossings,
         maxWallMs: env.RUN_MAX_MINUTES ? env.RUN_MAX_MINUTES * 60_000 : runs.maxWallMs,
         maxMemoryMb: env.RUN_MAX_MEMORY_MB ?? runs.maxMemoryMb,
+        maxLivePerUser: env.RUN_MAX_QUEUED_PER_USER ?? runs.maxLivePerUser,
       },
+      redisUrl: env.REDIS_URL ?? null,
       photos: env.S3_BUCKET
         ? {
             kind: 's3',
@@ -189,5 +208,35 @@ export function settingsFromEnv(raw: NodeJS.ProcessEnv): Settings {
           }
         : { kind: 'disk', dir: env.PHOTO_DIR ?? 'data/photos' },
     },
+  };
+}
+
+export const WorkerEnvSchema = z.object({
+  ...runFields,
+  REDIS_URL: z.preprocess((v) => (v === '' ? undefined : v), z.url({ protocol: /^rediss?$/, error: (i) => (i.input === undefined ? "must be set: the Redis of the server's run queue, e.g. redis://queue-host:6379" : 'expected a redis:// or rediss:// URL') })),
+  WORKER_NAME: optional(z.string().max(200)),
+  WORKER_LOCK_SECONDS: whole(1),
+});
+
+/** What `npm run worker` starts from (server/worker/main.ts). */
+export interface WorkerSettings {
+  redisUrl: string;
+  threads: number;
+  maxMemoryMb: number;
+  /** Shown on the run page as who computed it; default host and process id. */
+  name: string | undefined;
+  /** A worker silent this long is taken for dead and its jobs go to another (BullMQ lockDuration). */
+  lockMs: number;
+}
+
+export function workerSettingsFromEnv(raw: NodeJS.ProcessEnv): WorkerSettings {
+  const env = parseEnv(WorkerEnvSchema, raw);
+  const runs = defaultRunLimits();
+  return {
+    redisUrl: env.REDIS_URL,
+    threads: env.RUN_THREADS ?? runs.threads,
+    maxMemoryMb: env.RUN_MAX_MEMORY_MB ?? runs.maxMemoryMb,
+    name: env.WORKER_NAME,
+    lockMs: (env.WORKER_LOCK_SECONDS ?? 30) * 1000,
   };
 }

@@ -138,7 +138,7 @@ function Input({ run }: { run: RunDetail }) {
         <Text style={styles.code} selectable testID="run-pd">{pdToText(d.pd)}</Text>
       </Fact>
       <Fact name="Computed">
-        {`${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${run.ring}${run.reduced ? `, reduced at component ${(run.result?.component ?? 0) + 1}` : ''} · started ${runDate(run.createdAt)} by ${run.startedBy.displayName}${run.finishedAt ? ` · ended ${runDate(run.finishedAt)}` : ''}${run.computeS ? ' · with the s-invariant' : ''}${run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}`}
+        {`${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${run.ring}${run.reduced ? `, reduced at component ${(run.result?.component ?? 0) + 1}` : ''} · started ${runDate(run.createdAt)} by ${run.startedBy.displayName}${run.finishedAt ? ` · ended ${runDate(run.finishedAt)}` : ''}${run.computeS ? ' · with the s-invariant' : ''}${run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}${run.worker ? ` · computed by ${run.worker}` : ''}`}
       </Fact>
     </View>
   );

@@ -41,6 +41,11 @@ function selfChecked(o: Outcome): Outcome {
   return { status: 'failed', error: 'The self-check failed: the Euler characteristic of the computed homology differs from the Jones polynomial, so the result is not kept.' };
 }
 
+/** A running computation's progress, from whichever back end computes it; a cell's moves its sweep. */
+export async function recordProgress(deps: Deps, id: string, p: { fraction: number; objects: number }): Promise<void> {
+  if (await updateIf(deps.db, id, ['running'], { progress: p.fraction, complexSize: p.objects })) await afterChange(deps, id);
+}
+
 /** After a run's row changed: a sweep cell updates its sweep; a top-level end sends the mail. */
 export async function afterChange(deps: Deps, id: string): Promise<void> {
   const run = await findRun(deps.db, id);

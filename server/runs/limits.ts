@@ -15,6 +15,8 @@ export interface RunLimits {
   maxSweepCells: number;
   /** Progress is written to the run row at most this often. */
   progressEveryMs: number;
+  /** Computations one person may have queued or running at once (sweep cells count). */
+  maxLivePerUser: number;
 }
 
 export const defaultRunLimits = (): RunLimits => ({
@@ -24,4 +26,5 @@ export const defaultRunLimits = (): RunLimits => ({
   maxMemoryMb: 2048,
   maxSweepCells: 64,
   progressEveryMs: 250,
+  maxLivePerUser: 80,
 });

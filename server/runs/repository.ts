@@ -22,16 +22,27 @@ export async function updateIf(db: Db, id: string, from: readonly RunStatus[], p
   return (r.affected ?? 0) > 0;
 }
 
-/** Oldest queued computation not already taken by this process. */
+/** The queued computation of lowest turn (then oldest) not already taken by this process. */
 export function nextQueued(db: Db, taken: readonly string[]): Promise<Run | null> {
   const qb = repo(db).createQueryBuilder('r').where('r.status = :q AND r.kind = :k', { q: 'queued', k: 'khovanov' });
   if (taken.length) qb.andWhere('r.id NOT IN (:...taken)', { taken });
-  return qb.orderBy('r.createdAt', 'ASC').addOrderBy('r.id', 'ASC').getOne();
+  return qb.orderBy('r.turn', 'ASC').addOrderBy('r.createdAt', 'ASC').addOrderBy('r.id', 'ASC').getOne();
 }
+
+const live = { status: In(['queued', 'running']), kind: 'khovanov' as const };
+
+/** One person's computations queued or running (their quota, and the turn of their next). */
+export const countLive = (db: Db, startedBy: string) => repo(db).countBy({ ...live, startedBy });
+
+/** Every computation queued or running, as a queue back end reconciles them at start. */
+export const liveComputations = (db: Db) => repo(db).find({ where: live, order: { turn: 'ASC', createdAt: 'ASC' } });
+
+/** A computation that must start again from the beginning. */
+export const backInQueue = { status: 'queued', startedAt: null, progress: 0, complexSize: 0, worker: null } satisfies Partial<Run>;
 
 /** At start: computations a previous process left running go back to the queue; `taken` are this process's own. */
 export async function requeueInterrupted(db: Db, taken: readonly string[]): Promise<number> {
-  const qb = repo(db).createQueryBuilder().update().set({ status: 'queued', startedAt: null, progress: 0, complexSize: 0 })
+  const qb = repo(db).createQueryBuilder().update().set(backInQueue)
     .where('status = :r AND kind = :k', { r: 'running', k: 'khovanov' });
   if (taken.length) qb.andWhere('id NOT IN (:...taken)', { taken });
   return (await qb.execute()).affected ?? 0;

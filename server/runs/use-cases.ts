@@ -16,7 +16,7 @@ import { findSketch } from '../sketches/repository';
 import { viewerOf } from '../sync/repository';
 import { cableCrossings, compareCells, sweepCells, sweepSize } from './cables';
 import { afterChange, finishRun, refreshSweep } from './lifecycle';
-import { childrenOf, displayNames, findReusable, findRun, insertRun, listTopLevel, updateIf } from './repository';
+import { childrenOf, countLive, displayNames, findReusable, findRun, insertRun, listTopLevel, updateIf } from './repository';
 import { schedulerOf } from './scheduler';
 
 type Start = StartRunParsed;
@@ -65,6 +65,8 @@ interface NewRun {
   parentRunId?: string;
   cable?: CableCell;
   sweep?: Run['sweep'];
+  /** Place in the starter's line (Run.turn); a sweep's cells take consecutive turns. */
+  turn?: number;
 }
 
 function row(deps: Deps, user: User, n: NewRun, key: string): Run {
@@ -91,6 +93,8 @@ function row(deps: Deps, user: User, n: NewRun, key: string): Run {
     result: null,
     error: null,
     reusedFrom: null,
+    turn: n.turn ?? 1,
+    worker: null,
     createdAt: deps.now().toISOString(),
     startedAt: null,
     finishedAt: null,
@@ -104,6 +108,22 @@ interface Planned {
 
 const overLimit = (what: string, crossings: number, max: number, fix = '') =>
   badDiagram(`${what} has ${crossings} crossings; this server computes at most ${max} per run.${fix}`);
+
+/**
+ * The fair-share quota: a person may have at most maxLivePerUser computations queued or running
+ * (a sweep's cells count, checked on its size before any cable is built). Answers how many they
+ * have, which also gives the turn of the next.
+ */
+async function withinQuota(deps: Deps, user: User, wanted: number): Promise<number> {
+  const live = await countLive(deps.db, user.id);
+  const max = deps.config.runs.maxLivePerUser;
+  if (live + wanted > max) {
+    const have = `${live} run${live === 1 ? '' : 's'} queued or running`;
+    const what = wanted === 1 ? `You have ${have}` : `This sweep has ${wanted} cables and you have ${have}`;
+    throw new AppError('run_quota', 429, `${what}; this server allows each person at most ${max} at once (sweep cells count). Wait for some to finish, or cancel some.`);
+  }
+  return live;
+}
 
 /**
  * A Khovanov computation's row (its diagram within the crossing limit, `key` its diagramKey),
@@ -132,8 +152,9 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   let queued: Run[];
   if (req.kind === 'khovanov') {
     if (d.pd.length > max) throw overLimit('The diagram', d.pd.length, max);
+    const live = await withinQuota(deps, user, 1);
     const key = await deps.jobs.run('runKey', { diagram: t.diagram, reduced: req.reduced });
-    const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov' }, key);
+    const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov', turn: live + 1 }, key);
     await insertRun(deps.db, run);
     await settle();
     [id, queued] = [run.id, [run]];
@@ -157,6 +178,7 @@ async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promis
   if (size > maxCells) {
     throw new AppError('invalid_input', 400, `A sweep up to ${maxStrands} strands per component of ${components === 1 ? 'a knot' : `a ${components}-component link`} has ${size} cables; this server allows at most ${maxCells}. Lower maxStrands.`, { sweep: `At most ${maxCells} cables` });
   }
+  const live = await withinQuota(deps, user, size);
   const cells = sweepCells(components, maxStrands);
   const nameOf = (cell: CableCell) => `(${cell.map(([p, m]) => `${p},${m}`).join(' | ')})`;
   for (const cell of cells) {
@@ -171,7 +193,7 @@ async function startSweep(deps: Deps, user: User, n: NewRun, d: Diagram): Promis
     const { key, ...diagram } = cables[k];
     // A cell's input is its cable, so its source names the cable and what it was taken of.
     const source = `${nameOf(cell)} cable of ${n.source ?? `PD ${pdToText(n.diagram.pd)}`}`;
-    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label: `${n.label} ${nameOf(cell)}`, source, diagram, parentRunId: sweep.id, cable: cell }, key));
+    planned.push(await planComputation(deps, user, { ...n, kind: 'khovanov', sweep: null, label: `${n.label} ${nameOf(cell)}`, source, diagram, parentRunId: sweep.id, cable: cell, turn: live + k + 1 }, key));
   }
   await inTransaction(deps.db, async (m) => {
     await insertRun(m, sweep);
@@ -213,6 +235,7 @@ function summary(r: Run, names: Map<string, string>): RunSummary {
     cable: r.cable,
     sweep: r.sweep,
     source: r.source,
+    worker: r.worker,
   };
 }
 

@@ -19,6 +19,7 @@ export const errorCodes = [
   'payload_too_large', // 413: body over the size limit
   'unsupported_type', // 415: an upload that is not one of the accepted kinds (checked by content)
   'rate_limited', // 429: too many attempts, try later
+  'run_quota', // 429: the person has as many runs queued or running as the server allows each
   'mail_failed', // 502: the e-mail (e.g. an invitation) could not be sent; nothing was kept
   'busy', // 503: a short computation the request needed took longer than the server allows
   'internal', // 500: a bug on our side; details are in the server log only

@@ -167,6 +167,8 @@ export const RunSummary = z.object({
   source: RunSource.nullable(),
   /** Asked to compute s as well (the result then carries it). */
   computeS: z.boolean(),
+  /** Who computed it (host and process), once a worker took it; null for reused and queued runs. */
+  worker: z.string().nullable(),
 });
 export type RunSummary = z.infer<typeof RunSummary>;
 

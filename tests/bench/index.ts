@@ -13,6 +13,7 @@ const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['homfly', () => import('./homfly.bench').then((m) => m.homflyBench())],
   ['bands', () => import('./bands.bench').then((m) => m.bandsBench())],
   ['freeze', () => import('./freeze.bench').then((m) => m.freezeBench())],
+  ['queue', () => import('./queue.bench').then((m) => m.queueBench())],
 ];
 
 async function main(): Promise<void> {

@@ -1,7 +1,7 @@
 // The environment goes through one schema (server/config.ts): defaults per mode, every bad
 // value refused at start with the variable's name, and the settings a reverse proxy needs.
 import { defaultRunLimits } from '@/server/runs/limits';
-import { settingsFromEnv } from '@/server/config';
+import { settingsFromEnv, workerSettingsFromEnv } from '@/server/config';
 
 const production = { NODE_ENV: 'production', SMTP_HOST: 'mail.example.org' };
 
@@ -34,6 +34,21 @@ describe('settings from the environment', () => {
     expect(settingsFromEnv({ PHOTO_DIR: '/srv/photos', PORT: '' }).config.photos).toEqual({ kind: 'disk', dir: '/srv/photos' });
   });
 
+  it('computes runs itself unless REDIS_URL names the queue; reads the per-person run quota', () => {
+    expect(settingsFromEnv({}).config.redisUrl).toBeNull();
+    const s = settingsFromEnv({ REDIS_URL: 'redis://queue.example.org:6379', RUN_MAX_QUEUED_PER_USER: '12' });
+    expect(s.config.redisUrl).toBe('redis://queue.example.org:6379');
+    expect(s.config.runs!.maxLivePerUser).toBe(12);
+  });
+
+  it('a queue worker needs REDIS_URL and reads its threads, heap limit, name and lock time', () => {
+    expect(() => workerSettingsFromEnv({})).toThrow("REDIS_URL: must be set: the Redis of the server's run queue");
+    expect(workerSettingsFromEnv({ REDIS_URL: 'redis://q:6379', RUN_THREADS: '2', RUN_MAX_MEMORY_MB: '512', WORKER_NAME: 'lab-3', WORKER_LOCK_SECONDS: '10' })).toEqual({
+      redisUrl: 'redis://q:6379', threads: 2, maxMemoryMb: 512, name: 'lab-3', lockMs: 10_000,
+    });
+    expect(workerSettingsFromEnv({ REDIS_URL: 'redis://q:6379' })).toMatchObject({ threads: defaultRunLimits().threads, name: undefined, lockMs: 30_000 });
+  });
+
   it.each([
     [{ AUTH_RATE_LIMIT: 'lots' }, 'AUTH_RATE_LIMIT: expected a number (got "lots")'],
     [{ AUTH_RATE_LIMIT: '0' }, 'AUTH_RATE_LIMIT: must be at least 1 (got "0")'],
@@ -48,13 +63,15 @@ describe('settings from the environment', () => {
     [{ NODE_ENV: 'production' }, 'SMTP_HOST: must be set when NODE_ENV=production'],
     [{ ...production, DEMO: '1' }, 'DEMO: the demo accounts have published passwords'],
     [{ SMTP_HOST: 'relay', SMTP_USER: 'robot' }, 'SMTP_USER: SMTP_USER and SMTP_PASSWORD go together'],
+    [{ REDIS_URL: 'http://queue:6379' }, 'REDIS_URL: expected a redis:// or rediss:// URL'],
+    [{ RUN_MAX_QUEUED_PER_USER: '0' }, 'RUN_MAX_QUEUED_PER_USER: must be at least 1'],
   ])('refuses %j with a message naming the variable', (env, message) => {
     expect(() => settingsFromEnv(env)).toThrow(message);
   });
 
   it('names every bad variable at once and never echoes a secret', () => {
-    const run = () => settingsFromEnv({ PORT: 'x', RUN_MAX_MINUTES: '-1', JWT_SECRET: 'hunter2' });
+    const run = () => settingsFromEnv({ PORT: 'x', RUN_MAX_MINUTES: '-1', JWT_SECRET: 'hunter2', REDIS_URL: 'http://:hunter3@queue' });
     expect(run).toThrow(/Bad environment settings:\n {2}PORT: .*\n {2}JWT_SECRET: .*\n {2}RUN_MAX_MINUTES: /);
-    expect(run).not.toThrow(/hunter2/);
+    expect(run).not.toThrow(/hunter2|hunter3/);
   });
 });

@@ -14,6 +14,16 @@ export function torus(p: number, q: number): PD {
   return fromBraid(word).pd.map((x) => [...x] as PD[number]);
 }
 
+// The positive trefoil over Z: Z at (0,1), (0,3), (2,5), (3,9) and Z/2 at (3,7)
+// (Bar-Natan, "On Khovanov's categorification of the Jones polynomial", 2002, math/0201043).
+export const TREFOIL_Z = [
+  { i: 0, j: 1, free: 1, torsion: [] },
+  { i: 0, j: 3, free: 1, torsion: [] },
+  { i: 2, j: 5, free: 1, torsion: [] },
+  { i: 3, j: 7, free: 0, torsion: [2] },
+  { i: 3, j: 9, free: 1, torsion: [] },
+];
+
 /** The positive trefoil, closure of sigma_1^3 (docs/conventions.md). */
 export const trefoil = (): PD => torus(2, 3);
 

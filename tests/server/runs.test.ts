@@ -13,17 +13,7 @@ import { defaultRunLimits, type RunLimits } from '@/server/runs/limits';
 import type { RunningServer } from '@/server/server';
 import { bearer, groupWith, signUp, testServer } from './helpers';
 import { pdToText } from '@/shared/text/codes';
-import { ended, mailFor, read, slow, start, torus, trefoil, waitFor } from './runs-fixtures';
-
-// The positive trefoil over Z: Z at (0,1), (0,3), (2,5), (3,9) and Z/2 at (3,7)
-// (Bar-Natan, "On Khovanov's categorification of the Jones polynomial", 2002, math/0201043).
-const TREFOIL_Z = [
-  { i: 0, j: 1, free: 1, torsion: [] },
-  { i: 0, j: 3, free: 1, torsion: [] },
-  { i: 2, j: 5, free: 1, torsion: [] },
-  { i: 3, j: 7, free: 0, torsion: [2] },
-  { i: 3, j: 9, free: 1, torsion: [] },
-];
+import { TREFOIL_Z, ended, mailFor, read, slow, start, torus, trefoil, waitFor } from './runs-fixtures';
 
 const limits = (l: Partial<RunLimits>): RunLimits => ({ ...defaultRunLimits(), threads: 1, progressEveryMs: 20, ...l });
 
@@ -143,6 +133,27 @@ describe('limits', () => {
     expect(run.status).toBe('failed');
     expect(run.error).toBe('Ran out of memory: the computation needed more than the limit of 48 MB per run.');
   }, 120_000);
+
+  it('refuses runs past the per-person quota with a 429 that says why, sweeps counting their cells, others unaffected', async () => {
+    server = await testServer({ config: { runs: limits({ maxLivePerUser: 2 }) } });
+    const a = await signUp(server, 'Quota Quin');
+    const b = await signUp(server, 'Other Oz');
+    const first = (await start(server, a.token, { diagram: { pd: slow() }, ring: 'Q' })).body.id;
+    expect((await start(server, a.token, { diagram: { pd: slow() }, ring: 'Q' })).status).toBe(201);
+    const third = await start(server, a.token, { diagram: { pd: trefoil() } });
+    expect(third.status).toBe(429);
+    expect(third.body.error).toEqual({
+      code: 'run_quota',
+      message: 'You have 2 runs queued or running; this server allows each person at most 2 at once (sweep cells count). Wait for some to finish, or cancel some.',
+    });
+    expect((await start(server, b.token, { kind: 'cable-sweep', diagram: { pd: trefoil() }, sweep: { maxStrands: 1 } })).status).toBe(201);
+    const sweep = await start(server, b.token, { kind: 'cable-sweep', diagram: { pd: trefoil() }, sweep: { maxStrands: 2 } });
+    expect(sweep.status).toBe(429);
+    expect(sweep.body.error.message).toMatch(/^This sweep has 5 cables and you have 2 runs queued or running;/);
+
+    await request(server.url).post(`/api/runs/${first}/cancel`).set(bearer(a.token));
+    expect((await start(server, a.token, { diagram: { pd: trefoil() } })).status).toBe(201);
+  });
 });
 
 describe('a restart', () => {

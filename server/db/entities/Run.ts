@@ -84,6 +84,18 @@ export class Run {
   @Column({ type: 'varchar', length: 36, nullable: true })
   reusedFrom: string | null;
 
+  /**
+   * Place in its starter's line: 1 + the live computations they had when it was queued. The
+   * queue takes the lowest turn first (then the oldest), so one person's hundred runs do not
+   * hold up another's first.
+   */
+  @Column({ type: 'integer', default: 1 })
+  turn: number;
+
+  /** Who computed it: host and process of the queue worker, or the server's own pool. */
+  @Column({ type: 'varchar', length: 200, nullable: true })
+  worker: string | null;
+
   @Column({ type: 'varchar', length: 40 })
   createdAt: string;
 

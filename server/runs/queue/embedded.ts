@@ -4,11 +4,11 @@
 import type { Progress } from '@/shared/khovanov';
 import type { Run } from '../../db/entities';
 import type { Deps } from '../../deps';
-import { afterChange, finishRun } from '../lifecycle';
+import { afterChange, finishRun, recordProgress } from '../lifecycle';
 import { createRunPool, type RunPool } from '../pool';
 import { nextQueued, requeueInterrupted, updateIf } from '../repository';
 import type { Scheduler } from '../scheduler';
-import { execute, failureMessage, type AbortReason, type ComputeOutcome } from './execute';
+import { execute, failureMessage, processName, type AbortReason, type ComputeOutcome } from './execute';
 
 export class EmbeddedScheduler implements Scheduler {
   private readonly pool: RunPool;
@@ -58,7 +58,7 @@ export class EmbeddedScheduler implements Scheduler {
     while (!this.stopped && this.active.size < config.runs.threads) {
       const run = await nextQueued(db, [...this.active.keys()]);
       if (!run) return;
-      if (await updateIf(db, run.id, ['queued'], { status: 'running', startedAt: this.deps.now().toISOString() })) {
+      if (await updateIf(db, run.id, ['queued'], { status: 'running', startedAt: this.deps.now().toISOString(), worker: `${processName()}, the server's own pool` })) {
         this.launch(run);
         await afterChange(this.deps, run.id);
       }
@@ -76,11 +76,7 @@ export class EmbeddedScheduler implements Scheduler {
     this.active.set(run.id, ac);
     const onProgress = (p: Progress) => {
       if (this.stopped) return;
-      this.track(
-        updateIf(this.deps.db, run.id, ['running'], { progress: p.fraction, complexSize: p.objects }).then((changed) =>
-          changed && run.parentRunId ? afterChange(this.deps, run.id) : undefined,
-        ),
-      ).catch((err: unknown) => this.deps.log.error({ err, runId: run.id }, 'progress write failed'));
+      this.track(recordProgress(this.deps, run.id, p)).catch((err: unknown) => this.deps.log.error({ err, runId: run.id }, 'progress write failed'));
     };
     const work = execute(this.pool, run, this.deps.config.runs, onProgress, ac.signal)
       .catch((err: unknown): ComputeOutcome => {

@@ -3,6 +3,7 @@
 // failure the run records, progress is passed on at most every progressEveryMs. A cancel or a
 // shutdown records nothing (the row says cancelled already, or the run is queued again); any
 // other error is thrown, for the back end to record or retry.
+import { hostname } from 'node:os';
 import type { KhResultJson, RunDiagram } from '@/shared/api/runs';
 import type { Progress } from '@/shared/khovanov';
 import { formatDuration } from '@/shared/text/duration';
@@ -67,3 +68,6 @@ export function failureMessage(err: unknown): string {
   const message = (err as { message?: unknown } | null)?.message;
   return typeof message === 'string' ? `The computation failed: ${message}` : 'The computation failed';
 }
+
+/** How a run names the process that computed it (Run.worker). */
+export const processName = () => `${hostname()} pid ${process.pid}`;
