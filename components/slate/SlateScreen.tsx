@@ -11,7 +11,7 @@ import { simplify } from '@/shared/knot/moves/simplify';
 import type { Diagram } from '@/shared/knot/diagram';
 import type { LocalSketch } from '@/lib/store/types';
 import { braidToText, pdToText } from '@/shared/text/codes';
-import { exportFiles } from '@/lib/slate/exports';
+import { exportFiles, type ExportChoices } from '@/lib/slate/exports';
 import { savePng } from '@/lib/slate/png';
 import { drawingNumbers } from '@/lib/slate/picture';
 import { docFromDiagram, docFromStored } from '@/lib/slate/record';
@@ -103,8 +103,8 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
     await Clipboard.setStringAsync(text);
     setMessage(`Copied the ${what}.`);
   };
-  const exportAs = async (kind: ExportKind) => {
-    const files = exportFiles(doc, analysis, sketch.title);
+  const exportAs = async (kind: ExportKind, choices: ExportChoices) => {
+    const files = exportFiles(doc, analysis, sketch.title, choices);
     try {
       if (kind === 'png') setMessage(await savePng(files.pngName, files.svg.text));
       else setMessage(await saveText(files[kind].name, files[kind].text, files[kind].mime));
@@ -138,7 +138,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
         onFamilies={() => setOpen('families')}
         onSimplify={simplifyNow}
         onRun={startRun}
-        onExport={(k) => void exportAs(k)}
+        onExport={(k, c) => void exportAs(k, c)}
       />
     </>
   );
