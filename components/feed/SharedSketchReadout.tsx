@@ -2,7 +2,6 @@
 // orientation arrows, each component's number and framing), the crossing and component count,
 // the framed-link data, the Jones polynomial, s with its slice-genus bounds when a run of the
 // sketch computed it, the PD code and the latest run.
-import { useMemo } from 'react';
 import { Image, StyleSheet, Text, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import type { GroupSketch } from '@/shared/api/feed';
@@ -13,9 +12,7 @@ import { DiagramPicture } from './DiagramPicture';
 import { FramedLink } from './FramedLink';
 import { Jones } from './Jones';
 import { pdToText } from '@/shared/text/codes';
-import { diagram as toDiagram } from '@/shared/knot/diagram';
-import { linkSignature } from '@/shared/knot/goeritz';
-import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
+import { SliceBounds } from '@/components/runs/SliceBounds';
 
 export function SharedSketchPicture({ s }: { s: GroupSketch }) {
   const photo = s.photos[0];
@@ -34,17 +31,10 @@ export function SharedSketchPicture({ s }: { s: GroupSketch }) {
 
 /** s over Q from the latest run that computed it, with the bounds it and the signature give. */
 function SFromRun({ s, diagram }: { s: number; diagram: GroupSketch['diagram'] }) {
-  const bounds = useMemo(() => {
-    try {
-      return sliceBoundsText(sliceGenusBounds(s, linkSignature(toDiagram(diagram.pd, { unknots: diagram.unknots }))));
-    } catch {
-      return null; // not a valid PD code: the page says so beside the Jones polynomial
-    }
-  }, [s, diagram]);
   return (
     <View testID="shared-s">
       <Text style={styles.readout}>{`s = ${s} over Q (Rasmussen, from a run)`}</Text>
-      {bounds ? <Text style={styles.muted}>{bounds}</Text> : null}
+      <SliceBounds s={s} diagram={diagram} />
     </View>
   );
 }
