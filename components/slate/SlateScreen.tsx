@@ -86,7 +86,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
 
   const draw = (d: Diagram, word?: number[]) => {
     try {
-      useSlate.getState().replace(docFromDiagram(d), word);
+      useSlate.getState().replace(docFromDiagram(d, word), word);
     } catch (e) {
       setMessage((e as Error).message);
     }
@@ -192,7 +192,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
         </View>
       )}
       <PasteCodeDialog visible={open === 'paste'} onClose={() => setOpen(null)} onDraw={draw} />
-      <FamiliesDialog visible={open === 'families'} onClose={() => setOpen(null)} current={diagram} onDraw={(d) => draw(d)} />
+      <FamiliesDialog visible={open === 'families'} onClose={() => setOpen(null)} current={diagram} onDraw={draw} />
       <SketchDetails sketch={sketch} visible={open === 'details'} onClose={() => setOpen(null)} />
       <Dialog title="Share to a group" visible={open === 'share'} onClose={() => setOpen(null)}>
         <ShareControl sketch={sketch} />

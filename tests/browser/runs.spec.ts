@@ -125,7 +125,7 @@ test('offline, a small diagram is computed on the device in a web worker', async
 }, 90_000);
 
 test('on the device, s of a knot with its slice-genus bounds; a link is told s is for knots', async () => {
-  await page.getByRole('link', { name: 'Runs', exact: true }).click();
+  await page.goto(baseUrl + '/runs');
   await page.getByRole('heading', { name: 'Runs', exact: true }).waitFor();
   await page.getByRole('radio', { name: 'Braid word' }).click();
   await page.getByLabel('Braid word').fill('-1 -1 -1');
