@@ -29,6 +29,7 @@ const sketch: GroupSketch = {
   comments: [],
   forkedFrom: null,
   sameInvariants: [],
+  sameInvariantsTotal: 0,
   myRole: 'member',
   can: { comment: true, moderate: false, uploadPhoto: true, fork: true, unshare: false },
 };

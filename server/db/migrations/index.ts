@@ -9,6 +9,8 @@ import { AttachmentPhotos1796149446164 } from './1796149446164-AttachmentPhotos'
 import { RunSource1796152731904 } from './1796152731904-RunSource';
 import { TokenVersion1796239057918 } from './1796239057918-TokenVersion';
 import { RunComputeS1796239288889 } from './1796239288889-RunComputeS';
+import { InvariantKeyByType1796300000000 } from './1796300000000-InvariantKeyByType';
 
 export const migrations = [Foundation1796145751477, Sync1796145952708, Feed1796146642029, Runs1796147000000, SyncCompaction1796148686557,
-  AttachmentPhotos1796149446164, RunSource1796152731904, TokenVersion1796239057918, RunComputeS1796239288889];
+  AttachmentPhotos1796149446164, RunSource1796152731904, TokenVersion1796239057918, RunComputeS1796239288889,
+  InvariantKeyByType1796300000000];
