@@ -185,7 +185,8 @@ const styles = StyleSheet.create({
   factName: { ...type.caps, color: colors.inkMuted },
   factValue: { flexDirection: 'row', flexWrap: 'wrap' },
   value: { ...type.body, color: colors.ink },
-  euler: { gap: space.xs },
+  // In the fact's wrapping row: shrinks to the box so its long line wraps instead of running past it.
+  euler: { gap: space.xs, flexShrink: 1, minWidth: 0 },
   exports: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center' },
   code: { fontFamily: fonts.mono, fontSize: 13, color: colors.ink },
 });

@@ -87,7 +87,7 @@ export function toSVG(a: Analysis, options: ExportOptions = {}): string {
   const marks = marksOf(a, options.marks);
   const font = 5 * width;
   // Labels stand beside the strand, so the picture needs room for them past its edge.
-  const b = bounds(a, (options.padding ?? 10) + (marks.some((m) => m.label) ? 3 * font : 0));
+  const b = bounds(a, (options.padding ?? 10) + (marks.some((m) => m.label) ? 4 * font : 0));
   const paths = piecesOf(a, options.gap ?? 2.5 * width).map(({ component, points }) => {
     const d = points.map((p, i) => `${i === 0 ? 'M' : 'L'}${fixed(p.x)} ${fixed(p.y)}`).join(' ');
     return `<path d="${d}" fill="none" stroke="${colors[component % colors.length]}" stroke-width="${width}" stroke-linecap="round" stroke-linejoin="round"/>`;
