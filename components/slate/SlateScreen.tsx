@@ -30,6 +30,7 @@ import { PasteCodeDialog } from '@/components/readout/PasteCodeDialog';
 import { FamiliesDialog } from '@/components/readout/FamiliesDialog';
 import { DescendingNote } from './DescendingNote';
 import { SlateCanvas } from './SlateCanvas';
+import { SplitToggle, canvasHeight, useSplit } from './SplitToggle';
 import { SelectionBar, Toolbar } from './Toolbar';
 import { FramingDialog } from './FramingDialog';
 import { SketchDetails } from './SketchDetails';
@@ -60,6 +61,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const readout = useReadout(ready ? diagram : null, dragging);
   const sInvariant = useSInvariant(ready ? diagram : null, dragging);
   const [open, setOpen] = useState<Open>(null);
+  const { reading, toggle: toggleSplit } = useSplit(); // phone: a shorter canvas, more Readout
   // A refused share (S24) shows beside the label, so the owner opens Share to read why.
   const shareRefused = useRefusedShares(sketch.id).length > 0 ? 'share refused by the server' : null;
   const shared = sharedLabel(sketch, useKnownGroups());
@@ -165,7 +167,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const board = (
     <>
       <Toolbar />
-      <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: Math.max(280, Math.round(height * 0.46)) }]}>
+      <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: canvasHeight(height, reading) }]}>
         <SlateCanvas analysis={analysis} onFraming={(id) => setOpen({ framing: id })} />
       </View>
       <SelectionBar numberOf={numberOf} onFraming={(id) => setOpen({ framing: id })} />
@@ -188,6 +190,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
         <View style={styles.main}>
           {header}
           {board}
+          <SplitToggle reading={reading} onToggle={toggleSplit} />
           <ScrollView style={styles.main} contentContainerStyle={styles.phoneReadout} keyboardShouldPersistTaps="handled">{readoutPane}</ScrollView>
         </View>
       )}
