@@ -1,6 +1,7 @@
 // The Slate's keyboard shortcuts on the web. Single keys go through the app's shortcut registry
 // (components/shell/shortcuts.ts: live while the Slate is focused, listed in the ? sheet);
-// the registry leaves Ctrl/Cmd combinations alone, so undo and redo have their own listener.
+// the registry leaves Ctrl/Cmd combinations alone (it lists them), so undo and redo have their
+// own listener.
 // Typing in a field is never taken over.
 import { useEffect, useMemo } from 'react';
 import { Platform } from 'react-native';
@@ -31,6 +32,10 @@ export function useSlateShortcuts(paste: () => void, enabled: boolean) {
       slate('Escape', 'Clear the selection', () => s().select(null)),
       slate('0', 'Fit the drawing to the Slate', () => s().fit()),
       slate('p', 'Paste a code', paste),
+      // Listed only (Ctrl/Cmd keys): the listener below runs them.
+      slate('Mod+z', 'Undo', () => s().undo()),
+      slate('Mod+Shift+z', 'Redo', () => s().redo()),
+      slate('Mod+y', 'Redo', () => s().redo()),
     ];
   }, [enabled, paste]);
   useScreenShortcuts(list);

@@ -53,7 +53,7 @@ function Offer({ token, invitation }: { token: string; invitation: InvitationPre
           Invitation links work for a limited time. Ask {invitation.invitedBy} to send a new one.
         </Banner>
       ) : null}
-      {invitation.status === 'accepted' ? (
+      {invitation.status === 'accepted' && !accept.isSuccess ? ( // after my own accept the refetched preview says accepted
         <Banner tone="error" title="This invitation was already used">
           Each link joins one person once. If that was you, sign in and open the group from Account.
         </Banner>

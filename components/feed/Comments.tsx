@@ -13,11 +13,12 @@ import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { CommentText } from './CommentText';
 import { when } from '@/lib/when';
 
-function Composer({ initial = '', label, busy, onSubmit, onCancel }: { initial?: string; label: string; busy: boolean; onSubmit: (body: string) => void; onCancel?: () => void }) {
+/** `field` names the text box, `label` its button: two names, so each can be found by its own. */
+function Composer({ initial = '', field, label, busy, onSubmit, onCancel }: { initial?: string; field: string; label: string; busy: boolean; onSubmit: (body: string) => void; onCancel?: () => void }) {
   const [body, setBody] = useState(initial);
   return (
     <View style={styles.composer}>
-      <TextInput value={body} onChangeText={setBody} multiline aria-label={label} placeholder="Write a comment: Markdown, maths between $…$"
+      <TextInput value={body} onChangeText={setBody} multiline aria-label={field} placeholder="Write a comment: Markdown, maths between $…$"
         placeholderTextColor={colors.inkFaint} style={styles.input} />
       <View style={styles.row}>
         <Button label={label} busy={busy} busyLabel="Saving…" disabled={!body.trim()} onPress={() => onSubmit(body)} />
@@ -37,7 +38,7 @@ function Item({ c, groupId, mine, moderate, canWrite }: { c: Comment; groupId: s
         <Text style={styles.author}>{c.author.displayName}</Text> · {when(c.createdAt)}{c.editedAt ? ' · edited' : ''}
       </Text>
       {editing ? (
-        <Composer initial={c.body} label="Save" busy={edit.isPending} onCancel={() => setEditing(false)}
+        <Composer initial={c.body} field="Edit comment" label="Save" busy={edit.isPending} onCancel={() => setEditing(false)}
           onSubmit={(body) => edit.mutate({ id: c.id, body }, { onSuccess: () => setEditing(false) })} />
       ) : (
         <CommentText body={c.body} />
@@ -84,7 +85,7 @@ export function Comments({ groupId, sketchId, comments, canComment, moderate }: 
       {unsent.map((c) => <Unsent key={c.id} c={c} author={me?.displayName ?? 'Me'} />)}
       {add.error ? <Banner tone="error">{add.error.message}</Banner> : null}
       {canComment ? (
-        <Composer key={round} label="Post comment" busy={add.isPending} onSubmit={(body) => add.mutate(body, { onSuccess: () => setRound((r) => r + 1) })} />
+        <Composer key={round} field="Comment" label="Post comment" busy={add.isPending} onSubmit={(body) => add.mutate(body, { onSuccess: () => setRound((r) => r + 1) })} />
       ) : (
         <Text style={styles.muted}>Viewers read the discussion; ask an admin to make you a member to comment.</Text>
       )}

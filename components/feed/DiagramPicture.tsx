@@ -8,6 +8,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import Svg, { G, Path, Text as SvgText } from 'react-native-svg';
 import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
 import { analyse } from '@/shared/drawing/analyse';
+import { arrowHead } from '@/shared/drawing/pick';
 import type { Point } from '@/shared/drawing/point';
 import { fitView, strandPictures, type StrandPicture } from '@/lib/slate/picture';
 import { bandPictures, type BandPicture } from '@/lib/slate/band-pictures';
@@ -79,11 +80,8 @@ function usePictures(key: string, d: PictureSource, size: number, marks: boolean
   return cache.get(k);
 }
 
-/** An arrowhead at `at` pointing along the unit vector `dir`, from a triangle in its own frame. */
-function arrowHead(at: Point, dir: Point): string {
-  const corners: [number, number][] = [[8, 0], [-4, 6], [-4, -6]];
-  return corners.map(([u, v], i) => `${i ? 'L' : 'M'}${(at.x + dir.x * u - dir.y * v).toFixed(1)} ${(at.y + dir.y * u + dir.x * v).toFixed(1)}`).join(' ') + ' Z';
-}
+const arrowPath = (at: Point, dir: Point): string =>
+  arrowHead(at, dir, 8).map((p, i) => `${i ? 'L' : 'M'}${p.x.toFixed(1)} ${p.y.toFixed(1)}`).join(' ') + ' Z';
 
 export function DiagramPicture({ diagram, size, pictureKey, crossings, marks = false, label }: {
   diagram: PictureSource;
@@ -105,7 +103,7 @@ export function DiagramPicture({ diagram, size, pictureKey, crossings, marks = f
               {p.pieces.map((d, i) => (
                 <Path key={i} d={d} stroke={p.colour} strokeWidth={stroke} strokeLinecap="round" strokeLinejoin="round" fill="none" strokeDasharray={p.closed ? undefined : '2 6'} />
               ))}
-              {marks && p.arrow ? <Path d={arrowHead(p.arrow.at, p.arrow.direction)} fill={p.colour} stroke={slate.surface} strokeWidth={1.2} /> : null}
+              {marks && p.arrow ? <Path d={arrowPath(p.arrow.at, p.arrow.direction)} fill={p.colour} stroke={slate.surface} strokeWidth={1.2} /> : null}
               {marks && p.badge && p.number !== null ? (
                 <SvgText x={p.badge.at.x} y={p.badge.at.y + 4} fontSize={12} fontFamily={fonts.mono} fill={p.colour} textAnchor="middle">
                   {`${p.number}: ${p.badge.text}`}

@@ -78,8 +78,9 @@ export function GroupSketchPage({ groupId, sketchId }: { groupId: string; sketch
       {s.notes ? <Text style={styles.notes}>{s.notes}</Text> : null}
       <SharedSketchActions s={s} />
       {s.sameInvariants.length ? (
-        <Section title="Same invariants as" note="Same crossing count and Jones polynomial, or the same Khovanov result.">
+        <Section title={`Same invariants as · ${s.sameInvariantsTotal}`} note="Same Jones polynomial, determinant and signature (so maybe the same knot drawn another way), or the same Khovanov result.">
           <Refs refs={s.sameInvariants} groupId={groupId} />
+          {s.sameInvariantsTotal > s.sameInvariants.length ? <Text style={styles.muted}>{`and ${s.sameInvariantsTotal - s.sameInvariants.length} more`}</Text> : null}
         </Section>
       ) : null}
       <Section title={`Board photos · ${s.photos.length}`}>

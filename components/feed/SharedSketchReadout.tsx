@@ -1,6 +1,7 @@
 // A shared sketch's mathematics as its owner saw it on the Slate: the picture (gaps, colours,
 // orientation arrows, each component's number and framing), the crossing and component count,
-// the framed-link data, the Jones polynomial, the PD code and the latest run.
+// the framed-link data, the Jones polynomial, s with its slice-genus bounds when a run of the
+// sketch computed it, the PD code and the latest run.
 import { Image, StyleSheet, Text, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import type { GroupSketch } from '@/shared/api/feed';
@@ -11,7 +12,7 @@ import { DiagramPicture } from './DiagramPicture';
 import { FramedLink } from './FramedLink';
 import { Jones } from './Jones';
 import { pdToText } from '@/shared/text/codes';
-
+import { SliceBounds } from '@/components/runs/SliceBounds';
 
 export function SharedSketchPicture({ s }: { s: GroupSketch }) {
   const photo = s.photos[0];
@@ -28,6 +29,16 @@ export function SharedSketchPicture({ s }: { s: GroupSketch }) {
   );
 }
 
+/** s over Q from the latest run that computed it, with the bounds it and the signature give. */
+function SFromRun({ s, diagram }: { s: number; diagram: GroupSketch['diagram'] }) {
+  return (
+    <View testID="shared-s">
+      <Text style={styles.readout}>{`s = ${s} over Q (Rasmussen, from a run)`}</Text>
+      <SliceBounds s={s} diagram={diagram} />
+    </View>
+  );
+}
+
 export function SharedSketchReadout({ s }: { s: GroupSketch }) {
   const router = useRouter();
   const { crossings, components } = s.invariants;
@@ -38,6 +49,7 @@ export function SharedSketchReadout({ s }: { s: GroupSketch }) {
       </Text>
       <FramedLink diagram={s.diagram} />
       {s.invariants.jones || s.invariants.computing ? <Jones inv={s.invariants} lhs="V(t)" /> : <Text style={styles.muted}>No Jones polynomial: the diagram is too large or not a valid PD code.</Text>}
+      {s.latestRun?.s !== undefined ? <SFromRun s={s.latestRun.s} diagram={s.diagram} /> : null}
       {s.diagram.pd.length ? <Text style={styles.code} selectable>{pdToText(s.diagram.pd)}</Text> : null}
       {s.latestRun ? (
         <Text role="link" style={styles.run} onPress={() => router.push(`/runs/${s.latestRun!.id}`)}>

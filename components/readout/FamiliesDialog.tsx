@@ -17,7 +17,7 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
   visible: boolean;
   onClose: () => void;
   current: Diagram | null;
-  onDraw: (d: Diagram) => void;
+  onDraw: (d: Diagram, braid?: number[]) => void;
 }) {
   const [kind, setKind] = useState<FamilyKind>('torus');
   const [values, setValues] = useState<Record<string, string>>(initialValues);
@@ -30,7 +30,7 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
     const r = buildFamily(kind, own, current, placement, mirrored === 'yes');
     if (!r.ok) return setError(r.error);
     setError(null);
-    onDraw(r.diagram);
+    onDraw(r.diagram, r.braid);
   };
   return (
     <Dialog title="Families" visible={visible} onClose={onClose} wide>

@@ -1,6 +1,9 @@
 // What can be done from the Readout: copy the codes, bring a code or a family onto the Slate,
-// simplify or make alternating, start a heavy run, export the picture.
+// simplify or make alternating, start a heavy run, export the picture (with what it shows
+// besides the strands: arrows, component numbers, framings; TikZ bare or as a document).
+import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { defaultExportChoices, type ExportChoices } from '@/lib/slate/exports';
 import { colors, radius, space, type } from '@/constants/theme';
 
 export type ExportKind = 'svg' | 'png' | 'tikz';
@@ -18,7 +21,7 @@ type Props = {
   onFamilies: () => void;
   onSimplify: () => void;
   onRun: () => void;
-  onExport: (kind: ExportKind) => void;
+  onExport: (kind: ExportKind, choices: ExportChoices) => void;
 };
 
 function Action({ label, onPress, disabled = false, primary = false }: { label: string; onPress: () => void; disabled?: boolean; primary?: boolean }) {
@@ -30,7 +33,24 @@ function Action({ label, onPress, disabled = false, primary = false }: { label: 
   );
 }
 
+function Toggle({ label, on, onPress }: { label: string; on: boolean; onPress: () => void }) {
+  return (
+    <Pressable role="checkbox" aria-checked={on} accessibilityLabel={label} onPress={onPress} style={styles.toggle}>
+      <View style={[styles.tick, on && styles.tickOn]}>{on ? <Text style={styles.tickMark}>✓</Text> : null}</View>
+      <Text style={styles.actionText}>{label}</Text>
+    </Pressable>
+  );
+}
+
+const toggles: [keyof ExportChoices, string][] = [
+  ['arrows', 'Orientation arrows'],
+  ['numbers', 'Component numbers'],
+  ['framings', 'Framings'],
+  ['standalone', 'TikZ as a LaTeX document'],
+];
+
 export function ReadoutActions(p: Props) {
+  const [choices, setChoices] = useState<ExportChoices>(defaultExportChoices);
   return (
     <View style={styles.box}>
       <View style={styles.group}>
@@ -50,9 +70,14 @@ export function ReadoutActions(p: Props) {
           <Action label="Start a heavy run" onPress={p.onRun} disabled={!p.hasDiagram} />
         </View>
         <View style={styles.row}>
-          <Action label="Export SVG" onPress={() => p.onExport('svg')} disabled={!p.hasDiagram} />
-          <Action label="Export PNG" onPress={() => p.onExport('png')} disabled={!p.hasDiagram} />
-          <Action label="Export TikZ" onPress={() => p.onExport('tikz')} disabled={!p.hasDiagram} />
+          <Action label="Export SVG" onPress={() => p.onExport('svg', choices)} disabled={!p.hasDiagram} />
+          <Action label="Export PNG" onPress={() => p.onExport('png', choices)} disabled={!p.hasDiagram} />
+          <Action label="Export TikZ" onPress={() => p.onExport('tikz', choices)} disabled={!p.hasDiagram} />
+        </View>
+        <View style={styles.row} role="group" aria-label="What the exports show">
+          {toggles.map(([key, label]) => (
+            <Toggle key={key} label={label} on={choices[key]} onPress={() => setChoices((c) => ({ ...c, [key]: !c[key] }))} />
+          ))}
         </View>
       </View>
       {p.message ? <Text role="status" style={styles.message}>{p.message}</Text> : null}
@@ -71,5 +96,9 @@ const styles = StyleSheet.create({
   disabled: { opacity: 0.4 },
   actionText: { ...type.label, color: colors.ink },
   primaryText: { color: colors.accent },
+  toggle: { minHeight: 44, flexDirection: 'row', alignItems: 'center', gap: space.xs + 2, paddingRight: space.sm },
+  tick: { width: 20, height: 20, borderRadius: radius.sm, borderWidth: 1.5, borderColor: colors.inkMuted, alignItems: 'center', justifyContent: 'center' },
+  tickOn: { borderColor: colors.accent, backgroundColor: colors.accent },
+  tickMark: { color: colors.surface, fontSize: 13, lineHeight: 15 },
   message: { ...type.small, color: colors.success },
 });

@@ -1,15 +1,12 @@
 // A run's page: where it stands (status, progress, cancel), then its result: the bigraded
 // table, the Poincare polynomial, the Euler characteristic checked against the Jones
 // polynomial, thin or thick, the s-invariant with its slice-genus bounds when asked, and exports. A cable sweep shows a grid of small tables instead.
-import { useMemo, useState } from 'react';
+import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { isFinished, runPagePath, type KhResultJson, type RunDetail, type SValues } from '@/shared/api/runs';
 import { toCsv, toJson, toLatexTable, type ExportRecord } from '@/shared/khovanov/export';
 import { poincareFormat } from '@/shared/khovanov/format';
-import { diagram as toDiagram } from '@/shared/knot/diagram';
-import { linkSignature } from '@/shared/knot/goeritz';
 import { Laurent } from '@/shared/poly/laurent';
-import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
 import { router } from 'expo-router';
 import { useCancelRun, useStartRun } from '@/hooks/queries/useRuns';
 import { pdToText } from '@/shared/text/codes';
@@ -20,6 +17,7 @@ import { colors, fonts, space, type } from '@/constants/theme';
 import { KhTable } from './KhTable';
 import { TeX } from '@/components/ui/Math';
 import { ProgressBar } from './ProgressBar';
+import { SliceBounds } from './SliceBounds';
 import { SweepGrid } from './SweepGrid';
 import { duration, remaining, runDate, statusLabel } from './format';
 import { saveText } from '@/components/ui/save';
@@ -88,12 +86,11 @@ export function KhSummary({ result }: { result: KhResultJson }) {
 
 /** s over Q and F2, and the slice-genus bounds from s (over Q) and the diagram's signature. */
 function SFact({ s, diagram }: { s: SValues; diagram: RunDetail['diagram'] }) {
-  const signature = useMemo(() => linkSignature(toDiagram(diagram.pd, { unknots: diagram.unknots })), [diagram]);
   return (
     <Fact name="Rasmussen s">
       <View style={styles.euler}>
         <Text style={styles.value} testID="run-s">{`s = ${s.Q} over Q, ${s.F2} over F2`}</Text>
-        <Text style={styles.muted}>{sliceBoundsText(sliceGenusBounds(s.Q, signature))}</Text>
+        <SliceBounds s={s.Q} diagram={diagram} />
       </View>
     </Fact>
   );
@@ -188,7 +185,8 @@ const styles = StyleSheet.create({
   factName: { ...type.caps, color: colors.inkMuted },
   factValue: { flexDirection: 'row', flexWrap: 'wrap' },
   value: { ...type.body, color: colors.ink },
-  euler: { gap: space.xs },
+  // In the fact's wrapping row: shrinks to the box so its long line wraps instead of running past it.
+  euler: { gap: space.xs, flexShrink: 1, minWidth: 0 },
   exports: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center' },
   code: { fontFamily: fonts.mono, fontSize: 13, color: colors.ink },
 });

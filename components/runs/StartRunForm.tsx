@@ -1,13 +1,13 @@
 // Start a run from a pasted PD, DT code or braid word: the code is read by the Slate's reader
 // (lib/slate/codes.ts: the same codes, the same messages), then sent as a diagram with the text
 // it came from; the result page opens. Small diagrams can also be computed on this device,
-// offline (a web worker on web).
+// offline (a web worker on web), with s when asked for a knot.
 import { useEffect, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { router } from 'expo-router';
 import { isApiError } from '@/lib/api';
 import { codeKinds, parseCode, sourceOf, type CodeKind } from '@/lib/slate/codes';
-import { RunRing, runPagePath, type KhResultJson, type StartRunRequest } from '@/shared/api/runs';
+import { RunRing, runPagePath, type KhResultJson, type RunDiagram, type StartRunRequest } from '@/shared/api/runs';
 import { pdToText } from '@/shared/text/codes';
 import { useStartRun } from '@/hooks/queries/useRuns';
 import { Banner } from '@/components/ui/Banner';
@@ -19,6 +19,9 @@ import { computeLocally, warmUpLocal } from './computeLocally';
 import { KhTable } from './KhTable';
 import { LOCAL_MAX_CROSSINGS } from './local-kh';
 import { KhSummary } from './RunResult';
+import { SliceBounds } from './SliceBounds';
+import { computeS } from '@/components/readout/computeS';
+import { orient } from '@/shared/knot/pd';
 
 const ringNames = { Z: 'Z', Q: 'Q', F2: 'F2', F3: 'F3', Fp: 'F_p, any prime' } as const;
 const sweepNames = { '0': 'Khovanov homology', '2': 'Cable sweep, r+ + r- ≤ 2', '3': 'Cable sweep, r+ + r- ≤ 3', '4': 'Cable sweep, r+ + r- ≤ 4' } as const;
@@ -64,6 +67,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   const [sweep, setSweep] = useState<keyof typeof sweepNames>('0');
   const [invalid, setInvalid] = useState<string | null>(null);
   const [local, setLocal] = useState<{ fraction: number; result?: KhResultJson; error?: string } | null>(null);
+  const [localS, setLocalS] = useState<{ s: number; diagram: Pick<RunDiagram, 'pd' | 'unknots'> } | { note: string } | null>(null);
   const start = useStartRun();
   useEffect(warmUpLocal, []);
   const computeHere = () => {
@@ -75,8 +79,19 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
     }
     setInvalid(null);
     setLocal({ fraction: 0 });
-    computeLocally({ pd: d.pd, unknots: d.unknots ?? 0, ring, reduced: reduced === 'reduced' }, (fraction) => setLocal((l) => (l && !l.result ? { ...l, fraction } : l)))
-      .then((result) => setLocal({ fraction: 1, result }))
+    setLocalS(null);
+    const unknots = d.unknots ?? 0;
+    computeLocally({ pd: d.pd, unknots, ring, reduced: reduced === 'reduced' }, (fraction) => setLocal((l) => (l && !l.result ? { ...l, fraction } : l)))
+      .then((result) => {
+        setLocal({ fraction: 1, result });
+        if (!alsoS) return;
+        // As on the server: s of a knot only (docs/conventions.md), after its homology.
+        if (orient(d.pd).components.length + unknots !== 1) return setLocalS({ note: 's is defined for knots here; this diagram is a link.' });
+        setLocalS({ note: 'Computing s on this device…' });
+        computeS({ pd: d.pd, unknots }, new AbortController().signal)
+          .then((value) => setLocalS({ s: value, diagram: { pd: d.pd, unknots } }))
+          .catch((err: Error) => setLocalS({ note: err.message }));
+      })
       .catch((err: Error) => setLocal({ fraction: 1, error: err.message }));
   };
   const submit = () => {
@@ -135,6 +150,12 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
         <Section title={`On this device: Khovanov homology over ${local.result.ring}${local.result.reduced ? ', reduced' : ''}`}>
           <KhTable groups={local.result.groups} ring={local.result.ring} label="Khovanov homology on this device" />
           <KhSummary result={local.result} />
+          {localS && 's' in localS ? (
+            <View testID="local-s">
+              <Text style={styles.value}>{`s = ${localS.s} over Q (Rasmussen)`}</Text>
+              <SliceBounds s={localS.s} diagram={localS.diagram} />
+            </View>
+          ) : localS ? <Text role="status" style={styles.label}>{localS.note}</Text> : null}
         </Section>
       ) : null}
     </View>
@@ -152,4 +173,5 @@ const styles = StyleSheet.create({
   prime: { minHeight: 0, width: 120 },
   code: { fontFamily: fonts.mono, fontSize: 14, minHeight: 72, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, padding: space.md, backgroundColor: colors.surface, color: colors.ink },
   error: { ...type.small, color: colors.danger },
+  value: { ...type.body, color: colors.ink },
 });

@@ -3,7 +3,8 @@ import { Modal, Pressable, ScrollView, StyleSheet, Text, View } from 'react-nati
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { liveShortcuts, useShortcutRegistry } from './shortcuts';
 
-const keyName = (k: string) => (k === ' ' ? 'Space' : k.length === 1 ? k.toUpperCase() : k);
+const keyName = (k: string): string =>
+  k.startsWith('Mod+') ? `Ctrl/Cmd+${k.slice(4).split('+').map(keyName).join('+')}` : k === ' ' ? 'Space' : k.length === 1 ? k.toUpperCase() : k;
 
 export function ShortcutSheet({ onClose }: { onClose: () => void }) {
   const live = useShortcutRegistry((s) => s.live);

@@ -13,7 +13,11 @@ import { useFocusEffect } from 'expo-router';
 import { create } from 'zustand';
 
 export interface Shortcut {
-  /** One key, or two separated by a space ("g f"); letters lower case, as KeyboardEvent.key. */
+  /**
+   * One key, or two separated by a space ("g f"); letters lower case, as KeyboardEvent.key.
+   * "Mod+z" (Ctrl or Cmd with z) is only listed in the sheet: the host never takes Ctrl/Cmd
+   * keys, so the screen that lists one handles it itself (the Slate's undo and redo).
+   */
   keys: string;
   label: string;
   /** Heading the sheet lists it under, e.g. "Go to", "Feed", "Slate". */

@@ -11,7 +11,7 @@ import { simplify } from '@/shared/knot/moves/simplify';
 import type { Diagram } from '@/shared/knot/diagram';
 import type { LocalSketch } from '@/lib/store/types';
 import { braidToText, pdToText } from '@/shared/text/codes';
-import { exportFiles } from '@/lib/slate/exports';
+import { exportFiles, type ExportChoices } from '@/lib/slate/exports';
 import { savePng } from '@/lib/slate/png';
 import { diagramNumbers, drawingNumbers } from '@/lib/slate/picture';
 import { docFromDiagram, docFromStored } from '@/lib/slate/record';
@@ -32,6 +32,7 @@ import { FamiliesDialog } from '@/components/readout/FamiliesDialog';
 import { BandsReadout } from '@/components/readout/BandsReadout';
 import { DescendingNote } from './DescendingNote';
 import { SlateCanvas } from './SlateCanvas';
+import { SplitToggle, canvasHeight, useSplit } from './SplitToggle';
 import { SelectionBar, Toolbar } from './Toolbar';
 import { BandBar } from './BandBar';
 import { AfterBandsView } from './AfterBandsView';
@@ -66,6 +67,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const bands = useSlateBands(ready, dragging);
   const showAfter = useSlate((s) => s.showAfter) && bands.drawings !== null;
   const [open, setOpen] = useState<Open>(null);
+  const { reading, toggle: toggleSplit } = useSplit(); // phone: a shorter canvas, more Readout
   // A refused share (S24) shows beside the label, so the owner opens Share to read why.
   const shareRefused = useRefusedShares(sketch.id).length > 0 ? 'share refused by the server' : null;
   const shared = sharedLabel(sketch, useKnownGroups());
@@ -92,7 +94,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
 
   const draw = (d: Diagram, word?: number[]) => {
     try {
-      useSlate.getState().replace(docFromDiagram(d), word);
+      useSlate.getState().replace(docFromDiagram(d, word), word);
     } catch (e) {
       setMessage((e as Error).message);
     }
@@ -109,8 +111,8 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
     await Clipboard.setStringAsync(text);
     setMessage(`Copied the ${what}.`);
   };
-  const exportAs = async (kind: ExportKind) => {
-    const files = exportFiles(doc, analysis, sketch.title);
+  const exportAs = async (kind: ExportKind, choices: ExportChoices) => {
+    const files = exportFiles(doc, analysis, sketch.title, choices);
     try {
       if (kind === 'png') setMessage(await savePng(files.pngName, files.svg.text));
       else setMessage(await saveText(files[kind].name, files[kind].text, files[kind].mime));
@@ -145,7 +147,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
         onFamilies={() => setOpen('families')}
         onSimplify={simplifyNow}
         onRun={startRun}
-        onExport={(k) => void exportAs(k)}
+        onExport={(k, c) => void exportAs(k, c)}
       />
     </>
   );
@@ -172,7 +174,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const board = (
     <>
       <Toolbar />
-      <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: Math.max(280, Math.round(height * 0.46)) }]}>
+      <View style={wide ? styles.canvasWide : [styles.canvasPhone, { height: canvasHeight(height, reading) }]}>
         {showAfter && !wide ? null : <SlateCanvas analysis={analysis} onFraming={(id) => setOpen({ framing: id })} />}
         {showAfter ? <AfterBandsView drawings={bands.drawings} /> : null}
       </View>
@@ -197,11 +199,12 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
         <View style={styles.main}>
           {header}
           {board}
+          <SplitToggle reading={reading} onToggle={toggleSplit} />
           <ScrollView style={styles.main} contentContainerStyle={styles.phoneReadout} keyboardShouldPersistTaps="handled">{readoutPane}</ScrollView>
         </View>
       )}
       <PasteCodeDialog visible={open === 'paste'} onClose={() => setOpen(null)} onDraw={draw} />
-      <FamiliesDialog visible={open === 'families'} onClose={() => setOpen(null)} current={diagram} onDraw={(d) => draw(d)} />
+      <FamiliesDialog visible={open === 'families'} onClose={() => setOpen(null)} current={diagram} onDraw={draw} />
       <SketchDetails sketch={sketch} visible={open === 'details'} onClose={() => setOpen(null)} />
       <Dialog title="Share to a group" visible={open === 'share'} onClose={() => setOpen(null)}>
         <ShareControl sketch={sketch} />

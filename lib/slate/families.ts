@@ -84,11 +84,19 @@ function build(kind: FamilyKind, v: Record<string, string>, current: Diagram | n
   }
 }
 
+/** T(p, q)'s braid word as torusLink builds it (mirrored: the inverse letters), for its closed-braid picture. */
+function torusBraid(v: Record<string, string>, mirrored: boolean): number[] {
+  const [p, q] = [integer('p', v.p), integer('q', v.q)];
+  const sign = Math.sign(p) * Math.sign(q) * (mirrored ? -1 : 1);
+  return Array.from({ length: Math.abs(q) }, () => Array.from({ length: Math.abs(p) - 1 }, (_, k) => sign * (k + 1))).flat();
+}
+
 /** The family member, placed against the current diagram; errors as readable messages. */
 export function buildFamily(kind: FamilyKind, values: Record<string, string>, current: Diagram | null, placement: Placement, mirrored: boolean): Parsed {
   try {
     const made = build(kind, values, current);
     const m = mirrored ? mirror(made) : made;
+    if (kind === 'torus' && placement === 'replace') return { ok: true, diagram: m, braid: torusBraid(values, mirrored) };
     if (placement === 'replace' || kind === 'cable') return { ok: true, diagram: m };
     if (!current) throw new Error('There is no sketch on the Slate to combine with; choose "Replace"');
     return { ok: true, diagram: placement === 'sum' ? connectedSum(current, m) : disjointUnion(current, m) };

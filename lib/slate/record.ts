@@ -6,7 +6,7 @@
 import { SlateGeometry, type Diagram as StoredDiagram } from '@/shared/api/sketches';
 import type { Analysis } from '@/shared/drawing/analyse';
 import { emptySketch, type Sketch } from '@/shared/drawing/sketch';
-import { layoutPD, layoutToSketch } from '@/shared/layout';
+import { closedBraidSketch, layoutPD, layoutToSketch } from '@/shared/layout';
 import type { Diagram } from '@/shared/knot/diagram';
 
 /** What the undo stack holds: the drawing and any colour a component was given by hand. */
@@ -37,8 +37,14 @@ export function toStoredDiagram(doc: SlateDoc, a: Analysis): StoredDiagram {
  * Throws when the layout finds no picture that reads back as the same diagram: a distorted
  * picture would make the Readout show another link's invariants.
  */
-export function docFromDiagram(d: Diagram): SlateDoc {
+/**
+ * A diagram laid out for the Slate. Given the braid word it came from (and no framings to
+ * show), it is drawn as that closed braid when the picture reads back right (shared/layout/closed-braid.ts).
+ */
+export function docFromDiagram(d: Diagram, braid?: readonly number[]): SlateDoc {
   if (d.pd.length === 0 && d.unknots === 0) return emptyDoc;
+  const closed = braid && d.unknots === 0 && d.framings.every((f) => f === null) ? closedBraidSketch(braid) : null;
+  if (closed) return { sketch: closed, colours: {} };
   const layout = layoutPD(d.pd, d.unknots);
   if (!layout.faithful) {
     throw new Error('No faithful picture found for this code; the same link given as a braid word, or with fewer crossings, may draw.');

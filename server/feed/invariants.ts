@@ -1,10 +1,12 @@
 // The Readout summary the feed shows for a stored diagram: crossings, components and the Jones
 // polynomial, computed with the knot core (shared/knot) in the job pool (server/jobs) when the
-// sketch is written (server/feed/summaries.ts). `key` groups sketches with the same crossing
-// count and Jones polynomial ("same invariants as").
+// sketch is written (server/feed/summaries.ts). `key` groups sketches of the same knot type as
+// far as cheap invariants tell ("same invariants as"): component count, Jones polynomial,
+// determinant and signature, so a knot drawn with more crossings still matches.
 import { createHash } from 'node:crypto';
 import type { Diagram as StoredDiagram } from '@/shared/api/sketches';
 import { diagram } from '@/shared/knot/diagram';
+import { linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
 import { jones } from '@/shared/knot/jones';
 import { orient } from '@/shared/knot/pd';
 
@@ -38,6 +40,6 @@ export function summarise(d: Pick<StoredDiagram, 'pd' | 'unknots'>): Summary {
   if (crossings > feedJonesMaxCrossings) return { ...none, components };
   const v = jones(dg);
   const json = JSON.stringify(v.toJSON());
-  const key = createHash('sha256').update(`${crossings}|${json}`).digest('hex');
+  const key = createHash('sha256').update(`${components}|${json}|${linkDeterminant(dg)}|${linkSignature(dg)}`).digest('hex');
   return { crossings, components, jones: json, jonesText: v.format('t', 'unicode'), key };
 }

@@ -98,15 +98,20 @@ async function refsOf(deps: Deps, rows: Pick<Sketch, 'id' | 'title' | 'ownerId'>
   return rows.map((r) => ({ id: r.id, title: r.title, owner: { id: r.ownerId, displayName: users.get(r.ownerId)?.displayName ?? 'Former member' } }));
 }
 
+/** The page lists this many; it says how many there are in all. */
+export const SAME_INVARIANTS_SHOWN = 10;
+
 /**
- * Other live sketches of the group whose crossing count and Jones polynomial equal this one's,
- * or with a finished run giving the same Khovanov Poincare polynomial.
+ * Other live sketches of the group with the same knot-type invariants (invariants.ts: components,
+ * Jones, determinant, signature), or with a finished run giving the same Khovanov Poincare
+ * polynomial: the first SAME_INVARIANTS_SHOWN and how many in all.
  */
-async function sameInvariants(deps: Deps, groupId: string, s: Sketch, key: string | null): Promise<SketchRef[]> {
+async function sameInvariants(deps: Deps, groupId: string, s: Sketch, key: string | null): Promise<{ refs: SketchRef[]; total: number }> {
   const others = (await repo.groupSketchVersions(deps.db, groupId)).filter((o) => o.id !== s.id);
   const inv = key ? await summariesFor(deps, others) : new Map<string, SketchInvariant>();
   const kh = await sameKhovanov(deps.db, s.id, others.map((o) => o.id));
-  return refsOf(deps, others.filter((o) => (key && inv.get(o.id)?.key === key) || kh.has(o.id)));
+  const same = others.filter((o) => (key && inv.get(o.id)?.key === key) || kh.has(o.id));
+  return { refs: await refsOf(deps, same.slice(0, SAME_INVARIANTS_SHOWN)), total: same.length };
 }
 
 async function forkedFrom(deps: Deps, caller: User, sketchId: string): Promise<SketchRef | null> {
@@ -131,7 +136,7 @@ export async function groupSketch(deps: Deps, caller: User, groupId: string, ske
     photos: [...((await attachmentPhotos(deps, [s])).get(s.id) ?? []), ...(await photoDtos(deps, await photosOf(deps.db, s.id)))],
     comments: await commentDtos(deps, await commentsOn(deps.db, s.id, groupId)),
     forkedFrom: await forkedFrom(deps, caller, s.id),
-    sameInvariants: await sameInvariants(deps, groupId, s, key),
+    ...(await sameInvariants(deps, groupId, s, key).then(({ refs, total }) => ({ sameInvariants: refs, sameInvariantsTotal: total }))),
     myRole: role,
     can: { comment: canPost(role), moderate: canModerate(role), uploadPhoto: canPost(role), fork: true, unshare: isOwner || canModerate(role) },
   };

@@ -102,8 +102,10 @@ export const GroupSketch = FeedItem.extend({
   comments: z.array(Comment),
   /** The sketch this one was forked from, when the caller may still see it. */
   forkedFrom: SketchRef.nullable(),
-  /** Other sketches in this group with the same Jones polynomial and crossing count. */
+  /** Other sketches in this group with the same knot-type invariants or Khovanov result (the first ten). */
   sameInvariants: z.array(SketchRef),
+  /** How many such sketches there are in all. */
+  sameInvariantsTotal: z.int(),
   myRole: Role,
   can: GroupSketchAbilities,
 });

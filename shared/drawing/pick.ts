@@ -43,3 +43,9 @@ export function arrowOf(a: Analysis, path: DrawnPath): { at: Point; direction: P
   const len = Math.hypot(d.x, d.y) || 1;
   return { at: path.points[i], direction: scale(d, (path.reversed ? -1 : 1) / len) };
 }
+
+/** The three corners of an arrowhead at `at` along the unit vector `dir`: the tip `length` ahead, 1.5 lengths long. */
+export function arrowHead(at: Point, dir: Point, length: number): Point[] {
+  const corners: [number, number][] = [[1, 0], [-0.5, 0.75], [-0.5, -0.75]];
+  return corners.map(([u, v]) => ({ x: at.x + length * (dir.x * u - dir.y * v), y: at.y + length * (dir.y * u + dir.x * v) }));
+}

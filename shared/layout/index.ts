@@ -3,3 +3,4 @@
 export { layoutPD } from './layout';
 export type { LinkLayout, LayoutCrossing, LayoutOptions } from './layout';
 export { layoutToSketch } from './to-sketch';
+export { closedBraidSketch } from './closed-braid';

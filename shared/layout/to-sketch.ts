@@ -6,10 +6,10 @@
 import { analyse } from '@/shared/drawing/analyse';
 import { dist } from '@/shared/drawing/point';
 import { addPath, emptySketch, flipCrossing, setFraming, Sketch } from '@/shared/drawing/sketch';
-import { LinkLayout } from './layout';
+import { LayoutCrossing, LinkLayout } from './layout';
 
 /** The layout as a Sketch, analysed with the default drawing options (those the layout was checked with). */
-export function layoutToSketch(layout: LinkLayout, framings: readonly (number | null)[] = []): Sketch {
+export function layoutToSketch(layout: Pick<LinkLayout, 'paths'> & { crossings: readonly Pick<LayoutCrossing, 'at' | 'sign'>[] }, framings: readonly (number | null)[] = []): Sketch {
   let s = layout.paths.reduce((acc, path) => addPath(acc, path, true), emptySketch);
   const ids = s.components.map((c) => c.id);
   framings.forEach((f, k) => {

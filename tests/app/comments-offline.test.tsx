@@ -36,7 +36,9 @@ function renderThread() {
 }
 
 async function post(body: string) {
-  fireEvent.changeText(await screen.findByPlaceholderText(/Write a comment/), body);
+  // The box and its button have names of their own, so a screen reader tells them apart.
+  fireEvent.changeText(await screen.findByLabelText('Comment'), body);
+  expect(screen.getAllByLabelText('Post comment')).toHaveLength(1); // the button only
   await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Post comment' })));
 }
 

@@ -1,7 +1,7 @@
 // The invitation page (app/invite/[token].tsx) in Expo Router's test renderer: what each state
 // of a link says, and accepting when signed in.
 import { Slot } from 'expo-router';
-import { fireEvent, renderRouter, screen } from 'expo-router/testing-library';
+import { fireEvent, renderRouter, screen, waitFor } from 'expo-router/testing-library';
 import { QueryClientProvider } from '@tanstack/react-query';
 import InvitationScreen from '@/app/invite/[token]';
 import { queryClient } from '@/lib/query-client';
@@ -60,9 +60,18 @@ test('signed out: shows group and role, and the ways to sign up or sign in', asy
 
 test('signed in: accept posts to the accept route and confirms', async () => {
   useSession.setState({ status: 'signedIn', token: 'tok', user: { id: 'u2', email: 'bo@uni.example', displayName: 'Bo' } });
-  const calls = open((c) => (c.method === 'POST' ? { status: 200, body: { id: 'g1', name: 'Knot seminar', role: 'member' } } : preview('pending')));
+  let accepted = false;
+  const calls = open((c) => {
+    if (c.method !== 'POST') return preview(accepted ? 'accepted' : 'pending');
+    accepted = true;
+    return { status: 200, body: { id: 'g1', name: 'Knot seminar', role: 'member' } };
+  });
   fireEvent.press(await screen.findByRole('button', { name: 'Accept and join' }));
   expect(await screen.findByText('You joined Knot seminar')).toBeOnTheScreen();
+  // The preview read again after my accept says "accepted": that is no "already used" for me.
+  await waitFor(() => expect(calls.filter((c) => c.method === 'GET')).toHaveLength(2));
+  expect(screen.getByText('You joined Knot seminar')).toBeOnTheScreen();
+  expect(screen.queryByText('This invitation was already used')).toBeNull();
   expect(calls.find((c) => c.method === 'POST')).toEqual({ method: 'POST', path: '/api/invitations/tok123/accept', body: undefined, auth: 'Bearer tok' });
 });
 

@@ -1,6 +1,8 @@
 // The keyboard shortcut registry (components/shell/shortcuts.ts): sequences, single keys, the
-// last registered list winning, unregistering.
+// last registered list winning, unregistering; the sheet's names for Ctrl/Cmd keys.
+import { render, screen } from '@testing-library/react-native';
 import { liveShortcuts, registerShortcuts, step, useShortcutRegistry, type Shortcut } from '@/components/shell/shortcuts';
+import { ShortcutSheet } from '@/components/shell/ShortcutSheet';
 
 const sc = (keys: string, label = keys): Shortcut => ({ keys, label, area: 'Test', run: jest.fn() });
 
@@ -32,5 +34,20 @@ describe('the registry', () => {
     expect(live.map((s) => s.label).sort()).toEqual(['Filter by tag', 'Sketches']);
     off();
     expect(liveShortcuts(useShortcutRegistry.getState().live).map((s) => s.label).sort()).toEqual(['Filter (global)', 'Sketches']);
+  });
+});
+
+describe('Ctrl/Cmd keys', () => {
+  afterEach(() => useShortcutRegistry.setState({ live: [] }));
+
+  it('are listed in the sheet as Ctrl/Cmd+... but never run by the host', () => {
+    const list = [sc('Mod+z', 'Undo'), sc('Mod+Shift+z', 'Redo'), sc('z', 'Zoom')];
+    registerShortcuts(list);
+    render(<ShortcutSheet onClose={() => undefined} />);
+    expect(screen.getByText('Ctrl/Cmd+Z')).toBeTruthy();
+    expect(screen.getByText('Ctrl/Cmd+Shift+Z')).toBeTruthy();
+    expect(screen.getByText('Undo')).toBeTruthy();
+    // A plain z is its own key; the host meets Ctrl/Cmd+Z never (it skips modified keys).
+    expect(step(list, '', 'z')).toEqual({ kind: 'run', shortcut: list[2] });
   });
 });

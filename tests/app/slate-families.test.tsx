@@ -67,3 +67,19 @@ test('bad parameters and a missing sketch are explained', () => {
   expect(screen.getByText(/Draw or paste a link first/)).toBeOnTheScreen();
   expect(onDraw).not.toHaveBeenCalled();
 });
+
+test('a torus link comes with its braid word (for the closed-braid picture), inverted when mirrored', () => {
+  const onDraw = setup(null);
+  fireEvent.changeText(field('p (strands)'), '3');
+  fireEvent.changeText(field('q (turns)'), '4');
+  press('Draw it', 'button');
+  // T(3,4) is the closure of (sigma1 sigma2)^4 (shared/knot/families/torus.ts, common practice).
+  const [d, braid] = onDraw.mock.calls[0];
+  expect(braid).toEqual([1, 2, 1, 2, 1, 2, 1, 2]);
+  expect(jones(fromBraid(braid)).toString()).toBe(jones(d).toString());
+  press('Mirror image');
+  press('Draw it', 'button');
+  const [m, inverse] = onDraw.mock.calls[1];
+  expect(inverse).toEqual([-1, -2, -1, -2, -1, -2, -1, -2]);
+  expect(jones(fromBraid(inverse)).toString()).toBe(jones(m).toString());
+});

@@ -158,7 +158,7 @@ test('the shared page shows Bruno the framing, the component numbers and the lin
 });
 
 test('a comment with $TeX$ is typeset', async () => {
-  await brunoPage.getByRole('textbox', { name: 'Post comment' }).fill('So $\\mathrm{lk}(K_1, K_2) = \\pm 1$ here.');
+  await brunoPage.getByRole('textbox', { name: 'Comment', exact: true }).fill('So $\\mathrm{lk}(K_1, K_2) = \\pm 1$ here.');
   await brunoPage.getByRole('button', { name: 'Post comment' }).click();
   const math = brunoPage.getByRole('math', { name: '\\mathrm{lk}(K_1, K_2) = \\pm 1' });
   await math.waitFor();

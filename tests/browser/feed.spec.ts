@@ -74,7 +74,7 @@ test('Bruno sees it in the feed, comments and forks it', async () => {
   await shoot(brunoPage, '21-feed-list');
   await card.click();
   await brunoPage.getByRole('heading', { name: title }).waitFor();
-  await brunoPage.getByRole('textbox', { name: 'Post comment' }).fill('Is this the **positive** trefoil? Check `X[1,5,2,4]`.');
+  await brunoPage.getByRole('textbox', { name: 'Comment', exact: true }).fill('Is this the **positive** trefoil? Check `X[1,5,2,4]`.');
   await brunoPage.getByRole('button', { name: 'Post comment' }).click();
   await brunoPage.getByText('Discussion · 1').waitFor();
   await brunoPage.getByText('positive', { exact: true }).waitFor(); // the bold span, rendered as text

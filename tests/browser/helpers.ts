@@ -2,7 +2,7 @@
 // from run.mjs, screenshots at the two sizes the app is designed for, and test accounts.
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import { chromium, type Browser, type CDPSession, type Page } from 'playwright-core';
 
 export const baseUrl = process.env.BROWSER_BASE_URL ?? '';
 if (!baseUrl) throw new Error('Run the browser specs with `npm run test:browser` (it starts the server).');
@@ -110,4 +110,16 @@ export async function newTitledSketch(page: Page, title: string): Promise<void> 
   await page.getByRole('textbox', { name: 'Title' }).fill(title);
   await page.getByRole('button', { name: 'Save details' }).click();
   await page.getByRole('heading', { name: title }).waitFor();
+}
+
+/** A new account signed in on a phone with touch; `touch` sends raw touch events (CDP). */
+export async function phoneWithTouch(who: Person, timeoutMs: number): Promise<{ browser: Browser; page: Page; touch: CDPSession }> {
+  await register(who);
+  const browser = await launch();
+  const context = await browser.newContext({ viewport: PHONE, hasTouch: true, isMobile: true });
+  context.setDefaultTimeout(timeoutMs);
+  const page = await context.newPage();
+  const touch = await context.newCDPSession(page);
+  await signIn(page, who);
+  return { browser, page, touch };
 }

@@ -124,6 +124,29 @@ test('offline, a small diagram is computed on the device in a web worker', async
   }
 }, 90_000);
 
+test('on the device, s of a knot with its slice-genus bounds; a link is told s is for knots', async () => {
+  await page.goto(baseUrl + '/runs');
+  await page.getByRole('heading', { name: 'Runs', exact: true }).waitFor();
+  await page.getByRole('radio', { name: 'Braid word' }).click();
+  await page.getByLabel('Braid word').fill('-1 -1 -1');
+  await page.getByRole('radio', { name: 'Q', exact: true }).click();
+  await page.getByRole('radio', { name: 'Khovanov homology' }).click();
+  const alsoS = page.getByRole('checkbox', { name: 'Also compute s' });
+  if ((await alsoS.getAttribute('aria-checked')) !== 'true') await alsoS.click();
+  await page.getByRole('button', { name: /Compute on this device/ }).click();
+  // The closure of [-1,-1,-1] is the negative trefoil: s = -2 (the positive one has s = 2,
+  // docs/conventions.md, and s of a mirror is -s, Rasmussen 2004, math/0402131), signature +2.
+  const s = page.getByTestId('local-s');
+  await s.getByText('s = -2 over Q (Rasmussen)').waitFor({ timeout: 30_000 });
+  await s.getByText('Slice genus ≥ 1: |s|/2 = 1, |σ|/2 = 1, the same bound').waitFor();
+  await s.scrollIntoViewIfNeeded();
+  await shoot(page, 'runs-08-on-device-s');
+  // The closure of [1,1] is the Hopf link, two components (docs/conventions.md, Braid word).
+  await page.getByLabel('Braid word').fill('1 1');
+  await page.getByRole('button', { name: /Compute on this device/ }).click();
+  await page.getByText('s is defined for knots here; this diagram is a link.').waitFor({ timeout: 30_000 });
+}, 90_000);
+
 test('from a sketch on the server: the Slate opens Runs with the sketch, the run carries its title', async () => {
   const post = (path: string, body: unknown, token?: string) =>
     fetch(baseUrl + path, { method: 'POST', headers: { 'Content-Type': 'application/json', ...(token && { Authorization: `Bearer ${token}` }) }, body: JSON.stringify(body) });

@@ -90,7 +90,7 @@ test('Bruno sees it in the Feed, writes a comment offline; it waits on his devic
   await brunoPage.getByRole('heading', { name: TITLE }).waitFor();
 
   await brunoContext.setOffline(true);
-  await brunoPage.getByRole('textbox', { name: 'Post comment' }).fill(COMMENT);
+  await brunoPage.getByRole('textbox', { name: 'Comment', exact: true }).fill(COMMENT);
   await brunoPage.getByRole('button', { name: 'Post comment' }).click();
   await brunoPage.getByText('Waiting to send').waitFor();
   await brunoPage.getByText('positive', { exact: true }).waitFor(); // formatted while waiting

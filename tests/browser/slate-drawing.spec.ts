@@ -2,7 +2,7 @@
 // is trimmed, a circle traced twice is refused with a warning, Alternate turns a drawn trefoil
 // into the trefoil, and the canvas numbers the components in drawing order as the Readout does.
 import type { Browser, CDPSession, Page } from 'playwright-core';
-import { PHONE, baseUrl, launch, person, register, shoot, signIn } from './helpers';
+import { baseUrl, person, phoneWithTouch, shoot } from './helpers';
 
 const who = person('Tomas Touch', 'tomas.touch', 'chalk and board 6');
 
@@ -31,13 +31,7 @@ const settled = (p: Page) => p.waitForFunction(() => document.querySelectorAll('
 const count = (text: string) => page.getByTestId('readout-crossings-count').getByText(text).waitFor();
 
 beforeAll(async () => {
-  await register(who);
-  browser = await launch();
-  const context = await browser.newContext({ viewport: PHONE, hasTouch: true, isMobile: true });
-  context.setDefaultTimeout(15_000);
-  page = await context.newPage();
-  touch = await context.newCDPSession(page);
-  await signIn(page, who);
+  ({ browser, page, touch } = await phoneWithTouch(who, 15_000));
 });
 
 afterAll(async () => {

@@ -281,15 +281,30 @@ test('framing badge, move and reshape drags, and the exports', async () => {
   await page.waitForTimeout(300);
   expect((await strand.boundingBox())!.width).toBeGreaterThan(reshaped.width * 1.5);
 
-  for (const [label, ext, start] of [['Export SVG', '.svg', '<svg'], ['Export TikZ', '.tex', '\\begin{tikzpicture}']] as const) {
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: label }).click()]);
-    expect(download.suggestedFilename()).toBe(`sketch${ext}`);
+  const download = async (label: string, name: string) => {
+    const [file] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: label }).click()]);
+    expect(file.suggestedFilename()).toBe(name);
     const chunks: Buffer[] = [];
-    for await (const chunk of (await download.createReadStream())!) chunks.push(chunk as Buffer);
-    expect(Buffer.concat(chunks).toString('utf8').startsWith(start)).toBe(true);
-  }
+    for await (const chunk of (await file.createReadStream())!) chunks.push(chunk as Buffer);
+    return Buffer.concat(chunks).toString('utf8');
+  };
+  expect((await download('Export SVG', 'sketch.svg')).startsWith('<svg')).toBe(true);
+  expect((await download('Export TikZ', 'sketch.tex')).startsWith('\\begin{tikzpicture}')).toBe(true);
   const [png] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export PNG' }).click()]);
   expect(png.suggestedFilename()).toBe('sketch.png');
+
+  // With every option the files carry the arrow, "1: +2" and a document of their own.
+  for (const option of ['Orientation arrows', 'Component numbers', 'Framings', 'TikZ as a LaTeX document']) {
+    await page.getByRole('checkbox', { name: option }).click();
+    await page.getByRole('checkbox', { name: option, checked: true }).waitFor();
+  }
+  const svg = await download('Export SVG', 'sketch.svg');
+  expect(svg).toMatch(/<text[^>]*>1: \+2<\/text>/);
+  expect(svg).toMatch(/ Z" fill=/);
+  const tikz = await download('Export TikZ', 'sketch.tex');
+  expect(tikz.startsWith('\\documentclass[border=2mm]{standalone}')).toBe(true);
+  expect(tikz).toContain('{$1\\colon +2$};');
+  expect(tikz).toMatch(/\\fill\[black\]/);
   await shoot(page, 'slate-framed');
 });
 

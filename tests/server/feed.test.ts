@@ -5,6 +5,8 @@ import { FeedPage, ForkResponse, GroupSketch, ShareResponse } from '@/shared/api
 import type { RunningServer } from '@/server/server';
 import { api, auth, castServer, everyone, memberWrite, sketchOf, summarisedFeed, type Cast, type Who } from './feed-fixtures';
 import { pullAll } from './sync-fixtures';
+import { fromBraid } from '@/shared/knot/braid';
+import { SAME_INVARIANTS_SHOWN } from '@/server/feed/use-cases';
 
 let server: RunningServer;
 let c: Cast;
@@ -145,6 +147,31 @@ describe('the feed', () => {
     expect(GroupSketch.parse((await page('member', a)).body).can).toMatchObject({ comment: true, moderate: false, unshare: false });
     expect((await page('outsider', a)).status).toBe(404);
     expect((await page('outsider', a, c.otherGroup)).status).toBe(404); // a sketch of another group through my own group
+  });
+});
+
+describe('same invariants as', () => {
+  it('finds the same knot drawn with more crossings, not its mirror; lists ten and counts all', async () => {
+    const stroke = (over: object) => sketchOf(server, c.as.member, { groupId: c.group, ...over });
+    // The closure of [1,1,1,2] on 3 strands is the positive trefoil again (a Markov stabilisation
+    // of [1,1,1], Markov's theorem), drawn with 4 crossings; [-1,-1,-1] closes to its mirror
+    // (docs/conventions.md, Braid word).
+    const { pd: stabilised } = fromBraid([1, 1, 1, 2], 3);
+    const { pd: mirrored } = fromBraid([-1, -1, -1]);
+    const drawn = (pd: readonly (readonly number[])[]) => ({ ...trefoil, pd: pd.map((x) => [...x] as [number, number, number, number]) });
+    const first = await stroke({ title: 'Trefoil, three crossings', diagram: trefoil });
+    const bigger = await stroke({ title: 'Trefoil, four crossings', diagram: drawn(stabilised) });
+    const mirror = await stroke({ title: 'Left trefoil', diagram: drawn(mirrored) });
+    const page = async (id: string) => GroupSketch.parse((await api(server).get(`/api/groups/${c.group}/feed/${id}`).set(auth(c.as.member))).body);
+    const same = (await page(first)).sameInvariants.map((r) => r.id);
+    expect(same).toContain(bigger);
+    expect(same).not.toContain(mirror);
+    for (let k = 0; k < SAME_INVARIANTS_SHOWN; k++) await stroke({ title: `Trefoil copy ${k}`, diagram: trefoilShifted });
+    const crowded = await page(bigger);
+    expect(crowded.sameInvariants).toHaveLength(SAME_INVARIANTS_SHOWN);
+    // This group's other trefoils: the earlier tests' (the fixture's default diagram is one too) and these.
+    expect(crowded.sameInvariantsTotal).toBeGreaterThan(SAME_INVARIANTS_SHOWN);
+    expect((await page(mirror)).sameInvariantsTotal).toBe(0);
   });
 });
 

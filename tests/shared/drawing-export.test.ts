@@ -72,6 +72,56 @@ describe('export', () => {
   });
 });
 
+describe('export marks', () => {
+  const a = analyse(hopf);
+  const labels = [{ number: 1, framing: -1 }, { number: 2 }];
+  const svgArrows = (svg: string) => [...svg.matchAll(/<path d="M([-\d.]+) ([-\d.]+) L[^"]* Z" fill="([^"]+)"/g)];
+
+  test('SVG: an arrowhead per closed component, pointing along its orientation, in its colour', () => {
+    const svg = toSVG(a, { colors: ['red', 'blue'], marks: { arrows: true } });
+    const heads = svgArrows(svg);
+    expect(heads.map((h) => h[3])).toEqual(['red', 'blue']);
+    a.paths.forEach((path, i) => {
+      const arrow = arrowOf(a, path);
+      const tip = { x: Number(heads[i][1]), y: Number(heads[i][2]) };
+      // The tip lies ahead of the arrow's point along the direction of travel.
+      expect((tip.x - arrow.at.x) * arrow.direction.x + (tip.y - arrow.at.y) * arrow.direction.y).toBeGreaterThan(5);
+    });
+    expect(svg).not.toContain('<text');
+    const back = analyse(reverseComponent(hopf, hopf.components[0].id));
+    const flipped = svgArrows(toSVG(back, { marks: { arrows: true } }))[0];
+    const before = arrowOf(a, a.paths[0]);
+    // Reversed, the first component's arrow points back against its old direction of travel.
+    expect((Number(flipped[1]) - before.at.x) * before.direction.x + (Number(flipped[2]) - before.at.y) * before.direction.y).toBeLessThan(-5);
+  });
+
+  test('SVG: "number: framing" labels beside the strand, a true minus sign, room for them in the picture', () => {
+    const svg = toSVG(a, { marks: { labels } });
+    const texts = [...svg.matchAll(/<text x="([-\d.]+)" y="([-\d.]+)"[^>]*>([^<]*)<\/text>/g)];
+    expect(texts.map((t) => t[3])).toEqual(['1: \u22121', '2']);
+    for (const [i, t] of texts.entries()) {
+      const arrow = arrowOf(a, a.paths[i]);
+      const at = { x: Number(t[1]), y: Number(t[2]) };
+      // On the left of travel (y down: left of direction (dx, dy) is (dy, -dx)), off the strand.
+      expect((at.x - arrow.at.x) * arrow.direction.y - (at.y - arrow.at.y) * arrow.direction.x).toBeGreaterThan(10);
+      expect(Math.min(...a.paths.flatMap((p) => p.points).map((p) => dist(p, at)))).toBeGreaterThan(8);
+    }
+    const box = (s: string) => s.match(/viewBox="([-\d.]+) ([-\d.]+) ([-\d.]+) ([-\d.]+)"/)!.slice(1).map(Number);
+    expect(box(svg)[2]).toBeGreaterThan(box(toSVG(a))[2]);
+  });
+
+  test('TikZ: filled arrowheads and math-mode labels; standalone wraps a LaTeX document', () => {
+    const tikz = toTikZ(a, { colors: ['red', 'blue'], marks: { arrows: true, labels } });
+    expect(tikz.match(/\\fill\[(red|blue)\] \([^)]*\) -- \([^)]*\) -- \([^)]*\) -- cycle;/g)).toHaveLength(2);
+    expect(tikz).toContain('{$1\\colon -1$};');
+    expect(tikz).toContain('{$2$};');
+    expect(tikz.startsWith('\\begin{tikzpicture}')).toBe(true);
+    const doc = toTikZ(a, { marks: { arrows: true, labels }, standalone: true }).split('\n');
+    expect(doc.slice(0, 3)).toEqual(['\\documentclass[border=2mm]{standalone}', '\\usepackage{tikz}', '\\begin{document}']);
+    expect(doc.slice(-2)).toEqual(['\\end{tikzpicture}', '\\end{document}']);
+  });
+});
+
 describe('picking', () => {
   const a = analyse(hopf);
 

@@ -2,12 +2,14 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { useLocalSearchParams } from 'expo-router';
 import { useLocalSketch } from '@/hooks/queries/useLocalSketches';
+import { useDropIfEmpty } from '@/hooks/useDropIfEmpty';
 import { SlateScreen } from '@/components/slate/SlateScreen';
 import { colors, space, type } from '@/constants/theme';
 
 export default function SketchRoute() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const sketch = useLocalSketch(id);
+  useDropIfEmpty(id);
   if (sketch.data) return <SlateScreen sketch={sketch.data} />;
   return (
     <View style={styles.pane}>

@@ -1,9 +1,11 @@
-// A new, empty sketch in the device store, then its Slate (replacing this route in history).
+// A new, empty sketch in the device store, then its Slate (replacing this route in history);
+// left empty, the Slate removes it again.
 import { useEffect, useRef } from 'react';
 import { View } from 'react-native';
 import { router } from 'expo-router';
 import { useSketchWrites } from '@/hooks/queries/useLocalSketches';
 import { useDevice } from '@/hooks/useDevice';
+import { markFresh } from '@/lib/slate/fresh';
 import { Banner } from '@/components/ui/Banner';
 import { colors, space } from '@/constants/theme';
 
@@ -14,7 +16,12 @@ export default function NewSketch() {
   useEffect(() => {
     if (!device || started.current) return;
     started.current = true;
-    create.mutate({}, { onSuccess: (s) => router.replace(`/sketches/${s.id}`) });
+    create.mutate({}, {
+      onSuccess: (s) => {
+        markFresh(s.id); // removed again if nothing is put in it (lib/slate/fresh.ts)
+        router.replace(`/sketches/${s.id}`);
+      },
+    });
   }, [device, create]);
   return (
     <View style={{ flex: 1, padding: space.xl, backgroundColor: colors.paper }}>
