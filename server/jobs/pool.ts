@@ -26,14 +26,19 @@ export interface JobPool {
   destroy(): Promise<void>;
 }
 
-export function createJobPool(limits: JobLimits): JobPool {
-  const pool = new Piscina({
-    filename: join(__dirname, 'worker.mjs'),
+/** Threads started on demand and ended after 30 s idle, each heap capped: the job pool's and the runs'. */
+export function threadPool(filename: string, limits: { threads: number; maxMemoryMb: number }): Piscina {
+  return new Piscina({
+    filename,
     minThreads: 0,
     maxThreads: limits.threads,
     idleTimeout: 30_000,
     resourceLimits: { maxOldGenerationSizeMb: limits.maxMemoryMb },
   });
+}
+
+export function createJobPool(limits: JobLimits): JobPool {
+  const pool = threadPool(join(__dirname, 'worker.mjs'), limits);
   return {
     async run(name, input) {
       const signal = AbortSignal.timeout(limits.maxWallMs);

@@ -2,7 +2,7 @@
 // thread's heap capped by config.runs.maxMemoryMb.
 import { join } from 'node:path';
 import { MessageChannel } from 'node:worker_threads';
-import Piscina from 'piscina';
+import { threadPool } from '../jobs/pool';
 import type { RunDiagram } from '@/shared/api/runs';
 import type { Progress } from '@/shared/khovanov';
 import type { RunLimits } from './limits';
@@ -30,13 +30,7 @@ export function isOutOfMemory(err: unknown): boolean {
 }
 
 export function createRunPool(limits: RunLimits): RunPool {
-  const pool = new Piscina({
-    filename: join(__dirname, 'worker.mjs'),
-    minThreads: 0,
-    maxThreads: limits.threads,
-    idleTimeout: 30_000,
-    resourceLimits: { maxOldGenerationSizeMb: limits.maxMemoryMb },
-  });
+  const pool = threadPool(join(__dirname, 'worker.mjs'), limits);
   return {
     async run({ diagram, ring, reduced, computeS, onProgress, signal }) {
       const { port1, port2 } = new MessageChannel();

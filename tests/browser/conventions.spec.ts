@@ -35,5 +35,6 @@ test('the name line tells the chirality of 3_1 and the Readout opens the convent
   const sheet = page.getByRole('dialog', { name: 'Conventions' });
   await sheet.getByText(/Positive knots have negative signature: the positive trefoil has signature −2/).waitFor();
   await sheet.getByText(/3_1 is the positive trefoil/).waitFor();
+  expect(await sheet.innerText()).toMatch(/Components are numbered in drawing order/);
   await shoot(page, 'conventions-01-sheet');
 });

@@ -123,3 +123,13 @@ export async function phoneWithTouch(who: Person, timeoutMs: number): Promise<{ 
   await signIn(page, who);
   return { browser, page, touch };
 }
+
+export type ScreenPoint = { x: number; y: number };
+
+/** One finger stroke: down at the first point, a move per further point, up at the last. */
+export async function swipe(touch: CDPSession, points: ScreenPoint[]): Promise<void> {
+  const at = (p: ScreenPoint) => [{ x: Math.round(p.x), y: Math.round(p.y) }];
+  await touch.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: at(points[0]) });
+  for (const p of points.slice(1)) await touch.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: at(p) });
+  await touch.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
+}

@@ -3,7 +3,7 @@
 // bands to the 3-component unlink: c = b + 1, shared/knot/bands/certificate.ts). A half twist
 // on a band between antiparallel strands would make a Moebius band: it is refused with the reason.
 import type { Browser, CDPSession, Page } from 'playwright-core';
-import { PHONE, baseUrl, call, launch, person, shoot, signIn } from './helpers';
+import { baseUrl, person, phoneWithTouch, shoot, swipe as fingerSwipe, type ScreenPoint } from './helpers';
 
 const who = person('Bea Bands', 'bea.bands', 'ribbon and disk 4');
 
@@ -11,25 +11,14 @@ let browser: Browser;
 let page: Page;
 let touch: CDPSession;
 
-type P = { x: number; y: number };
+type P = ScreenPoint;
 
-async function swipe(points: P[]) {
-  const at = (p: P) => [{ x: Math.round(p.x), y: Math.round(p.y) }];
-  await touch.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: at(points[0]) });
-  for (const p of points.slice(1)) await touch.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: at(p) });
-  await touch.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
-}
+const swipe = (points: P[]) => fingerSwipe(touch, points);
 
 const line = (p: P, q: P, n = 24): P[] => Array.from({ length: n + 1 }, (_, i) => ({ x: p.x + ((q.x - p.x) * i) / n, y: p.y + ((q.y - p.y) * i) / n }));
 
 beforeAll(async () => {
-  await call('POST', '/api/auth/register', null, { email: who.email, password: who.password, displayName: who.name });
-  browser = await launch();
-  const context = await browser.newContext({ viewport: PHONE, hasTouch: true, isMobile: true });
-  context.setDefaultTimeout(20_000);
-  page = await context.newPage();
-  touch = await context.newCDPSession(page);
-  await signIn(page, who);
+  ({ browser, page, touch } = await phoneWithTouch(who, 20_000));
 });
 
 afterAll(async () => {
@@ -56,6 +45,7 @@ test('an unknot with two bands across it: 3-component unlink, ribbon', async () 
 
   await page.getByRole('button', { name: 'After the bands' }).click();
   await page.getByTestId('after-bands').getByText('After the bands · 3 components').waitFor();
+  expect(await page.getByTestId('after-bands').innerText()).toContain('3 components');
   await shoot(page, 'slate-bands-after');
   await page.getByRole('button', { name: 'After the bands' }).click();
 

@@ -2,7 +2,7 @@
 // is trimmed, a circle traced twice is refused with a warning, Alternate turns a drawn trefoil
 // into the trefoil, and the canvas numbers the components in drawing order as the Readout does.
 import type { Browser, CDPSession, Page } from 'playwright-core';
-import { baseUrl, person, phoneWithTouch, shoot } from './helpers';
+import { baseUrl, person, phoneWithTouch, shoot, swipe as fingerSwipe, type ScreenPoint } from './helpers';
 
 const who = person('Tomas Touch', 'tomas.touch', 'chalk and board 6');
 
@@ -10,15 +10,9 @@ let browser: Browser;
 let page: Page;
 let touch: CDPSession;
 
-type P = { x: number; y: number };
+type P = ScreenPoint;
 
-/** One finger stroke: down at the first point, a move per further point, up at the last. */
-async function swipe(points: P[]) {
-  const at = (p: P) => [{ x: Math.round(p.x), y: Math.round(p.y) }];
-  await touch.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: at(points[0]) });
-  for (const p of points.slice(1)) await touch.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: at(p) });
-  await touch.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
-}
+const swipe = (points: P[]) => fingerSwipe(touch, points);
 
 async function newSketch(): Promise<{ c: P; box: { width: number; height: number } }> {
   await page.goto(baseUrl + '/sketches/new');
