@@ -6,6 +6,10 @@ module.exports = {
   // 5 s per test (the default) is tight for rendering and server tests on a busy 2-core CI
   // machine; a test that hangs still fails, after 60 s.
   testTimeout: 60_000,
+  // On a 2-core machine Jest runs the files in its own process (one worker), where a handle a
+  // suite leaves open (a spawned worker process, a Redis connection) would keep `npm test`
+  // waiting for ever after the last test: exit once the results are in.
+  forceExit: true,
   reporters: ['default', ['<rootDir>/tests/summary-reporter.js', { label: 'unit' }]],
   projects: [
     {

@@ -1,7 +1,11 @@
 // Component tests: device storage in memory (RNTL 13 registers its matchers itself).
 
+import { configure } from '@testing-library/react-native';
+
 // The first render of a file loads React Native and the app modules: seconds on a busy machine.
 jest.setTimeout(20_000);
+// waitFor / findBy give a busy machine 5 s, not 1 s, before they fail.
+configure({ asyncUtilTimeout: 5_000 });
 
 jest.mock('expo-sqlite/kv-store', () => {
   const items = new Map<string, string>();
