@@ -184,7 +184,8 @@ test('details are saved and shown in the sketchbook; shortcuts undo on a wide sc
   const photo = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#2a3b44' } }).png().toBuffer();
   const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Choose a file' }).click()]);
   await chooser.setFiles({ name: 'board.png', mimeType: 'image/png', buffer: photo });
-  await page.getByRole('img', { name: 'Board photo' }).waitFor();
+  // The device reads and stores the photo before it shows it: give a busy machine 30 s.
+  await page.getByRole('img', { name: 'Board photo' }).waitFor({ timeout: 30_000 });
   await shoot(page, 'slate-details');
   await page.getByRole('button', { name: 'Save details' }).click();
   await page.getByRole('heading', { name: 'T(2,4) from the seminar' }).waitFor();
