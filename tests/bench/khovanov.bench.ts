@@ -6,7 +6,9 @@
 // is sampled once at its end, a lower bound of its peak.
 // Then cables at research scale, each run once and stopped after CAP_S seconds
 // ("over" the cap then), with peak rss, widest open boundary, most objects, and the Euler check
-// (q + q^-1) V of every result.
+// (q + q^-1) V of every result. KH_ONLY=<text> runs only the cable items whose name (with its
+// ring, e.g. "T(8,8) over Q") contains that text, the sweep for "sweep" and the first part for
+// "goals", so one item can be measured alone.
 
 import { khovanov, KhCancelled, KhRing, Progress } from '@/shared/khovanov';
 import { cubeKhovanov } from '@/shared/khovanov/cube';
@@ -21,6 +23,8 @@ import { randomWord } from '@/tests/shared/khovanov-fixtures';
 import type { Line } from './timing';
 
 const MB = 1024 * 1024;
+
+const wanted = (name: string): boolean => process.env.KH_ONLY === undefined || name.includes(process.env.KH_ONLY);
 
 // Sampling memory reads /proc (about 0.3 ms a call, 5 ms of a 25 ms run), so runs that report
 // no memory are timed without it.
@@ -116,7 +120,8 @@ export function cableBench(): Line[] {
     ['(4,0)-cable of the blackboard trefoil', cable(trefoil, 0, 4, 0), 'Z', '<= 300 s'],
     ...twoComponentBraids(2).map((w, k): [string, Diagram, KhRing] => [`seeded 2-component 6-strand braid ${k + 1}`, fromBraid(w), 'Q']),
   ];
-  for (const [name, d, ring, goal, memGoal] of runs) lines.push(...cableLines(name, d, ring, goal, memGoal));
+  for (const [name, d, ring, goal, memGoal] of runs) if (wanted(`${name} over ${ring}`)) lines.push(...cableLines(name, d, ring, goal, memGoal));
+  if (!wanted('sweep')) return lines;
 
   // The sweep r+ + r- <= 3 of the 0-framed right trefoil over Q: every cell, then the total.
   const trefoil0 = diagram(trefoil.pd, { framings: [0] });
@@ -134,6 +139,7 @@ export function cableBench(): Line[] {
 
 export function khovanovBench(): Line[] {
   const lines: Line[] = [];
+  if (!wanted('goals')) return lines;
   const goals: [string, PDCode, KhRing, string, string?][] = [
     ['T(5,6) over Z', torusLink(5, 6).pd, 'Z', '<= 10000 ms'],
     ['T(6,7) over Q', torusLink(6, 7).pd, 'Q', '<= 20000 ms'],
