@@ -28,6 +28,8 @@ export interface EngineOptions {
   readonly marked?: number;
   /** Extra crossingless unknots, tensored on at the end (withUnknots). */
   readonly unknots?: number;
+  /** The order in which crossings are added (indices into the code); crossingOrder's by default. */
+  readonly order?: readonly number[];
   readonly onProgress?: (p: Progress) => void;
   /** Checked between steps; aborting throws KhCancelled. */
   readonly signal?: { readonly aborted: boolean };
@@ -72,7 +74,8 @@ export function localComplex<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
   // The empty tangle: one object, the empty matching (Kh of the empty link is R at (0,0)).
   let cx = new TangleComplex(ring, [], theory);
   cx.addObject({ mat: cx.matchingId([]), shift: 0, height: 0 });
-  const order = crossingOrder(code);
+  // The order is chosen on the closed code (the reduced one has two ends), which it suits as well.
+  const order = options.order ?? crossingOrder(pd);
   order.forEach((k, step) => {
     check();
     cx = addCrossing(cx, code[k]);

@@ -1,8 +1,10 @@
 // The order in which the local algorithm adds crossings: greedily the crossing that closes the
 // most open ends, so the tangle's boundary (and with it the complex) stays small (the heuristic
 // of Bar-Natan, math/0606318, Sect. 6). The greedy walk is tried from several first crossings
-// and the order whose boundaries cost least (sum of 2^width over the steps) is kept.
+// and the order whose boundaries cost least (sum of 2^width over the steps) is kept, unless the
+// order from a tree decomposition (../knot/contraction-order.ts) costs less still.
 
+import { contractionOrder } from '../knot/contraction-order';
 import { PDCode } from '../knot/pd';
 
 /** Greedy order from `first`, ties to the lowest index, with its cost. */
@@ -37,13 +39,21 @@ function greedy(pd: PDCode, first: number): { order: number[]; cost: number } {
 /** At most this many first crossings are tried (evenly spread), to keep large codes quick. */
 const STARTS = 64;
 
-export function crossingOrder(pd: PDCode): number[] {
-  if (pd.length === 0) return [];
+/** The best greedy order, cost = sum of 2^cut over the steps. */
+export function greedyOrder(pd: PDCode): { order: number[]; cost: number } {
+  if (pd.length === 0) return { order: [], cost: 0 };
   const step = Math.max(1, Math.floor(pd.length / STARTS));
   let best = greedy(pd, 0);
   for (let first = step; first < pd.length; first += step) {
     const g = greedy(pd, first);
     if (g.cost < best.cost) best = g;
   }
-  return best.order;
+  return best;
+}
+
+/** The cheaper of the greedy and the tree-decomposition order (`pd` closed: every label twice). */
+export function crossingOrder(pd: PDCode): number[] {
+  const greedy = greedyOrder(pd);
+  const tree = contractionOrder(pd);
+  return tree.cost < greedy.cost ? tree.order : greedy.order;
 }

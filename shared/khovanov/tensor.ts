@@ -1,17 +1,34 @@
-// One step of Bar-Natan's local algorithm (math/0606318, Sect. 5): the planar composition of a
-// tangle complex with the complex of one crossing, 0-smoothing -> 1-smoothing{1} by a saddle,
+// Bar-Natan's local algorithm (math/0606318, Sect. 5): the planar composition of two tangle
+// complexes glued along their common ends (objects are pairs, d(a b) = da b + (-1)^h(a) a db),
 // followed by delooping (a closed circle is isomorphic to the empty set shifted by +1 and -1).
+// Adding one crossing is the composition with the crossing's complex, 0-smoothing ->
+// 1-smoothing{1} by a saddle.
 
 import { Crossing } from '../knot/pd';
 import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, Theory } from './cobordism';
 import { TangleComplex } from './complex';
 import { Mor } from './mor';
+import { Ring } from '../linalg/ring';
 
 /** 0-smoothing joins (a,b)(c,d), 1-smoothing joins (a,d)(b,c) (docs/conventions.md). */
 const SMOOTHING: readonly Matching[] = [
   [1, 0, 3, 2],
   [3, 2, 1, 0],
 ];
+
+/** The complex of one crossing x: its 0-smoothing, its 1-smoothing{1}, the saddle between. */
+export function crossingComplex<T>(x: Crossing, ring: Ring<T>, theory: Theory): TangleComplex<T> {
+  const cx = new TangleComplex(ring, x, theory);
+  const zero = cx.addObject({ mat: cx.matchingId(SMOOTHING[0]), shift: 0, height: 0 });
+  const one = cx.addObject({ mat: cx.matchingId(SMOOTHING[1]), shift: 1, height: 1 });
+  cx.addTerm(zero, one, 0, ring.one);
+  return cx;
+}
+
+/** The complex of the tangle with crossing x added. */
+export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComplex<T> {
+  return tensor(old, crossingComplex(x, old.ring, old.theory));
+}
 
 interface Side {
   /** The new matching's id in the new complex. */
@@ -23,7 +40,7 @@ interface Side {
 
 interface Gluing {
   readonly pieces: Piece[];
-  /** Component of every disc of the old morphism (the crossing's own morphisms carry no dots). */
+  /** Component of every disc of the morphism that moves (the other factor's is an identity). */
   readonly compPQ: number[];
   /** Component of every bottom loop and every top loop. */
   readonly bottomLoops: number[];
@@ -36,8 +53,8 @@ interface Gluing {
 }
 
 /**
- * How the old tangle's boundary slots 0..n-1 and the crossing's slots n..n+3 (a, b, c, d) are
- * wired: slots with the same label are glued, the others are the new boundary.
+ * How the first factor's boundary slots 0..n-1 and the second's slots n.. are wired: slots with
+ * the same label are glued (also two of one crossing, a kink), the others are the new boundary.
  */
 interface Wiring {
   readonly n: number;
@@ -49,8 +66,8 @@ interface Wiring {
   readonly newPos: number[];
 }
 
-function wiring(boundary: readonly number[], x: Crossing): Wiring {
-  const labelOf = [...boundary, ...x];
+function wiring(first: readonly number[], second: readonly number[]): Wiring {
+  const labelOf = [...first, ...second];
   const slotsOf = new Map<number, number[]>();
   labelOf.forEach((l, slot) => slotsOf.set(l, [...(slotsOf.get(l) ?? []), slot]));
   const partner = labelOf.map((l, slot) => {
@@ -60,12 +77,12 @@ function wiring(boundary: readonly number[], x: Crossing): Wiring {
   const freeSlots = labelOf.map((_, slot) => slot).filter((slot) => partner[slot] < 0);
   const newPos = new Array<number>(labelOf.length).fill(-1);
   freeSlots.forEach((slot, k) => (newPos[slot] = k));
-  return { n: boundary.length, labelOf, partner, freeSlots, newPos };
+  return { n: first.length, labelOf, partner, freeSlots, newPos };
 }
 
-/** The old matching `old` beside smoothing s of the crossing: the new matching and its closed loops. */
-function smoothedSide(w: Wiring, old: Matching, s: number, matchingId: (m: number[]) => number): Side {
-  const arc = (u: number): number => (u < w.n ? old[u] : w.n + SMOOTHING[s][u - w.n]);
+/** Matching p of the first factor beside matching q of the second: the new matching and its closed loops. */
+function smoothedSide(w: Wiring, p: Matching, q: Matching, matchingId: (m: number[]) => number): Side {
+  const arc = (u: number): number => (u < w.n ? p[u] : w.n + q[u - w.n]);
   const seen = new Array<boolean>(w.labelOf.length).fill(false);
   const matching = new Array<number>(w.freeSlots.length);
   for (const u of w.freeSlots) {
@@ -97,18 +114,19 @@ function smoothedSide(w: Wiring, old: Matching, s: number, matchingId: (m: numbe
 }
 
 /**
- * The surface between old matchings p -> q with the crossing's smoothings sb -> st, glued along
- * the wiring, seen from the new complex's bottom and top sides.
+ * The surface between matchings p1 -> q1 of the first factor beside p2 -> q2 of the second,
+ * glued along the wiring, seen from the new complex's bottom and top sides; `moving` says which
+ * factor's discs carry the morphism's dots.
  */
-function glueSides(w: Wiring, p: Matching, q: Matching, sb: number, st: number, bottom: Side, top: Side, newCircles: { of: number[] }): Gluing {
-  const oldDiscs = cycles(p, q);
-  const crossingDiscs = cycles(SMOOTHING[sb], SMOOTHING[st]);
-  const disc = (slot: number): number => (slot < w.n ? oldDiscs.of[slot] : oldDiscs.count + crossingDiscs.of[slot - w.n]);
+function glueSides(w: Wiring, [p1, q1, p2, q2]: Matching[], moving: 0 | 1, bottom: Side, top: Side, newCircles: { of: number[] }): Gluing {
+  const discs1 = cycles(p1, q1);
+  const discs2 = cycles(p2, q2);
+  const disc = (slot: number): number => (slot < w.n ? discs1.of[slot] : discs1.count + discs2.of[slot - w.n]);
   const arcs: [number, number][] = [];
   w.partner.forEach((other, slot) => {
     if (slot < other) arcs.push([disc(slot), disc(other)]);
   });
-  const { comp, euler } = glue(oldDiscs.count + crossingDiscs.count, arcs);
+  const { comp, euler } = glue(discs1.count + discs2.count, arcs);
   const circles = new Array<number>(euler.length).fill(0);
   const boundary = new Array<number>(euler.length).fill(0);
   newCircles.of.forEach((c, k) => {
@@ -128,53 +146,62 @@ function glueSides(w: Wiring, p: Matching, q: Matching, sb: number, st: number, 
   const topLoops = loopPieces(top);
   return {
     pieces: euler.map((e, c) => ({ genus: genus(e, circles[c]), boundary: boundary[c] })),
-    compPQ: comp.slice(0, oldDiscs.count),
+    compPQ: moving === 0 ? comp.slice(0, discs1.count) : comp.slice(discs1.count),
     bottomLoops,
     topLoops,
     memo: [],
   };
 }
 
-/** The complex of the tangle with crossing x added. */
-export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComplex<T> {
-  const { ring } = old;
-  const w = wiring(old.boundary, x);
-  const cx = new TangleComplex(ring, w.freeSlots.map((slot) => w.labelOf[slot]), old.theory);
+/**
+ * The complex of the two tangles side by side, glued where their ends share a label; `ends2`
+ * relabels the second factor's ends (a complex computed once stands for every copy of its
+ * tangle). Neither factor is changed.
+ */
+export function tensor<T>(first: TangleComplex<T>, second: TangleComplex<T>, ends2: readonly number[] = second.boundary): TangleComplex<T> {
+  const { ring } = first;
+  const w = wiring(first.boundary, ends2);
+  const cx = new TangleComplex(ring, w.freeSlots.map((slot) => w.labelOf[slot]), first.theory);
   const matchingId = (m: number[]) => cx.matchingId(m);
+  const [n1, n2] = [first.matchings.length, second.matchings.length];
 
   const sides = new Map<number, Side>();
-  const side = (mat: number, s: number): Side => {
-    const key = 2 * mat + s;
+  const side = (m1: number, m2: number): Side => {
+    const key = m1 * n2 + m2;
     let found = sides.get(key);
-    if (!found) sides.set(key, (found = smoothedSide(w, old.matchings[mat], s, matchingId)));
+    if (!found) sides.set(key, (found = smoothedSide(w, first.matchings[m1], second.matchings[m2], matchingId)));
     return found;
   };
-  const gluings = new Map<number, Gluing>();
-  const gluing = (pMat: number, qMat: number, sb: number, st: number): Gluing => {
-    const key = 4 * (pMat * old.matchings.length + qMat) + 2 * sb + st;
-    let found = gluings.get(key);
+  // Gluings where the first factor moves (p1 -> q1 beside m2), or the second (m1 beside p2 -> q2).
+  const gluings: [Map<number, Gluing>, Map<number, Gluing>] = [new Map(), new Map()];
+  const gluing = (p1: number, q1: number, p2: number, q2: number, moving: 0 | 1): Gluing => {
+    const key = moving === 0 ? (p1 * n1 + q1) * n2 + p2 : (p1 * n2 + p2) * n2 + q2;
+    let found = gluings[moving].get(key);
     if (!found) {
-      const bottom = side(pMat, sb);
-      const top = side(qMat, st);
-      found = glueSides(w, old.matchings[pMat], old.matchings[qMat], sb, st, bottom, top, cycles(cx.matchings[bottom.mat], cx.matchings[top.mat]));
-      gluings.set(key, found);
+      const bottom = side(p1, p2);
+      const top = side(q1, q2);
+      const mats = [first.matchings[p1], first.matchings[q1], second.matchings[p2], second.matchings[q2]];
+      found = glueSides(w, mats, moving, bottom, top, cycles(cx.matchings[bottom.mat], cx.matchings[top.mat]));
+      gluings[moving].set(key, found);
     }
     return found;
   };
 
   // New objects: loop bit 1 = the {-1} summand (x), bit 0 = the {+1} summand (1); the caps
   // onto the {+1} summand carry the theory's dual dot.
-  // ids[k][s] = the new objects of old object k with smoothing s (k alive).
-  const ids: number[][][] = new Array(old.objs.length);
-  old.objs.forEach((o, k) => {
-    if (!old.alive[k]) return;
-    const summands = (s: number): number[] => {
-      const { mat, loops } = side(o.mat, s);
+  // ids[k1][k2] = the new objects of the pair (k1, k2) of live objects.
+  const live2 = second.objs.map((_, k) => k).filter((k) => second.alive[k]);
+  const ids: number[][][] = new Array(first.objs.length);
+  first.objs.forEach((o1, k1) => {
+    if (!first.alive[k1]) return;
+    ids[k1] = new Array(second.objs.length);
+    for (const k2 of live2) {
+      const o2 = second.objs[k2];
+      const { mat, loops } = side(o1.mat, o2.mat);
       const out = new Array<number>(1 << loops);
-      for (let bits = 0; bits < out.length; bits++) out[bits] = cx.addObject({ mat, shift: o.shift + s + loops - 2 * popcount(bits), height: o.height + s });
-      return out;
-    };
-    ids[k] = [summands(0), summands(1)];
+      for (let bits = 0; bits < out.length; bits++) out[bits] = cx.addObject({ mat, shift: o1.shift + o2.shift + loops - 2 * popcount(bits), height: o1.height + o2.height });
+      ids[k1][k2] = out;
+    }
   });
 
   // The glued morphism between summands: cups on bottom loops (dotted for x), caps on top
@@ -184,7 +211,7 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
       const sc = ring.mul(sign, c);
       for (let sigma = 0; sigma < from.length; sigma++) {
         for (let tau = 0; tau < to.length; tau++) {
-          const terms = surface(old.theory, g, mask, sigma, tau);
+          const terms = surface(first.theory, g, mask, sigma, tau);
           for (let t = 0; t < terms.length; t++) {
             const [m, k] = terms[t];
             cx.addTerm(from[sigma], to[tau], m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
@@ -194,17 +221,15 @@ export function addCrossing<T>(old: TangleComplex<T>, x: Crossing): TangleComple
     });
   };
 
-  const identity = new Mor<T>();
-  identity.set(0, ring.one);
-  old.objs.forEach((o, k) => {
-    if (!old.alive[k]) return;
-    const [zero, one] = ids[k];
-    old.out[k].forEach((f, t) => {
-      const [tZero, tOne] = ids[t];
-      connect(zero, tZero, gluing(o.mat, old.objs[t].mat, 0, 0), f, ring.one);
-      connect(one, tOne, gluing(o.mat, old.objs[t].mat, 1, 1), f, ring.one);
-    });
-    connect(zero, one, gluing(o.mat, o.mat, 0, 1), identity, o.height % 2 ? ring.neg(ring.one) : ring.one);
+  const minusOne = ring.neg(ring.one);
+  first.objs.forEach((o1, k1) => {
+    if (!first.alive[k1]) return;
+    for (const k2 of live2) {
+      const m2 = second.objs[k2].mat;
+      first.out[k1].forEach((f, t) => connect(ids[k1][k2], ids[t][k2], gluing(o1.mat, first.objs[t].mat, m2, m2, 0), f, ring.one));
+      const sign = o1.height % 2 ? minusOne : ring.one;
+      second.out[k2].forEach((f, t) => connect(ids[k1][k2], ids[k1][t], gluing(o1.mat, o1.mat, m2, second.objs[t].mat, 1), f, sign));
+    }
   });
   return cx;
 }

@@ -6,12 +6,15 @@
 // is sampled once at its end, a lower bound of its peak.
 // Then cables at research scale, each run once and stopped after CAP_S seconds
 // ("over" the cap then), with peak rss, widest open boundary, most objects, and the Euler check
-// (q + q^-1) V of every result. KH_ONLY=<text> runs only the cable items whose name (with its
+// (q + q^-1) V of every result, and the widest cut of the greedy and of the tree-decomposition
+// crossing order (the engine takes the cheaper). KH_ONLY=<text> runs only the cable items whose name (with its
 // ring, e.g. "T(8,8) over Q") contains that text, the sweep for "sweep" and the first part for
 // "goals", so one item can be measured alone.
 
 import { khovanov, KhCancelled, KhRing, Progress } from '@/shared/khovanov';
 import { cubeKhovanov } from '@/shared/khovanov/cube';
+import { greedyOrder } from '@/shared/khovanov/order';
+import { contractionOrder, scoreOrder } from '@/shared/knot/contraction-order';
 import { fromBraid } from '@/shared/knot/braid';
 import { diagram, Diagram } from '@/shared/knot/diagram';
 import { cable } from '@/shared/knot/families/cable';
@@ -84,6 +87,7 @@ function cableLines(name: string, d: Diagram, ring: KhRing, goal?: string, memGo
     { name: `${label}, peak rss${done ? '' : ' so far'}`, value: round(rss / MB), unit: 'MB', goal: memGoal },
     { name: `${label}, widest open boundary${done ? '' : ' so far'}`, value: boundary, unit: 'points' },
     { name: `${label}, most objects${done ? '' : ' so far'}`, value: objects, unit: 'objects' },
+    { name: `${label}, widest cut of the greedy order / of the tree-decomposition order`, value: scoreOrder(d.pd, greedyOrder(d.pd).order).widest, unit: `/ ${contractionOrder(d.pd).widest} points` },
     ...(done ? [{ name: `${label}, Euler characteristic = (q + q^-1) V`, value: euler ? 1 : 0, unit: euler ? '(yes)' : '(NO)', goal: '1' }] : []),
   ];
 }
@@ -151,6 +155,7 @@ export function khovanovBench(): Line[] {
     lines.push({ name: `kh: ${name}, peak rss`, value: round(r.rssMB), unit: 'MB', goal: memGoal });
     lines.push({ name: `kh: ${name}, peak heap used`, value: round(r.heapMB), unit: 'MB' });
     lines.push({ name: `kh: ${name}, widest open boundary`, value: r.boundary, unit: 'points' });
+    lines.push({ name: `kh: ${name}, widest cut of the greedy order / of the tree-decomposition order`, value: scoreOrder(pd, greedyOrder(pd).order).widest, unit: `/ ${contractionOrder(pd).widest} points` });
   }
 
   // Blackboard-framed (r, 0)-cables of the right trefoil (closure of s1^3): 12 and 27 crossings.

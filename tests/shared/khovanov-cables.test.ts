@@ -3,6 +3,8 @@
 
 import { khovanov, KhRing } from '@/shared/khovanov';
 import { cubeKhovanov } from '@/shared/khovanov/cube';
+import { fastKhovanov } from '@/shared/khovanov/engine';
+import { contractionOrder } from '@/shared/knot/contraction-order';
 import { fromBraid } from '@/shared/knot/braid';
 import { diagram, Diagram } from '@/shared/knot/diagram';
 import { cable } from '@/shared/knot/families/cable';
@@ -33,7 +35,13 @@ describe('fast engine = reference cube on cables (<= 12 crossings)', () => {
   ];
   it.each(cables)('%s', (_, d) => {
     expect(d.pd.length).toBeLessThanOrEqual(12);
-    for (const [name, ring] of rings) expect([name, table(kh(d, name))]).toEqual([name, table(cubeKhovanov(d.pd, ring))]);
+    const tree = contractionOrder(d.pd).order;
+    for (const [name, ring] of rings) {
+      const cube = table(cubeKhovanov(d.pd, ring));
+      expect([name, table(kh(d, name))]).toEqual([name, cube]);
+      // The tree-decomposition order too, which the engine takes wherever that is cheaper.
+      expect([name, 'tree order', table(fastKhovanov(d.pd, ring, { order: tree, unknots: d.unknots }))]).toEqual([name, 'tree order', cube]);
+    }
   });
 });
 
