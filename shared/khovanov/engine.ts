@@ -9,8 +9,7 @@ import { khovanovTheory, Theory } from './cobordism';
 import { TangleComplex } from './complex';
 import { Generator, homology, KhGroup } from './homology';
 import { crossingOrder } from './order';
-import { simplify } from './simplify';
-import { addCrossing } from './tensor';
+import { addInOrder, glueParts } from './parts';
 
 export interface Progress {
   /** Crossings merged so far, of `total`. */
@@ -30,6 +29,11 @@ export interface EngineOptions {
   readonly unknots?: number;
   /** The order in which crossings are added (indices into the code); crossingOrder's by default. */
   readonly order?: readonly number[];
+  /**
+   * Instead of an order: sub-tangles (crossing indices, each part in the order it is built),
+   * each built alone and then glued on in turn (parts.ts); equal parts are built once.
+   */
+  readonly parts?: readonly (readonly number[])[];
   readonly onProgress?: (p: Progress) => void;
   /** Checked between steps; aborting throws KhCancelled. */
   readonly signal?: { readonly aborted: boolean };
@@ -72,16 +76,15 @@ export function localComplex<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
   }
 
   // The empty tangle: one object, the empty matching (Kh of the empty link is R at (0,0)).
-  let cx = new TangleComplex(ring, [], theory);
-  cx.addObject({ mat: cx.matchingId([]), shift: 0, height: 0 });
+  const empty = new TangleComplex(ring, [], theory);
+  empty.addObject({ mat: empty.matchingId([]), shift: 0, height: 0 });
+  let merged = 0;
+  const step = (c: TangleComplex<T>, added: number): void => {
+    merged += added;
+    options.onProgress?.({ merged, total: pd.length, fraction: merged / pd.length, objects: c.live, entries: c.entries(), boundary: c.boundary.length });
+  };
   // The order is chosen on the closed code (the reduced one has two ends), which it suits as well.
-  const order = options.order ?? crossingOrder(pd);
-  order.forEach((k, step) => {
-    check();
-    cx = addCrossing(cx, code[k]);
-    simplify(cx, check);
-    options.onProgress?.({ merged: step + 1, total: order.length, fraction: (step + 1) / order.length, objects: cx.live, entries: cx.entries(), boundary: cx.boundary.length });
-  });
+  const cx = options.parts ? glueParts(empty, code, options.parts, check, step) : addInOrder(empty, code, options.order ?? crossingOrder(pd), check, step);
   if (cx.boundary.length !== (options.marked === undefined ? 0 : 2)) throw new Error(`internal: ${cx.boundary.length} open ends after the last crossing`);
   return { cx, nPlus, nMinus };
 }

@@ -41,9 +41,22 @@ describe('fast engine = reference cube on cables (<= 12 crossings)', () => {
       expect([name, table(kh(d, name))]).toEqual([name, cube]);
       // The tree-decomposition order too, which the engine takes wherever that is cheaper.
       expect([name, 'tree order', table(fastKhovanov(d.pd, ring, { order: tree, unknots: d.unknots }))]).toEqual([name, 'tree order', cube]);
+      // Sub-tangles of four crossings built alone and glued (parts.ts; equal ones built once).
+      expect([name, 'parts', table(fastKhovanov(d.pd, ring, { parts: blocks(d.pd.length, 4), unknots: d.unknots }))]).toEqual([name, 'parts', cube]);
     }
   });
+
+  it('every crossing\'s grid built once and the copies glued = the crossing-by-crossing engine, on the (2,0)-cable of the figure-eight (16 crossings)', () => {
+    const d = cable(eight, 0, 2, 0);
+    // The cable code lists each original crossing's 2 x 2 grid in turn (families/cable.ts).
+    for (const ring of [integers as Ring<unknown>, primeField(3) as Ring<unknown>]) expect(table(fastKhovanov(d.pd, ring, { parts: blocks(16, 4) }))).toEqual(table(fastKhovanov(d.pd, ring)));
+  });
 });
+
+/** 0..n-1 in consecutive blocks of `size` (the last may be shorter). */
+function blocks(n: number, size: number): number[][] {
+  return Array.from({ length: Math.ceil(n / size) }, (_, b) => Array.from({ length: Math.min(size, n - b * size) }, (_, i) => b * size + i));
+}
 
 describe('structure', () => {
   it('the (r,0)-cable of the n-framed unknot is T(r, rn): the same homology as the closure of (s1 ... s_{r-1})^(rn) (common practice)', () => {

@@ -46,11 +46,17 @@ describe('fast engine = reference cube', () => {
     const components = orient(pd).components;
     // The engine in the tree-decomposition order too, which it takes wherever that is cheaper.
     const tree = contractionOrder(pd).order;
+    // And sub-tangles built alone and glued (parts.ts): the tree order cut at random places.
+    const parts: number[][] = [];
+    tree.forEach((k, i) => (i === 0 || rnd() < 0.4 ? parts.push([k]) : parts[parts.length - 1].push(k)));
     for (const [name, ring, khRing] of rings) {
       const cube = table(cubeKhovanov(pd, ring));
       expect([name, table(kh(pd, khRing))]).toEqual([name, cube]);
       expect([name, 'tree order', table(fastKhovanov(pd, ring, { order: tree }))]).toEqual([name, 'tree order', cube]);
-      expect([name, 'reduced', table(kh(pd, khRing, true))]).toEqual([name, 'reduced', table(cubeKhovanov(pd, ring, components[0][0]))]);
+      expect([name, 'parts', table(fastKhovanov(pd, ring, { parts }))]).toEqual([name, 'parts', cube]);
+      const reducedCube = table(cubeKhovanov(pd, ring, components[0][0]));
+      expect([name, 'reduced', table(kh(pd, khRing, true))]).toEqual([name, 'reduced', reducedCube]);
+      expect([name, 'parts, reduced', table(fastKhovanov(pd, ring, { parts, marked: components[0][0] }))]).toEqual([name, 'parts, reduced', reducedCube]);
     }
     // Reduced at every other component, over Z.
     components.slice(1).forEach((labels, c) => {
