@@ -1,18 +1,20 @@
 // Khovanov homology timings and memory: T(5,6) over Z (goal <= 10 s), T(6,7) over Q (<= 20 s),
 // T(9,5) over Z (<= 60 s, <= 2 GB), and two 14-crossing knots against the reference cube
-// (goal >= 1000x), and the trefoil's 2- and 3-cables. Torus links come from the knot core as
-// braid closures on p strands.
+// (goal >= 1000x), the trefoil's 2- and 3-cables, and 2-cables glued from their grids
+// (parts.ts) against crossing by crossing. Torus links come from the knot core as braid
+// closures on p strands.
 // Memory is the process's resident set (rss), sampled after every merged crossing; the cube
 // is sampled once at its end, a lower bound of its peak.
 // Then cables at research scale, each run once and stopped after CAP_S seconds
 // ("over" the cap then), with peak rss, widest open boundary, most objects, and the Euler check
 // (q + q^-1) V of every result, and the widest cut of the greedy and of the tree-decomposition
-// crossing order (the engine takes the cheaper). KH_ONLY=<text> runs only the cable items whose name (with its
-// ring, e.g. "T(8,8) over Q") contains that text, the sweep for "sweep" and the first part for
-// "goals", so one item can be measured alone.
+// crossing order (the engine takes the cheaper). KH_ONLY=<text> runs only the cable items whose
+// name (with its ring, e.g. "T(8,8) over Q") contains that text, the sweep for "sweep" and the
+// first part for "goals", so one item can be measured alone.
 
 import { khovanov, KhCancelled, KhRing, Progress } from '@/shared/khovanov';
 import { cubeKhovanov } from '@/shared/khovanov/cube';
+import { fastKhovanov } from '@/shared/khovanov/engine';
 import { greedyOrder } from '@/shared/khovanov/order';
 import { contractionOrder, scoreOrder } from '@/shared/knot/contraction-order';
 import { fromBraid } from '@/shared/knot/braid';
@@ -164,6 +166,25 @@ export function khovanovBench(): Line[] {
     const c = timeEngine(cable(fromBraid([1, 1, 1]), 0, r, 0).pd, 'Z', 3);
     lines.push({ name: `kh: trefoil ${r}-cable over Z, median of 3`, value: round(c.ms), unit: 'ms' });
     lines.push({ name: `kh: trefoil ${r}-cable over Z, peak rss`, value: round(c.rssMB), unit: 'MB' });
+  }
+
+  // Divide and conquer (parts.ts) against crossing by crossing on 2-cables: each original
+  // crossing's 2 x 2 grid (4 consecutive crossings of the cable code) is built once and the
+  // copies glued on in turn.
+  for (const [name, knot] of [['trefoil', [1, 1, 1]], ['figure-eight', [1, -2, 1, -2]]] as const) {
+    const pd = cable(fromBraid(knot), 0, 2, 0).pd;
+    const grids = Array.from({ length: pd.length / 4 }, (_, g) => [0, 1, 2, 3].map((i) => 4 * g + i));
+    const median = (run: () => void): number => {
+      const times = [0, 1, 2].map(() => {
+        const t = performance.now();
+        run();
+        return performance.now() - t;
+      });
+      return times.sort((a, b) => a - b)[1];
+    };
+    const sequential = median(() => fastKhovanov(pd, integers));
+    const glued = median(() => fastKhovanov(pd, integers, { parts: grids }));
+    lines.push({ name: `kh: ${name} 2-cable over Z, grids built once and glued / crossing by crossing, medians of 3`, value: round(glued), unit: `/ ${round(sequential)} ms` });
   }
 
   // The cube's growth on the same alternating family, then both 14-crossing knots in full.
