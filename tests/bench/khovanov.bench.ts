@@ -5,8 +5,8 @@
 // closures on p strands.
 // Memory is the process's resident set (rss), sampled after every merged crossing; the cube
 // is sampled once at its end, a lower bound of its peak.
-// Then cables at research scale, each run once and stopped after CAP_S seconds
-// ("over" the cap then), with its cpu time, peak rss, widest open boundary, most objects, and the Euler check
+// Then cables at research scale, each run once and stopped after CAP_S seconds ("over" the cap
+// then), with its cpu time, peak rss, widest open boundary, most objects, the Euler check
 // (q + q^-1) V of every result, and the widest cut of the greedy and of the tree-decomposition
 // crossing order (the engine takes the cheaper). KH_ONLY=<text> runs only the cable items whose
 // name (with its ring, e.g. "T(8,8) over Q") contains that text, the sweep for "sweep" and the
