@@ -5,10 +5,10 @@
 // 1-smoothing{1} by a saddle.
 
 import { Crossing } from '../knot/pd';
+import { Ring } from '../linalg/ring';
 import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, Theory } from './cobordism';
 import { TangleComplex } from './complex';
 import { Mor } from './mor';
-import { Ring } from '../linalg/ring';
 
 /** 0-smoothing joins (a,b)(c,d), 1-smoothing joins (a,d)(b,c) (docs/conventions.md). */
 const SMOOTHING: readonly Matching[] = [
