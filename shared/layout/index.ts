@@ -4,3 +4,5 @@ export { layoutPD } from './layout';
 export type { LinkLayout, LayoutCrossing, LayoutOptions } from './layout';
 export { layoutToSketch } from './to-sketch';
 export { closedBraidSketch } from './closed-braid';
+export { pretzelSketch } from './pretzel-picture';
+export { cableSketch } from './cable-picture';
