@@ -2,6 +2,7 @@
 // combine it (connected sum, disjoint union), mirrored if wanted. Cables act on the sketch.
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
+import type { Sketch } from '@/shared/drawing/sketch';
 import type { Diagram } from '@/shared/knot/diagram';
 import { buildFamily, familyList, type FamilyKind, type Placement } from '@/lib/slate/families';
 import { Button } from '@/components/ui/Button';
@@ -17,7 +18,7 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
   visible: boolean;
   onClose: () => void;
   current: Diagram | null;
-  onDraw: (d: Diagram, braid?: number[]) => void;
+  onDraw: (d: Diagram, braid?: number[], sketch?: Sketch | null) => void;
 }) {
   const [kind, setKind] = useState<FamilyKind>('torus');
   const [values, setValues] = useState<Record<string, string>>(initialValues);
@@ -30,7 +31,7 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
     const r = buildFamily(kind, own, current, placement, mirrored === 'yes');
     if (!r.ok) return setError(r.error);
     setError(null);
-    onDraw(r.diagram, r.braid);
+    onDraw(r.diagram, r.braid, r.sketch);
   };
   return (
     <Dialog title="Families" visible={visible} onClose={onClose} wide>

@@ -3,6 +3,8 @@
 // union, each optionally mirrored).
 import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, torusLink, twistKnot } from '@/shared/knot/families';
 import { componentCount, type Diagram } from '@/shared/knot/diagram';
+import type { Sketch } from '@/shared/drawing/sketch';
+import { cableSketch, layoutPD, pretzelPicture, pretzelSketch, sumSketch, type Picture } from '@/shared/layout';
 import type { Parsed } from './codes';
 
 export type FamilyKind = 'torus' | 'twist' | 'pretzel' | 'rational' | 'cable';
@@ -91,15 +93,38 @@ function torusBraid(v: Record<string, string>, mirrored: boolean): number[] {
   return Array.from({ length: Math.abs(q) }, () => Array.from({ length: Math.abs(p) - 1 }, (_, k) => sign * (k + 1))).flat();
 }
 
-/** The family member, placed against the current diagram; errors as readable messages. */
+/** The pretzel's columns as entered, mirrored: the mirror image of P(a) is P(-a). */
+const pretzelColumns = (v: Record<string, string>, mirrored: boolean) => integers('the columns', v.a).map((a) => (mirrored ? -a : a));
+
+/** A summand's picture: a pretzel knot in its columns, anything else by the general layout (null if that is not faithful). */
+function summandPicture(d: Diagram, pretzel: number[] | null): Picture | null {
+  if (pretzel && componentCount(d) === 1) return { ...pretzelPicture(pretzel), framings: d.framings };
+  const layout = layoutPD(d.pd, d.unknots);
+  return layout.faithful ? { ...layout, framings: d.framings } : null;
+}
+
+/** The cable's standard picture: parallel copies only (the picture draws no reversed copies). */
+function cablePictureOf(v: Record<string, string>, current: Diagram, mirrored: boolean): Sketch | null {
+  if (integer('r-', v.rMinus) !== 0 || integer('r+', v.rPlus) < 1) return null;
+  const k = integer('the component', v.component) - 1;
+  const framed = v.framing.trim() === '' ? current : setFramingOf(current, k, integer('the framing', v.framing));
+  return cableSketch(mirrored ? mirror(framed) : framed, k, integer('r+', v.rPlus));
+}
+
+/** The family member, placed against the current diagram, with its standard picture where there is one; errors as readable messages. */
 export function buildFamily(kind: FamilyKind, values: Record<string, string>, current: Diagram | null, placement: Placement, mirrored: boolean): Parsed {
   try {
     const made = build(kind, values, current);
     const m = mirrored ? mirror(made) : made;
     if (kind === 'torus' && placement === 'replace') return { ok: true, diagram: m, braid: torusBraid(values, mirrored) };
-    if (placement === 'replace' || kind === 'cable') return { ok: true, diagram: m };
+    if (kind === 'cable') return { ok: true, diagram: m, sketch: cablePictureOf(values, current!, mirrored) };
+    const pretzel = kind === 'pretzel' ? pretzelColumns(values, mirrored) : null;
+    if (placement === 'replace') return { ok: true, diagram: m, sketch: pretzel && pretzelSketch(pretzel) };
     if (!current) throw new Error('There is no sketch on the Slate to combine with; choose "Replace"');
-    return { ok: true, diagram: placement === 'sum' ? connectedSum(current, m) : disjointUnion(current, m) };
+    if (placement === 'union') return { ok: true, diagram: disjointUnion(current, m) };
+    const sum = connectedSum(current, m);
+    const [left, right] = [summandPicture(current, null), summandPicture(m, pretzel)];
+    return { ok: true, diagram: sum, sketch: left && right && current.unknots === 0 && m.unknots === 0 ? sumSketch(left, right, sum) : null };
   } catch (e) {
     const text = e instanceof Error ? e.message : String(e);
     return { ok: false, error: text.charAt(0).toUpperCase() + text.slice(1) + (text.endsWith('.') ? '' : '.') };

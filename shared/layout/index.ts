@@ -6,3 +6,6 @@ export { layoutToSketch } from './to-sketch';
 export { closedBraidSketch } from './closed-braid';
 export { pretzelSketch } from './pretzel-picture';
 export { cableSketch } from './cable-picture';
+export { sumSketch } from './sum-picture';
+export type { Picture } from './sum-picture';
+export { pretzelPicture } from './pretzel-picture';
