@@ -5,6 +5,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { Sketch } from '@/shared/drawing/sketch';
 import type { Diagram } from '@/shared/knot/diagram';
 import { buildFamily, familyList, type FamilyKind, type Placement } from '@/lib/slate/families';
+import { currentDoc, useSlate } from '@/lib/slate/slate-store';
 import { Button } from '@/components/ui/Button';
 import { Banner } from '@/components/ui/Banner';
 import { Choice } from '@/components/ui/Choice';
@@ -28,7 +29,7 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
   const family = familyList.find((f) => f.kind === kind)!;
   const submit = () => {
     const own = Object.fromEntries(family.fields.map((x) => [x.key, values[`${kind}.${x.key}`]]));
-    const r = buildFamily(kind, own, current, placement, mirrored === 'yes');
+    const r = buildFamily(kind, own, current, placement, mirrored === 'yes', currentDoc(useSlate.getState()).sketch);
     if (!r.ok) return setError(r.error);
     setError(null);
     onDraw(r.diagram, r.braid, r.sketch);

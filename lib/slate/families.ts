@@ -4,7 +4,7 @@
 import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, torusLink, twistKnot } from '@/shared/knot/families';
 import { componentCount, type Diagram } from '@/shared/knot/diagram';
 import type { Sketch } from '@/shared/drawing/sketch';
-import { cableSketch, layoutPD, pretzelPicture, pretzelSketch, sumSketch, type Picture } from '@/shared/layout';
+import { cableSketch, layoutPD, pretzelPicture, pretzelSketch, sketchPicture, sumSketch, type Picture } from '@/shared/layout';
 import type { Parsed } from './codes';
 
 export type FamilyKind = 'torus' | 'twist' | 'pretzel' | 'rational' | 'cable';
@@ -111,8 +111,11 @@ function cablePictureOf(v: Record<string, string>, current: Diagram, mirrored: b
   return cableSketch(mirrored ? mirror(framed) : framed, k, integer('r+', v.rPlus));
 }
 
-/** The family member, placed against the current diagram, with its standard picture where there is one; errors as readable messages. */
-export function buildFamily(kind: FamilyKind, values: Record<string, string>, current: Diagram | null, placement: Placement, mirrored: boolean): Parsed {
+/**
+ * The family member, placed against the current diagram (read from the drawing `drawn`), with
+ * its standard picture where there is one; errors as readable messages.
+ */
+export function buildFamily(kind: FamilyKind, values: Record<string, string>, current: Diagram | null, placement: Placement, mirrored: boolean, drawn?: Sketch): Parsed {
   try {
     const made = build(kind, values, current);
     const m = mirrored ? mirror(made) : made;
@@ -123,7 +126,8 @@ export function buildFamily(kind: FamilyKind, values: Record<string, string>, cu
     if (!current) throw new Error('There is no sketch on the Slate to combine with; choose "Replace"');
     if (placement === 'union') return { ok: true, diagram: disjointUnion(current, m) };
     const sum = connectedSum(current, m);
-    const [left, right] = [summandPicture(current, null), summandPicture(m, pretzel)];
+    // The sketch on the Slate keeps its picture.
+    const [left, right] = [drawn ? sketchPicture(drawn) : summandPicture(current, null), summandPicture(m, pretzel)];
     return { ok: true, diagram: sum, sketch: left && right && current.unknots === 0 && m.unknots === 0 ? sumSketch(left, right, sum) : null };
   } catch (e) {
     const text = e instanceof Error ? e.message : String(e);

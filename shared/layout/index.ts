@@ -9,3 +9,4 @@ export { cableSketch } from './cable-picture';
 export { sumSketch } from './sum-picture';
 export type { Picture } from './sum-picture';
 export { pretzelPicture } from './pretzel-picture';
+export { sketchPicture } from './sketch-picture';
