@@ -67,7 +67,8 @@ function cutOf(picture: Picture, side: 1 | -1, down: boolean) {
 
 /** The picture enlarged to `size` across, its paths resampled to the drawing's spacing. */
 function enlarged(p: Picture, size: number): Picture {
-  const big = mapped(p, (q) => ({ x: (q.x * size) / extent(p), y: (q.y * size) / extent(p) }));
+  const g = size / extent(p);
+  const big = mapped(p, (q) => ({ x: q.x * g, y: q.y * g }));
   return { ...big, paths: big.paths.map((path) => resample(path, true, defaultOptions.spacing)) };
 }
 
