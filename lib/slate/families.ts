@@ -4,7 +4,7 @@
 import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, torusLink, twistKnot } from '@/shared/knot/families';
 import { componentCount, type Diagram } from '@/shared/knot/diagram';
 import type { Sketch } from '@/shared/drawing/sketch';
-import { cableSketch, layoutPD, pretzelPicture, pretzelSketch, sketchPicture, sumSketch, type Picture } from '@/shared/layout';
+import { cableSketch, closedBraidSketch, layoutPD, pretzelSketch, sketchPicture, sumSketch, type Picture } from '@/shared/layout';
 import type { Parsed } from './codes';
 
 export type FamilyKind = 'torus' | 'twist' | 'pretzel' | 'rational' | 'cable';
@@ -96,9 +96,16 @@ function torusBraid(v: Record<string, string>, mirrored: boolean): number[] {
 /** The pretzel's columns as entered, mirrored: the mirror image of P(a) is P(-a). */
 const pretzelColumns = (v: Record<string, string>, mirrored: boolean) => integers('the columns', v.a).map((a) => (mirrored ? -a : a));
 
-/** A summand's picture: a pretzel knot in its columns, anything else by the general layout (null if that is not faithful). */
-function summandPicture(d: Diagram, pretzel: number[] | null): Picture | null {
-  if (pretzel && componentCount(d) === 1) return { ...pretzelPicture(pretzel), framings: d.framings };
+/** The member's standard picture, checked: a pretzel in columns, a torus link as a closed braid; null for the others. */
+function standardSketch(kind: FamilyKind, v: Record<string, string>, mirrored: boolean): Sketch | null {
+  if (kind === 'pretzel') return pretzelSketch(pretzelColumns(v, mirrored));
+  return kind === 'torus' ? closedBraidSketch(torusBraid(v, mirrored)) : null;
+}
+
+/** A summand's picture: a knot's standard picture when it has one, anything else by the general layout (null if that is not faithful). */
+function summandPicture(d: Diagram, standard: Sketch | null): Picture | null {
+  const own = standard && componentCount(d) === 1 ? sketchPicture(standard) : null;
+  if (own) return own;
   const layout = layoutPD(d.pd, d.unknots);
   return layout.faithful ? { ...layout, framings: d.framings } : null;
 }
@@ -121,13 +128,12 @@ export function buildFamily(kind: FamilyKind, values: Record<string, string>, cu
     const m = mirrored ? mirror(made) : made;
     if (kind === 'torus' && placement === 'replace') return { ok: true, diagram: m, braid: torusBraid(values, mirrored) };
     if (kind === 'cable') return { ok: true, diagram: m, sketch: cablePictureOf(values, current!, mirrored) };
-    const pretzel = kind === 'pretzel' ? pretzelColumns(values, mirrored) : null;
-    if (placement === 'replace') return { ok: true, diagram: m, sketch: pretzel && pretzelSketch(pretzel) };
+    if (placement === 'replace') return { ok: true, diagram: m, sketch: standardSketch(kind, values, mirrored) };
     if (!current) throw new Error('There is no sketch on the Slate to combine with; choose "Replace"');
     if (placement === 'union') return { ok: true, diagram: disjointUnion(current, m) };
     const sum = connectedSum(current, m);
     // The sketch on the Slate keeps its picture.
-    const [left, right] = [drawn ? sketchPicture(drawn) : summandPicture(current, null), summandPicture(m, pretzel)];
+    const [left, right] = [(drawn && sketchPicture(drawn)) ?? summandPicture(current, null), summandPicture(m, standardSketch(kind, values, mirrored))];
     return { ok: true, diagram: sum, sketch: left && right && current.unknots === 0 && m.unknots === 0 ? sumSketch(left, right, sum) : null };
   } catch (e) {
     const text = e instanceof Error ? e.message : String(e);

@@ -10,7 +10,7 @@ import { Diagram } from '@/shared/knot/diagram';
 import { cable, connectedSum, mirror, pretzelLink, torusLink, twistKnot } from '@/shared/knot/families';
 import { linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
 import { linkingMatrix } from '@/shared/knot/linking';
-import { cableSketch, layoutPD, pretzelPicture, pretzelSketch, sketchPicture, sumSketch, type Picture } from '@/shared/layout';
+import { cableSketch, closedBraidSketch, layoutPD, pretzelPicture, pretzelSketch, sketchPicture, sumSketch, type Picture } from '@/shared/layout';
 
 /** The picture's link and the target agree on invariants of the link (Alexander polynomial, determinant, signature: theorems). */
 function sameLink(a: Analysis, target: Diagram) {
@@ -85,6 +85,8 @@ test('connected sums: the summands side by side, their crossings apart', () => {
     [laidOut(torusLink(2, 2)), laidOut(trefoil), torusLink(2, 2), trefoil],
     // The drawing on the Slate as the first summand, as the Families builder passes it.
     [sketchPicture(pretzelSketch([-2, 3, 7])!)!, laidOut(trefoil), pretzelLink([-2, 3, 7]), trefoil],
+    // A torus knot joining as its closed braid, as the Families builder passes it.
+    [laidOut(figureEight), sketchPicture(closedBraidSketch([1, 1, 1, 1, 1])!)!, figureEight, fromBraid([1, 1, 1, 1, 1])],
   ];
   for (const [left, right, d1, d2] of cases) {
     const target = connectedSum(d1, d2);
