@@ -2,8 +2,10 @@
 // combine it (connected sum, disjoint union), mirrored if wanted. Cables act on the sketch.
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
+import type { Sketch } from '@/shared/drawing/sketch';
 import type { Diagram } from '@/shared/knot/diagram';
 import { buildFamily, familyList, type FamilyKind, type Placement } from '@/lib/slate/families';
+import { currentDoc, useSlate } from '@/lib/slate/slate-store';
 import { Button } from '@/components/ui/Button';
 import { Banner } from '@/components/ui/Banner';
 import { Choice } from '@/components/ui/Choice';
@@ -17,7 +19,7 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
   visible: boolean;
   onClose: () => void;
   current: Diagram | null;
-  onDraw: (d: Diagram, braid?: number[]) => void;
+  onDraw: (d: Diagram, braid?: number[], sketch?: Sketch | null) => void;
 }) {
   const [kind, setKind] = useState<FamilyKind>('torus');
   const [values, setValues] = useState<Record<string, string>>(initialValues);
@@ -27,10 +29,10 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
   const family = familyList.find((f) => f.kind === kind)!;
   const submit = () => {
     const own = Object.fromEntries(family.fields.map((x) => [x.key, values[`${kind}.${x.key}`]]));
-    const r = buildFamily(kind, own, current, placement, mirrored === 'yes');
+    const r = buildFamily(kind, own, current, placement, mirrored === 'yes', currentDoc(useSlate.getState()).sketch);
     if (!r.ok) return setError(r.error);
     setError(null);
-    onDraw(r.diagram, r.braid);
+    onDraw(r.diagram, r.braid, r.sketch);
   };
   return (
     <Dialog title="Families" visible={visible} onClose={onClose} wide>

@@ -6,7 +6,7 @@ import { router, useFocusEffect, useIsFocused } from 'expo-router';
 import * as Clipboard from 'expo-clipboard';
 import { alternate, isDescending } from '@/shared/drawing/alternate';
 import { analyse } from '@/shared/drawing/analyse';
-import { setFraming } from '@/shared/drawing/sketch';
+import { setFraming, type Sketch } from '@/shared/drawing/sketch';
 import { simplify } from '@/shared/knot/moves/simplify';
 import type { Diagram } from '@/shared/knot/diagram';
 import type { LocalSketch } from '@/lib/store/types';
@@ -92,9 +92,9 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
     s.apply({ ...s.history.present, sketch: next });
   };
 
-  const draw = (d: Diagram, word?: number[]) => {
+  const draw = (d: Diagram, word?: number[], picture?: Sketch | null) => {
     try {
-      useSlate.getState().replace(docFromDiagram(d, word), word);
+      useSlate.getState().replace(docFromDiagram(d, word, picture), word);
     } catch (e) {
       setMessage((e as Error).message);
     }

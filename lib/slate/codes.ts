@@ -1,6 +1,7 @@
 // Text codes onto the Slate: a pasted PD code, DT code or braid word becomes a diagram, or a
 // message that says what is wrong. Accepts PD codes as JSON ([[1,5,2,4],...]) or as a list
 // of X[a,b,c,d]; braid words and DT codes as integers separated by spaces or commas.
+import type { Sketch } from '@/shared/drawing/sketch';
 import { diagram, type Diagram } from '@/shared/knot/diagram';
 import { fromBraid, parseBraid } from '@/shared/knot/braid';
 import { fromDT, MAX_DT_CROSSINGS, parseDT } from '@/shared/knot/dt';
@@ -14,7 +15,8 @@ export const codeKinds: readonly { kind: CodeKind; label: string; example: strin
   { kind: 'braid', label: 'Braid word', example: '1 1 1' },
 ];
 
-export type Parsed = { ok: true; diagram: Diagram; braid?: number[] } | { ok: false; error: string };
+/** `sketch`: the diagram's standard picture, already checked to read back as it (shared/layout). */
+export type Parsed = { ok: true; diagram: Diagram; braid?: number[]; sketch?: Sketch | null } | { ok: false; error: string };
 
 /** "X[1,5,2,4] X[3,1,4,6]" (a list of X[...]) is rewritten as JSON; JSON passes unchanged. */
 function pdJson(text: string): string {

@@ -3,6 +3,8 @@
 // union, each optionally mirrored).
 import { cable, connectedSum, disjointUnion, mirror, pretzelLink, rationalLink, torusLink, twistKnot } from '@/shared/knot/families';
 import { componentCount, type Diagram } from '@/shared/knot/diagram';
+import type { Sketch } from '@/shared/drawing/sketch';
+import { cableSketch, closedBraidSketch, layoutPD, pretzelSketch, sketchPicture, sumSketch, type Picture } from '@/shared/layout';
 import type { Parsed } from './codes';
 
 export type FamilyKind = 'torus' | 'twist' | 'pretzel' | 'rational' | 'cable';
@@ -91,15 +93,48 @@ function torusBraid(v: Record<string, string>, mirrored: boolean): number[] {
   return Array.from({ length: Math.abs(q) }, () => Array.from({ length: Math.abs(p) - 1 }, (_, k) => sign * (k + 1))).flat();
 }
 
-/** The family member, placed against the current diagram; errors as readable messages. */
-export function buildFamily(kind: FamilyKind, values: Record<string, string>, current: Diagram | null, placement: Placement, mirrored: boolean): Parsed {
+/** The pretzel's columns as entered, mirrored: the mirror image of P(a) is P(-a). */
+const pretzelColumns = (v: Record<string, string>, mirrored: boolean) => integers('the columns', v.a).map((a) => (mirrored ? -a : a));
+
+/** The member's standard picture, checked: a pretzel in columns, a torus link as a closed braid; null for the others. */
+function standardSketch(kind: FamilyKind, v: Record<string, string>, mirrored: boolean): Sketch | null {
+  if (kind === 'pretzel') return pretzelSketch(pretzelColumns(v, mirrored));
+  return kind === 'torus' ? closedBraidSketch(torusBraid(v, mirrored)) : null;
+}
+
+/** A summand's picture: a knot's standard picture when it has one, anything else by the general layout (null if that is not faithful). */
+function summandPicture(d: Diagram, standard: Sketch | null): Picture | null {
+  const own = standard && componentCount(d) === 1 ? sketchPicture(standard) : null;
+  if (own) return own;
+  const layout = layoutPD(d.pd, d.unknots);
+  return layout.faithful ? { ...layout, framings: d.framings } : null;
+}
+
+/** The cable's standard picture: parallel copies only (the picture draws no reversed copies). */
+function cablePictureOf(v: Record<string, string>, current: Diagram, mirrored: boolean): Sketch | null {
+  if (integer('r-', v.rMinus) !== 0 || integer('r+', v.rPlus) < 1) return null;
+  const k = integer('the component', v.component) - 1;
+  const framed = v.framing.trim() === '' ? current : setFramingOf(current, k, integer('the framing', v.framing));
+  return cableSketch(mirrored ? mirror(framed) : framed, k, integer('r+', v.rPlus));
+}
+
+/**
+ * The family member, placed against the current diagram (read from the drawing `drawn`), with
+ * its standard picture where there is one; errors as readable messages.
+ */
+export function buildFamily(kind: FamilyKind, values: Record<string, string>, current: Diagram | null, placement: Placement, mirrored: boolean, drawn?: Sketch): Parsed {
   try {
     const made = build(kind, values, current);
     const m = mirrored ? mirror(made) : made;
     if (kind === 'torus' && placement === 'replace') return { ok: true, diagram: m, braid: torusBraid(values, mirrored) };
-    if (placement === 'replace' || kind === 'cable') return { ok: true, diagram: m };
+    if (kind === 'cable') return { ok: true, diagram: m, sketch: cablePictureOf(values, current!, mirrored) };
+    if (placement === 'replace') return { ok: true, diagram: m, sketch: standardSketch(kind, values, mirrored) };
     if (!current) throw new Error('There is no sketch on the Slate to combine with; choose "Replace"');
-    return { ok: true, diagram: placement === 'sum' ? connectedSum(current, m) : disjointUnion(current, m) };
+    if (placement === 'union') return { ok: true, diagram: disjointUnion(current, m) };
+    const sum = connectedSum(current, m);
+    // The sketch on the Slate keeps its picture.
+    const [left, right] = [(drawn && sketchPicture(drawn)) ?? summandPicture(current, null), summandPicture(m, standardSketch(kind, values, mirrored))];
+    return { ok: true, diagram: sum, sketch: left && right && current.unknots === 0 && m.unknots === 0 ? sumSketch(left, right, sum) : null };
   } catch (e) {
     const text = e instanceof Error ? e.message : String(e);
     return { ok: false, error: text.charAt(0).toUpperCase() + text.slice(1) + (text.endsWith('.') ? '' : '.') };

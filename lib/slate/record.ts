@@ -35,13 +35,13 @@ export function toStoredDiagram(doc: SlateDoc, a: Analysis): StoredDiagram {
 /**
  * A knot-core diagram as an editable drawing (its PD code read back is the same diagram).
  * Throws when the layout finds no picture that reads back as the same diagram: a distorted
- * picture would make the Readout show another link's invariants.
+ * picture would make the Readout show another link's invariants. Given its standard picture
+ * (already checked, shared/layout), that is drawn; given the braid word it came from (and no
+ * framings to show), it is drawn as that closed braid when the picture reads back right
+ * (shared/layout/closed-braid.ts).
  */
-/**
- * A diagram laid out for the Slate. Given the braid word it came from (and no framings to
- * show), it is drawn as that closed braid when the picture reads back right (shared/layout/closed-braid.ts).
- */
-export function docFromDiagram(d: Diagram, braid?: readonly number[]): SlateDoc {
+export function docFromDiagram(d: Diagram, braid?: readonly number[], picture?: Sketch | null): SlateDoc {
+  if (picture) return { sketch: picture, colours: {} };
   if (d.pd.length === 0 && d.unknots === 0) return emptyDoc;
   const closed = braid && d.unknots === 0 && d.framings.every((f) => f === null) ? closedBraidSketch(braid) : null;
   if (closed) return { sketch: closed, colours: {} };

@@ -4,18 +4,16 @@
 // neighbouring strands k and k+1 swap circles and cross once. A torus link T(p, q) so shows its
 // p parallel strands turning q times. Either way round the circle the picture is the closure
 // (its reflection in the plane with every crossing switched is a rotation of space), so the
-// check is only of the drawing's reading: the picture is kept when the analysis reads it back
-// with no marker, one crossing per letter, the braid's components and Jones polynomial;
+// check is only of the drawing's reading: the picture is kept when it reads back (read-back.ts)
+// with one crossing per letter, the braid's components and Jones polynomial;
 // otherwise null, and the general layout draws the code. Degenerate input: a braid with a
 // strand no letter touches (the empty word among them) gives null: its closure has a split
 // unknot, which the general layout sets beside the rest; framings are not drawn here.
 
-import { analyse } from '@/shared/drawing/analyse';
 import { Point } from '@/shared/drawing/point';
 import { Sketch } from '@/shared/drawing/sketch';
 import { braidStrands, BraidWord, fromBraid } from '@/shared/knot/braid';
-import { componentCount } from '@/shared/knot/diagram';
-import { jones } from '@/shared/knot/jones';
+import { readsBack } from './read-back';
 import { layoutToSketch } from './to-sketch';
 
 /** Distance between neighbouring circles, and between points along a strand (pixels). */
@@ -64,12 +62,9 @@ export function closedBraidSketch(word: BraidWord, strands = braidStrands(word))
   const letters = new Set(word.map(Math.abs));
   if (Array.from({ length: strands }, (_, i) => letters.has(i) || letters.has(i + 1)).includes(false)) return null;
   const target = fromBraid(word, strands);
-  const v = jones(target).toString();
   for (const turn of [1, -1] as const) {
     const sketch = layoutToSketch(picture(word, strands, turn));
-    const a = analyse(sketch);
-    const read = a.diagram?.diagram;
-    if (read && a.markers.length === 0 && read.pd.length === word.length && componentCount(read) === componentCount(target) && jones(read).toString() === v) return sketch;
+    if (readsBack(sketch, target)) return sketch;
   }
   return null;
 }

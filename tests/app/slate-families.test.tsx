@@ -2,6 +2,8 @@
 // Slate (connected sum, disjoint union), mirrored, and cables following a chosen framing.
 import { fireEvent, render, screen } from '@testing-library/react-native';
 import { FamiliesDialog } from '@/components/readout/FamiliesDialog';
+import { analyse } from '@/shared/drawing/analyse';
+import type { Sketch } from '@/shared/drawing/sketch';
 import { fromBraid } from '@/shared/knot/braid';
 import type { Diagram } from '@/shared/knot/diagram';
 import { unknot } from '@/shared/knot/diagram';
@@ -82,4 +84,31 @@ test('a torus link comes with its braid word (for the closed-braid picture), inv
   const [m, inverse] = onDraw.mock.calls[1];
   expect(inverse).toEqual([-1, -2, -1, -2, -1, -2, -1, -2]);
   expect(jones(fromBraid(inverse)).toString()).toBe(jones(m).toString());
+});
+
+// The standard pictures (shared/layout) come with the diagram; each reads back as it.
+const readBack = (sketch: Sketch) => analyse(sketch).diagram!.diagram;
+
+test('a pretzel, a connected sum and a parallel cable come with their standard pictures; reversed copies fall back to the general layout', () => {
+  const onDraw = setup(trefoil);
+  press('Pretzel link');
+  press('Draw it', 'button');
+  const [pretzel, , columns] = onDraw.mock.calls[0];
+  expect(columns).toBeTruthy();
+  expect(V(readBack(columns))).toBe(V(pretzel));
+  press('Torus link');
+  press('Connected sum');
+  press('Draw it', 'button');
+  const [sum, , sideBySide] = onDraw.mock.calls[1];
+  expect(sideBySide).toBeTruthy();
+  expect(V(readBack(sideBySide))).toBe(V(sum));
+  press('Cable of the sketch');
+  fireEvent.changeText(field('Framing'), '0');
+  press('Draw it', 'button');
+  const [cabled, , copies] = onDraw.mock.calls[2];
+  expect(copies).toBeTruthy();
+  expect(V(readBack(copies))).toBe(V(cabled));
+  fireEvent.changeText(field('r- (reversed copies)'), '1');
+  press('Draw it', 'button');
+  expect(onDraw.mock.calls[3][2]).toBeFalsy();
 });

@@ -14,6 +14,7 @@ const benches: [string, () => Line[] | Promise<Line[]>][] = [
   ['bands', () => import('./bands.bench').then((m) => m.bandsBench())],
   ['freeze', () => import('./freeze.bench').then((m) => m.freezeBench())],
   ['queue', () => import('./queue.bench').then((m) => m.queueBench())],
+  ['pictures', () => import('./pictures.bench').then((m) => m.picturesBench())],
 ];
 
 async function main(): Promise<void> {
