@@ -6,9 +6,10 @@
 // every other matching into its image: one sparse update, no matching work. Coefficients are
 // exact limbs of doubles with lazy carries, as in bracket-sum.ts.
 
-import { bracket, loopFactor } from './bracket';
+import { bracket, greedyOrder, loopFactor } from './bracket';
 import { BraidWord, braidStrands, checkBraid, fromBraid } from './braid';
 import { carry, DOUBLES, Precision } from './bracket-sum';
+import { scoreOrder } from './contraction-order';
 import { temperleyLieb } from './temperley-lieb';
 import { Laurent } from '@/shared/poly/laurent';
 
@@ -22,12 +23,20 @@ const catalan = (n: number): number => (n === 0 ? 1 : (catalan(n - 1) * 2 * (2 *
 export const braidSweepFits = (strands: number, letters: number): boolean => catalan(strands) * (letters + 1) <= MAX_ENTRIES;
 
 /**
- * <closure of word> (normalised <O> = 1), equal to bracket(fromBraid(word, strands)); a braid
- * whose buffers would not fit goes to the general contraction.
+ * <closure of word> (normalised <O> = 1), equal to bracket(fromBraid(word, strands)). The
+ * sweep keeps up to Catalan(strands) matchings all along; when the closure's greedy order
+ * never cuts 2 strands ends, the general contraction's matchings are fewer and it is used, as
+ * it is when the sweep's buffers would not fit.
  */
-export function bracketOfBraid(word: BraidWord, strands = braidStrands(word), precision: Precision = DOUBLES): Laurent {
+export function bracketOfBraid(word: BraidWord, strands = braidStrands(word)): Laurent {
+  const d = fromBraid(word, strands);
+  if (d.pd.length === 0 || !braidSweepFits(strands, word.length) || scoreOrder(d.pd, greedyOrder(d.pd)).widest < 2 * strands) return bracket(d);
+  return sweepBracket(word, strands);
+}
+
+/** The bracket by the sweep alone (braidSweepFits must hold). */
+export function sweepBracket(word: BraidWord, strands = braidStrands(word), precision: Precision = DOUBLES): Laurent {
   checkBraid(word, strands);
-  if (!braidSweepFits(strands, word.length)) return bracket(fromBraid(word, strands));
   return markovTrace(sweep(word, strands, precision), strands, precision);
 }
 
