@@ -11,13 +11,7 @@ import { seededRng } from '@/shared/knot/moves/random';
 import { stateSumBracket } from '@/shared/knot/statesum';
 import { temperleyLieb } from '@/shared/knot/temperley-lieb';
 import { Laurent } from '@/shared/poly/laurent';
-import { arbBraid } from './arbitraries';
-
-// Letters using every generator in turn with random signs, as in the bench.
-const wideWord = (strands: number, crossings: number, seed: number) => {
-  const rng = seededRng(seed);
-  return Array.from({ length: crossings }, (_, i) => ((i % (strands - 1)) + 1) * (rng() < 0.5 ? 1 : -1));
-};
+import { arbBraid, wideWord } from './arbitraries';
 
 describe('Temperley-Lieb tables', () => {
   it('have Catalan(n) basis matchings (the dimension of TL_n; Jones, Invent. Math. 72, 1983)', () => {
