@@ -16,7 +16,7 @@ export interface Precision {
   limbBits: number;
 }
 
-const DOUBLES: Precision = { exactBits: 53, limbBits: 32 };
+export const DOUBLES: Precision = { exactBits: 53, limbBits: 32 };
 
 /** Coefficient i is that of A^(off + stride i). */
 export interface Strided {
@@ -103,7 +103,7 @@ function fits(step: Step, limbs: Float64Array[], at: Windows, limit: number): bo
 }
 
 /** The same numbers with every limb but the top one in [-unit/2, unit/2]; with grow, a new top limb takes the old top's carries. */
-function carry(limbs: Float64Array[], unit: number, grow: boolean): Float64Array[] {
+export function carry(limbs: Float64Array[], unit: number, grow: boolean): Float64Array[] {
   const out = limbs.map((limb) => Float64Array.from(limb));
   if (grow) out.push(new Float64Array(out[0].length));
   for (let r = 0; r + 1 < out.length; r++) {

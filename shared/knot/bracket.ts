@@ -63,7 +63,7 @@ export const loopFactor = (): Laurent => Laurent.fromPairs([[2, -1], [-2, -1]]);
 
 // Greedy order: next the crossing with most edges on the current boundary, which keeps the cut
 // small; among those, the one touching the longest-open edge, so the cut sweeps the diagram.
-function greedyOrder(pd: PDCode): number[] {
+export function greedyOrder(pd: PDCode): number[] {
   const left = new Set(pd.map((_, i) => i));
   const opened = new Map<number, number>(); // boundary label -> step at which it opened
   const closed = new Set<number>();

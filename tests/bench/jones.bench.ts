@@ -3,14 +3,15 @@
 // the plain state sum where that is feasible (<= 20 crossings); then the wide cases (random
 // 10-strand braids of 100 and 200 crossings, T(7,33)) with the widest cut of the
 // tree-decomposition order and the number of state transitions it makes the contraction
-// sum, measures that do not depend on the machine's load.
+// sum, measures that do not depend on the machine's load. Every case is a braid closure, so
+// each is also timed by the Temperley-Lieb sweep of its braid word (bracketOfBraid).
 
 import { fromBraid } from '@/shared/knot/braid';
 import { bracket } from '@/shared/knot/bracket';
+import { bracketOfBraid } from '@/shared/knot/bracket-braid';
 import { stateGraph } from '@/shared/knot/bracket-states';
 import { contractionOrder } from '@/shared/knot/contraction-order';
 import { Diagram } from '@/shared/knot/diagram';
-import { torusLink } from '@/shared/knot/families/torus';
 import { jonesFromBracket } from '@/shared/knot/jones';
 import { seededRng } from '@/shared/knot/moves/random';
 import { stateSumBracket } from '@/shared/knot/statesum';
@@ -31,13 +32,24 @@ function medianMs(f: () => unknown, budgetMs: number, maxRuns = 31): number {
   return times[Math.floor(times.length / 2)];
 }
 
+/** A braid word, its strands and its closure. */
+interface Braid {
+  word: number[];
+  strands: number;
+  d: Diagram;
+}
+
+const braid = (word: number[], strands: number): Braid => ({ word, strands, d: fromBraid(word, strands) });
+
 // A fixed pseudo-random braid using every generator in turn, seeded so runs compare; more
 // strands make a wider cut.
-function braidOf(strands: number, crossings: number): Diagram {
+function braidOf(strands: number, crossings: number): Braid {
   const rng = seededRng(crossings);
-  const word = Array.from({ length: crossings }, (_, i) => ((i % (strands - 1)) + 1) * (rng() < 0.5 ? 1 : -1));
-  return fromBraid(word, strands);
+  return braid(Array.from({ length: crossings }, (_, i) => ((i % (strands - 1)) + 1) * (rng() < 0.5 ? 1 : -1)), strands);
 }
+
+// T(p, q) as the closure of (sigma_1 ... sigma_(p-1))^q, the diagram torusLink(p, q) draws.
+const torus = (p: number, q: number): Braid => braid(Array.from({ length: (p - 1) * q }, (_, i) => (i % (p - 1)) + 1), p);
 
 // T(p, q) with (p - 1) q = crossings: T(2,15), T(3,15), T(4,20), T(5,25).
 const TORUS: Record<number, [number, number]> = { 15: [2, 15], 30: [3, 15], 60: [4, 20], 100: [5, 25] };
@@ -47,35 +59,45 @@ const round = (x: number, digits = 2) => Number(x.toFixed(digits));
 
 export function jonesBench(): Line[] {
   const lines: Line[] = [];
-  const cases: [string, (n: number) => Diagram][] = [
+  const cases: [string, (n: number) => Braid][] = [
     ['braid closure (4 strands)', (n) => braidOf(4, n)],
     ['braid closure (8 strands)', (n) => braidOf(8, n)],
-    ['torus link', (n) => torusLink(...TORUS[n])],
+    ['torus link', (n) => torus(...TORUS[n])],
   ];
   for (const [family, make] of cases) {
     for (const n of SIZES) {
-      const d = make(n);
+      const b = make(n);
+      const d = b.d;
       const name = family === 'torus link' ? `T(${TORUS[n].join(',')})` : family;
       const ms = medianMs(() => jonesFromBracket(d, bracket(d)), 2000);
       lines.push({ name: `bracket+Jones, ${name}, ${d.pd.length} crossings`, value: round(ms), unit: 'ms', goal: goal(n) });
+      const sweep = medianMs(() => jonesFromBracket(d, bracketOfBraid(b.word, b.strands)), 2000);
+      lines.push({ name: `bracket+Jones by the braid sweep, ${name}, ${d.pd.length} crossings`, value: round(sweep), unit: 'ms', goal: goal(n) });
       if (d.pd.length <= STATE_SUM_LIMIT) {
         const slow = medianMs(() => stateSumBracket(d), 5000, 3);
         lines.push({ name: `state sum / contraction, ${name}, ${d.pd.length} crossings`, value: round(slow / ms, 0), unit: 'x' });
       }
     }
   }
-  const wide: [string, Diagram, string][] = [
+  const wide: [string, Braid, string][] = [
     ['random 10-strand braid', braidOf(10, 100), '<= 100 ms'],
     ['random 10-strand braid', braidOf(10, 200), '<= 1000 ms'],
-    ['T(7,33)', torusLink(7, 33), '<= 1000 ms'],
+    ['T(7,33)', torus(7, 33), '<= 1000 ms'],
   ];
-  for (const [name, d, target] of wide) {
+  for (const [name, b, target] of wide) {
+    const d = b.d;
     const ms = medianMs(() => jonesFromBracket(d, bracket(d)), 3000, 5);
     lines.push({ name: `bracket+Jones, ${name}, ${d.pd.length} crossings`, value: round(ms), unit: 'ms', goal: target });
     const order = contractionOrder(d.pd);
     lines.push({ name: `widest cut of the tree-decomposition order, ${name}, ${d.pd.length} crossings`, value: order.widest, unit: 'ends' });
     const transitions = stateGraph(d.pd, order.order).steps.reduce((sum, step) => sum + step.target.length, 0);
     lines.push({ name: `state transitions summed in that order, ${name}, ${d.pd.length} crossings`, value: transitions, unit: 'transitions' });
+    // The first sweep on n strands also builds TL_n's tables; the median is of later runs.
+    const first = performance.now();
+    bracketOfBraid(b.word, b.strands);
+    lines.push({ name: `first braid sweep (with the Temperley-Lieb tables), ${name}, ${d.pd.length} crossings`, value: round(performance.now() - first), unit: 'ms' });
+    const sweep = medianMs(() => jonesFromBracket(d, bracketOfBraid(b.word, b.strands)), 3000, 5);
+    lines.push({ name: `bracket+Jones by the braid sweep, ${name}, ${d.pd.length} crossings`, value: round(sweep), unit: 'ms', goal: target });
   }
   return lines;
 }

@@ -5,6 +5,7 @@
 import { spawn, spawnSync } from 'node:child_process';
 import path from 'node:path';
 import { answerLine, jsonInteger } from '@/server/cli/requests';
+import { fromBraid } from '@/shared/knot/braid';
 
 const bin = path.join(__dirname, '../../server/cli/bin.mjs');
 const run = (args: string[], input = '') => spawnSync(process.execPath, [bin, ...args], { input, encoding: 'utf8', timeout: 60_000 });
@@ -114,6 +115,15 @@ describe('request answers in process', () => {
     expect(all.components).toBe(2);
     expect(all.kh).toBeUndefined();
     expect(all.determinant).toBe(0); // split link (unknot + unknot): det 0 (common practice)
+  });
+
+  it('answers a wide braid (the Temperley-Lieb sweep) with the bracket and Jones of its PD code', () => {
+    // The same diagram given as PD goes through the general contraction; the two must agree.
+    const word = Array.from({ length: 40 }, (_, i) => ((i % 6) + 1) * (i % 3 === 0 ? -1 : 1));
+    const pd = fromBraid(word, 7).pd;
+    const byBraid = JSON.parse(answerLine(JSON.stringify({ id: 0, braid: word, unknots: 2, compute: ['bracket', 'jones'] })));
+    const byPD = JSON.parse(answerLine(JSON.stringify({ id: 0, pd, unknots: 2, compute: ['bracket', 'jones'] })));
+    expect(byBraid).toEqual(byPD);
   });
 
   it('answers "s" over Q and F2 for a knot, and an {id, error} line for a link', () => {

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { fromBraid } from '@/shared/knot/braid';
 import { Diagram } from '@/shared/knot/diagram';
 import { pretzelLink, rationalLink } from '@/shared/knot/families';
-import { randomMoves } from '@/shared/knot/moves';
+import { randomMoves, seededRng } from '@/shared/knot/moves';
 
 /** Braid words of 1..maxLength letters on 2..maxStrands strands. */
 export const arbBraid = (maxLength = 12, maxStrands = 5) =>
@@ -27,3 +27,9 @@ export const arbDiagram = (maxCrossings = 12): fc.Arbitrary<Diagram> =>
     )
     .map(([d, moves, seed]) => randomMoves(d, moves, seed))
     .filter((d) => d.pd.length <= maxCrossings);
+
+/** A seeded braid word using every generator in turn with random signs: its closure's cut is about twice the strands. */
+export const wideWord = (strands: number, crossings: number, seed: number): number[] => {
+  const rng = seededRng(seed);
+  return Array.from({ length: crossings }, (_, i) => ((i % (strands - 1)) + 1) * (rng() < 0.5 ? 1 : -1));
+};

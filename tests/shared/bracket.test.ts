@@ -13,14 +13,10 @@ import { jones } from '@/shared/knot/jones';
 import { randomMoves, seededRng } from '@/shared/knot/moves';
 import { PDCode } from '@/shared/knot/pd';
 import { stateSumBracket } from '@/shared/knot/statesum';
-import { arbBraid } from './arbitraries';
+import { arbBraid, wideWord } from './arbitraries';
 
-// A braid on `strands` strands using every generator in turn with random signs: its closure's
-// cut is about twice the strands, beyond the greedy order's comfortable range.
-const wideBraid = (strands: number, crossings: number, seed: number) => {
-  const rng = seededRng(seed);
-  return fromBraid(Array.from({ length: crossings }, (_, i) => ((i % (strands - 1)) + 1) * (rng() < 0.5 ? 1 : -1)), strands);
-};
+// Its closure's cut is about twice the strands, beyond the greedy order's comfortable range.
+const wideBraid = (strands: number, crossings: number, seed: number) => fromBraid(wideWord(strands, crossings, seed), strands);
 
 describe('exact sums in limbs of doubles', () => {
   it('give the sums of plain doubles when doubles are trusted only to 2^12 in limbs of 2 bits (property)', () => {
