@@ -21,6 +21,23 @@ export interface Slot {
   readonly position: number;
 }
 
+/**
+ * The code with the labels at the heads of edges a and b exchanged, and the heads to match: a
+ * then runs from its tail into b's old head and b into a's. This is the saddle between a and b
+ * (a band move, and the join of a connected sum); `heads` gives the head slot of both labels.
+ */
+export function exchangeHeads(code: { readonly pd: PDCode; readonly heads: ReadonlyMap<number, Slot> }, a: number, b: number): { pd: WritablePD; heads: Map<number, Slot> } {
+  const ha = code.heads.get(a)!;
+  const hb = code.heads.get(b)!;
+  const pd = writablePD(code.pd);
+  pd[ha.crossing][ha.position] = b;
+  pd[hb.crossing][hb.position] = a;
+  const heads = new Map(code.heads);
+  heads.set(a, hb);
+  heads.set(b, ha);
+  return { pd, heads };
+}
+
 export interface Oriented {
   readonly pd: PDCode;
   /** +1 or -1 per crossing: positive when the over-strand runs from d to b. */
