@@ -23,13 +23,14 @@ export function SlateHeader({ sketch, onDetails, onShare }: { sketch: LocalSketc
         </Pressable>
       ) : null}
       <Pressable role="button" accessibilityLabel="Sketch details" onPress={onDetails} style={styles.titleBox}>
-        <Text role="heading" aria-level={1} style={styles.title} numberOfLines={1}>{sketch.title || 'Untitled sketch'}</Text>
+        {/* Two lines on a phone before the title is cut; the details show it whole. */}
+        <Text role="heading" aria-level={1} style={styles.title} numberOfLines={2}>{sketch.title || 'Untitled sketch'}</Text>
         <Text style={styles.meta} numberOfLines={1}>{meta || 'Add a title, where it was seen, notes, a photo'}</Text>
       </Pressable>
       <View style={styles.actions}>
         {wide ? <Pressable role="button" accessibilityLabel="Keyboard shortcuts" onPress={() => useShortcutRegistry.getState().setSheet(true)} style={styles.quiet}><Text style={styles.quietText}>?</Text></Pressable> : null}
-        <Pressable role="button" accessibilityLabel="Share" onPress={onShare} style={styles.quiet}><Text style={styles.quietText}>Share</Text></Pressable>
-        <Pressable role="button" accessibilityLabel="Details" onPress={onDetails} style={styles.quiet}><Text style={styles.quietText}>Details</Text></Pressable>
+        <Pressable role="button" accessibilityLabel="Share" onPress={onShare} style={[styles.quiet, !wide && styles.narrow]}><Text style={styles.quietText}>Share</Text></Pressable>
+        <Pressable role="button" accessibilityLabel="Details" onPress={onDetails} style={[styles.quiet, !wide && styles.narrow]}><Text style={styles.quietText}>Details</Text></Pressable>
       </View>
     </View>
   );
@@ -43,6 +44,8 @@ const styles = StyleSheet.create({
   title: { ...type.title, color: colors.ink },
   meta: { ...type.small, color: colors.inkMuted },
   actions: { flexDirection: 'row', gap: space.xs },
-  quiet: { minHeight: 40, minWidth: 40, paddingHorizontal: space.md, alignItems: 'center', justifyContent: 'center', borderRadius: 10 },
+  quiet: { minHeight: 44, minWidth: 44, paddingHorizontal: space.md, alignItems: 'center', justifyContent: 'center', borderRadius: 10 },
+  // A phone's header gives the title the room: the buttons keep 44 px targets with less padding.
+  narrow: { paddingHorizontal: space.xs },
   quietText: { ...type.label, color: colors.accent, fontSize: 15 },
 });

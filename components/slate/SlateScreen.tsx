@@ -1,6 +1,6 @@
 // One sketch on the Slate: header, toolbar, canvas and Readout (placed by SlateLayout), the
 // dialogs, keyboard shortcuts, and saving to the device store.
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useMemo, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useFocusEffect, useIsFocused } from 'expo-router';
 import { isDescending } from '@/shared/drawing/alternate';
@@ -34,11 +34,15 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const wide = useIsWide();
   const focused = useIsFocused();
   const ready = useSlate((s) => s.sketchId === sketch.id) && focused;
-  // The Slate's state is one store: the screen in focus owns it (a stack may hold several).
+  // The Slate's state is one store: the screen in focus owns it (a stack may hold several). It
+  // opens the record as stored when the screen takes focus; the autosave's own writes to the
+  // record must not open it again.
+  const stored = useRef(sketch.diagram);
+  stored.current = sketch.diagram;
   useFocusEffect(
     useCallback(() => {
-      if (useSlate.getState().sketchId !== sketch.id) useSlate.getState().open(sketch.id, docFromStored(sketch.diagram));
-    }, [sketch.id]), // eslint-disable-line react-hooks/exhaustive-deps
+      if (useSlate.getState().sketchId !== sketch.id) useSlate.getState().open(sketch.id, docFromStored(stored.current));
+    }, [sketch.id]),
   );
   useSlateAutosave(ready ? sketch.id : null);
 
