@@ -12,6 +12,8 @@ export const writablePD = (pd: PDCode): WritablePD => pd.map(([a, b, c, d]) => [
 
 /** The crossing with every label replaced by f(label, its position 0-3). */
 export const mapLabels = (x: Crossing, f: (label: number, position: number) => number): Crossing => [f(x[0], 0), f(x[1], 1), f(x[2], 2), f(x[3], 3)];
+/** The same crossing read from its position k on (k = 2 starts at c): for a strand now entering elsewhere. */
+export const rotated = (x: Crossing, k: number): Crossing => mapLabels(x, (_, p) => x[(p + k) % 4]);
 /** `x` with the label at `position` replaced by `label`. */
 export const withLabelAt = (x: Crossing, position: number, label: number): Crossing => mapLabels(x, (l, p) => (p === position ? label : l));
 
