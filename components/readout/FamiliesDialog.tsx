@@ -35,7 +35,12 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
     onDraw(r.diagram, r.braid, r.sketch);
   };
   return (
-    <Dialog title="Families" visible={visible} onClose={onClose} wide>
+    <Dialog title="Families" visible={visible} onClose={onClose} wide actions={(
+      <>
+        <Button label="Draw it" onPress={submit} />
+        <Button variant="quiet" label="Cancel" onPress={onClose} />
+      </>
+    )}>
       <Choice label="Family" value={kind} onChange={(k) => (setKind(k), setError(null))} options={familyList.map((f) => ({ value: f.kind, label: f.label }))} />
       <View style={styles.fields}>
         {family.fields.map((x) => (
@@ -60,10 +65,6 @@ export function FamiliesDialog({ visible, onClose, current, onDraw }: {
         <Choice label="Mirror" value={mirrored} onChange={setMirrored} options={[{ value: 'no', label: 'As given' }, { value: 'yes', label: 'Mirror image' }]} />
       </View>
       {error ? <Banner tone="error">{error}</Banner> : null}
-      <View style={styles.actions}>
-        <Button label="Draw it" onPress={submit} />
-        <Button variant="quiet" label="Cancel" onPress={onClose} />
-      </View>
     </Dialog>
   );
 }
@@ -73,5 +74,4 @@ const styles = StyleSheet.create({
   field: { flexBasis: 200, flexGrow: 1 },
   group: { gap: space.xs + 2 },
   label: { ...type.label, color: colors.ink },
-  actions: { flexDirection: 'row', gap: space.md, flexWrap: 'wrap' },
 });

@@ -1,6 +1,6 @@
 // Paste a PD code, DT code or braid word: it is checked as typed, and drawn when accepted.
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, Text } from 'react-native';
 import type { Diagram } from '@/shared/knot/diagram';
 import { codeKinds, parseCode, type CodeKind } from '@/lib/slate/codes';
 import { Button } from '@/components/ui/Button';
@@ -26,7 +26,12 @@ export function PasteCodeDialog({ visible, onClose, onDraw }: {
     onDraw(r.diagram, r.braid);
   };
   return (
-    <Dialog title="Paste a code" visible={visible} onClose={onClose}>
+    <Dialog title="Paste a code" visible={visible} onClose={onClose} actions={(
+      <>
+        <Button label="Draw it" onPress={submit} />
+        <Button variant="quiet" label="Cancel" onPress={onClose} />
+      </>
+    )}>
       <Choice label="Kind of code" value={kind} onChange={(k) => (setKind(k), setError(null))} options={codeKinds.map((c) => ({ value: c.kind, label: c.label }))} />
       <Field
         label={info.label}
@@ -40,16 +45,11 @@ export function PasteCodeDialog({ visible, onClose, onDraw }: {
         error={error}
         hint={kind === 'pd' ? 'Crossings X[a,b,c,d] or JSON, labels counterclockwise from the incoming under-strand.' : kind === 'braid' ? 'k is σₖ (a positive crossing), −k its inverse.' : 'Even numbers, one per crossing; a minus sign for an over-crossing.'}
       />
-      <View style={styles.actions}>
-        <Button label="Draw it" onPress={submit} />
-        <Button variant="quiet" label="Cancel" onPress={onClose} />
-      </View>
       <Text style={styles.note}>The drawing replaces the Slate; Undo brings the old one back.</Text>
     </Dialog>
   );
 }
 
 const styles = StyleSheet.create({
-  actions: { flexDirection: 'row', gap: 12, flexWrap: 'wrap' },
   note: { ...type.small, color: colors.inkMuted },
 });

@@ -3,7 +3,7 @@
 import { khovanov, type KhRing } from '@/shared/khovanov';
 import type { LocalRequest, LocalMessage } from './local-kh';
 
-const post = (m: LocalMessage) => (self as unknown as { postMessage(m: LocalMessage): void }).postMessage(m);
+const post = (m: LocalMessage) => (self as { postMessage(m: LocalMessage): void }).postMessage(m);
 
 self.onmessage = (e: MessageEvent<LocalRequest>) => {
   const { pd, unknots, ring, reduced } = e.data;

@@ -1,6 +1,6 @@
 // A sketch's details: title, where it was seen, notes, tags, times, and board photos (camera or
 // a file; kept on the device until the sync uploads them).
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Image, StyleSheet, Text, View } from 'react-native';
 import * as ImagePicker from 'expo-image-picker';
 import type { LocalSketch } from '@/lib/store/types';
@@ -30,13 +30,17 @@ export function SketchDetails({ sketch, visible, onClose }: { sketch: LocalSketc
   const [photos, setPhotos] = useState<Record<string, string>>({});
   const [error, setError] = useState<string | null>(null);
 
+  // The fields start from the record each time the dialog opens, not on every save of it.
+  const stored = useRef(sketch);
+  stored.current = sketch;
   useEffect(() => {
     if (!visible) return;
-    setTitle(sketch.title);
-    setSeenAt(sketch.seenAt);
-    setNotes(sketch.notes);
-    setTags(sketch.tags.join(', '));
-  }, [visible]); // eslint-disable-line react-hooks/exhaustive-deps
+    const s = stored.current;
+    setTitle(s.title);
+    setSeenAt(s.seenAt);
+    setNotes(s.notes);
+    setTags(s.tags.join(', '));
+  }, [visible]);
 
   // Photos still on this device are shown from their local copy.
   useEffect(() => {

@@ -3,11 +3,13 @@ import { useEffect } from 'react';
 import { Modal, Platform, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, shadows, space, type } from '@/constants/theme';
 
-export function Dialog({ title, visible, onClose, children, wide = false }: {
+export function Dialog({ title, visible, onClose, children, actions, wide = false }: {
   title: string;
   visible: boolean;
   onClose: () => void;
   children: React.ReactNode;
+  /** Buttons kept in view under the content, which scrolls on a short screen. */
+  actions?: React.ReactNode;
   wide?: boolean;
 }) {
   // Web: Escape closes (react-native-web's Modal does not listen for it).
@@ -29,6 +31,7 @@ export function Dialog({ title, visible, onClose, children, wide = false }: {
             </Pressable>
           </View>
           <ScrollView contentContainerStyle={styles.body} keyboardShouldPersistTaps="handled">{children}</ScrollView>
+          {actions ? <View style={styles.actions}>{actions}</View> : null}
         </View>
       </View>
     </Modal>
@@ -43,4 +46,5 @@ const styles = StyleSheet.create({
   close: { width: 44, height: 44, alignItems: 'center', justifyContent: 'center' },
   closeText: { fontSize: 26, color: colors.inkMuted },
   body: { padding: space.xl, gap: space.lg },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, paddingHorizontal: space.xl, paddingVertical: space.md, borderTopWidth: 1, borderTopColor: colors.line },
 });

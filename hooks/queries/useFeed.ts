@@ -1,6 +1,6 @@
 // The group feed, a shared sketch's page and what can be done there (comment, fork, photos,
 // share). Keys live under ['feed', groupId] so one invalidation refreshes list and pages.
-import { useEffect, useRef } from 'react';
+import { useCallback, useEffect, useRef } from 'react';
 import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { Comment, commentPaths } from '@/shared/api/comments';
 import { FeedPage, ForkResponse, GroupSketch, ShareResponse, feedPaths } from '@/shared/api/feed';
@@ -64,7 +64,7 @@ export function useGroupSketch(groupId: string, sketchId: string) {
 /** After any change on a sketch page: the page and the feed (comment counts, thumbnails). */
 function useRefreshGroup(groupId: string) {
   const qc = useQueryClient();
-  return () => qc.invalidateQueries({ queryKey: feedKeys.group(groupId) });
+  return useCallback(() => qc.invalidateQueries({ queryKey: feedKeys.group(groupId) }), [qc, groupId]);
 }
 
 /**
@@ -111,7 +111,7 @@ export function useUnsentComments(groupId: string, sketchId: string): LocalComme
     const sent = list.some((c) => c.state === 'sent' && holding.current.has(c.id));
     holding.current = new Set(list.filter((c) => c.state === 'waiting').map((c) => c.id));
     if (sent) void refresh();
-  }, [list]); // eslint-disable-line react-hooks/exhaustive-deps
+  }, [list, refresh]);
   return (list ?? []).filter((c) => c.state !== 'sent');
 }
 

@@ -1,15 +1,11 @@
 // "New sketch" makes a record at once (the Slate edits a stored sketch), so a sketch left
-// without anything drawn, typed or pasted would pile up as an empty record. The sketches started
-// here stay "fresh" until something is drawn on them; a fresh sketch still empty when its Slate
-// closes is removed (hooks/useDropIfEmpty.ts).
+// without anything drawn, typed or pasted would pile up as an empty record. The Slate of a new
+// sketch is opened as /sketches/<id>?fresh=1, so that a reload of the page still knows it is new;
+// such a sketch still empty when its Slate closes is removed (hooks/useDropIfEmpty.ts).
 import { SlateGeometry, type SketchFields } from '@/shared/api/sketches';
 
-const fresh = new Set<string>();
-
-export const markFresh = (id: string) => void fresh.add(id);
-export const isFresh = (id: string) => fresh.has(id);
-/** Drawn on, or closed: never removed by the Slate after this. */
-export const settle = (id: string) => void fresh.delete(id);
+/** The route parameter that marks the Slate of a sketch "New sketch" has just made. */
+export const FRESH_PARAM = 'fresh';
 
 /** Nothing drawn, pasted, typed, attached or shared. */
 export function isEmptySketch(s: SketchFields): boolean {

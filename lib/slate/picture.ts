@@ -93,10 +93,3 @@ export function fitView(points: readonly Point[], width: number, height: number,
 
 export const toScreen = (v: View, p: Point): Point => ({ x: p.x * v.k + v.x, y: p.y * v.k + v.y });
 export const toWorld = (v: View, p: Point): Point => ({ x: (p.x - v.x) / v.k, y: (p.y - v.y) / v.k });
-
-/** Zoom by factor f about the screen point c. */
-export const zoomAbout = (v: View, f: number, c: Point): View => {
-  const k = Math.min(8, Math.max(0.15, v.k * f));
-  const g = k / v.k;
-  return { k, x: c.x - g * (c.x - v.x), y: c.y - g * (c.y - v.y) };
-};

@@ -28,7 +28,7 @@ export function toStoredDiagram(doc: SlateDoc, a: Analysis): StoredDiagram {
     unknots: d?.unknots ?? 0,
     framings: d ? [...d.framings] : [],
     strokes: sketch.components.map((c) => ({ points: c.points.map((p) => [round(p.x), round(p.y)] as [number, number]), closed: c.closed })),
-    geometry: { components: sketch.components, flips: sketch.flips, nextSeq: sketch.nextSeq, colours: doc.colours, ...(sketch.bands?.length ? { bands: sketch.bands } : {}) } as unknown as StoredDiagram['geometry'],
+    geometry: { components: sketch.components, flips: sketch.flips, nextSeq: sketch.nextSeq, colours: doc.colours, ...(sketch.bands?.length ? { bands: sketch.bands } : {}) },
   };
 }
 

@@ -52,7 +52,7 @@ export function homology<T>(ring: Ring<T>, gens: readonly Generator[], entries: 
     const m = sparse(blocks.get(key(i + 1, j))!.size, blocks.get(k)!.size, list, ring.add, ring.isZero);
     if (ring.isField) outgoing.set(k, { rank: rank(ring, m), torsion: [] });
     else {
-      const s = smith(m as unknown as Sparse<Int>); // the only ring that is not a field is Z
+      const s = smith(m as Sparse<Int>); // the only ring that is not a field is Z
       outgoing.set(k, { rank: s.rank, torsion: s.primary.map(toSafe) });
     }
   }

@@ -3,7 +3,7 @@
 // keep their direction, and framings follow the components through anchor labels.
 
 import { Diagram, diagram } from './diagram';
-import { Crossing, mapLabels, orient, PDCode, PDError, relabel, Slot, slotsOf } from './pd';
+import { mapLabels, orient, PDCode, PDError, relabel, rotated, Slot, slotsOf } from './pd';
 
 export interface Framed {
   /** A label of the component in the constructed code. */
@@ -42,7 +42,7 @@ export function assemble(pd: PDCode, heads: ReadonlyMap<number, Slot>, framed: r
   }
   const turned = pd.map((x, crossing) => {
     const h = head.get(x[2])!;
-    return h.crossing === crossing && h.position === 2 ? ([x[2], x[3], x[0], x[1]] as Crossing) : x;
+    return h.crossing === crossing && h.position === 2 ? rotated(x, 2) : x;
   });
   const turnedHeads = new Map<number, Slot>();
   const tailCrossing = (label: number) => {

@@ -12,6 +12,8 @@ export const writablePD = (pd: PDCode): WritablePD => pd.map(([a, b, c, d]) => [
 
 /** The crossing with every label replaced by f(label, its position 0-3). */
 export const mapLabels = (x: Crossing, f: (label: number, position: number) => number): Crossing => [f(x[0], 0), f(x[1], 1), f(x[2], 2), f(x[3], 3)];
+/** The same crossing read from its position k on (k = 2 starts at c): for a strand now entering elsewhere. */
+export const rotated = (x: Crossing, k: number): Crossing => mapLabels(x, (_, p) => x[(p + k) % 4]);
 /** `x` with the label at `position` replaced by `label`. */
 export const withLabelAt = (x: Crossing, position: number, label: number): Crossing => mapLabels(x, (l, p) => (p === position ? label : l));
 
@@ -19,6 +21,23 @@ export const withLabelAt = (x: Crossing, position: number, label: number): Cross
 export interface Slot {
   readonly crossing: number;
   readonly position: number;
+}
+
+/**
+ * The code with the labels at the heads of edges a and b exchanged, and the heads to match: a
+ * then runs from its tail into b's old head and b into a's. This is the saddle between a and b
+ * (a band move, and the join of a connected sum); `heads` gives the head slot of both labels.
+ */
+export function exchangeHeads(code: { readonly pd: PDCode; readonly heads: ReadonlyMap<number, Slot> }, a: number, b: number): { pd: WritablePD; heads: Map<number, Slot> } {
+  const ha = code.heads.get(a)!;
+  const hb = code.heads.get(b)!;
+  const pd = writablePD(code.pd);
+  pd[ha.crossing][ha.position] = b;
+  pd[hb.crossing][hb.position] = a;
+  const heads = new Map(code.heads);
+  heads.set(a, hb);
+  heads.set(b, ha);
+  return { pd, heads };
 }
 
 export interface Oriented {

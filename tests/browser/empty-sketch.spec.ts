@@ -1,4 +1,5 @@
-// "New sketch" left empty leaves no record; one with a stroke or a title is kept (phone, touch).
+// "New sketch" left empty leaves no record, also when its page was reloaded; one with a stroke or
+// a title is kept (phone, touch).
 import type { Browser, CDPSession, Page } from 'playwright-core';
 import { person, phoneWithTouch, shoot } from './helpers';
 
@@ -28,6 +29,18 @@ async function newSketchAndBack(fill: () => Promise<void>) {
 test('an empty new sketch is gone when its Slate closes, also after a reload', async () => {
   await newSketchAndBack(async () => undefined);
   await newSketchAndBack(async () => undefined);
+  await page.getByText('Draw your first link').waitFor();
+  expect(await untitled().count()).toBe(0);
+  await page.reload();
+  await page.getByText('Draw your first link').waitFor();
+  expect(await untitled().count()).toBe(0);
+});
+
+test('an empty new sketch whose page was reloaded is gone when its Slate closes', async () => {
+  await newSketchAndBack(async () => {
+    await page.reload();
+    await page.getByTestId('slate-canvas').waitFor();
+  });
   await page.getByText('Draw your first link').waitFor();
   expect(await untitled().count()).toBe(0);
   await page.reload();

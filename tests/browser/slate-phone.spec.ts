@@ -59,3 +59,28 @@ test('More room for the Readout: a shorter canvas still showing the whole drawin
   await page.waitForTimeout(300);
   expect((await canvas.boundingBox())!.height).toBeCloseTo(before.height, 0);
 });
+
+test('a long title takes two lines of the header, not cut; "Draw it" stays in view in every family', async () => {
+  const title = 'Figure-eight from the Tuesday seminar';
+  await page.getByRole('button', { name: 'Details', exact: true }).click();
+  await page.getByRole('textbox', { name: 'Title' }).fill(title);
+  await page.getByRole('button', { name: 'Save details' }).click();
+  const heading = page.getByRole('heading', { name: title });
+  await heading.waitFor();
+  expect(await heading.evaluate((e) => e.scrollHeight <= e.clientHeight + 1 && e.scrollWidth <= e.clientWidth + 1)).toBe(true);
+
+  await page.getByRole('button', { name: 'Families' }).click();
+  const draw = page.getByRole('button', { name: 'Draw it' });
+  // On top and inside the 844 px screen, with no scrolling: the dialog keeps its buttons under the fields.
+  const inView = () => draw.evaluate((e) => {
+    const r = e.getBoundingClientRect();
+    const top = document.elementFromPoint(r.x + r.width / 2, r.y + r.height / 2);
+    return r.top >= 0 && r.bottom <= window.innerHeight && !!top && e.contains(top);
+  });
+  for (const family of ['Torus link', 'Twist knot', 'Pretzel link', 'Rational knot', 'Cable of the sketch']) {
+    await page.getByRole('radio', { name: family }).click();
+    expect([family, await inView()]).toEqual([family, true]);
+  }
+  await shoot(page, 'slate-phone-families');
+  await page.getByRole('button', { name: 'Cancel' }).click();
+});

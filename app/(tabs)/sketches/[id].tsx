@@ -3,13 +3,14 @@ import { StyleSheet, Text, View } from 'react-native';
 import { useLocalSearchParams } from 'expo-router';
 import { useLocalSketch } from '@/hooks/queries/useLocalSketches';
 import { useDropIfEmpty } from '@/hooks/useDropIfEmpty';
+import { FRESH_PARAM } from '@/lib/slate/fresh';
 import { SlateScreen } from '@/components/slate/SlateScreen';
 import { colors, space, type } from '@/constants/theme';
 
 export default function SketchRoute() {
-  const { id } = useLocalSearchParams<{ id: string }>();
-  const sketch = useLocalSketch(id);
-  useDropIfEmpty(id);
+  const params = useLocalSearchParams<{ id: string; [FRESH_PARAM]?: string }>();
+  const sketch = useLocalSketch(params.id);
+  useDropIfEmpty(params.id, params[FRESH_PARAM] === '1');
   if (sketch.data) return <SlateScreen sketch={sketch.data} />;
   return (
     <View style={styles.pane}>

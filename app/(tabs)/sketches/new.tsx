@@ -5,7 +5,7 @@ import { View } from 'react-native';
 import { router } from 'expo-router';
 import { useSketchWrites } from '@/hooks/queries/useLocalSketches';
 import { useDevice } from '@/hooks/useDevice';
-import { markFresh } from '@/lib/slate/fresh';
+import { FRESH_PARAM } from '@/lib/slate/fresh';
 import { Banner } from '@/components/ui/Banner';
 import { colors, space } from '@/constants/theme';
 
@@ -17,10 +17,8 @@ export default function NewSketch() {
     if (!device || started.current) return;
     started.current = true;
     create.mutate({}, {
-      onSuccess: (s) => {
-        markFresh(s.id); // removed again if nothing is put in it (lib/slate/fresh.ts)
-        router.replace(`/sketches/${s.id}`);
-      },
+      // Marked fresh: removed again if nothing is put in it (lib/slate/fresh.ts).
+      onSuccess: (s) => router.replace(`/sketches/${s.id}?${FRESH_PARAM}=1`),
     });
   }, [device, create]);
   return (

@@ -12,7 +12,7 @@
 // and the band between them is the connected sum's (families/sum.ts, the same exchange).
 
 import { faces } from '../moves/faces';
-import { connectedPieces, orient, PDCode, Slot, writablePD } from '../pd';
+import { connectedPieces, exchangeHeads, orient, PDCode, Slot } from '../pd';
 import { diagram } from '../diagram';
 import { BandError, BandPresentation, Saddle } from './types';
 
@@ -57,18 +57,6 @@ function saddle(stage: Stage, { a, b }: Saddle, band: number): Stage {
   }
   if (!shared) throw new BandError(`band ${band}: edges ${a} and ${b} do not border a common face`);
   throw new BandError(`band ${band} would make the surface non-orientable: edges ${a} and ${b} run opposite ways around their common face`);
-}
-
-function exchangeHeads(stage: Stage, a: number, b: number): Stage {
-  const ha = stage.heads.get(a)!;
-  const hb = stage.heads.get(b)!;
-  const pd = writablePD(stage.pd);
-  pd[ha.crossing][ha.position] = b;
-  pd[hb.crossing][hb.position] = a;
-  const heads = new Map(stage.heads);
-  heads.set(a, hb);
-  heads.set(b, ha);
-  return { pd, heads };
 }
 
 /** The number of components of a stage's code, followed along its heads. */

@@ -6,7 +6,7 @@
 
 import { assemble, Framed } from '../assemble';
 import { Diagram } from '../diagram';
-import { orient, PDError, writablePD } from '../pd';
+import { exchangeHeads, orient, PDError } from '../pd';
 import { sideBySide } from './union';
 
 export function connectedSum(d1: Diagram, d2: Diagram, i = 0, j = 0): Diagram {
@@ -36,15 +36,7 @@ export function connectedSum(d1: Diagram, d2: Diagram, i = 0, j = 0): Diagram {
     return assemble(s.pd, s.heads, framed, unknots);
   }
   const e1 = f1[i].label;
-  const e2 = f2[j].label;
-  const h1 = s.heads.get(e1)!;
-  const h2 = s.heads.get(e2)!;
-  const pd = writablePD(s.pd);
-  pd[h1.crossing][h1.position] = e2;
-  pd[h2.crossing][h2.position] = e1;
-  const heads = new Map(s.heads);
-  heads.set(e1, h2);
-  heads.set(e2, h1);
+  const { pd, heads } = exchangeHeads(s, e1, f2[j].label);
   const framed = [...without(f1, i), ...without(f2, j), { label: e1, framing: joined }];
   return assemble(pd, heads, framed, [...u1, ...u2]);
 }

@@ -1,0 +1,49 @@
+// The Slate's camera under zoom gestures, checked on random views: a zoom about a point leaves the
+// world point under it in place (the definition of zooming about a point, common practice), a
+// pinch that does not scale is a pure pan, and a wheel turn undone by the opposite turn gives
+// the view back.
+import { seededRng } from '@/shared/knot/moves/random';
+import { toWorld } from '@/lib/slate/picture';
+import { pinchedView, wheelView, zoomAbout } from '@/lib/slate/zoom';
+
+const rng = seededRng(7);
+const between = (a: number, b: number) => a + (b - a) * rng();
+const randomView = () => ({ k: between(0.5, 3), x: between(-400, 400), y: between(-400, 400) });
+const randomPoint = () => ({ x: between(0, 1440), y: between(0, 900) });
+
+test('a zoom keeps the world point under its centre where it is', () => {
+  for (let i = 0; i < 200; i++) {
+    const [v, c, f] = [randomView(), randomPoint(), between(0.2, 2.5)];
+    const before = toWorld(v, c);
+    const after = toWorld(zoomAbout(v, f, c), c);
+    expect(after.x).toBeCloseTo(before.x, 6);
+    expect(after.y).toBeCloseTo(before.y, 6);
+  }
+});
+
+test('the scale stays within 0.15x and 8x however far one zooms', () => {
+  const v = randomView();
+  expect(zoomAbout(v, 1e6, randomPoint()).k).toBe(8);
+  expect(zoomAbout(v, 1e-6, randomPoint()).k).toBe(0.15);
+});
+
+test('a pinch without scaling pans by the fingers; with scaling its focal point follows the fingers', () => {
+  for (let i = 0; i < 100; i++) {
+    const [from, focal, shift] = [randomView(), randomPoint(), { x: between(-100, 100), y: between(-100, 100) }];
+    expect(pinchedView({ from, scale: 1, focal, shift })).toEqual({ k: from.k, x: from.x + shift.x, y: from.y + shift.y });
+    const v = pinchedView({ from, scale: between(0.5, 2), focal, shift });
+    const under = toWorld(v, { x: focal.x + shift.x, y: focal.y + shift.y });
+    expect(under.x).toBeCloseTo(toWorld(from, focal).x, 6);
+    expect(under.y).toBeCloseTo(toWorld(from, focal).y, 6);
+  }
+});
+
+test('a wheel turn and the opposite turn at the same pointer give the view back', () => {
+  for (let i = 0; i < 100; i++) {
+    const [v, at, dy] = [randomView(), randomPoint(), between(-300, 300)];
+    const back = wheelView(wheelView(v, dy, at), -dy, at);
+    expect(back.k).toBeCloseTo(v.k, 9);
+    expect(back.x).toBeCloseTo(v.x, 6);
+    expect(back.y).toBeCloseTo(v.y, 6);
+  }
+});
