@@ -10,9 +10,8 @@ import type { Analysis } from '@/shared/drawing/analyse';
 import { componentNear, crossingNear } from '@/shared/drawing/pick';
 import { dist, type Point } from '@/shared/drawing/point';
 import { addStroke, flipCrossing, moveComponent, reshapeComponent, reverseComponent } from '@/shared/drawing/sketch';
-import { carryFlips } from '@/shared/drawing/carry';
 import type { SlateDoc } from '@/lib/slate/record';
-import { finishBand, tapBand } from '@/lib/slate/band-actions';
+import { carryThroughDrag, finishBand, tapBand } from '@/lib/slate/band-actions';
 import { fitView, screenSizes, strandPictures, toScreen, toWorld, zoomAbout } from '@/lib/slate/picture';
 import { currentDoc, useSlate, type View as ViewT } from '@/lib/slate/slate-store';
 import { fonts, slate } from '@/constants/theme';
@@ -89,8 +88,8 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
       const edited = d.kind === 'move'
         ? moveComponent(d.from.sketch, d.id, delta)
         : reshapeComponent(d.from.sketch, d.id, d.index, delta, reshapeRadius / s.view.k);
-      // Flips are anchored by position; a drag can carry a crossing out of its flip's reach.
-      const sketch = carryFlips(d.from.sketch, edited);
+      // Flips and bands are anchored by position; a drag carries them (or removes bands, saying why).
+      const sketch = carryThroughDrag(d.from.sketch, edited);
       s.setPreview({ ...d.from, sketch });
     }
   };
