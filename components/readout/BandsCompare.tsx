@@ -3,6 +3,7 @@
 // different classes over F2 mean the surfaces are not isotopic rel boundary, equal ones prove
 // nothing, and other strands (even of the same knot) are another diagram: no comparison.
 import { useMemo, useState } from 'react';
+import { create } from 'zustand';
 import { StyleSheet, Text, View } from 'react-native';
 import { bandsOf } from '@/shared/drawing/bands';
 import { useBandComparison } from '@/hooks/useBandComparison';
@@ -15,6 +16,14 @@ import type { CompareAnswer } from './local-compare';
 import { bidegree } from './SurfaceClassText';
 
 const titleOf = (t: string) => t || 'Untitled sketch';
+
+// The sketch chosen for comparison, kept outside the component: the Readout is mounted again
+// when the phone's split changes, and the choice belongs to the open sketch until another opens.
+const useChoice = create<{ of: string | null; other: string | null; choose(of: string | null, other: string): void }>((set) => ({
+  of: null,
+  other: null,
+  choose: (of, other) => set({ of, other }),
+}));
 
 function verdictText(r: CompareAnswer): string {
   if (r.kind === 'not-same') return 'Not the same knot diagram: no comparison (the two sketches need the same strands, as a fork has).';
@@ -42,7 +51,8 @@ export function BandsCompare() {
   const dragging = useSlate((s) => s.preview !== null);
   const candidates = useCandidates(sketchId);
   const [open, setOpen] = useState(false);
-  const [chosen, setChosen] = useState<string | null>(null);
+  const choice = useChoice();
+  const chosen = choice.of === sketchId ? choice.other : null;
   const other = candidates.find((c) => c.id === chosen) ?? null;
   const r = useBandComparison(sketch, other?.sketch ?? null, dragging);
   return (
@@ -55,7 +65,7 @@ export function BandsCompare() {
         candidates.length ? (
           <View style={styles.row}>
             {candidates.map((c) => (
-              <Chip key={c.id} label={`Compare with ${c.title}`} text={c.title} on={c.id === chosen} onPress={() => (setChosen(c.id), setOpen(false))} />
+              <Chip key={c.id} label={`Compare with ${c.title}`} text={c.title} on={c.id === chosen} onPress={() => (choice.choose(sketchId, c.id), setOpen(false))} />
             ))}
           </View>
         ) : (

@@ -4,19 +4,12 @@
 
 import { carryBands } from '@/shared/drawing/band-carry';
 import { bandShapes } from '@/shared/drawing/band-shape';
-import { addBand, bandsOf, flipBandCrossing } from '@/shared/drawing/bands';
+import { bandsOf, flipBandCrossing } from '@/shared/drawing/bands';
 import { readBands } from '@/shared/drawing/band-read';
 import { dist, Point } from '@/shared/drawing/point';
 import { addStroke, emptySketch, moveComponent, nearestPointIndex, reshapeComponent, Sketch, SketchComponent } from '@/shared/drawing/sketch';
-import { circleCurve, touches } from './drawing-fixtures';
+import { bandFrom as band, circleCurve, tallEllipse as ellipse, touches } from './drawing-fixtures';
 
-const ellipse = (t: number): Point => ({ x: 200 + 90 * Math.cos(t), y: 200 - 140 * Math.sin(t) });
-const line = (p: Point, q: Point, n = 40): Point[] => Array.from({ length: n + 1 }, (_, i) => ({ x: p.x + ((q.x - p.x) * i) / n, y: p.y + ((q.y - p.y) * i) / n }));
-const band = (s: Sketch, p: Point, q: Point): Sketch => {
-  const r = addBand(s, line(p, q));
-  if ('reason' in r) throw new Error(r.reason);
-  return r.sketch;
-};
 
 const unknot = addStroke(emptySketch, touches(ellipse, 400, 0.5, 1));
 const across = band(unknot, { x: 112, y: 200 }, { x: 288, y: 200 });

@@ -3,20 +3,12 @@
 
 import { certifyBands } from '@/components/readout/local-bands';
 import { compareSketches } from '@/components/readout/local-compare';
-import { addBand, bandsOf } from '@/shared/drawing/bands';
+import { bandsOf } from '@/shared/drawing/bands';
 import { readBands } from '@/shared/drawing/band-read';
 import { bandUnion } from '@/shared/drawing/band-union';
-import { Point } from '@/shared/drawing/point';
 import { addStroke, emptySketch, moveComponent, Sketch } from '@/shared/drawing/sketch';
-import { touches } from './drawing-fixtures';
+import { bandFrom as band, tallEllipse as ellipse, touches } from './drawing-fixtures';
 
-const ellipse = (t: number): Point => ({ x: 200 + 90 * Math.cos(t), y: 200 - 140 * Math.sin(t) });
-const line = (p: Point, q: Point, n = 40): Point[] => Array.from({ length: n + 1 }, (_, i) => ({ x: p.x + ((q.x - p.x) * i) / n, y: p.y + ((q.y - p.y) * i) / n }));
-const band = (s: Sketch, p: Point, q: Point): Sketch => {
-  const r = addBand(s, line(p, q));
-  if ('reason' in r) throw new Error(r.reason);
-  return r.sketch;
-};
 // Where the horizontal line at height y meets the ellipse.
 const across = (s: Sketch, y: number): Sketch => {
   const half = 90 * Math.sqrt(1 - ((y - 200) / 140) ** 2);
