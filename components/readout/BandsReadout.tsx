@@ -2,12 +2,15 @@
 // (certified when simplification removes every crossing, or by Khovanov homology), the
 // surface's Euler characteristic chi = c - b, the genus bound it gives, "ribbon" when every
 // component of the surface is a disk, and beside it the lower bounds |s|/2 and |sigma|/2 with
-// "g4 = n" when they meet (shared/knot/bands/certificate.ts says why each holds).
+// "g4 = n" when they meet (shared/knot/bands/certificate.ts says why each holds); then the
+// surface's class over F2 and the comparison with another sketch's surface.
 import { StyleSheet, Text, View } from 'react-native';
 import type { BandsState } from '@/hooks/useBandCertificate';
 import type { SState } from '@/hooks/useSInvariant';
 import { BANDS_KH_CROSSINGS, BANDS_MAX_CROSSINGS, type BandsAnswer } from './local-bands';
 import { colors, fonts, space, type } from '@/constants/theme';
+import { BandsCompare } from './BandsCompare';
+import { SurfaceClassText } from './SurfaceClassText';
 
 const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
@@ -68,6 +71,8 @@ export function BandsReadout({ state, refused, s, signature }: { state: BandsSta
           ) : null}
           {knot && lower !== null ? <Text style={styles.note}>Lower bounds: |s|/2 and |σ|/2 give g4 ≥ {lower}</Text> : null}
           {knot && lower !== null && c.genusBound === lower ? <Text style={styles.num} testID="readout-bands-g4">g4 = {lower}</Text> : null}
+          <SurfaceClassText surface={c.surface} />
+          <BandsCompare />
         </>
       ) : null}
       <Text style={styles.note}>On the device up to {BANDS_MAX_CROSSINGS} crossings of the band drawing; the Khovanov check up to {BANDS_KH_CROSSINGS} after simplification.</Text>

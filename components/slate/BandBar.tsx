@@ -14,7 +14,7 @@ export function BandBar({ afterComponents, refused }: { afterComponents: number 
   const showAfter = useSlate((s) => s.showAfter);
   const doc = useSlate((s) => s.history.present);
   const bands = bandsOf(doc.sketch);
-  if (bands.length === 0 && tool !== 'bands') return null;
+  if (bands.length === 0 && tool !== 'bands' && !notice) return null;
   const s = useSlate.getState();
   const k = bands.findIndex((b) => b.id === selected);
   const band = k >= 0 ? bands[k] : null;

@@ -1,9 +1,13 @@
 // What the Bands tool does on the Slate: a drag draws a band (refused with the reason when it
 // cannot be a band of an orientable surface), a tap on a band/strand crossing flips it, a tap
-// on a band's badge opens its controls. Each edit is one undo step.
+// on a band's badge opens its controls. Each edit is one undo step. A drag of a strand carries
+// its flips and bands with it; bands it cannot carry are removed, and the notice says so.
+import { carryBands } from '@/shared/drawing/band-carry';
 import { bandShapes } from '@/shared/drawing/band-shape';
 import { addBand, flipBandCrossing } from '@/shared/drawing/bands';
+import { carryFlips } from '@/shared/drawing/carry';
 import { dist, type Point } from '@/shared/drawing/point';
+import type { Sketch } from '@/shared/drawing/sketch';
 import { bandPictures } from './band-pictures';
 import { toWorld } from './picture';
 import { useSlate } from './slate-store';
@@ -39,4 +43,11 @@ export function tapBand(screen: Point): boolean {
   const badge = pictures.find((p) => dist(p.badge.at, screen) <= HIT + 4);
   s.selectBand(badge && badge.id !== s.selectedBand ? badge.id : null);
   return badge !== undefined;
+}
+
+/** The sketch a move or reshape of a strand makes, its flips and bands carried (or the bands removed, with the notice). */
+export function carryThroughDrag(before: Sketch, edited: Sketch): Sketch {
+  const { sketch, notice } = carryBands(before, carryFlips(before, edited));
+  useSlate.getState().setBandNotice(notice);
+  return sketch;
 }

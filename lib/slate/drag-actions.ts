@@ -5,8 +5,7 @@ import type { Analysis } from '@/shared/drawing/analyse';
 import { componentNear, crossingNear } from '@/shared/drawing/pick';
 import { dist, type Point } from '@/shared/drawing/point';
 import { addStroke, flipCrossing, moveComponent, reshapeComponent, reverseComponent } from '@/shared/drawing/sketch';
-import { carryFlips } from '@/shared/drawing/carry';
-import { finishBand, tapBand } from './band-actions';
+import { carryThroughDrag, finishBand, tapBand } from './band-actions';
 import { toWorld, type StrandPicture } from './picture';
 import type { SlateDoc } from './record';
 import { useSlate, type View } from './slate-store';
@@ -59,8 +58,8 @@ export function dragTo(d: Drag, screen: Point): Point[] | null {
     const edited = d.kind === 'move'
       ? moveComponent(d.from.sketch, d.id, delta)
       : reshapeComponent(d.from.sketch, d.id, d.index, delta, reshapeRadius / s.view.k);
-    // Flips are anchored by position; a drag can carry a crossing out of its flip's reach.
-    s.setPreview({ ...d.from, sketch: carryFlips(d.from.sketch, edited) });
+    // Flips and bands are anchored by position; a drag carries them (or removes bands, saying why).
+    s.setPreview({ ...d.from, sketch: carryThroughDrag(d.from.sketch, edited) });
   }
   return null;
 }

@@ -52,12 +52,17 @@ export function docFromDiagram(d: Diagram, braid?: readonly number[], picture?: 
   return { sketch: layoutToSketch(layout, d.framings), colours: {} };
 }
 
-export function docFromStored(stored: StoredDiagram): SlateDoc {
+/** The drawing as it was left on the Slate; null for a record without one (typed, or made elsewhere). */
+export function drawnDoc(stored: StoredDiagram): SlateDoc | null {
   const g = SlateGeometry.safeParse(stored.geometry);
-  if (g.success) {
-    const { colours = {}, ...sketch } = g.data;
-    return { sketch, colours };
-  }
+  if (!g.success) return null;
+  const { colours = {}, ...sketch } = g.data;
+  return { sketch, colours };
+}
+
+export function docFromStored(stored: StoredDiagram): SlateDoc {
+  const drawn = drawnDoc(stored);
+  if (drawn) return drawn;
   // A stored record is shown even if its picture is imperfect, so that it is never replaced by
   // an empty board; its stored PD code stays the record's truth until the user edits it.
   if (stored.pd.length === 0 && stored.unknots === 0) return emptyDoc;

@@ -140,7 +140,7 @@ export function bandShape(closed: readonly SketchComponent[], bands: readonly Ba
   const otherCores = bands.filter((_, j) => j !== k).flatMap((other) => coreHits(core, arcs, d0, d1, other.core, false).map((h) => h.arc));
   const twists = Math.abs(band.twists);
   const [lo, hi] = freeStretch(d0 + twistMargin, d1 - twistMargin, [...crossings.map((c) => c.arc), ...otherCores], twistMargin);
-  if (twists * twistLength > hi - lo) return { reason: `Band ${number} has no room for ${twists} half twists: draw it longer, or with fewer strands across it.` };
+  if (twists > 0 && twists * twistLength > hi - lo) return { reason: `Band ${number} has no room for ${twists} half twists: draw it longer, or with fewer strands across it.` };
   const first = (lo + hi - twists * twistLength) / 2;
   const n0 = normal(tangentAt(core, arcs, 0));
   const n1 = normal(tangentAt(core, arcs, arcs[arcs.length - 1]));

@@ -21,12 +21,16 @@ export const WIDE = { width: 1440, height: 900 };
 const ARTIFACTS = join(__dirname, '../artifacts');
 mkdirSync(ARTIFACTS, { recursive: true });
 
-/** Screenshots of the current page at phone and wide size, then back to the page's own size. */
-export async function shoot(page: Page, name: string): Promise<void> {
+/**
+ * Screenshots of the current page at phone and wide size, then back to the page's own size;
+ * `frame` runs after each resize (to scroll what the shot is about into view).
+ */
+export async function shoot(page: Page, name: string, frame?: () => Promise<void>): Promise<void> {
   const own = page.viewportSize() ?? PHONE;
   for (const size of [PHONE, WIDE]) {
     await page.setViewportSize(size);
     await page.waitForTimeout(250); // let the layout switch (tabs <-> rail) settle
+    await frame?.();
     await page.screenshot({ path: join(ARTIFACTS, `${name}-${size.width}x${size.height}.png`) });
   }
   await page.setViewportSize(own);

@@ -61,6 +61,14 @@ describe('bands on a drawn unknot', () => {
     expect(labels.has(a) && labels.has(b)).toBe(true);
   });
 
+  test('a short untwisted band needs no room for twists', () => {
+    // Across a narrow ellipse: long enough to leave its strands, too short to hold a half twist.
+    const narrow = drawn([ellipse(200, 200, 30, 140)]);
+    const r = read(band(narrow, { x: 171, y: 200 }, { x: 229, y: 200 }));
+    expect(r.afterDiagram.components).toBe(2);
+    expect(jonesOf(r.afterDiagram).equals(unlink(2))).toBe(true);
+  });
+
   test('one half twist would make a Moebius band: refused with the reason', () => {
     const r = readBands(setBandTwists(across, bandsOf(across)[0].id, 1));
     expect(r && 'reason' in r && r.reason).toMatch(/non-orientable/);

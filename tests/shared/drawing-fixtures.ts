@@ -1,6 +1,7 @@
 // Programmatic drawings for the drawing tests: parametric curves sampled as touch points with
 // deterministic jitter.
 
+import { addBand } from '@/shared/drawing/bands';
 import { Point } from '@/shared/drawing/point';
 import { addStroke, Sketch } from '@/shared/drawing/sketch';
 import { seededRng } from '@/shared/knot/moves/random';
@@ -37,3 +38,16 @@ export const circleCurve = (cx: number, cy: number, r: number) => at(cx, cy, r, 
 export function drawCurves(curves: readonly ((t: number) => Point)[], samples = 400, noise = 0.6): Sketch {
   return curves.reduce((s, c, i) => addStroke(s, touches(c, samples, noise, i + 1)), { components: [], flips: [], nextSeq: 1 } as Sketch);
 }
+
+/** Points from p to q, evenly spaced (a straight drag). */
+export const segment = (p: Point, q: Point, n = 40): Point[] => Array.from({ length: n + 1 }, (_, i) => ({ x: p.x + ((q.x - p.x) * i) / n, y: p.y + ((q.y - p.y) * i) / n }));
+
+/** A band dragged straight from p to q; throws the reason when it is refused. */
+export function bandFrom(s: Sketch, p: Point, q: Point): Sketch {
+  const r = addBand(s, segment(p, q));
+  if ('reason' in r) throw new Error(r.reason);
+  return r.sketch;
+}
+
+/** The unknot as a tall ellipse about (200, 200), drawn by a finger. */
+export const tallEllipse = (t: number): Point => ({ x: 200 + 90 * Math.cos(t), y: 200 - 140 * Math.sin(t) });

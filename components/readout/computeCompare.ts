@@ -1,0 +1,5 @@
+// Native: no web worker; the comparison is computed after a frame (worker-call.ts).
+import { compareSketches } from './local-compare';
+import { afterFrame } from './worker-call';
+
+export const computeCompare = afterFrame(compareSketches);
