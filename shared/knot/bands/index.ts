@@ -2,7 +2,7 @@
 // ribbon certificates, and the surface's class in Khovanov homology over F2 or Z (up to sign).
 import type { PDCode } from '../pd';
 import { AfterBands, simplifiedStage } from './after';
-import { BandCertificate, certify } from './certificate';
+import { AfterHomology, BandCertificate, certify } from './certificate';
 import { ClassVector, classVector } from './class';
 import { classVectorZ } from './class-z';
 import { EnhancedState } from './cube-levels';
@@ -10,9 +10,10 @@ import { bandStages } from './saddle';
 import { BandError, BandPresentation, Saddle } from './types';
 
 export { BandError } from './types';
+export { bandStages } from './saddle';
 export type { BandPresentation, Saddle } from './types';
 export type { AfterBands } from './after';
-export type { BandCertificate, UnlinkCertificate } from './certificate';
+export type { AfterHomology, BandCertificate, UnlinkCertificate } from './certificate';
 export { UNLINK_CROSSINGS } from './certificate';
 export type { EnhancedState } from './cube-levels';
 
@@ -68,10 +69,11 @@ export function afterBands(p: BandPresentation): AfterBands {
 
 /**
  * Components, bands, Euler characteristic, genus bound and unlink certificate (certificate.ts).
- * maxCrossings (default UNLINK_CROSSINGS) limits the Khovanov check of the simplified result.
+ * maxCrossings (default UNLINK_CROSSINGS) limits the Khovanov check of the simplified result;
+ * `homology` replaces the engine call that check makes (a server run reports its progress).
  */
-export function bandCertificate(p: BandPresentation, opts: { maxCrossings?: number } = {}): BandCertificate {
-  return certify(p, bandStages(p), opts.maxCrossings);
+export function bandCertificate(p: BandPresentation, opts: { maxCrossings?: number; homology?: AfterHomology } = {}): BandCertificate {
+  return certify(p, bandStages(p), opts.maxCrossings, opts.homology);
 }
 
 /**
