@@ -4,6 +4,7 @@ import { BandError, bandCertificate, BandPresentation, compareSurfaces, Saddle, 
 import { diagram, Diagram } from '@/shared/knot/diagram';
 import { addKink, faces, pushAcross, Rng, seededRng } from '@/shared/knot/moves';
 import { orient, PDCode } from '@/shared/knot/pd';
+import { pretzelLink } from '@/shared/knot/families';
 import { disks946, p33m3, ribbon, trefoil } from './bands-fixtures';
 import { scramble } from './scramble';
 
@@ -112,6 +113,32 @@ describe('the class over Z, up to sign', () => {
     for (const [a, b] of [disks946.first, disks946.second]) {
       expect(compareSurfaces(p33m3.pd, 0, a.saddles, b.saddles, z).verdict).toBe('equal up to sign: no conclusion');
     }
+  }, 60_000);
+
+  it('the verdicts over Z do not depend on the labels or the order of the crossings', () => {
+    // Relabelling changes the basis and the elimination order, not the classes: a generator
+    // found differently upstairs may change the class by sign only, so the verdicts must stay.
+    const z = { ring: 'Z' } as const;
+    for (const seed of [4, 5]) {
+      const { pd, rename } = scramble(p33m3.pd, seededRng(seed));
+      const move = (p: BandPresentation) => p.saddles.map(({ a: x, b: y }) => ({ a: rename.get(x)!, b: rename.get(y)! }));
+      expect(compareSurfaces(pd, 0, move(disks946.first[0]), move(disks946.second[0]), z).verdict).toBe('differ');
+      expect(compareSurfaces(pd, 0, move(disks946.first[0]), move(disks946.first[1]), z).verdict).toBe('equal up to sign: no conclusion');
+    }
+  }, 120_000);
+
+  it('refuses the Z route over its generator limit before any elimination, with the reason', () => {
+    // P(5,-5,2), 12 crossings: thousands of generators of C^{0,2} of the unlink's cube.
+    const { pd } = pretzelLink([5, -5, 2]);
+    const labels = [...new Set(pd.flat())];
+    const ribbonBand = labels.flatMap((a) => labels.map((b) => ({ pd, unknots: 0, saddles: [{ a, b }] }))).find((p) => {
+      try {
+        return p.saddles[0].a < p.saddles[0].b && bandCertificate(p).ribbon;
+      } catch {
+        return false;
+      }
+    })!;
+    expect(() => surfaceClass(ribbonBand, { ring: 'Z' })).toThrow(/computed up to 2000 generators of C\^\{0,2\} of the unlink's cube; this one has \d{4,}/);
   }, 60_000);
 
   it('the genus-1 surface of the positive trefoil has class 0 over Z too: Kh^{0,-1} = 0', () => {
