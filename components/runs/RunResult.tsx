@@ -1,9 +1,10 @@
 // A run's page: where it stands (status, progress, cancel), then its result: the bigraded
 // table, the Poincare polynomial, the Euler characteristic checked against the Jones
 // polynomial, thin or thick, the s-invariant with its slice-genus bounds when asked, and exports. A cable sweep shows a grid of small tables instead.
+// A bands run shows its certificate first; its table is of the diagram after the bands.
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { isFinished, runPagePath, type KhResultJson, type RunDetail, type SValues } from '@/shared/api/runs';
+import { isFinished, runPagePath, type BandsResultJson, type KhResultJson, type RunDetail, type SValues } from '@/shared/api/runs';
 import { toCsv, toJson, toLatexTable, type ExportRecord } from '@/shared/khovanov/export';
 import { poincareFormat } from '@/shared/khovanov/format';
 import { Laurent } from '@/shared/poly/laurent';
@@ -37,11 +38,11 @@ const exportName = (run: { id: string; label: string; ring: string; reduced: boo
   return ['kh', slug, run.ring + (run.reduced ? '-reduced' : ''), run.id.slice(0, 8)].filter(Boolean).join('-');
 };
 
-/** What an export of this run (or sweep cell) says about it. */
+/** What an export of this run (or sweep cell) says about it; a bands run's table is of the diagram after the bands. */
 export const exportRecord = (run: RunDetail | RunDetail['children'][number], diagram: RunDetail['diagram'], result: KhResultJson): ExportRecord => ({
   runId: run.id,
   label: run.label,
-  diagram: { pd: diagram.pd, unknots: diagram.unknots },
+  diagram: result.bands ? { pd: result.bands.after.pd, unknots: result.bands.after.unknots } : { pd: diagram.pd, unknots: diagram.unknots },
   source: run.source,
   date: run.finishedAt ?? run.createdAt,
   result,
@@ -96,12 +97,28 @@ function SFact({ s, diagram }: { s: SValues; diagram: RunDetail['diagram'] }) {
   );
 }
 
+/** What a bands run certifies (shared/knot/bands/certificate.ts): the unlink, chi, the genus bound, ribbon. */
+function BandsFact({ bands }: { bands: BandsResultJson }) {
+  const c = bands.components;
+  const target = `the ${c}-component unlink`;
+  const verdict =
+    bands.unlink === 'crossingless' ? `${target} (simplification leaves no crossing)`
+      : bands.unlink === 'khovanov' ? `${target} (certified by Khovanov homology over Z)`
+        : `${c} component${c === 1 ? '' : 's'}, not certified to be an unlink: its Khovanov homology is not the unlink's`;
+  const bound = bands.genusBound === null ? '' : bands.ribbon ? ' · ribbon: every component of the surface is a disk' : ` · genus of the surface ${bands.genusBound}`;
+  return (
+    <Fact name={`After the ${bands.bands} band${bands.bands === 1 ? '' : 's'}`}>
+      <Text style={styles.value} testID="run-bands">{`${verdict} · χ = ${bands.chi}${bound}`}</Text>
+    </Fact>
+  );
+}
+
 /** Start the same computation again (a cancelled or failed run): on the sketch as it is now, or on the same diagram. */
 function RunAgain({ run }: { run: RunDetail }) {
   const start = useStartRun();
   const same = { kind: run.kind, ring: run.ring, reduced: run.reduced, sweep: run.sweep ?? undefined, computeS: run.computeS };
   const body = run.sketchId
-    ? { ...same, sketchId: run.sketchId }
+    ? { ...same, sketchId: run.sketchId, ...(run.diagram.bands && { diagram: run.diagram }) }
     : { ...same, diagram: run.diagram, groupId: run.groupId ?? undefined, label: run.label, source: run.source ?? undefined };
   return (
     <>
@@ -134,8 +151,13 @@ function Input({ run }: { run: RunDetail }) {
       <Fact name={`PD code · ${run.crossings} crossings${d.unknots ? ` and ${d.unknots} unknot${d.unknots === 1 ? '' : 's'}` : ''}`}>
         <Text style={styles.code} selectable testID="run-pd">{pdToText(d.pd)}</Text>
       </Fact>
+      {d.bands ? (
+        <Fact name={`Bands · ${d.bands.length}, as saddles between edges`}>
+          <Text style={styles.code} selectable testID="run-band-list">{d.bands.map(([a, b]) => `[${a}, ${b}]`).join(' ')}</Text>
+        </Fact>
+      ) : null}
       <Fact name="Computed">
-        {`${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${run.ring}${run.reduced ? `, reduced at component ${(run.result?.component ?? 0) + 1}` : ''} · started ${runDate(run.createdAt)} by ${run.startedBy.displayName}${run.finishedAt ? ` · ended ${runDate(run.finishedAt)}` : ''}${run.computeS ? ' · with the s-invariant' : ''}${run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}${run.worker ? ` · computed by ${run.worker}` : ''}`}
+        {`${run.kind === 'cable-sweep' ? 'Cable sweep' : run.kind === 'bands' ? 'Unlink check of the bands by Khovanov homology' : 'Khovanov homology'} over ${run.ring}${run.reduced ? `, reduced at component ${(run.result?.component ?? 0) + 1}` : ''} · started ${runDate(run.createdAt)} by ${run.startedBy.displayName}${run.finishedAt ? ` · ended ${runDate(run.finishedAt)}` : ''}${run.computeS ? ' · with the s-invariant' : ''}${run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}${run.worker ? ` · computed by ${run.worker}` : ''}`}
       </Fact>
     </View>
   );
@@ -160,7 +182,8 @@ export function RunResult({ run }: { run: RunDetail }) {
       <Input run={run} />
       {run.result ? (
         <>
-          <Section title={`Khovanov homology over ${run.result.ring}${run.result.reduced ? ', reduced' : ''}`}>
+          {run.result.bands ? <BandsFact bands={run.result.bands} /> : null}
+          <Section title={`Khovanov homology over ${run.result.ring}${run.result.reduced ? ', reduced' : ''}${run.result.bands ? ' of the diagram after the bands' : ''}`}>
             <KhTable groups={run.result.groups} ring={run.result.ring} label="Khovanov homology" />
           </Section>
           <KhSummary result={run.result} />

@@ -14,7 +14,7 @@ import {
   useReactTable,
   type SortingState,
 } from '@tanstack/react-table';
-import type { RunSummary } from '@/shared/api/runs';
+import type { RunKind, RunSummary } from '@/shared/api/runs';
 import { runPagePath } from '@/shared/api/runs';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { useFilterShortcut } from '@/components/shell/shortcuts';
@@ -22,6 +22,9 @@ import { ProgressBar } from './ProgressBar';
 import { duration, ringLabel, runDate, statusLabel } from './format';
 
 const col = createColumnHelper<RunSummary>();
+
+/** How the table names each kind (the filter matches these words). */
+const kindName: Record<RunKind, string> = { khovanov: 'khovanov', 'cable-sweep': 'cable sweep', bands: 'bands' };
 
 const columns = [
   col.accessor('status', {
@@ -38,7 +41,7 @@ const columns = [
     cell: (c) => (
       <Link href={runPagePath(c.row.original.id)} style={[styles.link, !c.row.original.sketchId && styles.linkCode]} numberOfLines={2}>
         {c.getValue()}
-        <Text style={styles.muted}>{`  ${c.row.original.kind === 'cable-sweep' ? 'cable sweep · ' : ''}${c.row.original.crossings} crossings`}</Text>
+        <Text style={styles.muted}>{`  ${c.row.original.kind === 'khovanov' ? '' : `${kindName[c.row.original.kind]} · `}${c.row.original.crossings} crossings`}</Text>
       </Link>
     ),
   }),
@@ -55,7 +58,7 @@ const widths: Record<string, number> = { status: 1.1, label: 2.3, ring: 1, creat
 
 /** What the filter looks in: the words each row shows. */
 const searchText = (r: RunSummary) =>
-  [r.label, ringLabel(r), statusLabel[r.status], r.kind === 'cable-sweep' ? 'cable sweep' : 'khovanov', runDate(r.createdAt, true), r.source ?? ''].join(' ').toLowerCase();
+  [r.label, ringLabel(r), statusLabel[r.status], kindName[r.kind], runDate(r.createdAt, true), r.source ?? ''].join(' ').toLowerCase();
 
 export function RunsTable({ runs, openId }: { runs: RunSummary[]; openId?: string }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'createdAt', desc: true }]);

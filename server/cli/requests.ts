@@ -74,7 +74,7 @@ export const Request = z
       .strict()
       .optional(),
     compute: z.array(z.enum(computable)).optional(),
-    /** For "kh": 'Z', 'Q' or 'F<p>'. */
+    /** For "kh": 'Z' (default), 'Q' or 'F<p>'; for "surfaceClass": 'F2' (default) or 'Z'. */
     ring: z.string().regex(/^(Z|Q|F\d+)$/, "ring must be 'Z', 'Q' or 'F<p>' (e.g. 'F2')").optional(),
     reduced: z.boolean().optional(),
     /** For "colourings": the modulus n (default 3). */
@@ -87,7 +87,8 @@ export const Request = z
   .strict()
   .refine(oneCode(['pd', 'braid', 'dt', 'cable']), { message: 'give exactly one of "pd", "braid", "dt" or "cable"' })
   .refine((r) => (r.bands === undefined && r.compareBands === undefined) || r.pd !== undefined, { message: '"bands" and "compareBands" name edges of the request\'s "pd" code' })
-  .refine((r) => !r.compute?.some((c) => c === 'bands' || c === 'surfaceClass') || r.bands !== undefined, { message: '"bands" and "surfaceClass" need "bands": [[a, b], ...]' });
+  .refine((r) => !r.compute?.some((c) => c === 'bands' || c === 'surfaceClass') || r.bands !== undefined, { message: '"bands" and "surfaceClass" need "bands": [[a, b], ...]' })
+  .refine((r) => !r.compute?.includes('surfaceClass') || r.ring === undefined || r.ring === 'F2' || r.ring === 'Z', { message: '"surfaceClass" is computed over "F2" (the default) or "Z"' });
 export type Request = z.infer<typeof Request>;
 
 export type Answer = Record<string, unknown>;
@@ -152,10 +153,11 @@ export function answer(r: Request): Answer {
   }
   if (wanted.has('surfaceClass')) {
     // The crossing limit is checked before any work (surfaceClass, CLASS_CROSSINGS).
+    const ring = r.ring === 'Z' ? 'Z' : 'F2';
     if (r.compareBands) {
-      const cmp = compareSurfaces(d.pd, d.unknots, presentation.saddles, saddles(r.compareBands));
+      const cmp = compareSurfaces(d.pd, d.unknots, presentation.saddles, saddles(r.compareBands), { ring });
       out.surfaceClass = { ...cmp.a, compare: { verdict: cmp.verdict, other: cmp.b } };
-    } else out.surfaceClass = surfaceClass(presentation);
+    } else out.surfaceClass = surfaceClass(presentation, { ring });
   }
   return out;
 }

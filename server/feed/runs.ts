@@ -8,7 +8,8 @@ import { poincareFormat } from '@/shared/khovanov/format';
 
 type Db = DataSource | EntityManager;
 
-const DONE = `r."status" = 'done' AND r."parentRunId" IS NULL`;
+// A bands run's table is of the diagram after the bands, not of the sketch's link: left out.
+const DONE = `r."status" = 'done' AND r."parentRunId" IS NULL AND r."kind" != 'bands'`;
 
 /** SQL for "this sketch has a finished run". */
 export const hasResultsSql = (sketchColumn: string): string => `EXISTS (SELECT 1 FROM "runs" r WHERE r."sketchId" = ${sketchColumn} AND ${DONE})`;

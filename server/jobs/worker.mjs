@@ -3,4 +3,4 @@
 import '../pool-thread.mjs';
 import { createRequire } from 'node:module';
 
-export const { summary, cables, runKey } = createRequire(import.meta.url)('./tasks.ts');
+export const { summary, cables, runKey, bandsProblem } = createRequire(import.meta.url)('./tasks.ts');

@@ -75,7 +75,7 @@ export async function refreshSweep(deps: Deps, sweepId: string): Promise<void> {
 
 const cut = (s: string, n: number) => (s.length > n ? s.slice(0, n - 1) + '…' : s);
 
-const whatOf = (run: Run) => `${run.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology'} over ${run.ring}${run.reduced ? ', reduced' : ''}`;
+const whatOf = (run: Run) => `${run.kind === 'cable-sweep' ? 'Cable sweep' : run.kind === 'bands' ? 'Unlink check of the bands' : 'Khovanov homology'} over ${run.ring}${run.reduced ? ', reduced' : ''}`;
 
 /** The app's one line about the outcome: the Poincare polynomial with real superscripts, kept short (the page has it all). */
 function summaryOf(run: Run): string {

@@ -2,7 +2,7 @@
 // outcomes. Status changes are conditional on the current status, so a cancelled run is never
 // overwritten by a late result.
 import { In, IsNull, type DataSource, type EntityManager } from 'typeorm';
-import type { RunStatus } from '@/shared/api/runs';
+import type { RunKind, RunStatus } from '@/shared/api/runs';
 import { Run, User } from '../db/entities';
 
 type Db = DataSource | EntityManager;
@@ -22,14 +22,17 @@ export async function updateIf(db: Db, id: string, from: readonly RunStatus[], p
   return (r.affected ?? 0) > 0;
 }
 
+/** The kinds of run that compute (a sweep only gathers its cells). */
+const computing: RunKind[] = ['khovanov', 'bands'];
+
 /** The queued computation of lowest turn (then oldest) not already taken by this process. */
 export function nextQueued(db: Db, taken: readonly string[]): Promise<Run | null> {
-  const qb = repo(db).createQueryBuilder('r').where('r.status = :q AND r.kind = :k', { q: 'queued', k: 'khovanov' });
+  const qb = repo(db).createQueryBuilder('r').where('r.status = :q AND r.kind IN (:...k)', { q: 'queued', k: computing });
   if (taken.length) qb.andWhere('r.id NOT IN (:...taken)', { taken });
   return qb.orderBy('r.turn', 'ASC').addOrderBy('r.createdAt', 'ASC').addOrderBy('r.id', 'ASC').getOne();
 }
 
-const live = { status: In(['queued', 'running']), kind: 'khovanov' as const };
+const live = { status: In(['queued', 'running']), kind: In(computing) };
 
 /** One person's computations queued or running (their quota, and the turn of their next). */
 export const countLive = (db: Db, startedBy: string) => repo(db).countBy({ ...live, startedBy });
@@ -43,7 +46,7 @@ export const backInQueue = { status: 'queued', startedAt: null, progress: 0, com
 /** At start: computations a previous process left running go back to the queue; `taken` are this process's own. */
 export async function requeueInterrupted(db: Db, taken: readonly string[]): Promise<number> {
   const qb = repo(db).createQueryBuilder().update().set(backInQueue)
-    .where('status = :r AND kind = :k', { r: 'running', k: 'khovanov' });
+    .where('status = :r AND kind IN (:...k)', { r: 'running', k: computing });
   if (taken.length) qb.andWhere('id NOT IN (:...taken)', { taken });
   return (await qb.execute()).affected ?? 0;
 }

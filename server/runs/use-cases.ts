@@ -42,14 +42,14 @@ async function target(deps: Deps, user: User, req: Start): Promise<{ diagram: Ru
     if (!s || s.deleted || !canSee(viewer, s)) throw notFound('No such sketch, or it is not shared with you');
     if (s.ownerId !== user.id && viewer.groups.get(s.groupId!) === 'viewer') throw viewersCannot();
     const { pd, unknots, framings } = req.diagram ?? s.diagram;
-    return { diagram: { pd, unknots, framings }, groupId: s.groupId, sketchId: s.id, label: req.label || s.title || 'Untitled sketch', source: req.diagram ? (req.source ?? null) : null };
+    return { diagram: { pd, unknots, framings, bands: req.diagram?.bands }, groupId: s.groupId, sketchId: s.id, label: req.label || s.title || 'Untitled sketch', source: req.diagram ? (req.source ?? null) : null };
   }
   if (req.groupId !== undefined) {
     const role: Role = await requireMember(deps.db, req.groupId, user.id);
     if (role === 'viewer') throw viewersCannot();
   }
   const d = req.diagram!;
-  return { diagram: { pd: d.pd, unknots: d.unknots ?? 0, framings: d.framings }, groupId: req.groupId ?? null, sketchId: null, label: req.label || `PD code, ${d.pd.length} crossings`, source: req.source ?? null };
+  return { diagram: { pd: d.pd, unknots: d.unknots ?? 0, framings: d.framings, bands: d.bands }, groupId: req.groupId ?? null, sketchId: null, label: req.label || `PD code, ${d.pd.length} crossings`, source: req.source ?? null };
 }
 
 interface NewRun {
@@ -133,7 +133,8 @@ async function withinQuota(deps: Deps, user: User, wanted: number): Promise<numb
  */
 async function planComputation(deps: Deps, user: User, n: NewRun, key: string): Promise<Planned> {
   const run = row(deps, user, n, key);
-  const stored = await findReusable(deps.db, key, n.ring, n.reduced, n.computeS);
+  // A bands run's answer depends on its bands as well: it is never reused.
+  const stored = n.kind === 'khovanov' ? await findReusable(deps.db, key, n.ring, n.reduced, n.computeS) : null;
   if (!stored) return { run, settle: async () => undefined };
   Object.assign(run, { status: 'running', startedAt: run.createdAt, reusedFrom: stored.reusedFrom ?? stored.id });
   return { run, settle: () => finishRun(deps, run.id, { status: 'done', result: stored.result! }) };
@@ -150,11 +151,13 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   const base = { ...t, ring: req.ring, reduced: req.reduced, computeS: req.computeS };
   let id: string;
   let queued: Run[];
-  if (req.kind === 'khovanov') {
+  if (req.kind === 'khovanov' || req.kind === 'bands') {
+    // Bands never add crossings (a band move exchanges two labels), so the diagram's count bounds the check's.
     if (d.pd.length > max) throw overLimit('The diagram', d.pd.length, max);
     const live = await withinQuota(deps, user, 1);
+    if (req.kind === 'bands') await checkBands(deps, t.diagram);
     const key = await deps.jobs.run('runKey', { diagram: t.diagram, reduced: req.reduced });
-    const { run, settle } = await planComputation(deps, user, { ...base, kind: 'khovanov', turn: live + 1 }, key);
+    const { run, settle } = await planComputation(deps, user, { ...base, kind: req.kind, turn: live + 1 }, key);
     await insertRun(deps.db, run);
     await settle();
     [id, queued] = [run.id, [run]];
@@ -163,6 +166,14 @@ export async function startRun(deps: Deps, user: User, req: Start): Promise<RunD
   }
   schedulerOf(deps).submit(queued.filter((r) => r.status === 'queued'));
   return getRun(deps, user, id);
+}
+
+/** A bands run's bands: labels of the code first (cheap), then the band moves in the job pool. */
+async function checkBands(deps: Deps, d: RunDiagram): Promise<void> {
+  const labels = new Set(d.pd.flat());
+  const missing = d.bands!.flat().find((l) => !labels.has(l));
+  const problem = missing !== undefined ? `there is no edge ${missing} in the PD code` : await deps.jobs.run('bandsProblem', d);
+  if (problem) throw new AppError('invalid_input', 400, `The bands cannot be applied: ${problem}`, { bands: problem });
 }
 
 /**

@@ -1,9 +1,10 @@
-// Runs: heavy computations on the group server (Khovanov homology of a diagram, or a cable
-// sweep of a framed link: Kh of every (r+, r-)-cable, each a sub-run). The request and answer
-// shapes, shared by the server routes and the app.
+// Runs: heavy computations on the group server (Khovanov homology of a diagram, a cable sweep
+// of a framed link: Kh of every (r+, r-)-cable, each a sub-run, or the unlink check of a band
+// presentation: Kh over Z of the diagram after the bands). The request and answer shapes,
+// shared by the server routes and the app.
 import { z } from 'zod';
 import { isPrime } from '@/shared/linalg/ring';
-import { Framings, PdCode, RecordId, Unknots } from './sketches';
+import { diagramLimits, Framings, PdCode, RecordId, Label, Unknots } from './sketches';
 
 export const runPaths = {
   runs: '/api/runs', // POST start, GET list (?mine=1 | ?sketchId= | ?groupId=)
@@ -14,7 +15,7 @@ export const runPaths = {
 /** The page a finished-run e-mail links to, under PUBLIC_URL. */
 export const runPagePath = (id: string) => `/runs/${id}` as const;
 
-export const runKinds = ['khovanov', 'cable-sweep'] as const;
+export const runKinds = ['khovanov', 'cable-sweep', 'bands'] as const;
 export const RunKind = z.enum(runKinds);
 export type RunKind = z.infer<typeof RunKind>;
 
@@ -30,11 +31,16 @@ export const RunRing = z
     message: "Ring must be Z, Q or F<p> for a prime p (e.g. F2)",
   });
 
+/** Bands as saddles [a, b] between edges of the PD code, applied in order (shared/knot/bands, DEVELOPERS.md). */
+export const RunBands = z.array(z.tuple([Label, Label])).min(1).max(diagramLimits.crossings);
+
 /** A diagram given directly (pasted PD code, or a braid closure the app converted), in the limits of a sketch's. */
 export const RunDiagram = z.object({
   pd: PdCode,
   unknots: Unknots.default(0),
   framings: Framings.optional(),
+  /** A bands run's bands (kind 'bands' only). */
+  bands: RunBands.optional(),
 });
 export type RunDiagram = z.infer<typeof RunDiagram>;
 
@@ -78,8 +84,16 @@ export const StartRunRequest = z
     path: ['groupId'],
   })
   .refine((r) => !r.computeS || r.kind === 'khovanov', {
-    message: 's is computed on Khovanov runs of knots, not on a cable sweep',
+    message: 's is computed on Khovanov runs of knots, not on a cable sweep or a bands run',
     path: ['computeS'],
+  })
+  .refine((r) => (r.kind === 'bands') === (r.diagram?.bands !== undefined), {
+    message: 'A bands run needs diagram.bands: [[a, b], ...], and only a bands run takes them',
+    path: ['diagram'],
+  })
+  .refine((r) => r.kind !== 'bands' || (r.ring === 'Z' && !r.reduced), {
+    message: 'A bands run certifies the unlink by unreduced Khovanov homology over Z',
+    path: ['ring'],
   });
 /** What the app sends (defaults may be left out). */
 export type StartRunRequest = z.input<typeof StartRunRequest>;
@@ -103,7 +117,20 @@ export type KhGroupJson = z.infer<typeof KhGroupJson>;
 export const SValues = z.object({ Q: z.int(), F2: z.int() });
 export type SValues = z.infer<typeof SValues>;
 
-/** What a finished Khovanov run stores: the engine's result as JSON. */
+/** A bands run's certificate (shared/knot/bands/certificate.ts): no crossing limit on the unlink check. */
+export const BandsResultJson = z.object({
+  after: z.object({ pd: PdCode, unknots: z.int().min(0), components: z.int().min(0) }),
+  components: z.int().min(0),
+  bands: z.int().min(0),
+  // 'too-large' never: the run checks at any size.
+  unlink: z.enum(['crossingless', 'khovanov', 'none', 'too-large']),
+  chi: z.int(),
+  genusBound: z.int().nullable(),
+  ribbon: z.boolean(),
+});
+export type BandsResultJson = z.infer<typeof BandsResultJson>;
+
+/** What a finished Khovanov run stores: the engine's result as JSON (a bands run: of the diagram after the bands). */
 export const KhResultJson = z.object({
   ring: z.string(),
   reduced: z.boolean(),
@@ -125,6 +152,8 @@ export const KhResultJson = z.object({
   version: z.string().optional(),
   /** When the run was asked to compute s (a knot). */
   s: SValues.optional(),
+  /** A bands run: the certificate; the groups above are those of the diagram after the bands. */
+  bands: BandsResultJson.optional(),
 });
 export type KhResultJson = z.infer<typeof KhResultJson>;
 

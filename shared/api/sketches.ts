@@ -11,7 +11,7 @@ export const sketchPaths = {
 export const RecordId = z.string().min(1).max(100);
 export const Sha256 = z.string().regex(/^[0-9a-f]{64}$/, 'Expected a SHA-256 hash in lowercase hex');
 
-const Label = z.int().min(-1_000_000).max(1_000_000);
+export const Label = z.int().min(-1_000_000).max(1_000_000);
 
 /**
  * The one set of diagram limits of the API, sync and the command line. Unknots: the homology of

@@ -2,7 +2,8 @@
 // -p columns; the band used is the first orientable saddle of the generated code that is
 // certified ribbon), by the cube at two bidegrees; goal for 12 crossings <= 2 s, 14 is the
 // default limit. Also the sizes
-// that do not depend on load: the basis of C^{0,1}/B^{0,1} and the class's support.
+// that do not depend on load: the basis of C^{0,1}/B^{0,1} and the class's support. The class
+// over Z on P(3,-3,4) and P(3,-3,6).
 
 import { bandCertificate, BandPresentation, surfaceClass } from '@/shared/knot/bands';
 import { pretzelLink } from '@/shared/knot/families/pretzel';
@@ -47,6 +48,17 @@ export function bandsBench(): Line[] {
     lines.push({ name: `disk class of ${name}`, value: round(median(times)), unit: 'ms', goal });
     lines.push({ name: `${name}: dim C^{0,1}/B^{0,1}`, value: c.basisSize, unit: 'generators' });
     lines.push({ name: `${name}: support of the class`, value: c.support.length, unit: 'generators' });
+  }
+  // Over Z (class-z.ts: integer kernels, Hermite and Smith forms); P(5,-5,2) is over its limit.
+  for (const twists of [[3, -3, 4], [3, -3, 6]]) {
+    const p = ribbonBand(twists);
+    const times: number[] = [];
+    for (let r = 0; r < 3; r++) {
+      const t = performance.now();
+      surfaceClass(p, { ring: 'Z' });
+      times.push(performance.now() - t);
+    }
+    lines.push({ name: `disk class over Z of P(${twists.join(',')}) (${p.pd.length} crossings)`, value: round(median(times)), unit: 'ms' });
   }
   return lines;
 }

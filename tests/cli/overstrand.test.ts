@@ -194,6 +194,13 @@ describe('bands in requests', () => {
     expect(a.surfaceClass.support[0]).toEqual({ smoothing: expect.stringMatching(/^[01]{9}$/), x: expect.any(Array) });
   });
 
+  it('answers "surfaceClass" over Z with "ring": "Z": the disks of 9_46 differ up to sign, each class primitive (tests/shared/bands-class.test.ts)', () => {
+    const a = ask({ pd: p946, bands: [[2, 12]], compareBands: [[6, 14]], compute: ['surfaceClass'], ring: 'Z' });
+    expect(a.surfaceClass).toMatchObject({ ring: 'Z', h: 0, q: 1, zero: false, divisibility: 1, compare: { verdict: 'differ', other: { ring: 'Z', q: 1, divisibility: 1 } } });
+    expect(a.surfaceClass.coefficients).toHaveLength(a.surfaceClass.support.length);
+    expect(ask({ pd: p946, bands: [[2, 12]], compute: ['surfaceClass'], ring: 'Q' }).error).toMatch(/over "F2" \(the default\) or "Z"/);
+  });
+
   it('refuses bands without a PD code, a class without bands, a bad band and a code over the crossing limit', () => {
     expect(ask({ braid: [1, 1, 1], bands: [[4, 6]], compute: ['bands'] }).error).toMatch(/name edges of the request's "pd" code/);
     expect(ask({ pd: trefoil, compute: ['surfaceClass'] }).error).toMatch(/need "bands"/);

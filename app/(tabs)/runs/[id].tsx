@@ -15,7 +15,7 @@ import type { RunSummary } from '@/shared/api/runs';
 import { colors, type } from '@/constants/theme';
 
 /** A sketch's run is titled by the sketch; a pasted code is a code, shown in its own face below. */
-const titleOf = (r: RunSummary) => (r.sketchId ? r.label : r.kind === 'cable-sweep' ? 'Cable sweep' : 'Khovanov homology');
+const titleOf = (r: RunSummary) => (r.sketchId ? r.label : r.kind === 'cable-sweep' ? 'Cable sweep' : r.kind === 'bands' ? 'Unlink check' : 'Khovanov homology');
 
 export default function RunPage() {
   const { id } = useLocalSearchParams<{ id: string }>();

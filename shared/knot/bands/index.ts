@@ -1,38 +1,64 @@
 // Band presentations of surfaces in the 4-ball: the diagram after the bands, the genus and
-// ribbon certificates, and the surface's class in Khovanov homology over F2.
+// ribbon certificates, and the surface's class in Khovanov homology over F2 or Z (up to sign).
 import type { PDCode } from '../pd';
 import { AfterBands, simplifiedStage } from './after';
-import { BandCertificate, certify } from './certificate';
-import { classVector, EnhancedState } from './class';
+import { AfterHomology, BandCertificate, certify } from './certificate';
+import { ClassVector, classVector } from './class';
+import { classVectorZ } from './class-z';
+import { EnhancedState } from './cube-levels';
 import { bandStages } from './saddle';
 import { BandError, BandPresentation, Saddle } from './types';
 
 export { BandError } from './types';
+export { bandStages } from './saddle';
 export type { BandPresentation, Saddle } from './types';
 export type { AfterBands } from './after';
-export type { BandCertificate, UnlinkCertificate } from './certificate';
+export type { AfterHomology, BandCertificate, UnlinkCertificate } from './certificate';
 export { UNLINK_CROSSINGS } from './certificate';
-export type { EnhancedState } from './class';
+export type { EnhancedState } from './cube-levels';
 
 /** The cube's default crossing limit for the class. */
 export const CLASS_CROSSINGS = 14;
 
+/** The coefficient ring of the class: F2, or Z with the class up to an overall sign. */
+export type ClassRing = 'F2' | 'Z';
+
 export interface SurfaceClass {
+  ring: ClassRing;
   /** Bidegree of the class: h = 0, q = chi. */
   h: number;
   q: number;
   zero: boolean;
-  /** The class as a bit vector over F2, listed by its 1 entries (basis: shared/knot/bands/class.ts). */
+  /**
+   * The class by its nonzero coefficients in the basis of enhanced states (F2: class.ts, the
+   * states outside the boundaries' pivots; Z: class-z.ts, the Hermite normal form with the sign
+   * that makes the first nonzero coefficient positive).
+   */
   support: EnhancedState[];
-  /** The length of the bit vector: dim C^{0,q}/B^{0,q} of the code's cube. */
+  /** The coefficient of each state of `support` (all 1 over F2). */
+  coefficients: number[];
+  /** The rank of C^{0,q}/B^{0,q} of the code's cube: the number of states outside the pivots. */
   basisSize: number;
+  /** Over Z: the class mod 2, the class over F2 by universal coefficients. */
+  mod2?: { support: EnhancedState[]; basisSize: number };
+  /** Over Z: the free part of the class is this times a primitive element (1: primitive); 0 for a torsion class. */
+  divisibility?: number;
 }
 
 export interface SurfaceComparison {
-  /** 'differ': the classes are different elements of Kh(K; F2), so the surfaces are not isotopic rel boundary. */
-  verdict: 'differ' | 'equal: no conclusion';
+  /** 'differ': the classes are different elements of Kh(K) (over Z, not even up to sign), so the surfaces are not isotopic rel boundary. */
+  verdict: 'differ' | 'equal: no conclusion' | 'equal up to sign: no conclusion';
   a: SurfaceClass;
   b: SurfaceClass;
+}
+
+export interface ClassOptions {
+  /** Default CLASS_CROSSINGS: the cube has 2^n resolutions. */
+  maxCrossings?: number;
+  /** The Khovanov unlink check's limit (certificate.ts). */
+  unlinkCrossings?: number;
+  /** Default F2. */
+  ring?: ClassRing;
 }
 
 /** The diagram after all band moves, simplified by Reidemeister moves (shared/knot/moves). */
@@ -43,37 +69,45 @@ export function afterBands(p: BandPresentation): AfterBands {
 
 /**
  * Components, bands, Euler characteristic, genus bound and unlink certificate (certificate.ts).
- * maxCrossings (default UNLINK_CROSSINGS) limits the Khovanov check of the simplified result.
+ * maxCrossings (default UNLINK_CROSSINGS) limits the Khovanov check of the simplified result;
+ * `homology` replaces the engine call that check makes (a server run reports its progress).
  */
-export function bandCertificate(p: BandPresentation, opts: { maxCrossings?: number } = {}): BandCertificate {
-  return certify(p, bandStages(p), opts.maxCrossings);
+export function bandCertificate(p: BandPresentation, opts: { maxCrossings?: number; homology?: AfterHomology } = {}): BandCertificate {
+  return certify(p, bandStages(p), opts.maxCrossings, opts.homology);
 }
 
 /**
- * The class of the surface in Kh^{0,chi}(K; F2) (class.ts). BandError unless the bands end at a
- * certified unlink, or when the code has more than maxCrossings (default CLASS_CROSSINGS).
+ * The class of the surface in Kh^{0,chi}(K; F2) (class.ts) or Kh^{0,chi}(K; Z) up to sign
+ * (class-z.ts). BandError unless the bands end at a certified unlink, or when the code has more
+ * than maxCrossings.
  */
-export function surfaceClass(p: BandPresentation, opts: { maxCrossings?: number; unlinkCrossings?: number } = {}): SurfaceClass {
+export function surfaceClass(p: BandPresentation, opts: ClassOptions = {}): SurfaceClass {
+  const ring = opts.ring ?? 'F2';
   const maxCrossings = opts.maxCrossings ?? CLASS_CROSSINGS;
   // The cheap fact first: the cube has 2^n resolutions.
   if (p.pd.length > maxCrossings) throw new BandError(`the class is computed on the cube of resolutions, up to ${maxCrossings} crossings; this diagram has ${p.pd.length}`);
   const stages = bandStages(p);
   // No crossings, so no edges and no bands: the unknots' disks, 1 x ... x 1.
-  if (p.pd.length === 0) return { h: 0, q: p.unknots, zero: false, support: [{ smoothing: '', x: [] }], basisSize: 1 };
+  if (p.pd.length === 0) {
+    const one = { support: [{ smoothing: '', x: [] }], basisSize: 1 };
+    return { ring, h: 0, q: p.unknots, zero: false, ...one, coefficients: [1], ...(ring === 'Z' ? { mod2: one, divisibility: 1 } : {}) };
+  }
   const cert = certify(p, stages, opts.unlinkCrossings);
   if (cert.unlink === 'none' || cert.unlink === 'too-large') {
     throw new BandError(`the class needs the bands to end at a certified unlink; the result is ${cert.unlink === 'none' ? 'not an unlink' : `too large to check (over ${cert.maxCrossings} crossings)`}`);
   }
-  const { support, basisSize } = classVector(stages, p.saddles);
-  return { h: 0, q: cert.chi, zero: support.length === 0, support, basisSize };
+  const f2 = (v: ClassVector) => ({ ...v, coefficients: v.support.map(() => 1) });
+  const found = ring === 'Z' ? classVectorZ(stages, p.saddles) : f2(classVector(stages, p.saddles));
+  return { ...found, ring, h: 0, q: cert.chi, zero: found.support.length === 0 };
 }
 
 /** Two presentations on the same PD code (the union of both sets of finger moves): do their classes differ? */
-export function compareSurfaces(pd: PDCode, unknots: number, a: Saddle[], b: Saddle[], opts: { maxCrossings?: number; unlinkCrossings?: number } = {}): SurfaceComparison {
+export function compareSurfaces(pd: PDCode, unknots: number, a: Saddle[], b: Saddle[], opts: ClassOptions = {}): SurfaceComparison {
   const ca = surfaceClass({ pd, unknots, saddles: a }, opts);
   const cb = surfaceClass({ pd, unknots, saddles: b }, opts);
-  // Normal forms are canonical, so the classes agree exactly when bidegree and support do.
-  const key = (c: SurfaceClass): string => JSON.stringify([c.q, c.support]);
+  // Normal forms are canonical (over Z with the sign fixed), so the classes agree exactly when bidegree and coefficients do.
+  const key = (c: SurfaceClass): string => JSON.stringify([c.q, c.support, c.coefficients]);
   const same = (ca.zero && cb.zero) || key(ca) === key(cb);
-  return { verdict: same ? 'equal: no conclusion' : 'differ', a: ca, b: cb };
+  const equal = ca.ring === 'Z' ? 'equal up to sign: no conclusion' : 'equal: no conclusion';
+  return { verdict: same ? equal : 'differ', a: ca, b: cb };
 }
