@@ -48,7 +48,7 @@ export default tseslint.config(
       appFolders.flatMap((f) => [`@/${f}`, `@/${f}/*`]), ['@/server', '@/server/*']),
   },
   {
-    files: ['server/**/*.{ts,mjs,js}'],
+    files: ['server/**/*.{ts,mjs,cjs,js}'],
     rules: forbid('The server never imports app code: share code through shared/.',
       appFolders.flatMap((f) => [`@/${f}`, `@/${f}/*`, `../${f}/*`, `../../${f}/*`])),
   },

@@ -38,7 +38,7 @@ export function threadPool(filename: string, limits: { threads: number; maxMemor
 }
 
 export function createJobPool(limits: JobLimits): JobPool {
-  const pool = threadPool(join(__dirname, 'worker.mjs'), limits);
+  const pool = threadPool(join(__dirname, 'worker.cjs'), limits);
   return {
     async run(name, input) {
       const signal = AbortSignal.timeout(limits.maxWallMs);

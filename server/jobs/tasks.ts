@@ -1,5 +1,5 @@
 // The short jobs of the job pool (server/jobs/pool.ts), one export per job, each a plain
-// function of one argument run in a pool thread (loaded through worker.mjs).
+// function of one argument run in a pool thread (loaded through worker.cjs).
 import type { RunDiagram } from '@/shared/api/runs';
 import { summarise } from '../feed/invariants';
 import { cellCables } from '../runs/cables';

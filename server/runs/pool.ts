@@ -30,7 +30,7 @@ export function isOutOfMemory(err: unknown): boolean {
 }
 
 export function createRunPool(limits: RunLimits): RunPool {
-  const pool = threadPool(join(__dirname, 'worker.mjs'), limits);
+  const pool = threadPool(join(__dirname, 'worker.cjs'), limits);
   return {
     async run({ diagram, ring, reduced, computeS, onProgress, signal }) {
       const { port1, port2 } = new MessageChannel();

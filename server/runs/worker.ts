@@ -1,4 +1,4 @@
-// One Khovanov computation inside a pool thread (loaded through worker.mjs), with the
+// One Khovanov computation inside a pool thread (loaded through worker.cjs), with the
 // s-invariant over Q and F2 after it when asked, or a bands run: the band presentation's
 // certificate with the unlink check by Kh over Z and no crossing limit (the run has its own). Progress goes back over the task's MessagePort;
 // cancellation and the wall-time limit terminate the thread (piscina aborts the task), so the

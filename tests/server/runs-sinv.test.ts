@@ -34,7 +34,7 @@ it('refuses s for a link and for a cable sweep, with the reason on the field', a
   expect(link.body.error).toMatchObject({ message: 's is defined for knots here; this link has 2 components', fields: { computeS: 's is defined for knots here' } });
   const sweep = await start(server, token, { kind: 'cable-sweep', sweep: { maxStrands: 1 }, diagram: { pd: trefoil() }, computeS: true });
   expect(sweep.status).toBe(400);
-  expect(sweep.body.error.fields.computeS).toBe('s is computed on Khovanov runs of knots, not on a cable sweep');
+  expect(sweep.body.error.fields.computeS).toBe('s is computed on Khovanov runs of knots, not on a cable sweep or a bands run');
 });
 
 it('reuses a stored result for s only when it computed s', async () => {
