@@ -20,9 +20,9 @@ import { Int } from '../../linalg/int';
 import { bezout, combine, dot, kernel, ZEchelon, ZVector } from '../../linalg/lattice';
 import { smith } from '../../linalg/smith';
 import { sparse } from '../../linalg/sparse';
-import { backwards, ClassVector, f2NormalForm, odd } from './class';
-import { Cube, differential, enhancedState, EnhancedState, level, Level, movie } from './cube-levels';
-import { cycleCount, Stage } from './saddle';
+import { backwards, ClassVector, f2NormalForm, odd, unlinkStart } from './class';
+import { Cube, differential, enhancedState, EnhancedState, level, Level } from './cube-levels';
+import { Stage } from './saddle';
 import { BandError, Saddle } from './types';
 
 export interface ClassVectorZ {
@@ -92,13 +92,7 @@ const product = (xs: Int[]): Int => xs.reduce<Int>((p, x) => Z.mul(p, x), 1);
 
 /** The class over Z up to sign; arguments as classVector (class.ts). */
 export function classVectorZ(stages: Stage[], saddles: Saddle[]): ClassVectorZ {
-  const m = movie(stages[0]);
-  const { n, nMinus } = m;
-  const last = stages.length - 1;
-  const c = cycleCount(stages[last]);
-
-  const unlink = m.cubeOf(stages[last]);
-  const zeroLevel = level(unlink, nMinus, c);
+  const { m, n, nMinus, last, c, unlink, zeroLevel } = unlinkStart(stages);
   if (zeroLevel.gens.length > Z_GENERATORS) {
     throw new BandError(`the class over Z is computed up to ${Z_GENERATORS} generators of C^{0,${c}} of the unlink's cube; this one has ${zeroLevel.gens.length} (over F2 there is no such limit)`);
   }

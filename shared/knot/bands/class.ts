@@ -24,7 +24,7 @@
 import { F2Vector, kernel, parity } from '../../linalg/f2';
 import { add, Int, isZero, rem } from '../../linalg/int';
 import { combine, ZVector } from '../../linalg/lattice';
-import { differential, enhancedState, EnhancedState, f2Boundaries, level, Level, movie, Movie, saddleImages } from './cube-levels';
+import { Cube, differential, enhancedState, EnhancedState, f2Boundaries, level, Level, movie, Movie, saddleImages } from './cube-levels';
 import { cycleCount, Stage } from './saddle';
 import { Saddle } from './types';
 
@@ -41,14 +41,8 @@ export interface ClassVector {
  * (the caller certifies it, and keeps n small: the cube has 2^n resolutions).
  */
 export function classVector(stages: Stage[], saddles: Saddle[]): ClassVector {
-  const m = movie(stages[0]);
-  const { n, nMinus } = m;
-  const last = stages.length - 1;
-  const c = cycleCount(stages[last]);
-
+  const { m, n, nMinus, last, c, unlink, zeroLevel } = unlinkStart(stages);
   // A cycle of C^{0,c}(D') that is not a boundary: the first kernel vector outside the boundaries.
-  const unlink = m.cubeOf(stages[last]);
-  const zeroLevel = level(unlink, nMinus, c);
   const d0 = nMinus < n ? differential(unlink, zeroLevel, level(unlink, nMinus + 1, c)) : () => [];
   const dBoundaries = f2Boundaries(unlink, nMinus, c, zeroLevel);
   let z: F2Vector | undefined;
@@ -62,6 +56,18 @@ export function classVector(stages: Stage[], saddles: Saddle[]): ClassVector {
   if (!z) throw new Error('Kh^{0,c} of the after-bands diagram is zero over F2: it is not the c-component unlink');
   const image = backwards(m, stages, saddles, c, zeroLevel, new Map(z.map((i) => [i, 1])));
   return f2NormalForm(m, stages[0], image.at, c - last, odd(image.chain));
+}
+
+/**
+ * Where both rings' routes start: the movie of the stages, the c components of the unlink D'
+ * (the last stage), and D''s cube at its level (h, q) = (0, c), whose class the births give.
+ */
+export function unlinkStart(stages: Stage[]): { m: Movie; n: number; nMinus: number; last: number; c: number; unlink: Cube; zeroLevel: Level } {
+  const m = movie(stages[0]);
+  const last = stages.length - 1;
+  const c = cycleCount(stages[last]);
+  const unlink = m.cubeOf(stages[last]);
+  return { m, n: m.n, nMinus: m.nMinus, last, c, unlink, zeroLevel: level(unlink, m.nMinus, c) };
 }
 
 /** The indices of the odd coefficients: the chain mod 2. */
