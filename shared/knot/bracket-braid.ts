@@ -10,14 +10,11 @@ import { bracket, greedyOrder, loopFactor } from './bracket';
 import { BraidWord, braidStrands, checkBraid, fromBraid } from './braid';
 import { carry, DOUBLES, Precision } from './bracket-sum';
 import { scoreOrder } from './contraction-order';
-import { temperleyLieb } from './temperley-lieb';
+import { catalan, temperleyLieb } from './temperley-lieb';
 import { Laurent } from '@/shared/poly/laurent';
 
 /** Most coefficients (matchings times exponents) one limb holds: 32 MB of doubles. */
 const MAX_ENTRIES = 2 ** 22;
-
-/** Catalan(n), the number of basis matchings of TL_n. */
-const catalan = (n: number): number => (n === 0 ? 1 : (catalan(n - 1) * 2 * (2 * n - 1)) / (n + 1));
 
 /** Whether the Temperley-Lieb sweep's buffers fit for this braid. */
 export const braidSweepFits = (strands: number, letters: number): boolean => catalan(strands) * (letters + 1) <= MAX_ENTRIES;
@@ -40,12 +37,20 @@ export function sweepBracket(word: BraidWord, strands = braidStrands(word), prec
   return markovTrace(sweep(word, strands, precision), strands, precision);
 }
 
-/** The braid as an element of TL_n: row s, slot i of each limb is a coefficient (see sweep). */
+/**
+ * The braid as an element of TL_n: slot i of row s, the coefficient of A^(4 (i - zero) +
+ * cls[s] + writhe), is (-1)^neg[s] times limb[base[s] + i], summed over limbs r times
+ * 2^(r limbBits). Row s keeps its entries in limb[s width .. (s + 1) width).
+ */
 export interface Sweep {
   limbs: Float64Array[];
   /** Window of nonzero slots of each row, empty while lo > hi. */
   lo: Int32Array;
   hi: Int32Array;
+  base: Int32Array;
+  neg: Uint8Array;
+  /** peaks[r][s] bounds |entry| of row s in limb r. */
+  peaks: Float64Array[];
   width: number;
   zero: number;
   writhe: number;
@@ -54,88 +59,134 @@ export interface Sweep {
 /** The letters applied one by one to the identity, in limbs of doubles (braidSweepFits must hold). */
 export function sweep(word: BraidWord, strands: number, precision: Precision = DOUBLES): Sweep {
   const tl = temperleyLieb(strands);
-  const { size, target, cls } = tl;
-  // Row s, slot i holds the coefficient of A^(4 (i - zero) + cls[s] + writhe so far): each
-  // positive letter moves exponents down by at most one slot and each negative one up, so the
-  // slots 0..letters suffice with the identity's constant term at zero = #positive letters.
+  const { size, cls } = tl;
+  // Each positive letter moves exponents down by at most one slot and each negative one up,
+  // so the slots 0..letters suffice with the identity's constant term at zero = #positive letters.
   const width = word.length + 1;
   const zero = word.filter((k) => k > 0).length;
-  const lo = new Int32Array(size).fill(width);
-  const hi = new Int32Array(size).fill(-1);
-  let limbs: Float64Array[] = [new Float64Array(size * width)];
-  limbs[0][zero] = 1;
-  [lo[0], hi[0]] = [zero, zero];
-  // peaks[r][s] bounds |entry| of row s in limb r; a letter adds the bounds of the rows it
-  // sums, so checking them before the letter says whether every partial sum stays exact.
-  let peaks: Float64Array[] = [new Float64Array(size)];
-  peaks[0][0] = 1;
+  const b: Sweep = {
+    limbs: [new Float64Array(size * width)],
+    lo: new Int32Array(size).fill(width),
+    hi: new Int32Array(size).fill(-1),
+    base: Int32Array.from({ length: size }, (_, s) => s * width),
+    neg: new Uint8Array(size),
+    peaks: [new Float64Array(size)],
+    width,
+    zero,
+    writhe: word.reduce((g, k) => g + Math.sign(k), 0),
+  };
+  const { lo, hi, base, neg } = b;
+  b.limbs[0][zero] = 1;
+  [lo[0], hi[0], b.peaks[0][0]] = [zero, zero, 1];
   const limit = 2 ** (precision.exactBits - 1);
   const unit = 2 ** precision.limbBits;
   for (const letter of word) {
     const k = Math.abs(letter) - 1;
-    const row = target.subarray(k * size, (k + 1) * size);
-    let next = peaks.map((p) => summedPeaks(p, row));
-    if (!next.every(below(limit))) {
-      // The bounds are loose (no cancellation): measure, and carry only if still needed.
-      peaks = limbs.map((limb) => rowPeaks(limb, lo, hi, width));
-      next = peaks.map((p) => summedPeaks(p, row));
-      while (!next.every(below(limit))) {
-        limbs = carry(limbs, unit, !below(limit)(next[next.length - 1]));
-        peaks = limbs.map((limb) => rowPeaks(limb, lo, hi, width));
-        next = peaks.map((p) => summedPeaks(p, row));
-      }
+    const [image, from, sources] = [tl.image[k], tl.from[k], tl.sources[k]];
+    for (let r = unbounded(b, image, from, sources, limit); r >= 0; r = unbounded(b, image, from, sources, limit)) {
+      b.limbs = carry(b.limbs, unit, r === b.limbs.length - 1);
+      b.peaks = b.limbs.map((limb) => rowPeaks(b, limb));
     }
     const up = letter < 0;
-    // First the image of e_k times -A^(-+3): one slot down (or up) and negated.
-    for (let t = 0; t < size; t++) {
-      if (row[t] !== t || lo[t] > hi[t]) continue;
-      for (const limb of limbs) shiftNegate(limb, t * width, lo[t], hi[t], up);
-      const d = up ? 1 : -1;
-      lo[t] += d;
-      hi[t] += d;
+    // Only e_k's image changes: its own entries times -A^(-+3), one slot down (or up) and
+    // negated, which only moves the row's base and flips its sign; then every matching s it
+    // receives, times A^(-+1): two exponents apart, so one slot lower, the same or one higher.
+    for (let j = 0; j < image.length; j++) {
+      const t = image[j];
+      const live = lo[t] <= hi[t];
+      let low = live ? lo[t] + (up ? 1 : -1) : width;
+      let high = live ? hi[t] + (up ? 1 : -1) : -1;
+      for (let x = from[j]; x < from[j + 1]; x++) {
+        const s = sources[x];
+        if (lo[s] > hi[s]) continue;
+        const d = slot(cls, s, t, up);
+        low = Math.min(low, lo[s] + d);
+        high = Math.max(high, hi[s] + d);
+      }
+      if (low > high) continue;
+      if (live) {
+        base[t] -= up ? 1 : -1;
+        neg[t] ^= 1;
+        [lo[t], hi[t]] = [lo[t] + (up ? 1 : -1), hi[t] + (up ? 1 : -1)];
+      }
+      if (base[t] + low < t * width || base[t] + high >= (t + 1) * width) recentre(b, t, low, high);
+      [lo[t], hi[t]] = [low, high];
+      for (let r = 0; r < b.limbs.length; r++) {
+        const [limb, peak] = [b.limbs[r], b.peaks[r]];
+        for (let x = from[j]; x < from[j + 1]; x++) {
+          const s = sources[x];
+          if (lo[s] > hi[s]) continue;
+          const [at, into, n] = [base[s] + lo[s], base[t] + lo[s] + slot(cls, s, t, up), hi[s] - lo[s] + 1];
+          if (neg[s] === neg[t]) addInto(limb, at, into, n);
+          else subtractFrom(limb, at, into, n);
+          peak[t] += peak[s];
+        }
+        // Loose bounds near the limit would force carries or rescans: measure the row while cached.
+        if (peak[t] >= limit / 64) peak[t] = rowPeak(b, limb, t);
+      }
     }
-    // Then every other matching s, times A^(-+1), into its image: two exponents apart, so
-    // in the image's class one slot lower, the same slot, or one higher.
-    for (let s = 0; s < size; s++) {
-      const t = row[s];
-      if (t === s || lo[s] > hi[s]) continue;
-      const d = (cls[s] - cls[t] + (up ? 2 : -2)) / 4;
-      const [a, b] = [s * width + lo[s], s * width + hi[s]];
-      const into = (t - s) * width + d;
-      for (const limb of limbs) for (let i = a; i <= b; i++) limb[into + i] += limb[i];
-      lo[t] = Math.min(lo[t], lo[s] + d);
-      hi[t] = Math.max(hi[t], hi[s] + d);
+  }
+  return b;
+}
+
+/** Slots from s to its image t under e_k: -1, 0 or 1 (the classes differ by 2, the letter's A^(-+1)). */
+const slot = (cls: Uint8Array, s: number, t: number, up: boolean): number => (cls[s] - cls[t] + (up ? 2 : -2)) / 4;
+
+function addInto(limb: Float64Array, from: number, to: number, n: number): void {
+  for (let i = 0; i < n; i++) limb[to + i] += limb[from + i];
+}
+
+function subtractFrom(limb: Float64Array, from: number, to: number, n: number): void {
+  for (let i = 0; i < n; i++) limb[to + i] -= limb[from + i];
+}
+
+/**
+ * Row t's entries moved within its block so that the window low..high (which holds its own)
+ * is centred there: rare, as a row's base drifts only by one slot a letter.
+ */
+function recentre({ limbs, lo, hi, base, width }: Sweep, t: number, low: number, high: number): void {
+  const moved = t * width + Math.floor((width - (high - low + 1)) / 2) - low;
+  if (lo[t] <= hi[t]) {
+    const [from, to, n] = [base[t] + lo[t], moved + lo[t], hi[t] - lo[t] + 1];
+    for (const limb of limbs) {
+      limb.copyWithin(to, from, from + n);
+      if (to > from) limb.fill(0, from, Math.min(to, from + n));
+      else limb.fill(0, Math.max(from, to + n), from + n);
     }
-    peaks = next;
   }
-  return { limbs, lo, hi, width, zero, writhe: word.reduce((g, k) => g + Math.sign(k), 0) };
+  base[t] = moved;
 }
 
-/** Row entries lo..hi moved one slot down (or up with up) and negated; the slot left behind cleared. */
-function shiftNegate(limb: Float64Array, base: number, lo: number, hi: number, up: boolean): void {
-  if (up) {
-    for (let i = base + hi; i >= base + lo; i--) limb[i + 1] = -limb[i];
-    limb[base + lo] = 0;
-  } else {
-    for (let i = base + lo; i <= base + hi; i++) limb[i - 1] = -limb[i];
-    limb[base + hi] = 0;
+/** The largest |entry| of row s in limb. */
+function rowPeak({ lo, hi, base }: Sweep, limb: Float64Array, s: number): number {
+  let p = 0;
+  for (let i = base[s] + lo[s]; i <= base[s] + hi[s]; i++) p = Math.max(p, Math.abs(limb[i]));
+  return p;
+}
+
+const rowPeaks = (b: Sweep, limb: Float64Array): Float64Array => Float64Array.from(b.lo, (_, s) => rowPeak(b, limb, s));
+
+/**
+ * The first limb in which a partial sum of the letter could be inexact, or -1: a row of e_k's
+ * image sums its own entries and its sources', so its bound plus theirs must stay below
+ * limit. Bounds that fail are first replaced by the rows' actual peaks.
+ */
+function unbounded(b: Sweep, image: Int32Array, from: Int32Array, sources: Int32Array, limit: number): number {
+  for (let r = 0; r < b.limbs.length; r++) {
+    const [limb, peak] = [b.limbs[r], b.peaks[r]];
+    const bound = (j: number) => {
+      let sum = peak[image[j]];
+      for (let x = from[j]; x < from[j + 1]; x++) sum += peak[sources[x]];
+      return sum;
+    };
+    for (let j = 0; j < image.length; j++) {
+      if (bound(j) < limit) continue;
+      peak[image[j]] = rowPeak(b, limb, image[j]);
+      for (let x = from[j]; x < from[j + 1]; x++) peak[sources[x]] = rowPeak(b, limb, sources[x]);
+      if (bound(j) >= limit) return r;
+    }
   }
-}
-
-/** Bounds after a letter whose e_k sends s to row[s]: the image rows gain their sources' bounds. */
-function summedPeaks(peak: Float64Array, row: Int32Array): Float64Array {
-  const next = Float64Array.from(peak);
-  for (let s = 0; s < row.length; s++) if (row[s] !== s) next[row[s]] += peak[s];
-  return next;
-}
-
-const below = (limit: number) => (peak: Float64Array) => peak.every((p) => p < limit);
-
-/** The largest |entry| of each row. */
-function rowPeaks(limb: Float64Array, lo: Int32Array, hi: Int32Array, width: number): Float64Array {
-  const peak = new Float64Array(lo.length);
-  for (let s = 0; s < lo.length; s++) for (let i = lo[s]; i <= hi[s]; i++) peak[s] = Math.max(peak[s], Math.abs(limb[s * width + i]));
-  return peak;
+  return -1;
 }
 
 function largest(limb: Float64Array): number {
@@ -151,11 +202,11 @@ function largest(limb: Float64Array): number {
  * at most 2^21 rows fit in MAX_ENTRIES, so the sums stay below 2^52).
  */
 function markovTrace(braid: Sweep, strands: number, precision: Precision): Laurent {
-  const { lo, hi, width, zero, writhe } = braid;
+  const { lo, hi, base, neg, width, zero, writhe } = braid;
   let limbs = braid.limbs;
   const unit = 2 ** precision.limbBits;
-  const fits = () => limbs.every((limb) => rowPeaks(limb, lo, hi, width).reduce((a, b) => a + b, 0) < 2 ** 52);
-  if (!fits()) {
+  const fits = (peaks: Float64Array[]) => peaks.every((p) => p.reduce((a, b) => a + b, 0) < 2 ** 52);
+  if (!fits(braid.peaks) && !fits(limbs.map((limb) => rowPeaks(braid, limb)))) {
     while (largest(limbs[limbs.length - 1]) > unit / 2) limbs = carry(limbs, unit, true);
     limbs = carry(limbs, unit, false);
   }
@@ -166,8 +217,9 @@ function markovTrace(braid: Sweep, strands: number, precision: Precision): Laure
     const g = 2 * closureLoops[s] + cls[s] / 2;
     if (!groups.has(g)) groups.set(g, limbs.map(() => new Float64Array(width)));
     const sums = groups.get(g)!;
+    const sign = neg[s] ? -1 : 1;
     limbs.forEach((limb, r) => {
-      for (let i = lo[s]; i <= hi[s]; i++) sums[r][i] += limb[s * width + i];
+      for (let i = lo[s]; i <= hi[s]; i++) sums[r][i] += sign * limb[base[s] + i];
     });
   }
   let total = Laurent.zero;

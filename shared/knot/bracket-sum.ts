@@ -102,10 +102,12 @@ function fits(step: Step, limbs: Float64Array[], at: Windows, limit: number): bo
   });
 }
 
-/** The same numbers with every limb but the top one in [-unit/2, unit/2]; with grow, a new top limb takes the old top's carries. */
+/**
+ * The same numbers with every limb but the top one in [-unit/2, unit/2], in place; with grow,
+ * a new top limb takes the old top's carries.
+ */
 export function carry(limbs: Float64Array[], unit: number, grow: boolean): Float64Array[] {
-  const out = limbs.map((limb) => Float64Array.from(limb));
-  if (grow) out.push(new Float64Array(out[0].length));
+  const out = grow ? [...limbs, new Float64Array(limbs[0].length)] : limbs;
   for (let r = 0; r + 1 < out.length; r++) {
     const [low, high] = [out[r], out[r + 1]];
     for (let i = 0; i < low.length; i++) {

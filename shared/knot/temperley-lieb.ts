@@ -19,68 +19,112 @@ export interface TemperleyLieb {
   cls: Uint8Array;
   /** Loops of the closure that joins top point i to bottom point i. */
   closureLoops: Uint8Array;
+  /** image[k]: the matchings e_k fixes (closing a loop), in increasing order. */
+  image: Int32Array[];
+  /** The other matchings e_k sends to image[k][j]: sources[k][from[k][j] .. from[k][j + 1]). */
+  from: Int32Array[];
+  sources: Int32Array[];
 }
 
 const cache = new Map<number, TemperleyLieb>();
+
+/** Matchings are coded in 31-bit integers, two bits a strand. */
+const MAX_STRANDS = 15;
 
 /** The tables of TL_n, computed once per n (Catalan(n) * (n - 1) entries). */
 export function temperleyLieb(n: number): TemperleyLieb {
   const known = cache.get(n);
   if (known) return known;
-  // A matching of 2n points lists each point's partner: bottom i is point i, top i point n + i.
-  const identity = Array.from({ length: 2 * n }, (_, p) => (p + n) % (2 * n));
-  const key = (m: readonly number[]) => dyckWord(m, n);
-  const index = new Map([[key(identity), 0]]);
-  const matchings = [identity];
-  const edges: [number, number, number][] = []; // [k, s, t]
-  for (let s = 0; s < matchings.length; s++) {
+  if (n > MAX_STRANDS) throw new RangeError(`Temperley-Lieb tables stop at ${MAX_STRANDS} strands`);
+  const total = catalan(n);
+  // Matching j lists each point's partner at points[2n j ..]: bottom i is point i, top i point
+  // n + i. The slot after the last known matching takes each new candidate.
+  const points = new Int8Array(2 * n * (total + 1));
+  for (let p = 0; p < 2 * n; p++) points[p] = (p + n) % (2 * n);
+  const index = new Map([[dyckWord(points, 0, n), 0]]);
+  let size = 1;
+  const target = new Int32Array(Math.max(n - 1, 0) * total);
+  const cls = new Uint8Array(total);
+  // Breadth first: each new matching is met first from a known one, which gives its class.
+  for (let s = 0; s < size; s++) {
     for (let k = 0; k + 1 < n; k++) {
-      const t = stack(matchings[s], n, k);
-      const id = index.get(key(t)) ?? matchings.push(t) - 1;
-      index.set(key(t), id);
-      edges.push([k, s, id]);
+      stack(points, s * 2 * n, size * 2 * n, n, k);
+      const word = dyckWord(points, size * 2 * n, n);
+      let t = index.get(word);
+      if (t === undefined) {
+        t = size++;
+        index.set(word, t);
+        cls[t] = cls[s] ^ 2;
+      } else if (t !== s && cls[t] !== (cls[s] ^ 2)) throw new Error('Temperley-Lieb classes disagree mod 4');
+      target[k * total + s] = t;
     }
   }
-  const size = matchings.length;
-  const target = new Int32Array(Math.max(n - 1, 0) * size);
-  const cls = new Uint8Array(size);
-  const seen = new Uint8Array(size);
-  seen[0] = 1;
-  // Breadth-first edges meet each new matching first from a known one, so one pass classes all.
-  for (const [k, s, t] of edges) {
-    target[k * size + s] = t;
-    if (s === t) continue;
-    if (!seen[t]) [cls[t], seen[t]] = [cls[s] ^ 2, 1];
-    else if (cls[t] !== (cls[s] ^ 2)) throw new Error('Temperley-Lieb classes disagree mod 4');
-  }
-  const tl = { strands: n, size, target, cls, closureLoops: Uint8Array.from(matchings, (m) => closureLoops(m, n)) };
+  const closure = new Uint8Array(size);
+  for (let s = 0; s < size; s++) closure[s] = closureLoops(points, s * 2 * n, n);
+  const tl: TemperleyLieb = { strands: n, size, target, cls, closureLoops: closure, image: [], from: [], sources: [] };
+  for (let k = 0; k + 1 < n; k++) group(tl, k);
   cache.set(n, tl);
   return tl;
+}
+
+/** Catalan(n), the number of basis matchings of TL_n. */
+export function catalan(n: number): number {
+  let c = 1;
+  for (let i = 0; i < n; i++) c = (c * 2 * (2 * i + 1)) / (i + 2);
+  return c;
+}
+
+/** Appends e_k's image to tl, with each image matching's sources grouped (a counting sort by target). */
+function group(tl: TemperleyLieb, k: number): void {
+  const { size, target } = tl;
+  const row = target.subarray(k * size, (k + 1) * size);
+  const count = new Int32Array(size + 1);
+  let fixed = 0;
+  for (let s = 0; s < size; s++) {
+    if (row[s] === s) fixed++;
+    else count[row[s] + 1]++;
+  }
+  for (let t = 0; t < size; t++) count[t + 1] += count[t];
+  const image = new Int32Array(fixed);
+  const from = new Int32Array(fixed + 1);
+  const sources = new Int32Array(size - fixed);
+  const next = count.slice();
+  for (let s = 0; s < size; s++) if (row[s] !== s) sources[next[row[s]]++] = s;
+  for (let t = 0, j = 0; t < size; t++) {
+    if (row[t] !== t) continue;
+    image[j++] = t;
+    from[j] = count[t + 1];
+  }
+  tl.image.push(image);
+  tl.from.push(from);
+  tl.sources.push(sources);
 }
 
 /**
  * A crossingless matching as a number: going round the disk (bottom 0..n-1, then top n-1..0),
  * bit j is set when the j-th point opens an arc, the standard Dyck-word code of the matching.
  */
-function dyckWord(m: readonly number[], n: number): number {
+function dyckWord(points: Int8Array, at: number, n: number): number {
   const place = (p: number) => (p < n ? p : 3 * n - 1 - p);
   let word = 0;
-  for (let p = 0; p < 2 * n; p++) if (place(m[p]) > place(p)) word += 2 ** place(p);
+  for (let p = 0; p < 2 * n; p++) if (place(points[at + p]) > place(p)) word |= 1 << place(p);
   return word;
 }
 
-/** Matching m with e_k on top: top points k and k+1 are capped together, and new ones cupped. */
-function stack(m: readonly number[], n: number, k: number): number[] {
+/** Matching m (at from) with e_k on top, written at to: top points k and k+1 capped together, and new ones cupped. */
+function stack(points: Int8Array, from: number, to: number, n: number, k: number): void {
+  points.copyWithin(to, from, from + 2 * n);
   const [a, b] = [n + k, n + k + 1];
-  if (m[a] === b) return [...m]; // the cap closes the cup already there: a loop
-  const t = [...m];
-  [t[m[a]], t[m[b]]] = [m[b], m[a]];
-  [t[a], t[b]] = [b, a];
-  return t;
+  const [ma, mb] = [points[from + a], points[from + b]];
+  if (ma === b) return; // the cap closes the cup already there: a loop
+  points[to + ma] = mb;
+  points[to + mb] = ma;
+  points[to + a] = b;
+  points[to + b] = a;
 }
 
 /** Loops when top point i is joined round the outside to bottom point i. */
-function closureLoops(m: readonly number[], n: number): number {
+function closureLoops(points: Int8Array, at: number, n: number): number {
   const done = new Uint8Array(2 * n);
   let loops = 0;
   for (let p = 0; p < 2 * n; p++) {
@@ -89,7 +133,7 @@ function closureLoops(m: readonly number[], n: number): number {
     let q = p;
     do {
       done[q] = 1;
-      const r = m[q];
+      const r = points[at + q];
       done[r] = 1;
       q = (r + n) % (2 * n);
     } while (q !== p);
