@@ -10,7 +10,7 @@ import { bracket, greedyOrder, loopFactor } from './bracket';
 import { BraidWord, braidStrands, checkBraid, fromBraid } from './braid';
 import { carry, DOUBLES, Precision } from './bracket-sum';
 import { scoreOrder } from './contraction-order';
-import { catalan, temperleyLieb } from './temperley-lieb';
+import { catalan, TemperleyLieb, temperleyLieb } from './temperley-lieb';
 import { Laurent } from '@/shared/poly/laurent';
 
 /** Most coefficients (matchings times exponents) one limb holds: 32 MB of doubles. */
@@ -59,7 +59,7 @@ export interface Sweep {
 /** The letters applied one by one to the identity, in limbs of doubles (braidSweepFits must hold). */
 export function sweep(word: BraidWord, strands: number, precision: Precision = DOUBLES): Sweep {
   const tl = temperleyLieb(strands);
-  const { size, cls } = tl;
+  const { size } = tl;
   // Each positive letter moves exponents down by at most one slot and each negative one up,
   // so the slots 0..letters suffice with the identity's constant term at zero = #positive letters.
   const width = word.length + 1;
@@ -75,9 +75,8 @@ export function sweep(word: BraidWord, strands: number, precision: Precision = D
     zero,
     writhe: word.reduce((g, k) => g + Math.sign(k), 0),
   };
-  const { lo, hi, base, neg } = b;
   b.limbs[0][zero] = 1;
-  [lo[0], hi[0], b.peaks[0][0]] = [zero, zero, 1];
+  [b.lo[0], b.hi[0], b.peaks[0][0]] = [zero, zero, 1];
   const limit = 2 ** (precision.exactBits - 1);
   const unit = 2 ** precision.limbBits;
   for (const letter of word) {
@@ -87,46 +86,61 @@ export function sweep(word: BraidWord, strands: number, precision: Precision = D
       b.limbs = carry(b.limbs, unit, r === b.limbs.length - 1);
       b.peaks = b.limbs.map((limb) => rowPeaks(b, limb));
     }
-    const up = letter < 0;
-    // Only e_k's image changes: its own entries times -A^(-+3), one slot down (or up) and
-    // negated, which only moves the row's base and flips its sign; then every matching s it
-    // receives, times A^(-+1): two exponents apart, so one slot lower, the same or one higher.
-    for (let j = 0; j < image.length; j++) {
-      const t = image[j];
-      const live = lo[t] <= hi[t];
-      let low = live ? lo[t] + (up ? 1 : -1) : width;
-      let high = live ? hi[t] + (up ? 1 : -1) : -1;
-      for (let x = from[j]; x < from[j + 1]; x++) {
-        const s = sources[x];
-        if (lo[s] > hi[s]) continue;
-        const d = slot(cls, s, t, up);
-        low = Math.min(low, lo[s] + d);
-        high = Math.max(high, hi[s] + d);
-      }
-      if (low > high) continue;
-      if (live) {
-        base[t] -= up ? 1 : -1;
-        neg[t] ^= 1;
-        [lo[t], hi[t]] = [lo[t] + (up ? 1 : -1), hi[t] + (up ? 1 : -1)];
-      }
-      if (base[t] + low < t * width || base[t] + high >= (t + 1) * width) recentre(b, t, low, high);
-      [lo[t], hi[t]] = [low, high];
-      for (let r = 0; r < b.limbs.length; r++) {
-        const [limb, peak] = [b.limbs[r], b.peaks[r]];
-        for (let x = from[j]; x < from[j + 1]; x++) {
-          const s = sources[x];
-          if (lo[s] > hi[s]) continue;
-          const [at, into, n] = [base[s] + lo[s], base[t] + lo[s] + slot(cls, s, t, up), hi[s] - lo[s] + 1];
-          if (neg[s] === neg[t]) addInto(limb, at, into, n);
-          else subtractFrom(limb, at, into, n);
-          peak[t] += peak[s];
-        }
-        // Loose bounds near the limit would force carries or rescans: measure the row while cached.
-        if (peak[t] >= limit / 64) peak[t] = rowPeak(b, limb, t);
-      }
-    }
+    letterOn(b, tl, k, letter < 0, limit);
   }
   return b;
+}
+
+/**
+ * One letter sigma_(k+1)^(+-1): only e_k's image changes. First its own entries times
+ * -A^(-+3), one slot down (or up) and negated, which only moves the row's base and flips its
+ * sign, and its window widened to take its sources; then every other matching s, in memory
+ * order, times A^(-+1) into its image: two exponents apart, so one slot lower, the same or one
+ * higher; last the image's bounds, measured where near the limit, and windows narrowed.
+ */
+function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: number): void {
+  const { lo, hi, base, neg, width } = b;
+  const { size, cls } = tl;
+  const [image, from, sources] = [tl.image[k], tl.from[k], tl.sources[k]];
+  const target = tl.target.subarray(k * size, (k + 1) * size);
+  const shift = up ? 1 : -1;
+  for (let j = 0; j < image.length; j++) {
+    const t = image[j];
+    const live = lo[t] <= hi[t];
+    let low = live ? lo[t] + shift : width;
+    let high = live ? hi[t] + shift : -1;
+    for (let x = from[j]; x < from[j + 1]; x++) {
+      const s = sources[x];
+      if (lo[s] > hi[s]) continue;
+      low = Math.min(low, lo[s] + slot(cls, s, t, up));
+      high = Math.max(high, hi[s] + slot(cls, s, t, up));
+      for (const peak of b.peaks) peak[t] += peak[s];
+    }
+    if (low > high) continue;
+    if (live) {
+      base[t] -= shift;
+      neg[t] ^= 1;
+      lo[t] += shift;
+      hi[t] += shift;
+    }
+    if (base[t] + low < t * width || base[t] + high >= (t + 1) * width) recentre(b, t, low, high);
+    lo[t] = low;
+    hi[t] = high;
+  }
+  for (const limb of b.limbs) {
+    for (let s = 0; s < size; s++) {
+      const t = target[s];
+      if (t === s || lo[s] > hi[s]) continue;
+      const into = base[t] + lo[s] + slot(cls, s, t, up);
+      if (neg[s] === neg[t]) addInto(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1);
+      else subtractFrom(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1);
+    }
+  }
+  for (const t of image) {
+    // Loose bounds near the limit would force carries or rescans.
+    for (let r = 0; r < b.limbs.length; r++) if (b.peaks[r][t] >= limit / 64) b.peaks[r][t] = rowPeak(b, b.limbs[r], t);
+    trim(b, t);
+  }
 }
 
 /** Slots from s to its image t under e_k: -1, 0 or 1 (the classes differ by 2, the letter's A^(-+1)). */
@@ -138,6 +152,17 @@ function addInto(limb: Float64Array, from: number, to: number, n: number): void 
 
 function subtractFrom(limb: Float64Array, from: number, to: number, n: number): void {
   for (let i = 0; i < n; i++) limb[to + i] -= limb[from + i];
+}
+
+/** Row t's window narrowed to its nonzero entries: cancellation at its ends is common, and later sums skip them. */
+function trim({ limbs, lo, hi, base }: Sweep, t: number): void {
+  while (lo[t] <= hi[t] && zeroAt(limbs, base[t] + lo[t])) lo[t]++;
+  while (lo[t] <= hi[t] && zeroAt(limbs, base[t] + hi[t])) hi[t]--;
+}
+
+function zeroAt(limbs: Float64Array[], i: number): boolean {
+  for (const limb of limbs) if (limb[i] !== 0) return false;
+  return true;
 }
 
 /**
