@@ -16,6 +16,9 @@ import { Laurent } from '@/shared/poly/laurent';
 /** Most coefficients (matchings times exponents) one limb holds: 32 MB of doubles. */
 const MAX_ENTRIES = 2 ** 22;
 
+/** Slots a row has room for at first. */
+const FIRST_STRIDE = 8;
+
 /** Whether the Temperley-Lieb sweep's buffers fit for this braid. */
 export const braidSweepFits = (strands: number, letters: number): boolean => catalan(strands) * (letters + 1) <= MAX_ENTRIES;
 
@@ -40,7 +43,8 @@ export function sweepBracket(word: BraidWord, strands = braidStrands(word), prec
 /**
  * The braid as an element of TL_n: slot i of row s, the coefficient of A^(4 (i - zero) +
  * cls[s] + writhe), is (-1)^neg[s] times limb[base[s] + i], summed over limbs r times
- * 2^(r limbBits). Row s keeps its entries in limb[s width .. (s + 1) width).
+ * 2^(r limbBits). Row s keeps its entries in limb[s stride .. (s + 1) stride), the stride
+ * doubling when a window outgrows it (so that the rows stay compact in the cache).
  */
 export interface Sweep {
   limbs: Float64Array[];
@@ -51,7 +55,9 @@ export interface Sweep {
   neg: Uint8Array;
   /** peaks[r][s] bounds |entry| of row s in limb r. */
   peaks: Float64Array[];
+  /** Slots 0..width - 1 (the letters plus one) hold every exponent. */
   width: number;
+  stride: number;
   zero: number;
   writhe: number;
 }
@@ -64,18 +70,20 @@ export function sweep(word: BraidWord, strands: number, precision: Precision = D
   // so the slots 0..letters suffice with the identity's constant term at zero = #positive letters.
   const width = word.length + 1;
   const zero = word.filter((k) => k > 0).length;
+  const stride = Math.min(width, FIRST_STRIDE);
   const b: Sweep = {
-    limbs: [new Float64Array(size * width)],
+    limbs: [new Float64Array(size * stride)],
     lo: new Int32Array(size).fill(width),
     hi: new Int32Array(size).fill(-1),
-    base: Int32Array.from({ length: size }, (_, s) => s * width),
+    base: Int32Array.from({ length: size }, (_, s) => s * stride - zero + (stride >> 1)),
     neg: new Uint8Array(size),
     peaks: [new Float64Array(size)],
     width,
+    stride,
     zero,
     writhe: word.reduce((g, k) => g + Math.sign(k), 0),
   };
-  b.limbs[0][zero] = 1;
+  b.limbs[0][stride >> 1] = 1;
   [b.lo[0], b.hi[0], b.peaks[0][0]] = [zero, zero, 1];
   const limit = 2 ** (precision.exactBits - 1);
   const unit = 2 ** precision.limbBits;
@@ -99,7 +107,7 @@ export function sweep(word: BraidWord, strands: number, precision: Precision = D
  * higher; last the image's bounds, measured where near the limit, and windows narrowed.
  */
 function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: number): void {
-  const { lo, hi, base, neg, width } = b;
+  const { lo, hi, base, neg } = b;
   const { size, cls } = tl;
   const [image, from, sources] = [tl.image[k], tl.from[k], tl.sources[k]];
   const target = tl.target.subarray(k * size, (k + 1) * size);
@@ -107,7 +115,7 @@ function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: nu
   for (let j = 0; j < image.length; j++) {
     const t = image[j];
     const live = lo[t] <= hi[t];
-    let low = live ? lo[t] + shift : width;
+    let low = live ? lo[t] + shift : b.width;
     let high = live ? hi[t] + shift : -1;
     for (let x = from[j]; x < from[j + 1]; x++) {
       const s = sources[x];
@@ -123,7 +131,8 @@ function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: nu
       lo[t] += shift;
       hi[t] += shift;
     }
-    if (base[t] + low < t * width || base[t] + high >= (t + 1) * width) recentre(b, t, low, high);
+    if (high - low >= b.stride) widen(b, high - low + 1);
+    if (base[t] + low < t * b.stride || base[t] + high >= (t + 1) * b.stride) recentre(b, t, low, high);
     lo[t] = low;
     hi[t] = high;
   }
@@ -169,8 +178,8 @@ function zeroAt(limbs: Float64Array[], i: number): boolean {
  * Row t's entries moved within its block so that the window low..high (which holds its own)
  * is centred there: rare, as a row's base drifts only by one slot a letter.
  */
-function recentre({ limbs, lo, hi, base, width }: Sweep, t: number, low: number, high: number): void {
-  const moved = t * width + Math.floor((width - (high - low + 1)) / 2) - low;
+function recentre({ limbs, lo, hi, base, stride }: Sweep, t: number, low: number, high: number): void {
+  const moved = t * stride + Math.floor((stride - (high - low + 1)) / 2) - low;
   if (lo[t] <= hi[t]) {
     const [from, to, n] = [base[t] + lo[t], moved + lo[t], hi[t] - lo[t] + 1];
     for (const limb of limbs) {
@@ -180,6 +189,22 @@ function recentre({ limbs, lo, hi, base, width }: Sweep, t: number, low: number,
     }
   }
   base[t] = moved;
+}
+
+/** Every row copied to the middle of a block of at least twice the stride and at least slots. */
+function widen(b: Sweep, slots: number): void {
+  const stride = Math.min(b.width, Math.max(2 * b.stride, slots));
+  const { lo, hi, base } = b;
+  b.limbs = b.limbs.map((limb) => {
+    const wide = new Float64Array(lo.length * stride);
+    for (let s = 0; s < lo.length; s++) {
+      const moved = s * stride + ((stride - b.stride) >> 1) + base[s] - s * b.stride;
+      if (lo[s] <= hi[s]) wide.set(limb.subarray(base[s] + lo[s], base[s] + hi[s] + 1), moved + lo[s]);
+    }
+    return wide;
+  });
+  for (let s = 0; s < lo.length; s++) base[s] = s * stride + ((stride - b.stride) >> 1) + base[s] - s * b.stride;
+  b.stride = stride;
 }
 
 /** The largest |entry| of row s in limb. */
