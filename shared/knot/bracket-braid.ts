@@ -239,26 +239,22 @@ function unbounded(b: Sweep, image: Int32Array, from: Int32Array, sources: Int32
   return -1;
 }
 
-function largest(limb: Float64Array): number {
-  let p = 0;
-  for (let i = 0; i < limb.length; i++) p = Math.max(p, Math.abs(limb[i]));
-  return p;
-}
-
 /**
  * The closure: sum over matchings of their coefficients times (-A^2 - A^-2)^(loops - 1). Rows
  * of one (loops, class) are first added in doubles: exact when the rows' largest entries add
- * up to less than 2^52, else after carrying every limb below unit/2 (then, with a letter or more,
- * at most 2^21 rows fit in MAX_ENTRIES, so the sums stay below 2^52).
+ * up to less than 2^52, else after carrying every limb but the top one below unit/2 (then,
+ * with a letter or more, at most 2^21 rows fit in MAX_ENTRIES, so their sums stay below
+ * 2^52), and the top one too, into a new limb, while its sums might not be exact.
  */
 function markovTrace(braid: Sweep, strands: number, precision: Precision): Laurent {
   const { lo, hi, base, neg, width, zero, writhe } = braid;
   let limbs = braid.limbs;
   const unit = 2 ** precision.limbBits;
   const fits = (peaks: Float64Array[]) => peaks.every((p) => p.reduce((a, b) => a + b, 0) < 2 ** 52);
-  if (!fits(braid.peaks) && !fits(limbs.map((limb) => rowPeaks(braid, limb)))) {
-    while (largest(limbs[limbs.length - 1]) > unit / 2) limbs = carry(limbs, unit, true);
+  const measured = () => limbs.map((limb) => rowPeaks(braid, limb));
+  if (!fits(braid.peaks) && !fits(measured())) {
     limbs = carry(limbs, unit, false);
+    while (!fits(measured())) limbs = carry(limbs, unit, true);
   }
   const { size, cls, closureLoops } = temperleyLieb(strands);
   const groups = new Map<number, Float64Array[]>(); // 2 loops + cls / 2 -> summed rows, per limb
