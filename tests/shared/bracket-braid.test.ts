@@ -70,6 +70,20 @@ describe('bracket of a braid closure by the Temperley-Lieb sweep', () => {
     );
   }, 120_000);
 
+  it('equals the general tangle contraction on long positive and negative runs (property)', () => {
+    // Runs of one sign push a row's exponents one way letter after letter, so its entries must
+    // move within their block (and the blocks widen) many times before the closure is taken.
+    fc.assert(
+      fc.property(fc.integer({ min: 2, max: 7 }), fc.integer({ min: 20, max: 80 }), fc.integer(), (strands, crossings, seed) => {
+        const rng = seededRng(seed);
+        const sign = rng() < 0.5 ? 1 : -1;
+        const w = Array.from({ length: crossings }, (_, i) => ((i % (strands - 1)) + 1) * (rng() < 0.9 ? sign : -sign));
+        expect(sweepBracket(w, strands).equals(bracket(fromBraid(w, strands)))).toBe(true);
+      }),
+      { numRuns: 20 },
+    );
+  }, 60_000);
+
   it('gives a Jones polynomial unchanged by random Markov moves (property)', () => {
     // Markov's theorem (Birman, "Braids, links and mapping class groups", 1974): conjugation,
     // (de)stabilisation and braid relations keep the closure's link type, hence V.
