@@ -122,7 +122,7 @@ function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: nu
       if (lo[s] > hi[s]) continue;
       low = Math.min(low, lo[s] + slot(cls, s, t, up));
       high = Math.max(high, hi[s] + slot(cls, s, t, up));
-      for (const peak of b.peaks) peak[t] += peak[s];
+      for (let r = 0; r < b.peaks.length; r++) b.peaks[r][t] += b.peaks[r][s];
     }
     if (low > high) continue;
     if (live) {
@@ -170,7 +170,7 @@ function trim({ limbs, lo, hi, base }: Sweep, t: number): void {
 }
 
 function zeroAt(limbs: Float64Array[], i: number): boolean {
-  for (const limb of limbs) if (limb[i] !== 0) return false;
+  for (let r = 0; r < limbs.length; r++) if (limbs[r][i] !== 0) return false;
   return true;
 }
 
