@@ -6,6 +6,7 @@
 // "Fast Khovanov homology computations", 2007, arXiv math/0606318. The order comes from
 // contraction-order.ts (or a greedy sweep when that is cheaper), the matchings and their
 // transitions from bracket-states.ts, the exact sums of their polynomials from bracket-sum.ts.
+// A code that braid-closure.ts reads as a closed braid goes to bracket-braid.ts's sweep instead.
 
 import { Diagram } from './diagram';
 import { Laurent } from '@/shared/poly/laurent';
@@ -13,6 +14,8 @@ import { PDCode } from './pd';
 import { contractionOrder, scoreOrder } from './contraction-order';
 import { stateGraph } from './bracket-states';
 import { closedSum, Strided } from './bracket-sum';
+import { braidClosure, ClosedBraid } from './braid-closure';
+import { braidSweepFits, sweepBracket } from './bracket-braid';
 
 /** The Kauffman bracket <D> in A, normalised so that <O> = 1 (docs/conventions.md). */
 export function bracket(d: Diagram): Laurent {
@@ -26,11 +29,24 @@ export function bracket(d: Diagram): Laurent {
  */
 export function bracketOfPD(pd: PDCode, unknots = 0): Laurent {
   if (pd.length === 0) return loopFactor().pow(Math.max(unknots - 1, 0));
+  const braid = sweepable(pd);
+  if (braid) return sweepBracket(braid.word, braid.strands).mul(loopFactor().pow(unknots));
   const graph = stateGraph(pd, cheaperOrder(pd));
   const closed = dense(graph.stride, closedSum(graph));
   // Every state has at least one loop; one of them is the normalising <O> = 1.
   const p = divideByLoop(closed);
   return Laurent.fromDense(p.c, p.off).mul(loopFactor().pow(unknots));
+}
+
+/**
+ * The braid whose closure the code is, when the Temperley-Lieb sweep suits it by bracketOfBraid's
+ * rule: its buffers fit and the greedy order's widest cut reaches 2 ends per strand (so under 4
+ * ends no braid is looked for).
+ */
+function sweepable(pd: PDCode): ClosedBraid | undefined {
+  const widest = scoreOrder(pd, greedyOrder(pd)).widest;
+  const braid = widest >= 4 ? braidClosure(pd) : undefined;
+  return braid && braidSweepFits(braid.strands, braid.word.length) && widest >= 2 * braid.strands ? braid : undefined;
 }
 
 /** Up to this cut the greedy order is cheap enough that a search for a better one does not pay. */
