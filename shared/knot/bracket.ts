@@ -11,7 +11,7 @@
 import { Diagram } from './diagram';
 import { Laurent } from '@/shared/poly/laurent';
 import { PDCode } from './pd';
-import { contractionOrder, scoreOrder } from './contraction-order';
+import { contractionOrder, OrderScore, scoreOrder } from './contraction-order';
 import { stateGraph } from './bracket-states';
 import { closedSum, Strided } from './bracket-sum';
 import { braidClosure, ClosedBraid } from './braid-closure';
@@ -29,9 +29,11 @@ export function bracket(d: Diagram): Laurent {
  */
 export function bracketOfPD(pd: PDCode, unknots = 0): Laurent {
   if (pd.length === 0) return loopFactor().pow(Math.max(unknots - 1, 0));
-  const braid = sweepable(pd);
+  const greedy = greedyOrder(pd);
+  const score = scoreOrder(pd, greedy);
+  const braid = sweepable(pd, score.widest);
   if (braid) return sweepBracket(braid.word, braid.strands).mul(loopFactor().pow(unknots));
-  const graph = stateGraph(pd, cheaperOrder(pd));
+  const graph = stateGraph(pd, cheaperOrder(pd, greedy, score));
   const closed = dense(graph.stride, closedSum(graph));
   // Every state has at least one loop; one of them is the normalising <O> = 1.
   const p = divideByLoop(closed);
@@ -43,19 +45,16 @@ export function bracketOfPD(pd: PDCode, unknots = 0): Laurent {
  * rule: its buffers fit and the greedy order's widest cut reaches 2 ends per strand (so under 4
  * ends no braid is looked for).
  */
-function sweepable(pd: PDCode): ClosedBraid | undefined {
-  const widest = scoreOrder(pd, greedyOrder(pd)).widest;
-  const braid = widest >= 4 ? braidClosure(pd) : undefined;
-  return braid && braidSweepFits(braid.strands, braid.word.length) && widest >= 2 * braid.strands ? braid : undefined;
+function sweepable(pd: PDCode, widest: number): ClosedBraid | undefined {
+  const braid = widest >= 4 ? braidClosure(pd, Math.floor(widest / 2)) : undefined;
+  return braid && braidSweepFits(braid.strands, braid.word.length) ? braid : undefined;
 }
 
 /** Up to this cut the greedy order is cheap enough that a search for a better one does not pay. */
 const NARROW = 10;
 
-/** The greedy order below or the tree-decomposition order, whichever costs less. */
-function cheaperOrder(pd: PDCode): number[] {
-  const greedy = greedyOrder(pd);
-  const score = scoreOrder(pd, greedy);
+/** The greedy order below (scored) or the tree-decomposition order, whichever costs less. */
+function cheaperOrder(pd: PDCode, greedy: number[], score: OrderScore): number[] {
   if (score.widest <= NARROW) return greedy;
   const tree = contractionOrder(pd);
   return tree.cost < score.cost ? tree.order : greedy;

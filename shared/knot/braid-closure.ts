@@ -10,7 +10,7 @@
 // word is kept only when its closure is the given code relabelled, crossing for crossing.
 
 import { BraidWord, fromBraid } from './braid';
-import { orient, Oriented, PDCode, PDError } from './pd';
+import { orient, Oriented, PDCode, PDError, rotated } from './pd';
 
 export interface ClosedBraid {
   readonly word: BraidWord;
@@ -19,8 +19,17 @@ export interface ClosedBraid {
   readonly crossings: readonly number[];
 }
 
-/** The braid whose closure (fromBraid) is this code up to relabelling, or undefined. */
-export function braidClosure(pd: PDCode): ClosedBraid | undefined {
+/** Most components whose directions are searched (2^(k-1) tries); past it only the code's own. */
+const MAX_TURNED = 6;
+
+/**
+ * The braid whose closure (fromBraid) is this code up to relabelling and the direction of its
+ * components, or undefined (also past maxStrands). The bracket does not see directions, and a
+ * drawing or a code may run some strands of a closed braid the other way: the code's own
+ * directions are tried first, then (up to MAX_TURNED components) every other choice but the
+ * whole reversed, which reads the same braid backwards.
+ */
+export function braidClosure(pd: PDCode, maxStrands = Infinity): ClosedBraid | undefined {
   if (pd.length === 0) return undefined;
   let o: Oriented;
   try {
@@ -29,9 +38,26 @@ export function braidClosure(pd: PDCode): ClosedBraid | undefined {
     if (e instanceof PDError) return undefined; // not orientable: no Seifert circles
     throw e;
   }
-  const { circles, under, over } = seifertCircles(o);
+  const k = o.components.length;
+  for (let mask = 0; mask < (k <= MAX_TURNED ? 2 ** (k - 1) : 1); mask++) {
+    const braid = withDirections(o, (label) => {
+      const c = o.componentOf.get(label)!;
+      return c > 0 && ((mask >> (c - 1)) & 1) === 1;
+    }, maxStrands);
+    if (braid) return braid;
+  }
+  return undefined;
+}
+
+/** The braid when the code, with the components `turned` says reversed, is a closed braid. */
+function withDirections(o: Oriented, turned: (label: number) => boolean, maxStrands: number): ClosedBraid | undefined {
+  const { pd } = o;
+  const signs = pd.map((x, i) => o.signs[i] * (turned(x[0]) === turned(x[1]) ? 1 : -1));
+  const { circles, under, over } = seifertCircles(o, turned);
   const path = pathOf(circles.length, under, over);
-  if (!path) return undefined;
+  if (!path || path.length > maxStrands) return undefined;
+  // Where the under-strand is reversed its incoming end is c: the crossing read from there.
+  const code = pd.map((x) => (turned(x[0]) ? rotated(x, 2) : x));
   // fromBraid runs every circle one way round its axis; which end of the path is c1 depends on
   // which way round the code's circles run, so both ends are tried.
   for (const levels of [path, [...path].reverse()]) {
@@ -39,8 +65,8 @@ export function braidClosure(pd: PDCode): ClosedBraid | undefined {
     levels.forEach((c, i) => (level[c] = i));
     const generator = pd.map((_, i) => Math.min(level[under[i]], level[over[i]]) + 1);
     const crossings = cyclicOrder(levels.map((c) => circles[c]), generator);
-    const word = crossings.map((i) => o.signs[i] * generator[i]);
-    if (sameCode(pd, crossings, fromBraid(word, levels.length).pd)) return { word, strands: levels.length, crossings };
+    const word = crossings.map((i) => signs[i] * generator[i]);
+    if (sameCode(code, crossings, fromBraid(word, levels.length).pd)) return { word, strands: levels.length, crossings };
   }
   return undefined;
 }
@@ -48,25 +74,27 @@ export function braidClosure(pd: PDCode): ClosedBraid | undefined {
 /**
  * The Seifert circles, each as the crossings it meets in order of travel, and the circle through
  * each crossing's under- and over-strand. The oriented smoothing joins each incoming end to the
- * outgoing end beside it: a to b and d to c at a positive crossing, a to d and b to c at a
- * negative one (positions 0..3 = a..d, docs/conventions.md).
+ * outgoing end beside it (positions 0..3 = a..d counterclockwise, docs/conventions.md).
  */
-function seifertCircles(o: Oriented): { circles: number[][]; under: number[]; over: number[] } {
-  const { pd, signs, head } = o;
+function seifertCircles(o: Oriented, turned: (label: number) => boolean): { circles: number[][]; under: number[]; over: number[] } {
+  const { pd } = o;
+  // Incoming ends: the under-strand's at a (c if reversed), the over-strand's at d if it runs
+  // from d to b in the code (a positive crossing there) and is kept, or the other way round.
+  const entries = pd.map((x, i): [number, number] => [turned(x[0]) ? 2 : 0, (o.signs[i] > 0) !== turned(x[1]) ? 3 : 1]);
+  const exit = (i: number, p: number): number => ((p + 1) % 4 === entries[i][0] || (p + 1) % 4 === entries[i][1] ? (p + 3) % 4 : (p + 1) % 4);
   const under = new Array<number>(pd.length).fill(-1);
   const over = new Array<number>(pd.length).fill(-1);
   const circles: number[][] = [];
-  const turn = (position: number, sign: number): number => (sign > 0 ? [1, -1, -1, 2] : [3, 2, -1, -1])[position];
   for (let start = 0; start < pd.length; start++) {
-    for (const which of [under, over]) {
-      if (which[start] >= 0) continue;
+    for (const strand of [0, 1]) {
+      if ((strand === 0 ? under : over)[start] >= 0) continue;
       const circle: number[] = [];
-      let crossing = start;
-      let position = which === under ? 0 : signs[start] > 0 ? 3 : 1;
-      while ((position === 0 ? under : over)[crossing] < 0) {
-        (position === 0 ? under : over)[crossing] = circles.length;
+      let [crossing, position] = [start, entries[start][strand]];
+      while ((position % 2 === 0 ? under : over)[crossing] < 0) {
+        (position % 2 === 0 ? under : over)[crossing] = circles.length;
         circle.push(crossing);
-        const into = head.get(pd[crossing][turn(position, signs[crossing])])!;
+        const label = pd[crossing][exit(crossing, position)];
+        const into = (turned(label) ? o.tail : o.head).get(label)!;
         [crossing, position] = [into.crossing, into.position];
       }
       circles.push(circle);
