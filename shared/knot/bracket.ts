@@ -32,12 +32,23 @@ export function bracketOfPD(pd: PDCode, unknots = 0): Laurent {
   const greedy = greedyOrder(pd);
   const score = scoreOrder(pd, greedy);
   const braid = sweepable(pd, score.widest);
-  if (braid) return sweepBracket(braid.word, braid.strands).mul(loopFactor().pow(unknots));
-  const graph = stateGraph(pd, cheaperOrder(pd, greedy, score));
+  const closed = braid ? sweepBracket(braid.word, braid.strands) : contracted(pd, cheaperOrder(pd, greedy, score));
+  return closed.mul(loopFactor().pow(unknots));
+}
+
+/** bracketOfPD by the tangle contraction alone, never the braid sweep (a reference for the sweep). */
+export function bracketByContraction(pd: PDCode, unknots = 0): Laurent {
+  if (pd.length === 0) return bracketOfPD(pd, unknots);
+  return contracted(pd, cheaperOrder(pd)).mul(loopFactor().pow(unknots));
+}
+
+/** <pd> by contracting the crossings in this order. */
+function contracted(pd: PDCode, order: number[]): Laurent {
+  const graph = stateGraph(pd, order);
   const closed = dense(graph.stride, closedSum(graph));
   // Every state has at least one loop; one of them is the normalising <O> = 1.
   const p = divideByLoop(closed);
-  return Laurent.fromDense(p.c, p.off).mul(loopFactor().pow(unknots));
+  return Laurent.fromDense(p.c, p.off);
 }
 
 /**
@@ -54,7 +65,7 @@ function sweepable(pd: PDCode, widest: number): ClosedBraid | undefined {
 const NARROW = 10;
 
 /** The greedy order below (scored) or the tree-decomposition order, whichever costs less. */
-function cheaperOrder(pd: PDCode, greedy: number[], score: OrderScore): number[] {
+function cheaperOrder(pd: PDCode, greedy = greedyOrder(pd), score: OrderScore = scoreOrder(pd, greedy)): number[] {
   if (score.widest <= NARROW) return greedy;
   const tree = contractionOrder(pd);
   return tree.cost < score.cost ? tree.order : greedy;
