@@ -6,8 +6,9 @@
 // The crossings between c_i and c_(i+1) are the letters sigma_i, met in one cyclic order on
 // both circles; walking c1, c2, ... and slotting each circle's new letters after the ones it
 // shares with the previous circle gives the word (far letters commute, so where they fall
-// between two shared ones does not matter). The path alone does not prove the nesting, so the
-// word is kept only when its closure is the given code relabelled, crossing for crossing.
+// between two shared ones does not matter). The path alone does not prove the nesting (two
+// circles may lie on one side of their common neighbour), so the word is kept only when its
+// closure is the given code relabelled, crossing for crossing.
 
 import { BraidWord, fromBraid } from './braid';
 import { orient, Oriented, PDCode, PDError, rotated } from './pd';
@@ -54,21 +55,20 @@ function withDirections(o: Oriented, turned: (label: number) => boolean, maxStra
   const { pd } = o;
   const signs = pd.map((x, i) => o.signs[i] * (turned(x[0]) === turned(x[1]) ? 1 : -1));
   const { circles, under, over } = seifertCircles(o, turned);
-  const path = pathOf(circles.length, under, over);
-  if (!path || path.length > maxStrands) return undefined;
+  const path = circles.length <= maxStrands ? pathOf(circles.length, under, over) : undefined;
+  if (!path) return undefined;
   // Where the under-strand is reversed its incoming end is c: the crossing read from there.
   const code = pd.map((x) => (turned(x[0]) ? rotated(x, 2) : x));
-  // fromBraid runs every circle one way round its axis; which end of the path is c1 depends on
-  // which way round the code's circles run, so both ends are tried.
-  for (const levels of [path, [...path].reverse()]) {
-    const level = new Array<number>(levels.length);
-    levels.forEach((c, i) => (level[c] = i));
-    const generator = pd.map((_, i) => Math.min(level[under[i]], level[over[i]]) + 1);
-    const crossings = cyclicOrder(levels.map((c) => circles[c]), generator);
-    const word = crossings.map((i) => signs[i] * generator[i]);
-    if (sameCode(code, crossings, fromBraid(word, levels.length).pd)) return { word, strands: levels.length, crossings };
-  }
-  return undefined;
+  // In fromBraid's closure the under-strand of sigma_k comes from strand k + 1 and that of its
+  // inverse from strand k, and the smoothing keeps each incoming end on its strand's circle:
+  // the first crossing's sign says which end of the path is strand 1.
+  const levels = (signs[0] > 0) === path.indexOf(under[0]) > path.indexOf(over[0]) ? path : [...path].reverse();
+  const level = new Array<number>(levels.length);
+  levels.forEach((c, i) => (level[c] = i));
+  const generator = pd.map((_, i) => Math.min(level[under[i]], level[over[i]]) + 1);
+  const crossings = cyclicOrder(levels.map((c) => circles[c]), generator);
+  const word = crossings.map((i) => signs[i] * generator[i]);
+  return sameCode(code, crossings, fromBraid(word, levels.length).pd) ? { word, strands: levels.length, crossings } : undefined;
 }
 
 /**
@@ -139,7 +139,8 @@ function cyclicOrder(levels: readonly (readonly number[])[], generator: readonly
     for (let k = 1; k <= circle.length; k++) {
       const i = circle[(first + k) % circle.length];
       if (generator[i] === j) last = i;
-      else after.set(last, [...(after.get(last) ?? []), i]);
+      else if (after.has(last)) after.get(last)!.push(i);
+      else after.set(last, [i]);
     }
     order = order.flatMap((i) => [i, ...(after.get(i) ?? [])]);
   }
