@@ -7,7 +7,7 @@
 import fc from 'fast-check';
 import { fromBraid } from '@/shared/knot/braid';
 import { braidClosure } from '@/shared/knot/braid-closure';
-import { bracketOfPD, greedyOrder } from '@/shared/knot/bracket';
+import { bracketByContraction, bracketOfPD, greedyOrder } from '@/shared/knot/bracket';
 import { sweepBracket } from '@/shared/knot/bracket-braid';
 import { canonicalPD } from '@/shared/knot/canonical';
 import { scoreOrder } from '@/shared/knot/contraction-order';
@@ -17,7 +17,7 @@ import { jonesFromBracket } from '@/shared/knot/jones';
 import { randomMoves, seededRng } from '@/shared/knot/moves';
 import { orient, PDCode, writhe } from '@/shared/knot/pd';
 import { stateSumBracket } from '@/shared/knot/statesum';
-import { arbDiagram } from './arbitraries';
+import { arbDiagram, wideWord } from './arbitraries';
 import { scramble } from './scramble';
 
 /** Braid words on 2..maxStrands strands using every generator (so the closure is one piece). */
@@ -107,7 +107,7 @@ describe('braid closures recognised in PD codes', () => {
     );
   });
 
-  it('after random Reidemeister moves finds a braid with the code own bracket, or refuses (property)', () => {
+  it("after random Reidemeister moves finds a braid with the code's own bracket, or refuses (property)", () => {
     // Never a wrong word: the bracket of the word's closure is compared with the state sum of
     // the moved code itself (not of the original, as R1 changes the bracket by -A^(+-3)).
     let found = 0;
@@ -133,9 +133,9 @@ describe('braid closures recognised in PD codes', () => {
     const trefoil = fromBraid([1, 1, 1]);
     // Two pieces: the Seifert graph is not connected.
     expect(braidClosure(disjointUnion(trefoil, trefoil).pd)).toBeUndefined();
-    // The sum side by side (families/sum.ts): the Seifert graph is the path of the two inner
-    // circles through the joined outer one, but those two lie on the same side of it, so no
-    // circle separates them as nested strands would.
+    // The sum side by side (families/sum.ts): the band joins one circle of each trefoil, so the
+    // Seifert graph is the path of the two others through the joined one, but those two lie
+    // side by side, on one side of it, where the strands of a closed braid would be nested.
     expect(braidClosure(connectedSum(trefoil, trefoil).pd)).toBeUndefined();
     // P(3,3,3): with all columns odd the two strands of each column run opposite ways (its
     // genus-1 surface is two disks and three twisted bands; common practice), so each column
@@ -160,6 +160,17 @@ describe('bracketOfPD with braid closures recognised', () => {
     );
     expect(swept).toBeGreaterThan(0); // the sweep route was taken, not only the contraction
   });
+
+  it('equals the tangle contraction on relabelled 5- to 8-strand closures of 30 to 60 crossings (property)', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 5, max: 8 }), fc.integer({ min: 30, max: 60 }), fc.integer(), (strands, crossings, seed) => {
+        const pd = scramble(fromBraid(wideWord(strands, crossings, seed), strands).pd, seededRng(seed)).pd;
+        expect(braidClosure(pd)?.strands).toBe(strands);
+        expect(bracketOfPD(pd).equals(bracketByContraction(pd))).toBe(true);
+      }),
+      { numRuns: 8 },
+    );
+  }, 60_000);
 
   it('equals the state sum on random diagrams (property)', () => {
     fc.assert(
