@@ -1,10 +1,12 @@
 // Braid closures recognised in PD codes: every closure of a braid word is found again, with its
 // strands and a word whose closure is the same code (canonical forms) and the same bracket as
-// the plain state sum; relabelled codes are found as well; after random Reidemeister moves a
+// the plain state sum; relabelled codes, codes with components reversed and the standard
+// drawing read back are found as well; after random Reidemeister moves a
 // code is found with the right bracket or refused, never given a wrong word; codes that are not
 // in braid form are refused; bracketOfPD, which now sends recognised codes to the
 // Temperley-Lieb sweep, still equals the state sum.
 import fc from 'fast-check';
+import { analyse } from '@/shared/drawing/analyse';
 import { fromBraid } from '@/shared/knot/braid';
 import { braidClosure } from '@/shared/knot/braid-closure';
 import { bracketByContraction, bracketOfPD, greedyOrder } from '@/shared/knot/bracket';
@@ -17,6 +19,7 @@ import { jonesFromBracket } from '@/shared/knot/jones';
 import { randomMoves, seededRng } from '@/shared/knot/moves';
 import { orient, PDCode, writhe } from '@/shared/knot/pd';
 import { stateSumBracket } from '@/shared/knot/statesum';
+import { closedBraidSketch } from '@/shared/layout';
 import { arbDiagram, wideWord } from './arbitraries';
 import { scramble } from './scramble';
 
@@ -106,6 +109,21 @@ describe('braid closures recognised in PD codes', () => {
       { numRuns: 80 },
     );
   });
+
+  it('finds the closed braid in its standard drawing read back, whichever way each stroke runs (property)', () => {
+    fc.assert(
+      fc.property(arbFullBraid(10, 4), fc.integer(), ({ word, strands }, seed) => {
+        const sketch = closedBraidSketch(word, strands);
+        fc.pre(sketch !== null);
+        const rng = seededRng(seed);
+        const turned = { ...sketch!, components: sketch!.components.map((c) => ({ ...c, reversed: rng() < 0.5 })) };
+        const read = analyse(turned).diagram!.diagram;
+        expect(braidClosure(read.pd)?.strands).toBe(strands);
+        expect(recognisedRight(read.pd)).toBe(true);
+      }),
+      { numRuns: 15 },
+    );
+  }, 60_000);
 
   it("after random Reidemeister moves finds a braid with the code's own bracket, or refuses (property)", () => {
     // Never a wrong word: the bracket of the word's closure is compared with the state sum of
