@@ -7,14 +7,16 @@
 // each is also timed by the Temperley-Lieb sweep of its braid word (bracketOfBraid).
 
 import { fromBraid } from '@/shared/knot/braid';
-import { bracket } from '@/shared/knot/bracket';
+import { bracket, bracketOfPD } from '@/shared/knot/bracket';
 import { bracketOfBraid } from '@/shared/knot/bracket-braid';
+import { braidClosure } from '@/shared/knot/braid-closure';
 import { stateGraph } from '@/shared/knot/bracket-states';
 import { contractionOrder } from '@/shared/knot/contraction-order';
-import { Diagram } from '@/shared/knot/diagram';
+import { diagram, Diagram } from '@/shared/knot/diagram';
 import { jonesFromBracket } from '@/shared/knot/jones';
 import { seededRng } from '@/shared/knot/moves/random';
 import { stateSumBracket } from '@/shared/knot/statesum';
+import { scramble } from '../shared/scramble';
 import type { Line } from './timing';
 
 const SIZES = [15, 30, 60, 100];
@@ -99,5 +101,18 @@ export function jonesBench(): Line[] {
     const sweep = medianMs(() => jonesFromBracket(d, bracketOfBraid(b.word, b.strands)), 3000, 5);
     lines.push({ name: `bracket+Jones by the braid sweep, ${name}, ${d.pd.length} crossings`, value: round(sweep), unit: 'ms', goal: target });
   }
+  lines.push(...pastedBraidLines());
   return lines;
+}
+
+// The random 10-strand braid of 100 crossings as a pasted PD code (labels renamed, crossings
+// shuffled): bracketOfPD has only the code, and finds the braid in it (braid-closure.ts).
+function pastedBraidLines(): Line[] {
+  const d = braidOf(10, 100).d;
+  const pasted = diagram(scramble(d.pd, seededRng(1)).pd);
+  const name = `random 10-strand braid as a pasted PD code, ${d.pd.length} crossings`;
+  return [
+    { name: `bracket+Jones through bracketOfPD, ${name}`, value: round(medianMs(() => jonesFromBracket(pasted, bracketOfPD(pasted.pd)), 3000, 5)), unit: 'ms', goal: '<= 100 ms' },
+    { name: `recognising it as a braid closure, ${name}`, value: round(medianMs(() => braidClosure(pasted.pd), 1000), 3), unit: 'ms' },
+  ];
 }
