@@ -1,0 +1,144 @@
+// Chain maps of Reidemeister I and II moves on Khovanov's cube complex over Z, and by reduction
+// mod 2 over F2: Bar-Natan, "Khovanov's homology for tangles and cobordisms", 2005, arXiv
+// math/0410495, section 4.3 (the maps of the Gaussian eliminations that prove invariance).
+//
+// The pair is a diagram D ("small") and D' ("big"), D' being D with the move's crossings added;
+// D's crossings are D''s other crossings in the same order, at the same slots (the moves of
+// shared/knot/moves keep both), so a circle of D is the circle of D' through the same slots.
+// A generator is a resolution and the mask of its x-circles, as in shared/khovanov/cube.ts.
+//
+// The formulas are written with the move's crossings last; moving them there reorders the
+// wedge of each resolution's 1-smoothings, a sign eps (pairs of an old 1-smoothing after a
+// moved one). With O the small circle the move makes in some resolutions and X_e the product
+// with x on the circle of the strand beside it:
+// - R1, O in the 0-smoothing (a positive kink): up(v) = v.x_O - (X_e v).1_O; down keeps the
+//   0-smoothing terms with x on O, dropping O.
+// - R1, O in the 1-smoothing (a negative kink): up(v) = v.1_O in the 1-smoothing; down sends
+//   w.1_O to w and w.x_O to -X_e w, and the 0-smoothing to 0.
+// - R2: of the four resolutions of the two crossings, 00 and 11 are the turnback T, one mixed
+//   resolution is D itself and the other T with O. up(v) = v + s (delta v).1_O, delta the
+//   saddle from D to 11 and s the sign that cancels its image; down is the identity on D and
+//   sends w.x_O to -beta(w), beta the saddle from 00 (the same T) to D, and w.1_O to 0.
+// In each case down(up(v)) = v; up is a homotopy equivalence, so down is its homotopy inverse.
+
+import { popcount } from '../../khovanov/cobordism';
+import { edgeMap, resolve, State } from '../../khovanov/cube';
+import { PDCode } from '../pd';
+
+export interface CubeGenerator {
+  /** Bit k: crossing k takes its 1-smoothing. */
+  readonly state: number;
+  /** Bit c: circle c of resolve(pd, state, cubeLabels(pd)) carries x. */
+  readonly mask: number;
+}
+
+export type Term = readonly [CubeGenerator, number];
+
+export interface ReidemeisterMaps {
+  /** C(D) -> C(D'): the move made. */
+  readonly up: (g: CubeGenerator) => Term[];
+  /** C(D') -> C(D): the move undone. */
+  readonly down: (g: CubeGenerator) => Term[];
+}
+
+/** The label numbering of a code's cube: labels in increasing order. */
+export const cubeLabels = (pd: PDCode): Map<number, number> => new Map([...new Set(pd.flat())].sort((p, q) => p - q).map((l, k) => [l, k]));
+
+/** The maps of the move that adds the crossings `moved` of `big` (one: R1, two: R2) to `small`. */
+export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly number[]): ReidemeisterMaps {
+  if (moved.length !== 1 && moved.length !== 2) throw new RangeError('an R1 move adds one crossing and an R2 move two');
+  if (small.length === 0 || big.length !== small.length + moved.length) throw new RangeError(`a move from ${small.length} crossings adding ${moved.length} does not give ${big.length}`);
+  const old = big.map((_, i) => i).filter((i) => !moved.includes(i));
+  const [sLabels, bLabels] = [cubeLabels(small), cubeLabels(big)];
+  const inMove = (l: number): boolean => big.every((x, i) => moved.includes(i) || !x.includes(l));
+  const inner = [...bLabels.keys()].filter(inMove);
+  // Otherwise a circle of D' would miss the old crossings: undoing the move frees a crossingless circle.
+  if (inner.length !== moved.length) throw new RangeError('the move crosses a strand with itself only inside the move: a crossingless circle, which the cube leaves out');
+
+  const bigState = (s: number, t: number): number => {
+    let x = 0;
+    old.forEach((b, j) => (x |= ((s >> j) & 1) << b));
+    moved.forEach((b, i) => (x |= ((t >> i) & 1) << b));
+    return x;
+  };
+  const parts = (x: number): { s: number; t: number } => ({
+    s: old.reduce((s, b, j) => s | (((x >> b) & 1) << j), 0),
+    t: moved.reduce((t, b, i) => t | (((x >> b) & 1) << i), 0),
+  });
+  const eps = (x: number): number => {
+    let pairs = 0;
+    for (const k of moved) if ((x >> k) & 1) pairs += old.filter((j) => j > k && (x >> j) & 1).length;
+    return pairs % 2 ? -1 : 1;
+  };
+  const memo = new Map<number, State>();
+  const bigAt = (x: number): State => memo.get(x) ?? memo.set(x, resolve(big, x, bLabels)).get(x)!;
+  const smallAt = (s: number): State => resolve(small, s, sLabels);
+
+  // Circles matched through pairs of labels on them; a circle not reached (O) is dropped.
+  const carry = (from: State, fromAt: Map<number, number>, to: State, toAt: Map<number, number>, pairs: readonly (readonly [number, number])[], mask: number): number => {
+    let out = 0;
+    for (const [p, q] of pairs) if ((mask >> from.of[fromAt.get(p)!]) & 1) out |= 1 << to.of[toAt.get(q)!];
+    return out;
+  };
+  const slots = small.flatMap((x, j) => x.map((l, p) => [l, big[old[j]][p]] as const));
+  const back = slots.map(([p, q]) => [q, p] as const);
+  const outer = [...bLabels.keys()].filter((l) => !inMove(l)).map((l) => [l, l] as const);
+  const lift = (s: number, mask: number, t: number): number => carry(smallAt(s), sLabels, bigAt(bigState(s, t)), bLabels, slots, mask);
+  const drop = (x: number, mask: number): number => carry(bigAt(x), bLabels, smallAt(parts(x).s), sLabels, back, mask);
+  const across = (x: number, y: number, mask: number): number => carry(bigAt(x), bLabels, bigAt(y), bLabels, outer, mask);
+  const bit = (x: number, label: number): number => 1 << bigAt(x).of[bLabels.get(label)!];
+  // The resolution of the moved crossings with O: the circle of an inner label and no other.
+  const circleO = (t: number): boolean => {
+    const st = bigAt(bigState(0, t));
+    const o = st.of[bLabels.get(inner[0])!];
+    return [...bLabels.keys()].every((l) => inMove(l) === (st.of[bLabels.get(l)!] === o));
+  };
+  const term = (x: number, mask: number, c: number): Term => [{ state: x, mask }, c * eps(x)];
+  const smallTerm = (x: number, mask: number, c: number): Term => [{ state: parts(x).s, mask: drop(x, mask) }, c * eps(x)];
+
+  if (moved.length === 1) {
+    const tO = circleO(0) ? 0 : 1;
+    const e = big[moved[0]].find((l) => !inMove(l))!;
+    const xe = (x: number, mask: number): number | undefined => (mask & bit(x, e) ? undefined : mask | bit(x, e));
+    const up = ({ state: s, mask }: CubeGenerator): Term[] => {
+      const x = bigState(s, tO);
+      const v = lift(s, mask, tO);
+      if (tO === 1) return [term(x, v, 1)];
+      const marked = xe(x, v);
+      return [term(x, v | bit(x, inner[0]), 1), ...(marked === undefined ? [] : [term(x, marked, -1)])];
+    };
+    const down = ({ state: x, mask }: CubeGenerator): Term[] => {
+      if (parts(x).t !== tO) return [];
+      const o = mask & bit(x, inner[0]);
+      if (tO === 0) return o ? [smallTerm(x, mask, 1)] : [];
+      if (!o) return [smallTerm(x, mask, 1)];
+      const marked = xe(x, mask);
+      return marked === undefined ? [] : [smallTerm(x, marked, -1)];
+    };
+    return { up, down };
+  }
+
+  const tO = circleO(1) ? 1 : 2;
+  const tD = 3 - tO;
+  // The move bit flipped from 00 to tO (and from tD to 11), and the other.
+  const [iO, iD] = tO === 1 ? [0, 1] : [1, 0];
+  const sign = (t: number, i: number): number => (popcount(t & ((1 << i) - 1)) % 2 ? -1 : 1);
+  const s = -sign(tD, iO) * sign(tO, iD);
+  const up = ({ state, mask }: CubeGenerator): Term[] => {
+    const x = bigState(state, tD);
+    const v = lift(state, mask, tD);
+    const [top, withO] = [bigState(state, 3), bigState(state, tO)];
+    const delta = edgeMap(bigAt(x), bigAt(top), big[moved[iO]], v, (l) => bLabels.get(l)!);
+    return [term(x, v, 1), ...delta.map((m) => term(withO, across(top, withO, m), s))];
+  };
+  const down = ({ state: x, mask }: CubeGenerator): Term[] => {
+    const { s: state, t } = parts(x);
+    if (t === tD) return [smallTerm(x, mask, 1)];
+    if (t !== tO || !(mask & bit(x, inner[0]))) return [];
+    const [bottom, atD] = [bigState(state, 0), bigState(state, tD)];
+    const beta = edgeMap(bigAt(bottom), bigAt(atD), big[moved[iD]], across(x, bottom, mask), (l) => bLabels.get(l)!);
+    // eps of the input: down undoes the reordering there.
+    return beta.map((m) => [{ state, mask: drop(atD, m) }, -eps(x)] as const);
+  };
+  return { up, down };
+}
