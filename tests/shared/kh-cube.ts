@@ -31,10 +31,12 @@ export function cubeComplex(pd: PDCode): Complex {
   const gens: CubeGenerator[] = [];
   const [h, q] = [[] as number[], [] as number[]];
   states.forEach((st, s) => {
-    for (let mask = 0; mask < 1 << st.count; mask++) {
+    // Crossingless circles are left out (resolve counts one for the empty code).
+    const count = n === 0 ? 0 : st.count;
+    for (let mask = 0; mask < 1 << count; mask++) {
       gens.push({ state: s, mask });
       h.push(popcount(s) - nMinus);
-      q.push(st.count - 2 * popcount(mask) + popcount(s) + n - 3 * nMinus);
+      q.push(count - 2 * popcount(mask) + popcount(s) + n - 3 * nMinus);
     }
   });
   const index = new Map(gens.map((g, i) => [key(g), i]));
@@ -73,11 +75,11 @@ export function compose(maps: readonly GeneratorMap[], complexes: readonly Compl
 const unit = (i: number): Vector => new Map([[i, 1]]);
 const same = (u: Vector, v: Vector): boolean => u.size === v.size && [...u].every(([i, c]) => v.get(i) === c);
 
-/** Generators where f fails d f = f d or moves the bidegree. */
-export function chainMapFailures(f: GeneratorMap, from: Complex, to: Complex): number[] {
+/** Generators where f fails d f = f d or moves the bidegree by other than (0, qShift). */
+export function chainMapFailures(f: GeneratorMap, from: Complex, to: Complex, qShift = 0): number[] {
   return from.gens.flatMap((_, i) => {
     const image = apply(f, from, to, unit(i));
-    const graded = [...image.keys()].every((j) => to.h[j] === from.h[i] && to.q[j] === from.q[i]);
+    const graded = [...image.keys()].every((j) => to.h[j] === from.h[i] && to.q[j] === from.q[i] + qShift);
     const dImage: Vector = new Map();
     for (const [j, c] of image) for (const [k, x] of to.d(j)) add(dImage, k, c * x);
     return graded && same(dImage, apply(f, from, to, from.d(i))) ? [] : [i];

@@ -23,7 +23,8 @@
 
 import { popcount } from '../../khovanov/cobordism';
 import { edgeMap, resolve, State } from '../../khovanov/cube';
-import { PDCode } from '../pd';
+import { faces } from '../moves/faces';
+import { orient, PDCode } from '../pd';
 
 export interface CubeGenerator {
   /** Bit k: crossing k takes its 1-smoothing. */
@@ -44,16 +45,19 @@ export interface ReidemeisterMaps {
 /** The label numbering of a code's cube: labels in increasing order. */
 export const cubeLabels = (pd: PDCode): Map<number, number> => new Map([...new Set(pd.flat())].sort((p, q) => p - q).map((l, k) => [l, k]));
 
-/** The maps of the move that adds the crossings `moved` of `big` (one: R1, two: R2) to `small`. */
+/**
+ * The maps of the move that adds the crossings `moved` of `big` (one: R1, two: R2) to `small`.
+ * A move may join crossingless circles of D to the code (components of D' that only pass its
+ * crossings, absent from `small`): up then takes them to carry 1 (a birth, then the move), and
+ * down, which would need them, throws.
+ */
 export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly number[]): ReidemeisterMaps {
   if (moved.length !== 1 && moved.length !== 2) throw new RangeError('an R1 move adds one crossing and an R2 move two');
-  if (small.length === 0 || big.length !== small.length + moved.length) throw new RangeError(`a move from ${small.length} crossings adding ${moved.length} does not give ${big.length}`);
+  if (big.length !== small.length + moved.length) throw new RangeError(`a move from ${small.length} crossings adding ${moved.length} does not give ${big.length}`);
   const old = big.map((_, i) => i).filter((i) => !moved.includes(i));
   const [sLabels, bLabels] = [cubeLabels(small), cubeLabels(big)];
-  const inMove = (l: number): boolean => big.every((x, i) => moved.includes(i) || !x.includes(l));
-  const inner = [...bLabels.keys()].filter(inMove);
-  // Otherwise a circle of D' would miss the old crossings: undoing the move frees a crossingless circle.
-  if (inner.length !== moved.length) throw new RangeError('the move crosses a strand with itself only inside the move: a crossingless circle, which the cube leaves out');
+  const freed = orient(big).components.filter((c) => c.every((l) => big.every((x, i) => moved.includes(i) || !x.includes(l)))).length;
+  const inner = innerLabels(big, moved);
 
   const bigState = (s: number, t: number): number => {
     let x = 0;
@@ -82,23 +86,28 @@ export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly num
   };
   const slots = small.flatMap((x, j) => x.map((l, p) => [l, big[old[j]][p]] as const));
   const back = slots.map(([p, q]) => [q, p] as const);
-  const outer = [...bLabels.keys()].filter((l) => !inMove(l)).map((l) => [l, l] as const);
+  // The tangle's ends keep their circles through all resolutions of the moved crossings but O.
+  const outer = [...bLabels.keys()].filter((l) => !inner.includes(l)).map((l) => [l, l] as const);
   const lift = (s: number, mask: number, t: number): number => carry(smallAt(s), sLabels, bigAt(bigState(s, t)), bLabels, slots, mask);
   const drop = (x: number, mask: number): number => carry(bigAt(x), bLabels, smallAt(parts(x).s), sLabels, back, mask);
   const across = (x: number, y: number, mask: number): number => carry(bigAt(x), bLabels, bigAt(y), bLabels, outer, mask);
   const bit = (x: number, label: number): number => 1 << bigAt(x).of[bLabels.get(label)!];
-  // The resolution of the moved crossings with O: the circle of an inner label and no other.
+  // The resolution of the moved crossings with O: the circle of the inner labels and no other.
   const circleO = (t: number): boolean => {
     const st = bigAt(bigState(0, t));
     const o = st.of[bLabels.get(inner[0])!];
-    return [...bLabels.keys()].every((l) => inMove(l) === (st.of[bLabels.get(l)!] === o));
+    return [...bLabels.keys()].every((l) => inner.includes(l) === (st.of[bLabels.get(l)!] === o));
+  };
+  const undo = (down: (g: CubeGenerator) => Term[]) => (g: CubeGenerator): Term[] => {
+    if (freed > 0) throw new RangeError(`undoing this move frees ${freed} crossingless circle${freed > 1 ? 's' : ''}, which the cube leaves out`);
+    return down(g);
   };
   const term = (x: number, mask: number, c: number): Term => [{ state: x, mask }, c * eps(x)];
   const smallTerm = (x: number, mask: number, c: number): Term => [{ state: parts(x).s, mask: drop(x, mask) }, c * eps(x)];
 
   if (moved.length === 1) {
     const tO = circleO(0) ? 0 : 1;
-    const e = big[moved[0]].find((l) => !inMove(l))!;
+    const e = big[moved[0]].find((l) => l !== inner[0])!;
     const xe = (x: number, mask: number): number | undefined => (mask & bit(x, e) ? undefined : mask | bit(x, e));
     const up = ({ state: s, mask }: CubeGenerator): Term[] => {
       const x = bigState(s, tO);
@@ -115,7 +124,7 @@ export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly num
       const marked = xe(x, mask);
       return marked === undefined ? [] : [smallTerm(x, marked, -1)];
     };
-    return { up, down };
+    return { up, down: undo(down) };
   }
 
   const tO = circleO(1) ? 1 : 2;
@@ -140,5 +149,18 @@ export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly num
     // eps of the input: down undoes the reordering there.
     return beta.map((m) => [{ state, mask: drop(atD, m) }, -eps(x)] as const);
   };
-  return { up, down };
+  return { up, down: undo(down) };
+}
+
+/** R1: the label of the kink's loop; R2: the two labels of the bigon's face. */
+function innerLabels(big: PDCode, moved: readonly number[]): number[] {
+  if (moved.length === 1) {
+    const x = big[moved[0]];
+    const p = x.findIndex((l, q) => l === x[(q + 1) % 4]);
+    if (p < 0) throw new RangeError(`crossing ${moved[0] + 1} is not a kink`);
+    return [x[p]];
+  }
+  const face = faces(big).find((f) => f.length === 2 && f.every((c) => moved.includes(c.crossing)) && f[0].crossing !== f[1].crossing);
+  if (!face) throw new RangeError(`crossings ${moved[0] + 1} and ${moved[1] + 1} bound no bigon`);
+  return face.map((c) => big[c.crossing][c.arrive]);
 }
