@@ -86,6 +86,22 @@ export function chainMapFailures(f: GeneratorMap, from: Complex, to: Complex, qS
   });
 }
 
+/** Generators where g - 1 = d h + h d fails on C. */
+export function homotopyFailures(g: (v: Vector) => Vector, h: GeneratorMap, c: Complex): number[] {
+  const d = (v: Vector): Vector => {
+    const out: Vector = new Map();
+    for (const [j, x] of v) for (const [k, y] of c.d(j)) add(out, k, x * y);
+    return out;
+  };
+  return c.gens.flatMap((_, i) => {
+    const left = g(unit(i));
+    add(left, i, -1);
+    const right = d(apply(h, c, c, unit(i)));
+    for (const [k, y] of apply(h, c, c, c.d(i))) add(right, k, y);
+    return same(left, right) ? [] : [i];
+  });
+}
+
 const bidegrees = (c: Complex): [number, number][] => [...new Set(c.gens.map((_, i) => `${c.h[i]},${c.q[i]}`))].map((s) => s.split(',').map(Number) as [number, number]);
 const at = (c: Complex, h: number, q: number): number[] => c.gens.map((_, i) => i).filter((i) => c.h[i] === h && c.q[i] === q);
 

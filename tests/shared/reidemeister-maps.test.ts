@@ -10,7 +10,7 @@ import { fromBraid } from '@/shared/knot/braid';
 import { Diagram } from '@/shared/knot/diagram';
 import { rationalLink } from '@/shared/knot/families';
 import { addBigon, addKink, bigons, faces, pushAcross, removeBigon, removeKink, Rng, seededRng } from '@/shared/knot/moves';
-import { chainMapFailures, Complex, compose, cubeComplex, GeneratorMap, identityOnF2, identityOnZ, renaming } from './kh-cube';
+import { chainMapFailures, Complex, compose, cubeComplex, GeneratorMap, homotopyFailures, identityOnF2, identityOnZ, renaming } from './kh-cube';
 
 // Total ranks of Kh over F2: for these thin links Kh(F2) is the reduced homology tensor
 // F2[x]/(x^2) (Shumakovitch, "Torsion of the Khovanov homology", 2004, arXiv math/0405474),
@@ -54,7 +54,7 @@ const finger = (d: Diagram, big: Diagram): Move => move(d, big, [d.pd.length, d.
 const complexes = new Map<Diagram, Complex>();
 const cx = (d: Diagram): Complex => complexes.get(d) ?? complexes.set(d, cubeComplex(d.pd)).get(d)!;
 
-describe('the maps are chain maps of bidegree (0, 0), down after up the identity on chains', () => {
+describe('the maps are chain maps of bidegree (0, 0), down after up the identity on chains, up after down 1 + dh + hd', () => {
   const rng = seededRng(18);
   const cases: [string, Move][] = fixtures.flatMap(({ name, d }) => [
     ...kinkTypes.map((t, k): [string, Move] => [`${name}, kink ${t.sign > 0 ? '+' : '-'}${t.overFirst ? ' over first' : ' under first'}`, kink(d, labelOf(d, rng), k)]),
@@ -66,6 +66,7 @@ describe('the maps are chain maps of bidegree (0, 0), down after up the identity
     expect(chainMapFailures(m.maps.down, big, small)).toEqual([]);
     const roundTrip = compose([m.maps.up, m.maps.down], [small, big, small]);
     small.gens.forEach((_, i) => expect([...roundTrip(new Map([[i, 1]]))]).toEqual([[i, 1]]));
+    if (m.maps.homotopy) expect(homotopyFailures(compose([m.maps.down, m.maps.up], [big, small, big]), m.maps.homotopy, big)).toEqual([]);
   });
 });
 

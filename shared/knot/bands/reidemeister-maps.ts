@@ -40,6 +40,19 @@ export interface ReidemeisterMaps {
   readonly up: (g: CubeGenerator) => Term[];
   /** C(D') -> C(D): the move undone. */
   readonly down: (g: CubeGenerator) => Term[];
+  /** R2 only: h on C(D') of degree (-1, 0) with up down - 1 = d h + h d (the eliminations' inverses). */
+  readonly homotopy?: (g: CubeGenerator) => Term[];
+}
+
+/**
+ * An R2 move seen in one layer of a bigger cube: an old crossing kept at one smoothing, with
+ * which the two moved crossings bound a bigon whose face has the labels `inner` (an R3
+ * triangle with its third crossing smoothed). The maps then hold on that layer only.
+ */
+export interface Layer {
+  readonly crossing: number;
+  readonly bit: 0 | 1;
+  readonly inner: readonly number[];
 }
 
 /** The label numbering of a code's cube: labels in increasing order. */
@@ -51,13 +64,14 @@ export const cubeLabels = (pd: PDCode): Map<number, number> => new Map([...new S
  * crossings, absent from `small`): up then takes them to carry 1 (a birth, then the move), and
  * down, which would need them, throws.
  */
-export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly number[]): ReidemeisterMaps {
+export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly number[], layer?: Layer): ReidemeisterMaps {
   if (moved.length !== 1 && moved.length !== 2) throw new RangeError('an R1 move adds one crossing and an R2 move two');
   if (big.length !== small.length + moved.length) throw new RangeError(`a move from ${small.length} crossings adding ${moved.length} does not give ${big.length}`);
   const old = big.map((_, i) => i).filter((i) => !moved.includes(i));
   const [sLabels, bLabels] = [cubeLabels(small), cubeLabels(big)];
   const freed = orient(big).components.filter((c) => c.every((l) => big.every((x, i) => moved.includes(i) || !x.includes(l)))).length;
-  const inner = innerLabels(big, moved);
+  const inner = layer?.inner ?? innerLabels(big, moved);
+  const base = layer ? layer.bit << old.indexOf(layer.crossing) : 0;
 
   const bigState = (s: number, t: number): number => {
     let x = 0;
@@ -94,7 +108,7 @@ export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly num
   const bit = (x: number, label: number): number => 1 << bigAt(x).of[bLabels.get(label)!];
   // The resolution of the moved crossings with O: the circle of the inner labels and no other.
   const circleO = (t: number): boolean => {
-    const st = bigAt(bigState(0, t));
+    const st = bigAt(bigState(base, t));
     const o = st.of[bLabels.get(inner[0])!];
     return [...bLabels.keys()].every((l) => inner.includes(l) === (st.of[bLabels.get(l)!] === o));
   };
@@ -149,7 +163,19 @@ export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly num
     // eps of the input: down undoes the reordering there.
     return beta.map((m) => [{ state, mask: drop(atD, m) }, -eps(x)] as const);
   };
-  return { up, down: undo(down) };
+  // Backwards along the two cancelled isomorphisms: 11 to the 1_O part of tO, the x_O part of tO to 00.
+  const homotopy = ({ state: x, mask }: CubeGenerator): Term[] => {
+    const { s: state, t } = parts(x);
+    const tau = popcount(state) % 2 ? -1 : 1;
+    if (t === 3) {
+      const to = bigState(state, tO);
+      return [[{ state: to, mask: across(x, to, mask) }, -sign(tO, iD) * tau * eps(x) * eps(to)]];
+    }
+    if (t !== tO || !(mask & bit(x, inner[0]))) return [];
+    const to = bigState(state, 0);
+    return [[{ state: to, mask: across(x, to, mask) }, -tau * eps(x) * eps(to)]];
+  };
+  return { up, down: undo(down), homotopy };
 }
 
 /** R1: the label of the kink's loop; R2: the two labels of the bigon's face. */
