@@ -7,7 +7,7 @@ import { edgeMap, resolve } from '@/shared/khovanov/cube';
 import { cubeLabels, CubeGenerator, Term } from '@/shared/knot/bands/reidemeister-maps';
 import { F2Echelon, kernel as f2Kernel, parity } from '@/shared/linalg/f2';
 import { kernel, ZEchelon } from '@/shared/linalg/lattice';
-import { orient, PDCode, slotsOf } from '@/shared/knot/pd';
+import { orient, PDCode } from '@/shared/knot/pd';
 
 export type Vector = Map<number, number>;
 export type GeneratorMap = (g: CubeGenerator) => Term[];
@@ -149,50 +149,4 @@ export function identityOnF2(c: Complex, g: (v: Vector) => Vector): { identity: 
     }
   }
   return { identity, rank };
-}
-
-/**
- * The isomorphism of cubes of two codes of one diagram (crossings and labels renamed, slots
- * kept) that sends crossing anchor[0] of `from` to anchor[1] of `to` (a symmetric diagram has
- * other isomorphisms, which need not act as +-1): crossing order changes the wedge of the
- * 1-smoothings, a sign (inversions among them).
- */
-export function renaming(from: PDCode, to: PDCode, [a, b]: readonly [number, number] = [0, 0]): GeneratorMap {
-  const [sf, st] = [slotsOf(from), slotsOf(to)];
-  const other = (slots: typeof sf, l: number, c: number, p: number) => slots.get(l)!.find((s) => s.crossing !== c || s.position !== p)!;
-  const found = (() => {
-    const phi = new Map([[a, b]]);
-    const lambda = new Map<number, number>();
-    const queue = [a];
-    while (queue.length) {
-      const i = queue.pop()!;
-      for (let p = 0; p < 4; p++) {
-        const [l, m] = [from[i][p], to[phi.get(i)!][p]];
-        if (lambda.has(l) && lambda.get(l) !== m) return undefined;
-        lambda.set(l, m);
-        const [a, b] = [other(sf, l, i, p), other(st, m, phi.get(i)!, p)];
-        if (a.position !== b.position) return undefined;
-        if (phi.has(a.crossing)) {
-          if (phi.get(a.crossing) !== b.crossing) return undefined;
-        } else {
-          phi.set(a.crossing, b.crossing);
-          queue.push(a.crossing);
-        }
-      }
-    }
-    return phi.size === from.length && new Set(phi.values()).size === from.length ? { phi, lambda } : undefined;
-  })();
-  if (!found) throw new Error('the codes are not one diagram renamed');
-  const { phi, lambda } = found;
-  const [lf, lt] = [cubeLabels(from), cubeLabels(to)];
-  return ({ state, mask }) => {
-    const ones = from.map((_, i) => i).filter((i) => (state >> i) & 1);
-    const image = ones.reduce((s, i) => s | (1 << phi.get(i)!), 0);
-    let inversions = 0;
-    ones.forEach((i, a) => ones.slice(a + 1).forEach((j) => (inversions += phi.get(i)! > phi.get(j)! ? 1 : 0)));
-    const [rf, rt] = [resolve(from, state, lf), resolve(to, image, lt)];
-    let m = 0;
-    for (const [l, k] of lf) if ((mask >> rf.of[k]) & 1) m |= 1 << rt.of[lt.get(lambda.get(l)!)!];
-    return [[{ state: image, mask: m }, inversions % 2 ? -1 : 1]];
-  };
 }

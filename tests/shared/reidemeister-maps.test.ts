@@ -10,7 +10,8 @@ import { fromBraid } from '@/shared/knot/braid';
 import { Diagram } from '@/shared/knot/diagram';
 import { rationalLink } from '@/shared/knot/families';
 import { addBigon, addKink, bigons, faces, pushAcross, removeBigon, removeKink, Rng, seededRng } from '@/shared/knot/moves';
-import { chainMapFailures, Complex, compose, cubeComplex, GeneratorMap, homotopyFailures, identityOnF2, identityOnZ, renaming } from './kh-cube';
+import { renaming } from '@/shared/knot/bands/renaming';
+import { chainMapFailures, Complex, compose, cubeComplex, GeneratorMap, homotopyFailures, identityOnF2, identityOnZ } from './kh-cube';
 
 // Total ranks of Kh over F2: for these thin links Kh(F2) is the reduced homology tensor
 // F2[x]/(x^2) (Shumakovitch, "Torsion of the Khovanov homology", 2004, arXiv math/0405474),

@@ -19,7 +19,9 @@
 //   resolution is D itself and the other T with O. up(v) = v + s (delta v).1_O, delta the
 //   saddle from D to 11 and s the sign that cancels its image; down is the identity on D and
 //   sends w.x_O to -beta(w), beta the saddle from 00 (the same T) to D, and w.1_O to 0.
-// In each case down(up(v)) = v; up is a homotopy equivalence, so down is its homotopy inverse.
+// In each case down(up(v)) = v; up is a homotopy equivalence, so down is its homotopy inverse,
+// and for R2 the inverses of the two cancelled isomorphisms give h with up down - 1 = dh + hd.
+// R3 (reidemeister3.ts) uses R2 in one layer of a bigger cube, a further crossing smoothed.
 
 import { popcount } from '../../khovanov/cobordism';
 import { edgeMap, resolve, State } from '../../khovanov/cube';
@@ -45,9 +47,10 @@ export interface ReidemeisterMaps {
 }
 
 /**
- * An R2 move seen in one layer of a bigger cube: an old crossing kept at one smoothing, with
- * which the two moved crossings bound a bigon whose face has the labels `inner` (an R3
- * triangle with its third crossing smoothed). The maps then hold on that layer only.
+ * An R2 move seen in one layer of D''s cube: a crossing of D', not of D, kept at one smoothing
+ * (D is D' with it smoothed), with which the two moved crossings bound a bigon whose face has
+ * the labels `inner` (an R3 triangle with its third crossing smoothed). The maps then hold on
+ * that layer only, and in the signs the crossing counts among D''s old ones.
  */
 export interface Layer {
   readonly crossing: number;
@@ -66,26 +69,28 @@ export const cubeLabels = (pd: PDCode): Map<number, number> => new Map([...new S
  */
 export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly number[], layer?: Layer): ReidemeisterMaps {
   if (moved.length !== 1 && moved.length !== 2) throw new RangeError('an R1 move adds one crossing and an R2 move two');
-  if (big.length !== small.length + moved.length) throw new RangeError(`a move from ${small.length} crossings adding ${moved.length} does not give ${big.length}`);
+  if (big.length !== small.length + moved.length + (layer ? 1 : 0)) throw new RangeError(`a move from ${small.length} crossings adding ${moved.length} does not give ${big.length}`);
+  // Old: every crossing of D' but the moved ones; kept: those that are D's, in D's order.
   const old = big.map((_, i) => i).filter((i) => !moved.includes(i));
+  const kept = old.filter((i) => i !== layer?.crossing);
   const [sLabels, bLabels] = [cubeLabels(small), cubeLabels(big)];
   const freed = orient(big).components.filter((c) => c.every((l) => big.every((x, i) => moved.includes(i) || !x.includes(l)))).length;
   const inner = layer?.inner ?? innerLabels(big, moved);
-  const base = layer ? layer.bit << old.indexOf(layer.crossing) : 0;
-
   const bigState = (s: number, t: number): number => {
-    let x = 0;
-    old.forEach((b, j) => (x |= ((s >> j) & 1) << b));
+    let x = layer ? layer.bit << layer.crossing : 0;
+    kept.forEach((b, j) => (x |= ((s >> j) & 1) << b));
     moved.forEach((b, i) => (x |= ((t >> i) & 1) << b));
     return x;
   };
   const parts = (x: number): { s: number; t: number } => ({
-    s: old.reduce((s, b, j) => s | (((x >> b) & 1) << j), 0),
+    s: kept.reduce((s, b, j) => s | (((x >> b) & 1) << j), 0),
     t: moved.reduce((t, b, i) => t | (((x >> b) & 1) << i), 0),
   });
+  // Formulas order D''s crossings as D's, then the layer's crossing, then the moved ones.
   const eps = (x: number): number => {
     let pairs = 0;
     for (const k of moved) if ((x >> k) & 1) pairs += old.filter((j) => j > k && (x >> j) & 1).length;
+    if (layer && (x >> layer.crossing) & 1) pairs += kept.filter((j) => j > layer.crossing && (x >> j) & 1).length;
     return pairs % 2 ? -1 : 1;
   };
   const memo = new Map<number, State>();
@@ -98,7 +103,7 @@ export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly num
     for (const [p, q] of pairs) if ((mask >> from.of[fromAt.get(p)!]) & 1) out |= 1 << to.of[toAt.get(q)!];
     return out;
   };
-  const slots = small.flatMap((x, j) => x.map((l, p) => [l, big[old[j]][p]] as const));
+  const slots = small.flatMap((x, j) => x.map((l, p) => [l, big[kept[j]][p]] as const));
   const back = slots.map(([p, q]) => [q, p] as const);
   // The tangle's ends keep their circles through all resolutions of the moved crossings but O.
   const outer = [...bLabels.keys()].filter((l) => !inner.includes(l)).map((l) => [l, l] as const);
@@ -108,7 +113,7 @@ export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly num
   const bit = (x: number, label: number): number => 1 << bigAt(x).of[bLabels.get(label)!];
   // The resolution of the moved crossings with O: the circle of the inner labels and no other.
   const circleO = (t: number): boolean => {
-    const st = bigAt(bigState(base, t));
+    const st = bigAt(bigState(0, t));
     const o = st.of[bLabels.get(inner[0])!];
     return [...bLabels.keys()].every((l) => inner.includes(l) === (st.of[bLabels.get(l)!] === o));
   };
@@ -166,7 +171,7 @@ export function reidemeisterMaps(small: PDCode, big: PDCode, moved: readonly num
   // Backwards along the two cancelled isomorphisms: 11 to the 1_O part of tO, the x_O part of tO to 00.
   const homotopy = ({ state: x, mask }: CubeGenerator): Term[] => {
     const { s: state, t } = parts(x);
-    const tau = popcount(state) % 2 ? -1 : 1;
+    const tau = old.filter((j) => (x >> j) & 1).length % 2 ? -1 : 1;
     if (t === 3) {
       const to = bigState(state, tO);
       return [[{ state: to, mask: across(x, to, mask) }, -sign(tO, iD) * tau * eps(x) * eps(to)]];
