@@ -1,5 +1,6 @@
 // How the Slate's camera follows zoom gestures: a zoom keeps the point under the fingers (or the
-// pointer) where it is; a pinch is a zoom about where it started plus the two fingers' pan.
+// pointer) where it is; a pinch is a zoom about where it started plus the two fingers' pan. And
+// how it follows the board's size while no gesture moved it since the last fit.
 import type { Point } from '@/shared/drawing/point';
 import type { View } from './slate-store';
 
@@ -19,3 +20,17 @@ export const pinchedView = ({ from, scale, focal, shift }: Pinch): View => {
 
 /** A wheel turn zooms about the pointer; 400 px of wheel is a factor of e. */
 export const wheelView = (v: View, deltaY: number, at: Point): View => zoomAbout(v, Math.exp(-deltaY / 400), at);
+
+/** A view and the board size it was made for. */
+export interface SizedView { view: View; size: { width: number; height: number } }
+
+/**
+ * The fitted view `base` on a board of another size: what `base` showed is scaled to fit the
+ * new board, about its centre. Computed from `base` alone, so a resize and its reverse give the
+ * fit back exactly (a phone turned wide and back, or a screenshot at another size).
+ */
+export const resizedView = (base: SizedView, width: number, height: number): View => {
+  const { view: v, size } = base;
+  const r = Math.min(width / size.width, height / size.height);
+  return { k: v.k * r, x: width / 2 - r * (size.width / 2 - v.x), y: height / 2 - r * (size.height / 2 - v.y) };
+};
