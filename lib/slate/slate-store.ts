@@ -4,7 +4,7 @@
 import { create } from 'zustand';
 import { canRedo, canUndo, commit, historyOf, redo, undo, type History } from '@/shared/drawing/history';
 import { emptyDoc, type SlateDoc } from './record';
-import { resizedView, type SizedView } from './zoom';
+import { refit, type FitBase } from './zoom';
 
 export type Tool = 'draw' | 'flip' | 'move' | 'reshape' | 'bands';
 
@@ -35,8 +35,8 @@ export interface SlateState {
   view: View;
   /** The canvas size last seen. */
   size: { width: number; height: number };
-  /** The last fit and the size it was made for, until a gesture zooms or pans by hand: the view then follows the canvas size. */
-  fitBase: SizedView | null;
+  /** What the last fit framed, until a gesture zooms or pans by hand: the view is fitted again when the canvas size changes. */
+  fitBase: FitBase | null;
   /** The braid word the sketch came from, while it is unchanged since (for "copy braid word"). */
   braid: { word: number[]; doc: SlateDoc } | null;
   /** Bumped when a document arrives from outside (load, paste, family), to refit the view. */
@@ -60,7 +60,7 @@ export interface SlateState {
   /** Refit the view to the drawing. */
   fit(): void;
   /** The canvas fitted the view for this request. */
-  markFitted(request: number, view: View): void;
+  markFitted(request: number, base: FitBase): void;
 }
 
 export const useSlate = create<SlateState>((set) => ({
@@ -96,14 +96,14 @@ export const useSlate = create<SlateState>((set) => ({
   resize: (width, height) =>
     set((s) => {
       if (s.size.width === 0) return { size: { width, height } };
-      if (s.fitBase) return { size: { width, height }, view: resizedView(s.fitBase, width, height) };
+      if (s.fitBase) return { size: { width, height }, view: refit(s.fitBase, width, height) };
       // Zoomed by hand: the drawing's centre stays where it was.
       const dx = (width - s.size.width) / 2;
       const dy = (height - s.size.height) / 2;
       return { size: { width, height }, view: { ...s.view, x: s.view.x + dx, y: s.view.y + dy } };
     }),
   fit: () => set((s) => ({ fitRequest: s.fitRequest + 1 })),
-  markFitted: (fitted, view) => set((s) => ({ fitted, view, fitBase: { view, size: s.size } })),
+  markFitted: (fitted, fitBase) => set((s) => ({ fitted, fitBase, view: refit(fitBase, s.size.width, s.size.height) })),
 }));
 
 /** What the canvas draws: the drag preview if any, else the present. */

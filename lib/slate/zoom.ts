@@ -2,6 +2,7 @@
 // pointer) where it is; a pinch is a zoom about where it started plus the two fingers' pan. And
 // how it follows the board's size while no gesture moved it since the last fit.
 import type { Point } from '@/shared/drawing/point';
+import { fitView, toWorld } from './picture';
 import type { View } from './slate-store';
 
 /** Zoom by factor f about the screen point c, the scale kept within 0.15x-8x. */
@@ -21,16 +22,19 @@ export const pinchedView = ({ from, scale, focal, shift }: Pinch): View => {
 /** A wheel turn zooms about the pointer; 400 px of wheel is a factor of e. */
 export const wheelView = (v: View, deltaY: number, at: Point): View => zoomAbout(v, Math.exp(-deltaY / 400), at);
 
-/** A view and the board size it was made for. */
-export interface SizedView { view: View; size: { width: number; height: number } }
-
 /**
- * The fitted view `base` on a board of another size: what `base` showed is scaled to fit the
- * new board, about its centre. Computed from `base` alone, so a resize and its reverse give the
- * fit back exactly (a phone turned wide and back, or a screenshot at another size).
+ * What the last fit framed, in world units, so that the view can be fitted again at another
+ * board size: the drawing's bounding box (with fitView's margin), or for an empty board the
+ * part of the world it showed (no margin), where a hand drawing then goes.
  */
-export const resizedView = (base: SizedView, width: number, height: number): View => {
-  const { view: v, size } = base;
-  const r = Math.min(width / size.width, height / size.height);
-  return { k: v.k * r, x: width / 2 - r * (size.width / 2 - v.x), y: height / 2 - r * (size.height / 2 - v.y) };
-};
+export interface FitBase { corners: [Point, Point]; margin: number | undefined }
+
+export function fitBaseOf(points: readonly Point[], view: View, width: number, height: number): FitBase {
+  if (points.length === 0) return { corners: [toWorld(view, { x: 0, y: 0 }), toWorld(view, { x: width, y: height })], margin: 0 };
+  const xs = points.map((p) => p.x);
+  const ys = points.map((p) => p.y);
+  return { corners: [{ x: Math.min(...xs), y: Math.min(...ys) }, { x: Math.max(...xs), y: Math.max(...ys) }], margin: undefined };
+}
+
+/** The fit on a board of this size: computed from the base alone, so a resize and its reverse give the same view. */
+export const refit = (base: FitBase, width: number, height: number): View => fitView(base.corners, width, height, base.margin);

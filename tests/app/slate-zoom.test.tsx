@@ -1,13 +1,13 @@
 // The Slate's camera under zoom gestures, checked on random views: a zoom about a point leaves the
 // world point under it in place (the definition of zooming about a point, common practice), a
 // pinch that does not scale is a pure pan, and a wheel turn undone by the opposite turn gives
-// the view back. A fitted view follows the board's size: what it showed is scaled to fit the new
-// board about its centre (so it stays in view and fills one side), and the reverse resize gives
-// the fit back; once zoomed by hand, a resize only keeps the centre.
+// the view back. A fitted view follows the board's size: the drawing is fitted again (an empty
+// board keeps what it showed), and the reverse resize gives the first fit back; once zoomed by
+// hand, a resize only keeps the centre.
 import { seededRng } from '@/shared/knot/moves/random';
-import { toWorld } from '@/lib/slate/picture';
+import { fitView, toWorld } from '@/lib/slate/picture';
 import { useSlate } from '@/lib/slate/slate-store';
-import { pinchedView, resizedView, wheelView, zoomAbout } from '@/lib/slate/zoom';
+import { fitBaseOf, pinchedView, refit, wheelView, zoomAbout } from '@/lib/slate/zoom';
 
 const rng = seededRng(7);
 const between = (a: number, b: number) => a + (b - a) * rng();
@@ -52,33 +52,31 @@ test('a wheel turn and the opposite turn at the same pointer give the view back'
 });
 
 const randomSize = () => ({ width: between(200, 1440), height: between(150, 900) });
+const randomPoints = () => Array.from({ length: 12 }, () => ({ x: between(-500, 500), y: between(-300, 300) }));
 
-test('a fitted view on a resized board shows what it showed, scaled to fit about the centre', () => {
+test('a fit base gives the fit of the drawing at any board size; an empty board keeps its view', () => {
   for (let i = 0; i < 200; i++) {
-    const base = { view: randomView(), size: randomSize() };
-    const { width, height } = randomSize();
-    const v = resizedView(base, width, height);
-    const [a, b] = [toWorld(base.view, { x: 0, y: 0 }), toWorld(base.view, { x: base.size.width, y: base.size.height })];
-    const [c, d] = [toWorld(v, { x: 0, y: 0 }), toWorld(v, { x: width, y: height })];
-    // The old board's world box lies within the new one, with the same centre and one side shared.
-    expect(c.x).toBeLessThanOrEqual(a.x + 1e-6);
-    expect(c.y).toBeLessThanOrEqual(a.y + 1e-6);
-    expect(d.x).toBeGreaterThanOrEqual(b.x - 1e-6);
-    expect(d.y).toBeGreaterThanOrEqual(b.y - 1e-6);
-    expect((c.x + d.x) / 2).toBeCloseTo((a.x + b.x) / 2, 6);
-    expect((c.y + d.y) / 2).toBeCloseTo((a.y + b.y) / 2, 6);
-    expect(Math.min(Math.abs(c.x - a.x), Math.abs(c.y - a.y))).toBeCloseTo(0, 6);
+    const [v, points, at, to] = [randomView(), randomPoints(), randomSize(), randomSize()];
+    const base = fitBaseOf(points, v, at.width, at.height);
+    expect(refit(base, to.width, to.height)).toEqual(fitView(points, to.width, to.height));
+    const empty = refit(fitBaseOf([], v, at.width, at.height), at.width, at.height);
+    expect(empty.k).toBeCloseTo(v.k, 9);
+    expect(empty.x).toBeCloseTo(v.x, 6);
+    expect(empty.y).toBeCloseTo(v.y, 6);
   }
 });
 
-test('the Slate: a resize and its reverse give the fit back; after a hand zoom a resize keeps the centre', () => {
+test('the Slate: a resize refits, its reverse gives the first fit back; after a hand zoom a resize keeps the centre', () => {
   const s = () => useSlate.getState();
+  const points = randomPoints();
   s().resize(390, 300);
-  s().markFitted(s().fitRequest, { k: 0.4, x: 20, y: -10 });
+  s().markFitted(s().fitRequest, fitBaseOf(points, s().view, 390, 300));
+  const phone = s().view;
+  expect(phone).toEqual(fitView(points, 390, 300));
   s().resize(1440, 900);
-  expect(s().view.k).toBeCloseTo(0.4 * Math.min(1440 / 390, 900 / 300), 9);
+  expect(s().view).toEqual(fitView(points, 1440, 900));
   s().resize(390, 300);
-  expect(s().view).toEqual({ k: 0.4, x: 20, y: -10 });
+  expect(s().view).toEqual(phone);
   s().setView({ k: 2, x: 5, y: 5 });
   s().resize(590, 500);
   expect(s().view).toEqual({ k: 2, x: 105, y: 105 });
