@@ -35,7 +35,7 @@ export interface SlateState {
   view: View;
   /** The canvas size last seen. */
   size: { width: number; height: number };
-  /** What the last fit framed, until a gesture zooms or pans by hand: the view is fitted again when the canvas size changes. */
+  /** What the last fit framed, until a gesture zooms or pans by hand: the view is fitted again when the canvas width changes. */
   fitBase: FitBase | null;
   /** The braid word the sketch came from, while it is unchanged since (for "copy braid word"). */
   braid: { word: number[]; doc: SlateDoc } | null;
@@ -96,8 +96,10 @@ export const useSlate = create<SlateState>((set) => ({
   resize: (width, height) =>
     set((s) => {
       if (s.size.width === 0) return { size: { width, height } };
-      if (s.fitBase) return { size: { width, height }, view: refit(s.fitBase, width, height) };
-      // Zoomed by hand: the drawing's centre stays where it was.
+      // A new width is the window's (or a pane beside the board): refit. A new height alone is
+      // mostly a bar under the board coming or going, where a jump in scale would distract; and
+      // after a hand zoom the user's view stays. Then the drawing's centre stays where it was.
+      if (s.fitBase && width !== s.size.width) return { size: { width, height }, view: refit(s.fitBase, width, height) };
       const dx = (width - s.size.width) / 2;
       const dy = (height - s.size.height) / 2;
       return { size: { width, height }, view: { ...s.view, x: s.view.x + dx, y: s.view.y + dy } };

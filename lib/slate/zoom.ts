@@ -1,6 +1,6 @@
 // How the Slate's camera follows zoom gestures: a zoom keeps the point under the fingers (or the
 // pointer) where it is; a pinch is a zoom about where it started plus the two fingers' pan. And
-// how it follows the board's size while no gesture moved it since the last fit.
+// how it follows the board's width while no gesture moved it since the last fit.
 import type { Point } from '@/shared/drawing/point';
 import { fitView, toWorld } from './picture';
 import type { View } from './slate-store';

@@ -1,9 +1,9 @@
 // The Slate's camera under zoom gestures, checked on random views: a zoom about a point leaves the
 // world point under it in place (the definition of zooming about a point, common practice), a
 // pinch that does not scale is a pure pan, and a wheel turn undone by the opposite turn gives
-// the view back. A fitted view follows the board's size: the drawing is fitted again (an empty
-// board keeps what it showed), and the reverse resize gives the first fit back; once zoomed by
-// hand, a resize only keeps the centre.
+// the view back. A fitted view follows the board's width: the drawing is fitted again (an empty
+// board keeps what it showed), and the reverse resize gives the first fit back; a new height
+// alone, or any resize once zoomed by hand, only keeps the centre.
 import { seededRng } from '@/shared/knot/moves/random';
 import { fitView, toWorld } from '@/lib/slate/picture';
 import { useSlate } from '@/lib/slate/slate-store';
@@ -66,7 +66,7 @@ test('a fit base gives the fit of the drawing at any board size; an empty board 
   }
 });
 
-test('the Slate: a resize refits, its reverse gives the first fit back; after a hand zoom a resize keeps the centre', () => {
+test('the Slate: a new width refits, its reverse gives the first fit back; a new height or a hand zoom keeps the scale and the centre', () => {
   const s = () => useSlate.getState();
   const points = randomPoints();
   s().resize(390, 300);
@@ -77,7 +77,10 @@ test('the Slate: a resize refits, its reverse gives the first fit back; after a 
   expect(s().view).toEqual(fitView(points, 1440, 900));
   s().resize(390, 300);
   expect(s().view).toEqual(phone);
+  // A bar under the board: the height alone changes, the scale stays and the centre follows.
+  s().resize(390, 240);
+  expect(s().view).toEqual({ ...phone, y: phone.y - 30 });
   s().setView({ k: 2, x: 5, y: 5 });
   s().resize(590, 500);
-  expect(s().view).toEqual({ k: 2, x: 105, y: 105 });
+  expect(s().view).toEqual({ k: 2, x: 5 + (590 - 390) / 2, y: 5 + (500 - 240) / 2 });
 });
