@@ -52,7 +52,9 @@ afterAll(async () => {
 test('in Node: both bands of 9_46 are ribbon disks with classes nonzero at (0, 1), and the classes differ', () => {
   for (const band of [diskA, diskB]) {
     for (const b of [band, ...moved(band, 1.5)]) {
-      // c = b + 1: a ribbon disk (shared/knot/bands/certificate.ts); chi = 1 is its quantum degree.
+      // c = b + 1: a ribbon disk (shared/knot/bands/certificate.ts). Its class is nonzero at
+      // q = chi = 1: a ribbon concordance induces an injection on Khovanov homology (Levine and
+      // Zemke, "Khovanov homology and ribbon concordances", 2019, arXiv 1903.01546).
       expect(certifyBands(presentation(withBand(strands946, b)))).toMatchObject({ components: 2, bands: 1, ribbon: true, surface: { value: { q: 1, zero: false } } });
     }
   }
