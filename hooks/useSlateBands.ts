@@ -12,5 +12,5 @@ export function useSlateBands(active: boolean, dragging: boolean) {
   const read = drawings && !('reason' in drawings) ? drawings : null;
   const presentation = useMemo(() => (read ? { ...read.presentation, saddles: [...read.presentation.saddles] } : null), [read]);
   const certificate = useBandCertificate(presentation, dragging);
-  return { drawings, refused: drawings && 'reason' in drawings ? drawings.reason : null, afterComponents: read?.afterDiagram.components ?? null, certificate };
+  return { drawings, refused: drawings && 'reason' in drawings ? drawings.reason : null, afterComponents: read?.afterDiagram.components ?? null, presentation, certificate };
 }

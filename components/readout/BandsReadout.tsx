@@ -5,11 +5,13 @@
 // "g4 = n" when they meet (shared/knot/bands/certificate.ts says why each holds); then the
 // surface's class over F2 and the comparison with another sketch's surface.
 import { StyleSheet, Text, View } from 'react-native';
+import type { BandPresentation } from '@/shared/knot/bands';
 import type { BandsState } from '@/hooks/useBandCertificate';
 import type { SState } from '@/hooks/useSInvariant';
 import { BANDS_KH_CROSSINGS, BANDS_MAX_CROSSINGS, type BandsAnswer } from './local-bands';
 import { colors, fonts, space, type } from '@/constants/theme';
 import { BandsCompare } from './BandsCompare';
+import { BandsServerCheck } from './BandsServerCheck';
 import { SurfaceClassText } from './SurfaceClassText';
 
 const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
@@ -29,7 +31,9 @@ function lowerBound(s: SState, signature: number | undefined): number | null {
   return Math.max(Math.abs(s.s) / 2, Math.abs(signature) / 2);
 }
 
-export function BandsReadout({ state, refused, s, signature }: { state: BandsState; refused: string | null; s: SState; signature?: number }) {
+type Props = { state: BandsState; presentation: BandPresentation | null; refused: string | null; s: SState; signature?: number };
+
+export function BandsReadout({ state, presentation, refused, s, signature }: Props) {
   if (refused) {
     return (
       <View style={styles.box} testID="readout-bands">
@@ -44,6 +48,7 @@ export function BandsReadout({ state, refused, s, signature }: { state: BandsSta
       <View style={styles.box} testID="readout-bands">
         <Text style={styles.label}>Bands</Text>
         <Text style={styles.note}>Certified on the device up to {BANDS_MAX_CROSSINGS} crossings of the band drawing (this has {state.crossings}).</Text>
+        {presentation ? <BandsServerCheck presentation={presentation} /> : null}
       </View>
     );
   }
@@ -57,6 +62,7 @@ export function BandsReadout({ state, refused, s, signature }: { state: BandsSta
         {state.stale ? <Text style={styles.updating}>updating…</Text> : null}
       </View>
       {state.error ? <Text style={styles.error}>Could not certify: {state.error}</Text> : null}
+      {state.error && presentation && !state.stale ? <BandsServerCheck presentation={presentation} /> : null}
       {c ? (
         <>
           <Text style={styles.line} testID="readout-bands-unlink">{unlinkText(c)}</Text>
@@ -71,6 +77,7 @@ export function BandsReadout({ state, refused, s, signature }: { state: BandsSta
           ) : null}
           {knot && lower !== null ? <Text style={styles.note}>Lower bounds: |s|/2 and |σ|/2 give g4 ≥ {lower}</Text> : null}
           {knot && lower !== null && c.genusBound === lower ? <Text style={styles.num} testID="readout-bands-g4">g4 = {lower}</Text> : null}
+          {c.unlink === 'too-large' && presentation && !state.stale ? <BandsServerCheck presentation={presentation} /> : null}
           <SurfaceClassText surface={c.surface} />
           <BandsCompare />
         </>

@@ -7,7 +7,8 @@ import { useEffect, useMemo, useState } from 'react';
 import { StyleSheet, Text, View, type LayoutChangeEvent } from 'react-native';
 import { GestureDetector } from 'react-native-gesture-handler';
 import type { Analysis } from '@/shared/drawing/analyse';
-import { fitView, strandPictures } from '@/lib/slate/picture';
+import { strandPictures } from '@/lib/slate/picture';
+import { fitBaseOf } from '@/lib/slate/zoom';
 import { currentDoc, useSlate } from '@/lib/slate/slate-store';
 import { useSlateGestures } from '@/hooks/useSlateGestures';
 import { fonts, slate } from '@/constants/theme';
@@ -29,7 +30,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
     const s = useSlate.getState();
     if (size.width === 0 || s.fitted === fitRequest) return;
     const points = s.history.present.sketch.components.flatMap((c) => c.points);
-    s.markFitted(fitRequest, points.length ? fitView(points, size.width, size.height) : s.view);
+    s.markFitted(fitRequest, fitBaseOf(points, s.view, size.width, size.height));
   }, [fitRequest, size]);
 
   const onLayout = (e: LayoutChangeEvent) => {

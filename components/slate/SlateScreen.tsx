@@ -72,7 +72,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
     <>
       {descending ? <DescendingNote onAlternate={actions.alternateNow} /> : null}
       <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} numbers={componentNumbers} />
-      {diagram ? <BandsReadout state={bands.certificate} refused={bands.refused} s={sInvariant} signature={readout.values.signature} /> : null}
+      {diagram ? <BandsReadout state={bands.certificate} presentation={bands.presentation} refused={bands.refused} s={sInvariant} signature={readout.values.signature} /> : null}
       <ReadoutActions
         hasDiagram={!!diagram}
         canAlternate={!!diagram && diagram.pd.length > 0}

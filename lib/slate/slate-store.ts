@@ -4,6 +4,7 @@
 import { create } from 'zustand';
 import { canRedo, canUndo, commit, historyOf, redo, undo, type History } from '@/shared/drawing/history';
 import { emptyDoc, type SlateDoc } from './record';
+import { refit, type FitBase } from './zoom';
 
 export type Tool = 'draw' | 'flip' | 'move' | 'reshape' | 'bands';
 
@@ -32,8 +33,10 @@ export interface SlateState {
   /** Show the drawing after the band moves instead of (or beside) the drawing. */
   showAfter: boolean;
   view: View;
-  /** The canvas size last seen (a resize keeps the drawing's centre where it was). */
+  /** The canvas size last seen. */
   size: { width: number; height: number };
+  /** What the last fit framed, until a gesture zooms or pans by hand: the view is fitted again when the canvas width changes. */
+  fitBase: FitBase | null;
   /** The braid word the sketch came from, while it is unchanged since (for "copy braid word"). */
   braid: { word: number[]; doc: SlateDoc } | null;
   /** Bumped when a document arrives from outside (load, paste, family), to refit the view. */
@@ -57,7 +60,7 @@ export interface SlateState {
   /** Refit the view to the drawing. */
   fit(): void;
   /** The canvas fitted the view for this request. */
-  markFitted(request: number, view: View): void;
+  markFitted(request: number, base: FitBase): void;
 }
 
 export const useSlate = create<SlateState>((set) => ({
@@ -75,8 +78,9 @@ export const useSlate = create<SlateState>((set) => ({
   braid: null,
   fitRequest: 0,
   fitted: -1,
+  fitBase: null,
   open: (sketchId, doc) =>
-    set((s) => ({ sketchId, history: historyOf(doc), opened: doc, view: identityView, preview: null, selected: null, selectedBand: null, bandNotice: null, showAfter: false, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1 })),
+    set((s) => ({ sketchId, history: historyOf(doc), opened: doc, view: identityView, preview: null, selected: null, selectedBand: null, bandNotice: null, showAfter: false, braid: null, tool: 'draw', fitRequest: s.fitRequest + 1, fitBase: null })),
   replace: (doc, braid) =>
     set((s) => ({ history: commit(s.history, doc), preview: null, selected: null, braid: braid ? { word: braid, doc } : null, fitRequest: s.fitRequest + 1 })),
   apply: (doc) => set((s) => ({ history: commit(s.history, doc), preview: null })),
@@ -88,16 +92,20 @@ export const useSlate = create<SlateState>((set) => ({
   selectBand: (selectedBand) => set({ selectedBand }),
   setBandNotice: (bandNotice) => set({ bandNotice }),
   setShowAfter: (showAfter) => set({ showAfter }),
-  setView: (view) => set({ view }),
+  setView: (view) => set({ view, fitBase: null }),
   resize: (width, height) =>
     set((s) => {
       if (s.size.width === 0) return { size: { width, height } };
+      // A new width is the window's (or a pane beside the board): refit. A new height alone is
+      // mostly a bar under the board coming or going, where a jump in scale would distract; and
+      // after a hand zoom the user's view stays. Then the drawing's centre stays where it was.
+      if (s.fitBase && width !== s.size.width) return { size: { width, height }, view: refit(s.fitBase, width, height) };
       const dx = (width - s.size.width) / 2;
       const dy = (height - s.size.height) / 2;
       return { size: { width, height }, view: { ...s.view, x: s.view.x + dx, y: s.view.y + dy } };
     }),
   fit: () => set((s) => ({ fitRequest: s.fitRequest + 1 })),
-  markFitted: (fitted, view) => set({ fitted, view }),
+  markFitted: (fitted, fitBase) => set((s) => ({ fitted, fitBase, view: refit(fitBase, s.size.width, s.size.height) })),
 }));
 
 /** What the canvas draws: the drag preview if any, else the present. */

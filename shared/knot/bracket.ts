@@ -6,13 +6,16 @@
 // "Fast Khovanov homology computations", 2007, arXiv math/0606318. The order comes from
 // contraction-order.ts (or a greedy sweep when that is cheaper), the matchings and their
 // transitions from bracket-states.ts, the exact sums of their polynomials from bracket-sum.ts.
+// A code that braid-closure.ts reads as a closed braid goes to bracket-braid.ts's sweep instead.
 
 import { Diagram } from './diagram';
 import { Laurent } from '@/shared/poly/laurent';
 import { PDCode } from './pd';
-import { contractionOrder, scoreOrder } from './contraction-order';
+import { contractionOrder, OrderScore, scoreOrder } from './contraction-order';
 import { stateGraph } from './bracket-states';
 import { closedSum, Strided } from './bracket-sum';
+import { braidClosure, ClosedBraid } from './braid-closure';
+import { braidSweepFits, sweepBracket } from './bracket-braid';
 
 /** The Kauffman bracket <D> in A, normalised so that <O> = 1 (docs/conventions.md). */
 export function bracket(d: Diagram): Laurent {
@@ -26,20 +29,43 @@ export function bracket(d: Diagram): Laurent {
  */
 export function bracketOfPD(pd: PDCode, unknots = 0): Laurent {
   if (pd.length === 0) return loopFactor().pow(Math.max(unknots - 1, 0));
-  const graph = stateGraph(pd, cheaperOrder(pd));
+  const greedy = greedyOrder(pd);
+  const score = scoreOrder(pd, greedy);
+  const braid = sweepable(pd, score.widest);
+  const closed = braid ? sweepBracket(braid.word, braid.strands) : contracted(pd, cheaperOrder(pd, greedy, score));
+  return closed.mul(loopFactor().pow(unknots));
+}
+
+/** bracketOfPD by the tangle contraction alone, never the braid sweep (a reference for the sweep). */
+export function bracketByContraction(pd: PDCode, unknots = 0): Laurent {
+  if (pd.length === 0) return bracketOfPD(pd, unknots);
+  return contracted(pd, cheaperOrder(pd)).mul(loopFactor().pow(unknots));
+}
+
+/** <pd> by contracting the crossings in this order. */
+function contracted(pd: PDCode, order: number[]): Laurent {
+  const graph = stateGraph(pd, order);
   const closed = dense(graph.stride, closedSum(graph));
   // Every state has at least one loop; one of them is the normalising <O> = 1.
   const p = divideByLoop(closed);
-  return Laurent.fromDense(p.c, p.off).mul(loopFactor().pow(unknots));
+  return Laurent.fromDense(p.c, p.off);
+}
+
+/**
+ * The braid whose closure the code is, when the Temperley-Lieb sweep suits it by bracketOfBraid's
+ * rule: its buffers fit and the greedy order's widest cut reaches 2 ends per strand (so under 4
+ * ends no braid is looked for).
+ */
+function sweepable(pd: PDCode, widest: number): ClosedBraid | undefined {
+  const braid = widest >= 4 ? braidClosure(pd, Math.floor(widest / 2)) : undefined;
+  return braid && braidSweepFits(braid.strands, braid.word.length) ? braid : undefined;
 }
 
 /** Up to this cut the greedy order is cheap enough that a search for a better one does not pay. */
 const NARROW = 10;
 
-/** The greedy order below or the tree-decomposition order, whichever costs less. */
-function cheaperOrder(pd: PDCode): number[] {
-  const greedy = greedyOrder(pd);
-  const score = scoreOrder(pd, greedy);
+/** The greedy order below (scored) or the tree-decomposition order, whichever costs less. */
+function cheaperOrder(pd: PDCode, greedy = greedyOrder(pd), score: OrderScore = scoreOrder(pd, greedy)): number[] {
   if (score.widest <= NARROW) return greedy;
   const tree = contractionOrder(pd);
   return tree.cost < score.cost ? tree.order : greedy;

@@ -1,10 +1,13 @@
 // The Slate's camera under zoom gestures, checked on random views: a zoom about a point leaves the
 // world point under it in place (the definition of zooming about a point, common practice), a
 // pinch that does not scale is a pure pan, and a wheel turn undone by the opposite turn gives
-// the view back.
+// the view back. A fitted view follows the board's width: the drawing is fitted again (an empty
+// board keeps what it showed), and the reverse resize gives the first fit back; a new height
+// alone, or any resize once zoomed by hand, only keeps the centre.
 import { seededRng } from '@/shared/knot/moves/random';
-import { toWorld } from '@/lib/slate/picture';
-import { pinchedView, wheelView, zoomAbout } from '@/lib/slate/zoom';
+import { fitView, toWorld } from '@/lib/slate/picture';
+import { useSlate } from '@/lib/slate/slate-store';
+import { fitBaseOf, pinchedView, refit, wheelView, zoomAbout } from '@/lib/slate/zoom';
 
 const rng = seededRng(7);
 const between = (a: number, b: number) => a + (b - a) * rng();
@@ -46,4 +49,38 @@ test('a wheel turn and the opposite turn at the same pointer give the view back'
     expect(back.x).toBeCloseTo(v.x, 6);
     expect(back.y).toBeCloseTo(v.y, 6);
   }
+});
+
+const randomSize = () => ({ width: between(200, 1440), height: between(150, 900) });
+const randomPoints = () => Array.from({ length: 12 }, () => ({ x: between(-500, 500), y: between(-300, 300) }));
+
+test('a fit base gives the fit of the drawing at any board size; an empty board keeps its view', () => {
+  for (let i = 0; i < 200; i++) {
+    const [v, points, at, to] = [randomView(), randomPoints(), randomSize(), randomSize()];
+    const base = fitBaseOf(points, v, at.width, at.height);
+    expect(refit(base, to.width, to.height)).toEqual(fitView(points, to.width, to.height));
+    const empty = refit(fitBaseOf([], v, at.width, at.height), at.width, at.height);
+    expect(empty.k).toBeCloseTo(v.k, 9);
+    expect(empty.x).toBeCloseTo(v.x, 6);
+    expect(empty.y).toBeCloseTo(v.y, 6);
+  }
+});
+
+test('the Slate: a new width refits, its reverse gives the first fit back; a new height or a hand zoom keeps the scale and the centre', () => {
+  const s = () => useSlate.getState();
+  const points = randomPoints();
+  s().resize(390, 300);
+  s().markFitted(s().fitRequest, fitBaseOf(points, s().view, 390, 300));
+  const phone = s().view;
+  expect(phone).toEqual(fitView(points, 390, 300));
+  s().resize(1440, 900);
+  expect(s().view).toEqual(fitView(points, 1440, 900));
+  s().resize(390, 300);
+  expect(s().view).toEqual(phone);
+  // A bar under the board: the height alone changes, the scale stays and the centre follows.
+  s().resize(390, 240);
+  expect(s().view).toEqual({ ...phone, y: phone.y - 30 });
+  s().setView({ k: 2, x: 5, y: 5 });
+  s().resize(590, 500);
+  expect(s().view).toEqual({ k: 2, x: 5 + (590 - 390) / 2, y: 5 + (500 - 240) / 2 });
 });

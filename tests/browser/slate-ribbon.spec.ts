@@ -12,14 +12,13 @@ import { copyFileSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { certifyBands } from '@/components/readout/local-bands';
 import { compareSketches } from '@/components/readout/local-compare';
-import { fitView, toScreen } from '@/lib/slate/picture';
-import { addBand } from '@/shared/drawing/bands';
 import { readBands } from '@/shared/drawing/band-read';
 import type { Point } from '@/shared/drawing/point';
 import type { Sketch } from '@/shared/drawing/sketch';
 import { jones } from '@/shared/knot/jones';
 import { layoutPD, layoutToSketch } from '@/shared/layout';
-import { baseUrl, newTitledSketch, person, phoneWithTouch, shoot, swipe as fingerSwipe } from './helpers';
+import { drawBand, moreReadout, withBand } from './bands-touch';
+import { baseUrl, newTitledSketch, person, phoneWithTouch, shoot } from './helpers';
 
 const who = person('Rhea Ribbon', 'rhea.ribbon', 'ribbon and disk 5');
 
@@ -34,13 +33,6 @@ const bandA: [Point, Point] = [{ x: 120.44, y: 63.22 }, { x: 48.78, y: 3.17 }];
 const bandB: [Point, Point] = [{ x: 141.21, y: 43.45 }, { x: 56.55, y: -25.32 }];
 
 const strands: Sketch = layoutToSketch(layoutPD(PD, 0), []);
-const line = (p: Point, q: Point, n = 24): Point[] => Array.from({ length: n + 1 }, (_, i) => ({ x: p.x + ((q.x - p.x) * i) / n, y: p.y + ((q.y - p.y) * i) / n }));
-const withBand = (s: Sketch, [p, q]: [Point, Point]): Sketch => {
-  const r = addBand(s, line(p, q));
-  if ('reason' in r) throw new Error(r.reason);
-  return r.sketch;
-};
-
 let browser: Browser;
 let page: Page;
 let touch: CDPSession;
@@ -70,24 +62,10 @@ async function drawSquareKnotWithBand(title: string, band: [Point, Point]): Prom
   await page.getByRole('textbox', { name: 'PD code' }).fill(JSON.stringify(PD));
   await page.getByRole('button', { name: 'Draw it' }).click();
   await page.getByTestId('readout-crossings-count').getByText('6 crossings').waitFor();
-  await page.waitForTimeout(300); // the view fits the pasted drawing
-  const box = (await page.getByTestId('slate-canvas').boundingBox())!;
-  const view = fitView(strands.components.flatMap((c) => c.points), box.width, box.height);
-  const screen = (p: Point) => {
-    const s = toScreen(view, p);
-    return { x: box.x + s.x, y: box.y + s.y };
-  };
-  await page.getByRole('button', { name: 'Bands' }).click();
-  await fingerSwipe(touch, line(screen(band[0]), screen(band[1])));
+  await drawBand(page, touch, strands, band);
   await page.getByTestId('readout-bands-ribbon').getByText('Ribbon disk: the knot is ribbon, hence slice').waitFor();
   await page.getByText('1 band → 2-component unlink', { exact: false }).waitFor();
   await page.getByTestId('readout-bands-class').getByText('Class over F2: nonzero at (h, q) = (0, 1)').waitFor();
-}
-
-// The phone's split: a shorter canvas and more of the Readout in view (once per sketch page).
-async function moreReadout(): Promise<void> {
-  const more = page.getByRole('button', { name: 'More room for the Readout' });
-  if (await more.count()) await more.click();
 }
 
 const keep = (name: string) => {
@@ -97,7 +75,7 @@ const keep = (name: string) => {
 
 test('the square knot with a band drawn by touch: ribbon, its class nonzero at q = chi = 1', async () => {
   await drawSquareKnotWithBand('Square knot, disk A', bandA);
-  await moreReadout();
+  await moreReadout(page);
   await shoot(page, 'slate-ribbon-class', () => page.getByTestId('readout-bands-class').scrollIntoViewIfNeeded());
   keep('slate-ribbon-class');
 });
@@ -110,7 +88,7 @@ test('another band on the same strands, compared with the first sketch', async (
   await page.getByRole('button', { name: 'Compare with Square knot, disk A' }).click();
   const verdict = expected.verdict === 'differ' ? 'Their classes differ: the surfaces are not isotopic rel boundary.' : 'Equal classes (no conclusion).';
   await page.getByTestId('readout-bands-verdict').getByText(verdict).waitFor();
-  await moreReadout();
+  await moreReadout(page);
   await shoot(page, 'slate-ribbon-compare', () => page.getByTestId('readout-bands-verdict').scrollIntoViewIfNeeded());
   keep('slate-ribbon-compare');
 });

@@ -3,7 +3,7 @@
 import type { RunningServer } from '@/server/server';
 import { defaultRunLimits } from '@/server/runs/limits';
 import type { BandPresentation } from '@/shared/knot/bands';
-import { ribbon, trefoil } from '../shared/bands-fixtures';
+import { ribbon, trefoil } from '@/tests/shared/bands-fixtures';
 import { signUp, testServer } from './helpers';
 import { ended, start, waitFor } from './runs-fixtures';
 

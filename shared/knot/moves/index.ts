@@ -10,5 +10,6 @@ export type { Bigon } from './r2';
 export { applyR3, triangles } from './r3';
 export { randomMove, randomMoves, seededRng } from './random';
 export type { MoveKind, Rng } from './random';
-export { simplify } from './simplify';
+export { simplify, simplifySteps } from './simplify';
+export type { Removal } from './simplify';
 export { splice } from './splice';

@@ -3,7 +3,7 @@
 
 import { assemble, Framed } from '../assemble';
 import { Diagram } from '../diagram';
-import { mapLabels, orient, PDError, Slot, slotsOf } from '../pd';
+import { mapLabels, orient, PDCode, PDError, Slot, slotsOf } from '../pd';
 
 /**
  * Removes the crossings `remove`; each pair in `joins` is (label entering the removed part,
@@ -15,19 +15,10 @@ export function splice(d: Diagram, remove: readonly number[], joins: readonly (r
   const o = orient(d.pd);
   const slots = slotsOf(d.pd);
   const gone = new Set(remove);
-  const parent = new Map<number, number>();
-  const find = (l: number): number => {
-    const p = parent.get(l) ?? l;
-    if (p === l) return l;
-    const root = find(p);
-    parent.set(l, root);
-    return root;
-  };
-  for (const [a, b] of joins) parent.set(find(a), find(b));
+  const { pd, find } = joinedCode(d.pd, remove, joins);
   const joined = new Set(joins.flat());
   const kept = d.pd.map((_, i) => i).filter((i) => !gone.has(i));
   const index = new Map(kept.map((old, i) => [old, i]));
-  const pd = kept.map((i) => mapLabels(d.pd[i], (l) => find(l)));
   const heads = new Map<number, Slot>();
   for (const [label, h] of o.head) {
     if (index.has(h.crossing)) heads.set(find(label), { crossing: index.get(h.crossing)!, position: h.position });
@@ -48,4 +39,22 @@ export function splice(d: Diagram, remove: readonly number[], joins: readonly (r
     if (inside === 1 && !joined.has(label)) throw new PDError(`splice: edge ${label} is cut but not joined`);
   }
   return assemble(pd, heads, framed, unknotFramings);
+}
+
+/**
+ * The crossings not in `remove`, in order and at their slots, with the labels of each pair in
+ * `joins` made one (each class named by one of its labels). Orientation is neither needed nor
+ * kept, so this also serves smoothings.
+ */
+export function joinedCode(pd: PDCode, remove: readonly number[], joins: readonly (readonly [number, number])[]): { pd: PDCode; find: (l: number) => number } {
+  const parent = new Map<number, number>();
+  const find = (l: number): number => {
+    const p = parent.get(l) ?? l;
+    if (p === l) return l;
+    const root = find(p);
+    parent.set(l, root);
+    return root;
+  };
+  for (const [a, b] of joins) parent.set(find(a), find(b));
+  return { pd: pd.flatMap((x, i) => (remove.includes(i) ? [] : [mapLabels(x, (l) => find(l))])), find };
 }
