@@ -25,6 +25,7 @@ import { seededRng } from '@/shared/knot/moves';
 import { orient, PDCode } from '@/shared/knot/pd';
 import { integers } from '@/shared/linalg/ring';
 import { randomWord } from '@/tests/shared/khovanov-fixtures';
+import { loadavg } from 'os';
 import type { Line } from './timing';
 
 const MB = 1024 * 1024;
@@ -95,6 +96,8 @@ function cableLines(name: string, d: Diagram, ring: KhRing, goal?: string, memGo
     { name: `${label}, most objects${done ? '' : ' so far'}`, value: objects, unit: 'objects' },
     { name: `${label}, widest cut of the greedy order / of the tree-decomposition order`, value: scoreOrder(d.pd, greedyOrder(d.pd).order).widest, unit: `/ ${contractionOrder(d.pd).widest} points` },
     ...(done ? [{ name: `${label}, Euler characteristic = (q + q^-1) V`, value: euler ? 1 : 0, unit: euler ? '(yes)' : '(NO)', goal: '1' }] : []),
+    // The machine is shared: the load beside the figures says how far the wall time is to be trusted.
+    { name: `${label}, load average (1 min) at its end`, value: round(loadavg()[0], 2), unit: '' },
   ];
 }
 
