@@ -56,7 +56,10 @@ const den = (a: unknown): unknown => (typeof a === 'object' ? (a as Fraction).d 
 
 /** op on the parts of a and b when all four are numbers (op gives undefined when unsafe), else undefined. */
 function smallOp(a: unknown, b: unknown, op: (na: number, da: number, nb: number, db: number) => Rational | undefined): Rational | undefined {
-  const [na, da, nb, db] = [num(a), den(a), num(b), den(b)];
+  const na = num(a);
+  const da = den(a);
+  const nb = num(b);
+  const db = den(b);
   return typeof na === 'number' && typeof da === 'number' && typeof nb === 'number' && typeof db === 'number' ? op(na, da, nb, db) : undefined;
 }
 
