@@ -1,8 +1,12 @@
 // A complex in Bar-Natan's category of a tangle: objects are crossingless matchings of the
 // open boundary with a q-shift and a homological height; the differential is a sparse matrix of
 // cobordisms (cobordism.ts). Bar-Natan, "Fast Khovanov homology computations", math/0606318.
+// Rows and columns are plain arrays (rows are short, so indexOf beats hashing), and a
+// cancellation adds its fill-in to a row through a scatter array of the row's positions, as in
+// sparse Gaussian elimination: no hash lookup and no per-entry map node.
 
 import { Ring } from '../linalg/ring';
+import { Coefficients, coefficients } from './coefficients';
 import { composite, composition, Composition, khovanovTheory, Matching, Theory } from './cobordism';
 import { Mor } from './mor';
 
@@ -14,16 +18,68 @@ export interface Obj {
   readonly height: number;
 }
 
+/** The nonzero components of the differential out of one object, in no order. */
+export class Row<T> {
+  readonly targets: number[] = [];
+  readonly mors: Mor<T>[] = [];
+
+  get size(): number {
+    return this.targets.length;
+  }
+
+  get(t: number): Mor<T> | undefined {
+    const k = this.targets.indexOf(t);
+    return k < 0 ? undefined : this.mors[k];
+  }
+
+  keys(): readonly number[] {
+    return this.targets;
+  }
+
+  forEach(f: (m: Mor<T>, t: number) => void): void {
+    for (let k = 0; k < this.targets.length; k++) f(this.mors[k], this.targets[k]);
+  }
+
+  push(t: number, m: Mor<T>): void {
+    this.targets.push(t);
+    this.mors.push(m);
+  }
+
+  /** Drops entry k; the last entry takes its place. */
+  removeAt(k: number): void {
+    const last = this.targets.length - 1;
+    this.targets[k] = this.targets[last];
+    this.mors[k] = this.mors[last];
+    this.targets.pop();
+    this.mors.pop();
+  }
+
+  clear(): void {
+    this.targets.length = 0;
+    this.mors.length = 0;
+  }
+}
+
+/** Removes x from an unordered list that holds it once. */
+function drop(list: number[], x: number): void {
+  const k = list.indexOf(x);
+  list[k] = list[list.length - 1];
+  list.pop();
+}
+
 export class TangleComplex<T> {
   readonly matchings: Matching[] = [];
   private readonly matchingIds = new Map<string, number>();
   readonly objs: Obj[] = [];
   readonly alive: boolean[] = [];
-  /** out[s].get(t) = the component of the differential from s to t. */
-  readonly out: Map<number, Mor<T>>[] = [];
-  readonly inn: Set<number>[] = [];
+  /** out[s] = the components of the differential from s; inn[t] = the sources of those into t. */
+  readonly out: Row<T>[] = [];
+  readonly inn: number[][] = [];
   /** Compositions by source matching, then target * matchings + middle. */
   private readonly compositions = new Map<number, Map<number, Composition>>();
+  /** pos[t] = position of t in the row being updated, -1 elsewhere. */
+  private pos = new Int32Array(0);
+  private readonly coef: Coefficients<T>;
   live = 0;
 
   /** `boundary` lists the labels of the open ends; matchings are on their positions. */
@@ -31,7 +87,9 @@ export class TangleComplex<T> {
     readonly ring: Ring<T>,
     readonly boundary: readonly number[],
     readonly theory: Theory = khovanovTheory,
-  ) {}
+  ) {
+    this.coef = coefficients(ring);
+  }
 
   matchingId(m: Matching): number {
     const key = m.join(',');
@@ -47,45 +105,52 @@ export class TangleComplex<T> {
   addObject(o: Obj): number {
     this.objs.push(o);
     this.alive.push(true);
-    this.out.push(new Map());
-    this.inn.push(new Set());
+    this.out.push(new Row());
+    this.inn.push([]);
     this.live++;
     return this.objs.length - 1;
   }
 
   /** d(s -> t) += c [mask], dropping the entry when it cancels. */
   addTerm(s: number, t: number, mask: number, c: T): void {
-    const { ring } = this;
     const row = this.out[s];
-    let current = row.get(t);
-    if (!current) {
-      if (ring.isZero(c)) return;
-      current = new Mor<T>();
-      row.set(t, current);
-      this.inn[t].add(s);
+    const k = row.targets.indexOf(t);
+    if (k >= 0) this.addAt(s, row, k, mask, c);
+    else if (!this.ring.isZero(c)) this.create(s, row, t, mask, c);
+  }
+
+  private create(s: number, row: Row<T>, t: number, mask: number, c: T): void {
+    const m = new Mor<T>();
+    m.set(mask, c);
+    row.push(t, m);
+    this.inn[t].push(s);
+  }
+
+  /** Adds c [mask] to entry k of row s; true when the entry cancelled (and entry k is now another one). */
+  private addAt(s: number, row: Row<T>, k: number, mask: number, c: T): boolean {
+    const m = row.mors[k];
+    const old = m.get(mask);
+    const v = old === undefined ? c : this.coef.add(old, c);
+    if (!this.ring.isZero(v)) m.set(mask, v);
+    else if (m.delete(mask) && m.size === 0) {
+      drop(this.inn[row.targets[k]], s);
+      row.removeAt(k);
+      return true;
     }
-    const v = ring.add(current.get(mask) ?? ring.zero, c);
-    if (!ring.isZero(v)) current.set(mask, v);
-    else if (current.delete(mask) && current.size === 0) {
-      row.delete(t);
-      this.inn[t].delete(s);
-    }
+    return false;
   }
 
   remove(x: number): void {
-    for (const t of this.out[x].keys()) this.inn[t].delete(x);
-    for (const s of this.inn[x]) this.out[s].delete(x);
-    this.out[x].clear();
-    this.inn[x].clear();
+    const row = this.out[x];
+    for (const t of row.targets) drop(this.inn[t], x);
+    for (const s of this.inn[x]) this.out[s].removeAt(this.out[s].targets.indexOf(x));
+    row.clear();
+    this.inn[x].length = 0;
     this.alive[x] = false;
     this.live--;
   }
 
-  /** d(a -> c) += factor (y o x) for x: a -> b and y: b -> c. */
-  addComposite(a: number, b: number, c: number, x: Mor<T>, y: Mor<T>, factor: T): void {
-    const ma = this.objs[a].mat;
-    const mb = this.objs[b].mat;
-    const mc = this.objs[c].mat;
+  private compositionOf(ma: number, mb: number, mc: number): Composition {
     const bySource = this.compositions.get(ma) ?? this.compositions.set(ma, new Map()).get(ma)!;
     const key = mc * this.matchings.length + mb;
     let comp = bySource.get(key);
@@ -93,18 +158,51 @@ export class TangleComplex<T> {
       comp = composition(this.matchings[ma], this.matchings[mb], this.matchings[mc]);
       bySource.set(key, comp);
     }
-    const { ring } = this;
-    // forEach rather than for-of: no [key, value] pair is allocated per entry.
-    x.forEach((c1, m1) => {
-      y.forEach((c2, m2) => {
-        const c12 = ring.mul(factor, ring.mul(c1, c2));
-        const terms = composite(comp!, m1, m2, this.theory);
-        for (let n = 0; n < terms.length; n++) {
-          const [mask, k] = terms[n];
-          this.addTerm(a, c, mask, k === 1 ? c12 : ring.mul(ring.fromInt(k), c12));
-        }
-      });
-    });
+    return comp;
+  }
+
+  /** d(a -> c) += factor (y o x) for x: a -> b and every component y: b -> c of d, c other than `skip`. */
+  addComposites(a: number, b: number, x: Mor<T>, skip: number, factor: T): void {
+    const row = this.out[a];
+    if (this.pos.length < this.objs.length) this.pos = new Int32Array(2 * this.objs.length).fill(-1);
+    const { pos } = this;
+    for (let k = 0; k < row.targets.length; k++) pos[row.targets[k]] = k;
+    const ys = this.out[b];
+    const ma = this.objs[a].mat;
+    const mb = this.objs[b].mat;
+    const x1 = x.single;
+    for (let n = 0; n < ys.targets.length; n++) {
+      const c = ys.targets[n];
+      if (c === skip) continue;
+      const comp = this.compositionOf(ma, mb, this.objs[c].mat);
+      const y = ys.mors[n];
+      const y1 = y.single;
+      if (x1 >= 0 && y1 >= 0) this.accumulate(a, row, c, composite(comp, x1, y1, this.theory), this.coef.mul(factor, this.coef.mul(x.singleValue, y.singleValue)));
+      else {
+        x.forEach((c1, m1) => {
+          y.forEach((c2, m2) => this.accumulate(a, row, c, composite(comp, m1, m2, this.theory), this.coef.mul(factor, this.coef.mul(c1, c2))));
+        });
+      }
+    }
+    for (let k = 0; k < row.targets.length; k++) pos[row.targets[k]] = -1;
+  }
+
+  // d(a -> c) += c12 times the reduced surface `terms`, with pos[] holding row a's positions.
+  private accumulate(a: number, row: Row<T>, c: number, terms: [number, number][], c12: T): void {
+    const { pos } = this;
+    for (let n = 0; n < terms.length; n++) {
+      const [mask, k] = terms[n];
+      const v = k === 1 ? c12 : this.coef.mul(this.ring.fromInt(k), c12);
+      const at = pos[c];
+      if (at < 0) {
+        if (this.ring.isZero(v)) continue;
+        pos[c] = row.targets.length;
+        this.create(a, row, c, mask, v);
+      } else if (this.addAt(a, row, at, mask, v)) {
+        pos[c] = -1;
+        if (at < row.targets.length) pos[row.targets[at]] = at;
+      }
+    }
   }
 
   entries(): number {

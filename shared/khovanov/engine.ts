@@ -102,10 +102,10 @@ export function fastKhovanov<T>(pd: PDCode, ring: Ring<T>, options: EngineOption
   });
   const entries: [number, number, T][] = [];
   cx.out.forEach((row, s) => {
-    for (const [t, m] of row) {
+    row.forEach((m, t) => {
       const c = m.get(0);
       if (c !== undefined) entries.push([index.get(s)!, index.get(t)!, c]);
-    }
+    });
   });
   return withUnknots(homology(ring, gens, entries), options.unknots ?? 0);
 }

@@ -13,6 +13,16 @@ export class Mor<T> {
     return this.mask < 0 ? 0 : 1;
   }
 
+  /** The mask of the only term, or -1 when there are several (or none): lets hot loops skip forEach's closure. */
+  get single(): number {
+    return this.map ? -1 : this.mask;
+  }
+
+  /** The coefficient of the only term (when `single` >= 0). */
+  get singleValue(): T {
+    return this.value as T;
+  }
+
   get(mask: number): T | undefined {
     if (this.map) return this.map.get(mask);
     return mask === this.mask ? this.value : undefined;

@@ -18,7 +18,7 @@ function unitIdentity<T>(cx: TangleComplex<T>, s: number, t: number): T | undefi
   return m.size === 1 && c !== undefined && cx.ring.isUnit(c) ? c : undefined;
 }
 
-const markowitz = <T>(cx: TangleComplex<T>, b1: number, b2: number): number => (cx.inn[b2].size - 1) * (cx.out[b1].size - 1);
+const markowitz = <T>(cx: TangleComplex<T>, b1: number, b2: number): number => (cx.inn[b2].length - 1) * (cx.out[b1].size - 1);
 
 /** Cancels isomorphisms until none is left; `check` runs between cancellations (for abort). */
 export function simplify<T>(cx: TangleComplex<T>, check: () => void): void {
@@ -51,14 +51,7 @@ export function simplify<T>(cx: TangleComplex<T>, check: () => void): void {
 // The loops run over inn[b2] and out[b1] while adding s -> t terms: those touch out[s] and
 // inn[t] only, never these two (s is not b1 and t is not b2), so no copies are needed.
 export function cancel<T>(cx: TangleComplex<T>, b1: number, b2: number, minusInverse: T): void {
-  const gammas = cx.out[b1];
-  for (const s of cx.inn[b2]) {
-    if (s === b1) continue;
-    const delta = cx.out[s].get(b2)!;
-    gammas.forEach((gamma, t) => {
-      if (t !== b2) cx.addComposite(s, b1, t, delta, gamma, minusInverse);
-    });
-  }
+  for (const s of cx.inn[b2]) if (s !== b1) cx.addComposites(s, b1, cx.out[s].get(b2)!, b2, minusInverse);
   cx.remove(b1);
   cx.remove(b2);
 }

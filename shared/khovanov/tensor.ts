@@ -7,6 +7,7 @@
 import { Crossing } from '../knot/pd';
 import { Ring } from '../linalg/ring';
 import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, Theory } from './cobordism';
+import { coefficients } from './coefficients';
 import { TangleComplex } from './complex';
 import { Mor } from './mor';
 
@@ -206,15 +207,16 @@ export function tensor<T>(first: TangleComplex<T>, second: TangleComplex<T>, end
 
   // The glued morphism between summands: cups on bottom loops (dotted for x), caps on top
   // loops (dotted for 1).
+  const coef = coefficients(ring);
   const connect = (from: number[], to: number[], g: Gluing, f: Mor<T>, sign: T): void => {
     f.forEach((c, mask) => {
-      const sc = ring.mul(sign, c);
+      const sc = coef.mul(sign, c);
       for (let sigma = 0; sigma < from.length; sigma++) {
         for (let tau = 0; tau < to.length; tau++) {
           const terms = surface(first.theory, g, mask, sigma, tau);
           for (let t = 0; t < terms.length; t++) {
             const [m, k] = terms[t];
-            cx.addTerm(from[sigma], to[tau], m, k === 1 ? sc : ring.mul(ring.fromInt(k), sc));
+            cx.addTerm(from[sigma], to[tau], m, k === 1 ? sc : coef.mul(ring.fromInt(k), sc));
           }
         }
       }

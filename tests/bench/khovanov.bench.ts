@@ -25,6 +25,7 @@ import { seededRng } from '@/shared/knot/moves';
 import { orient, PDCode } from '@/shared/knot/pd';
 import { integers } from '@/shared/linalg/ring';
 import { randomWord } from '@/tests/shared/khovanov-fixtures';
+import { loadavg } from 'os';
 import type { Line } from './timing';
 
 const MB = 1024 * 1024;
@@ -67,6 +68,7 @@ function cableLines(name: string, d: Diagram, ring: KhRing, goal?: string, memGo
   let rss = 0;
   let boundary = 0;
   let objects = 0;
+  let merged = 0;
   const start = performance.now();
   const deadline = start + CAP_S * 1000;
   const signal = { get aborted() { return performance.now() > deadline; } };
@@ -74,6 +76,7 @@ function cableLines(name: string, d: Diagram, ring: KhRing, goal?: string, memGo
     rss = Math.max(rss, process.memoryUsage().rss);
     boundary = Math.max(boundary, p.boundary);
     objects = Math.max(objects, p.objects);
+    merged = p.merged;
   };
   let euler: boolean | undefined;
   const cpuStart = process.cpuUsage();
@@ -93,8 +96,12 @@ function cableLines(name: string, d: Diagram, ring: KhRing, goal?: string, memGo
     { name: `${label}, peak rss${done ? '' : ' so far'}`, value: round(rss / MB), unit: 'MB', goal: memGoal },
     { name: `${label}, widest open boundary${done ? '' : ' so far'}`, value: boundary, unit: 'points' },
     { name: `${label}, most objects${done ? '' : ' so far'}`, value: objects, unit: 'objects' },
+    // How far a run stopped at the cap got, to compare two engines that both miss it.
+    ...(done ? [] : [{ name: `${label}, crossings merged at the cap`, value: merged, unit: `/ ${d.pd.length}` }]),
     { name: `${label}, widest cut of the greedy order / of the tree-decomposition order`, value: scoreOrder(d.pd, greedyOrder(d.pd).order).widest, unit: `/ ${contractionOrder(d.pd).widest} points` },
     ...(done ? [{ name: `${label}, Euler characteristic = (q + q^-1) V`, value: euler ? 1 : 0, unit: euler ? '(yes)' : '(NO)', goal: '1' }] : []),
+    // The machine is shared: the load beside the figures says how far the wall time is to be trusted.
+    { name: `${label}, load average (1 min) at its end`, value: round(loadavg()[0], 2), unit: '' },
   ];
 }
 
