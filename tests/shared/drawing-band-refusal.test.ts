@@ -41,7 +41,9 @@ describe('bands the drawing side accepts, the knot side takes', () => {
     // heads outwards; the band's side was chosen from that first step, the wrong way round.
     const r = outcome(t217, { x: 949.81, y: 514.72 }, { x: 83.7, y: 594.24 });
     // Both ends lie on the inner face's boundary, which a closed braid's strands all run round
-    // the same way (common practice): an oriented band, so it is accepted.
+    // the same way (common practice): an oriented band, so it is accepted; an oriented band on a
+    // knot splits it into two components (common practice: it changes the Euler characteristic
+    // of the link's oriented resolution by one, so the number of components by one).
     expect(r).toEqual({ components: 2, drawn: 2 });
   });
 
