@@ -13,6 +13,8 @@
 // strand as the band is set, band against band the higher-numbered one under, a twist as its
 // handedness says (docs/conventions.md, Bands).
 
+import { bandStages } from '@/shared/knot/bands/saddle';
+import { BandError } from '@/shared/knot/bands/types';
 import { orient, PDCode } from '@/shared/knot/pd';
 import { Analysis, analyse, readDrawing, Reading, UnderRule } from './analyse';
 import { bandsOf } from './bands';
@@ -202,6 +204,22 @@ function locate(traced: readonly Traced[], match: (s: Source) => number): { path
   return best;
 }
 
+/** Text of the refusal when the band mathematics cannot apply the saddles as read. */
+export const unreadSaddles = 'The band could not be read as a saddle of the drawing';
+
+// The checks above are meant to leave nothing for the band mathematics to refuse; should a
+// drawing still slip through (bands crowding each other's ends), it is refused here, when the
+// band is drawn, rather than accepted and then left uncertified.
+function saddleRefusal(p: { pd: PDCode; unknots: number; saddles: Saddle[] }): string | null {
+  try {
+    bandStages({ ...p, saddles: [...p.saddles] });
+    return null;
+  } catch (e) {
+    if (!(e instanceof BandError)) throw e;
+    return `${unreadSaddles} (${e.message}): draw it a little elsewhere.`;
+  }
+}
+
 /**
  * The finger drawing with its band presentation and the after drawing, or the reason there is
  * none (a band that cannot be read, or a drawing or surgery with a degeneracy). null when the
@@ -251,9 +269,12 @@ export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {})
   if (saddles.some((s) => !s)) return { reason: 'Two band ends are too close together on one strand: move one of them.' };
   const fd = finger.diagram!.diagram;
   const ad = after.diagram!.diagram;
+  const presentation = { pd: fd.pd, unknots: fd.unknots, saddles: saddles as Saddle[] };
+  const unread = saddleRefusal(presentation);
+  if (unread) return { reason: unread };
   return {
     finger,
-    presentation: { pd: fd.pd, unknots: fd.unknots, saddles: saddles as Saddle[] },
+    presentation,
     after,
     afterDiagram: { pd: ad.pd, unknots: ad.unknots, components: orient(ad.pd).components.length + ad.unknots },
   };
