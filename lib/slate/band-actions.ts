@@ -1,8 +1,9 @@
 // What the Bands tool does on the Slate: a drag draws a band (refused with the reason when it
-// cannot be a band of an orientable surface), a tap on a band/strand crossing flips it, a tap
+// cannot be a band of an orientable surface, or cannot be read into a band presentation), a tap on a band/strand crossing flips it, a tap
 // on a band's badge opens its controls. Each edit is one undo step. A drag of a strand carries
 // its flips and bands with it; bands it cannot carry are removed, and the notice says so.
 import { carryBands } from '@/shared/drawing/band-carry';
+import { readBands } from '@/shared/drawing/band-read';
 import { bandShapes } from '@/shared/drawing/band-shape';
 import { addBand, flipBandCrossing } from '@/shared/drawing/bands';
 import { carryFlips } from '@/shared/drawing/carry';
@@ -15,6 +16,11 @@ import { useSlate } from './slate-store';
 /** Tap radius on a band's badge or crossing, in screen pixels. */
 const HIT = 18;
 
+const isUnreadable = (sketch: Sketch): boolean => {
+  const read = readBands(sketch);
+  return read !== null && 'reason' in read;
+};
+
 /** A band along the dragged world points, or the notice why not. */
 export function finishBand(points: readonly Point[]): void {
   const s = useSlate.getState();
@@ -23,6 +29,10 @@ export function finishBand(points: readonly Point[]): void {
   if ('reason' in r) return s.setBandNotice(r.reason);
   const shape = bandShapes(r.sketch).at(-1)!;
   if ('reason' in shape) return s.setBandNotice(shape.reason);
+  // A band whose finger drawing cannot be read is refused now rather than accepted and then
+  // left uncertified; unless the bands already there could not be read either.
+  const read = readBands(r.sketch);
+  if (read && 'reason' in read && !isUnreadable(doc.sketch)) return s.setBandNotice(read.reason);
   s.apply({ ...doc, sketch: r.sketch });
   s.setBandNotice(null);
   s.selectBand(r.sketch.bands!.at(-1)!.id);

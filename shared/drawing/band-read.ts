@@ -13,11 +13,14 @@
 // strand as the band is set, band against band the higher-numbered one under, a twist as its
 // handedness says (docs/conventions.md, Bands).
 
+import { bandStages } from '@/shared/knot/bands/saddle';
+import { BandError } from '@/shared/knot/bands/types';
 import { orient, PDCode } from '@/shared/knot/pd';
 import { Analysis, analyse, readDrawing, Reading, UnderRule } from './analyse';
 import { bandsOf } from './bands';
-import { BandShape, bandShapes, closedOf, corePoint, offsetAt, sidePoint } from './band-shape';
+import { BandShape, bandShapes, closedOf, offsetAt, sidePoint } from './band-shape';
 import { Cut, Join, Source, trace, Traced } from './band-trace';
+import { Tip, tipCentre } from './band-tip';
 import { DrawingOptions, withDefaults } from './options';
 import { add, dist, dot, lerp, Point, scale, sub } from './point';
 import { arcsOf } from './polyline';
@@ -69,29 +72,14 @@ function endPoints(c: SketchComponent, index: number, half: number): { in: Point
   return { in: c.points[(index - step + 2 * n) % n], out: c.points[(index + step + 2 * n) % n] };
 }
 
-/** How far past the second strand a finger's tip reaches (the centre of its round end). */
-const overshoot = 12;
-
-// The finger's end crosses the second strand square to it, whatever angle the core meets it
-// at: the strand's unit tangent at the band's end and its normal towards the core.
-function endFrame(b: BandShape, closed: readonly SketchComponent[]): { q: Point; t: Point; n: Point } {
-  const strand = closed[b.to.path];
-  const m = strand.points.length;
-  const q = strand.points[b.to.index];
-  const d = sub(strand.points[(b.to.index + 1) % m], strand.points[(b.to.index + m - 1) % m]);
-  const t = scale(d, 1 / (Math.hypot(d.x, d.y) || 1));
-  const n = { x: -t.y, y: t.x };
-  return { q, t, n: dot(sub(corePoint(b, b.d1), q), n) < 0 ? scale(n, -1) : n };
-}
-
 // Side `sd` of band k from core arc d1 on over the second strand, square to it, in that order:
 // tip sources, since it passes over the second strand. `along` is the side's place along the strand.
-function reach(b: BandShape, k: number, sd: 1 | -1, f: { q: Point; t: Point; n: Point }, along: 1 | -1, spacing: number): Traced {
+function reach(b: BandShape, k: number, sd: 1 | -1, f: Tip, along: 1 | -1, spacing: number): Traced {
   const lane = add(f.q, scale(f.t, along * b.halfWidth));
   const before = add(lane, scale(f.n, b.halfWidth + 4));
   const start = sidePoint(b, sd, b.d1);
-  const steps = Math.round((b.halfWidth + 4 + overshoot) / spacing);
-  const points = [...between(start, before, spacing), before, ...Array.from({ length: steps }, (_, i) => lerp(before, add(lane, scale(f.n, -overshoot)), (i + 1) / steps))];
+  const steps = Math.round((b.halfWidth + 4 + f.overshoot) / spacing);
+  const points = [...between(start, before, spacing), before, ...Array.from({ length: steps }, (_, i) => lerp(before, add(lane, scale(f.n, -f.overshoot)), (i + 1) / steps))];
   return { points, sources: points.map(() => ({ kind: 'tip', band: k, middle: false })) };
 }
 
@@ -104,10 +92,10 @@ function fingerOf(b: BandShape, k: number, closed: readonly SketchComponent[], s
   const s = b.inSide;
   const out = side(b, k, s, b.d0, b.d1, spacing);
   const back = side(b, k, -s as 1 | -1, b.d1, b.d0, spacing);
-  const f = endFrame(b, closed);
+  const f = b.tip;
   // Which side of the band's end lies towards +t along the strand.
   const along: 1 | -1 = dot(sub(sidePoint(b, s, b.d1), sidePoint(b, -s as 1 | -1, b.d1)), f.t) > 0 ? 1 : -1;
-  const c = add(f.q, scale(f.n, -overshoot));
+  const c = tipCentre(f);
   const capSteps = Math.max(4, Math.round((Math.PI * b.halfWidth) / spacing / 2) * 2);
   const cap = Array.from({ length: capSteps - 1 }, (_, i) => {
     const phi = (Math.PI * (i + 1)) / capSteps;
@@ -216,6 +204,22 @@ function locate(traced: readonly Traced[], match: (s: Source) => number): { path
   return best;
 }
 
+/** Text of the refusal when the band mathematics cannot apply the saddles as read. */
+export const unreadSaddles = 'The band could not be read as a saddle of the drawing';
+
+// The checks above are meant to leave nothing for the band mathematics to refuse; should a
+// drawing still slip through (bands crowding each other's ends), it is refused here, when the
+// band is drawn, rather than accepted and then left uncertified.
+function saddleRefusal(p: { pd: PDCode; unknots: number; saddles: Saddle[] }): string | null {
+  try {
+    bandStages({ ...p, saddles: [...p.saddles] });
+    return null;
+  } catch (e) {
+    if (!(e instanceof BandError)) throw e;
+    return `${unreadSaddles} (${e.message}): draw it a little elsewhere.`;
+  }
+}
+
 /**
  * The finger drawing with its band presentation and the after drawing, or the reason there is
  * none (a band that cannot be read, or a drawing or surgery with a degeneracy). null when the
@@ -265,9 +269,12 @@ export function readBands(sketch: Sketch, options: Partial<DrawingOptions> = {})
   if (saddles.some((s) => !s)) return { reason: 'Two band ends are too close together on one strand: move one of them.' };
   const fd = finger.diagram!.diagram;
   const ad = after.diagram!.diagram;
+  const presentation = { pd: fd.pd, unknots: fd.unknots, saddles: saddles as Saddle[] };
+  const unread = saddleRefusal(presentation);
+  if (unread) return { reason: unread };
   return {
     finger,
-    presentation: { pd: fd.pd, unknots: fd.unknots, saddles: saddles as Saddle[] },
+    presentation,
     after,
     afterDiagram: { pd: ad.pd, unknots: ad.unknots, components: orient(ad.pd).components.length + ad.unknots },
   };

@@ -12,6 +12,7 @@ import { DrawingOptions, withDefaults } from './options';
 import { add, dist, dot, Point, scale, sub } from './point';
 import { arcsOf, pointAt, tangentAt } from './polyline';
 import { intersect } from './segments';
+import { Tip, tipOf } from './band-tip';
 import { nearestPointIndex, Sketch, SketchComponent } from './sketch';
 
 const twistLength = 30;
@@ -42,6 +43,8 @@ export interface BandShape {
   readonly twistSign: 1 | -1;
   /** Side of the core (along its normal) on which the first strand arrives, in its direction of travel. */
   readonly inSide: 1 | -1;
+  /** Where the finger drawing's tip reaches over the second strand (band-tip.ts). */
+  readonly tip: Tip;
 }
 
 const normal = (t: Point): Point => ({ x: -t.y, y: t.x });
@@ -142,8 +145,11 @@ export function bandShape(closed: readonly SketchComponent[], bands: readonly Ba
   const [lo, hi] = freeStretch(d0 + twistMargin, d1 - twistMargin, [...crossings.map((c) => c.arc), ...otherCores], twistMargin);
   if (twists > 0 && twists * twistLength > hi - lo) return { reason: `Band ${number} has no room for ${twists} half twists: draw it longer, or with fewer strands across it.` };
   const first = (lo + hi - twists * twistLength) / 2;
-  const n0 = normal(tangentAt(core, arcs, 0));
-  const n1 = normal(tangentAt(core, arcs, arcs[arcs.length - 1]));
+  // The sides leave and reach the strands at d0 and d1, so the core's direction there decides
+  // which side meets which end; the drag's first and last points may overshoot the strand, so
+  // the core can start or end heading the other way.
+  const n0 = normal(tangentAt(core, arcs, d0));
+  const n1 = normal(tangentAt(core, arcs, d1));
   const inSide = sign(dot(scale(travelAt(a, from.index), -1), n0));
   // Leaving along side inSide, the first strand's incoming end must reach the second strand's
   // outgoing end: the surface is then oriented with the link (an oriented band move).
@@ -153,6 +159,8 @@ export function bandShape(closed: readonly SketchComponent[], bands: readonly Ba
       reason: `Band ${number} would make the surface non-orientable: the strands at its ends run the same way across it. Attach it elsewhere, give it a half twist, or reverse a component.`,
     };
   }
+  const tip = tipOf(closed, toPath, to.index, pointAt(core, arcs, d1, false), w);
+  if (!tip) return { reason: `Band ${number} ends too close to a crossing or another strand: end it farther from them.` };
   return {
     number,
     halfWidth: w,
@@ -166,6 +174,7 @@ export function bandShape(closed: readonly SketchComponent[], bands: readonly Ba
     twistStarts: Array.from({ length: twists }, (_, i) => first + i * twistLength),
     twistSign: band.twists < 0 ? -1 : 1,
     inSide,
+    tip,
   };
 }
 
