@@ -2,7 +2,7 @@
 // with a long name, a titled sketch's header, the run form's note, the table's note on a phone,
 // the runs table's Time column, the feed picture's labels. Screenshots in tests/artifacts/walk-*.
 import type { Browser, Locator, Page } from 'playwright-core';
-import { PHONE, WIDE, call, launch, newTitledSketch, person, register, shoot, signIn } from './helpers';
+import { PHONE, WIDE, baseUrl, call, launch, newTitledSketch, person, register, shoot, signIn } from './helpers';
 
 const ada = person('Ada Longname', 'ada.walk', 'correct horse 8');
 const GROUP = 'Low-Dimensional Topology and Quantum Invariants Reading Seminar, Harrowgate';
@@ -13,6 +13,7 @@ const BRAID = '1 1 1 2 -1 2';
 let browser: Browser;
 let page: Page;
 let token = '';
+let sketchId = '';
 
 /** Whether an element's content runs past its own box (cut off or spilling out). */
 const overflows = (l: Locator) => l.evaluate((e) => e.scrollWidth > e.clientWidth + 1);
@@ -33,6 +34,7 @@ afterAll(async () => {
 test('a titled sketch is not asked for a title; the share button with a long group name stays inside its dialog', async () => {
   await page.getByText('Draw your first link').waitFor(); // the device store is open
   await newTitledSketch(page, TITLE);
+  sketchId = new URL(page.url()).pathname.split('/').pop()!;
   const header = page.getByRole('button', { name: 'Sketch details' });
   await expect(header.innerText()).resolves.toContain('Add where it was seen, notes, a photo');
   await page.getByRole('button', { name: 'Paste a code' }).click();
@@ -97,4 +99,24 @@ test("the feed picture draws each component's label after every strand, so none 
   const order = await svg.evaluate((s) => Array.from(s.querySelectorAll('path, text'), (e) => e.tagName));
   expect(order.lastIndexOf('path')).toBeLessThan(order.indexOf('text'));
   await shoot(page, 'walk-03-feed-picture');
+}, 60_000);
+
+test("on a sketch's run form, a code typed over the sketch's is the one run (never silently the sketch)", async () => {
+  // The pd parameter is the positive trefoil's code (docs/conventions.md, from memory), as the Slate sends it.
+  await page.goto(`${baseUrl}/runs?sketchId=${sketchId}&pd=${encodeURIComponent('[[1,5,2,4],[3,1,4,6],[5,3,6,2]]')}`);
+  const banner = page.getByText('On the sketch as it was last synced', { exact: false });
+  await banner.waitFor();
+  await page.getByRole('radio', { name: 'Braid word' }).click();
+  await page.getByRole('textbox', { name: 'Braid word' }).fill('1 1 1');
+  await banner.waitFor({ state: 'detached' });
+  await page.getByRole('radio', { name: 'Q', exact: true }).click();
+  await page.getByRole('button', { name: 'Start run' }).click();
+  await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
+  await expect(page.getByTestId('run-source').innerText()).resolves.toBe('braid 1 1 1');
+  // Named by its code, shown once (under "Given as"), not by the sketch.
+  await page.getByRole('heading', { name: 'Khovanov homology' }).waitFor();
+  const text = await page.locator('body').innerText();
+  expect(text.split('braid 1 1 1').length - 1).toBe(1);
+  expect(text).not.toContain(TITLE);
+  await shoot(page, 'walk-04-run-typed-over-sketch');
 }, 60_000);
