@@ -48,9 +48,10 @@ export function useSlateActions(sketch: LocalSketch, doc: SlateDoc, analysis: An
     draw(s);
     setMessage(`Simplified from ${diagram.pd.length} to ${s.pd.length} crossings.`);
   };
+  // A browser may refuse the clipboard (no permission, or a page not served over https).
   const copy = async (text: string, what: string) => {
-    await Clipboard.setStringAsync(text);
-    setMessage(`Copied the ${what}.`);
+    const copied = await Clipboard.setStringAsync(text).catch(() => false);
+    setMessage(copied ? `Copied the ${what}.` : `Could not copy the ${what}: this browser refused the clipboard.`);
   };
   const exportAs = async (kind: ExportKind, choices: ExportChoices) => {
     const files = exportFiles(doc, analysis, sketch.title, choices);

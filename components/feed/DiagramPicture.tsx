@@ -83,6 +83,20 @@ function usePictures(key: string, d: PictureSource, size: number, marks: boolean
 const arrowPath = (at: Point, dir: Point): string =>
   arrowHead(at, dir, 8).map((p, i) => `${i ? 'L' : 'M'}${p.x.toFixed(1)} ${p.y.toFixed(1)}`).join(' ') + ' Z';
 
+/** A component's "number: framing", over a halo of the slate so no strand is drawn through it. */
+function Label({ at, text, colour }: { at: Point; text: string; colour: string }) {
+  return (
+    <G>
+      {[slate.surface, colour].map((fill, i) => (
+        <SvgText key={i} x={at.x} y={at.y + 4} fontSize={12} fontFamily={fonts.mono} textAnchor="middle" fill={fill}
+          stroke={i === 0 ? slate.surface : undefined} strokeWidth={i === 0 ? 4 : undefined} strokeLinejoin="round">
+          {text}
+        </SvgText>
+      ))}
+    </G>
+  );
+}
+
 export function DiagramPicture({ diagram, size, pictureKey, crossings, marks = false, label }: {
   diagram: PictureSource;
   size: number;
@@ -104,16 +118,15 @@ export function DiagramPicture({ diagram, size, pictureKey, crossings, marks = f
                 <Path key={i} d={d} stroke={p.colour} strokeWidth={stroke} strokeLinecap="round" strokeLinejoin="round" fill="none" strokeDasharray={p.closed ? undefined : '2 6'} />
               ))}
               {marks && p.arrow ? <Path d={arrowPath(p.arrow.at, p.arrow.direction)} fill={p.colour} stroke={slate.surface} strokeWidth={1.2} /> : null}
-              {marks && p.badge && p.number !== null ? (
-                <SvgText x={p.badge.at.x} y={p.badge.at.y + 4} fontSize={12} fontFamily={fonts.mono} fill={p.colour} textAnchor="middle">
-                  {`${p.number}: ${p.badge.text}`}
-                </SvgText>
-              ) : null}
             </G>
           ))}
           {pictures.bands.flatMap((b) => b.pieces.map((d, i) => (
             <Path key={`${b.id}-${i}`} d={d} stroke={slate.band} strokeOpacity={0.4} strokeWidth={b.width} fill="none" />
           )))}
+          {/* Labels last, so later strands never cover an earlier component's label. */}
+          {marks ? pictures.strands.map((p) => (p.badge && p.number !== null
+            ? <Label key={`label-${p.id}`} at={p.badge.at} text={`${p.number}: ${p.badge.text}`} colour={p.colour} />
+            : null)) : null}
         </Svg>
       ) : (
         <Text style={styles.code}>{crossings} ×</Text>

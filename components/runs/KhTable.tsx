@@ -10,7 +10,7 @@ import { TeX } from '@/components/ui/Math';
 /** Monospace digits and letters are about this wide at the table's sizes. */
 const CHAR = { compact: 7, full: 9 };
 
-export function KhTable({ groups, ring, compact = false, label }: { groups: KhGroupJson[]; ring: string; compact?: boolean; label: string }) {
+export function KhTable({ groups, ring, compact = false, label }: { groups: KhGroupJson[]; ring: string; compact?: boolean; label: string; focusable?: boolean }) {
   const g = grid(groups);
   if (g.is.length === 0) return <Text style={styles.muted}>All groups are zero.</Text>;
   const cell = compact ? styles.cellCompact : styles.cell;

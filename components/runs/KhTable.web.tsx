@@ -1,7 +1,7 @@
 // Web: the bigraded Khovanov table as an HTML table, i across and j down (largest j on top).
 // Columns take the width of their content; the i and j labels stay in view while the table
 // scrolls (CSS sticky); when the table is larger than its box, a line says so and how to see
-// the rest (scroll, or the run page's focus view).
+// the rest (scroll, or the run page's Focus button where it has one).
 import { useEffect, useRef, useState, type CSSProperties } from 'react';
 import type { KhGroupJson } from '@/shared/api/runs';
 import { grid, groupText } from '@/shared/khovanov/format';
@@ -24,7 +24,8 @@ function useCut(box: React.RefObject<HTMLDivElement | null>) {
   return cut;
 }
 
-export function KhTable({ groups, ring, compact = false, label }: { groups: KhGroupJson[]; ring: string; compact?: boolean; label: string }) {
+/** `focusable`: the page has its Focus button (wide run pages), so the note may point to it. */
+export function KhTable({ groups, ring, compact = false, label, focusable = false }: { groups: KhGroupJson[]; ring: string; compact?: boolean; label: string; focusable?: boolean }) {
   const box = useRef<HTMLDivElement>(null);
   const cut = useCut(box);
   const g = grid(groups);
@@ -64,7 +65,7 @@ export function KhTable({ groups, ring, compact = false, label }: { groups: KhGr
       </div>
       {shown ? (
         <span role="note" style={{ ...type.small, color: colors.accent }}>
-          {`Larger than this view (i = ${g.is[0]} to ${g.is[g.is.length - 1]}, ${g.is.length} columns; j = ${g.js[g.js.length - 1]} to ${g.js[0]}): scroll the table${compact ? '' : ', or open the focus view'}.`}
+          {`Larger than this view (i = ${g.is[0]} to ${g.is[g.is.length - 1]}, ${g.is.length} columns; j = ${g.js[g.js.length - 1]} to ${g.js[0]}): scroll the table${focusable ? ', or use Focus above for the whole width' : ''}.`}
         </span>
       ) : null}
     </div>

@@ -16,6 +16,8 @@ import { Button } from '@/components/ui/Button';
 import { Section } from '@/components/ui/Section';
 import { colors, fonts, space, type } from '@/constants/theme';
 import { KhTable } from './KhTable';
+import { useRunFocus } from './focus-store';
+import { useIsWide } from '@/components/shell/useIsWide';
 import { TeX } from '@/components/ui/Math';
 import { ProgressBar } from './ProgressBar';
 import { SliceBounds } from './SliceBounds';
@@ -165,6 +167,8 @@ function Input({ run }: { run: RunDetail }) {
 
 export function RunResult({ run }: { run: RunDetail }) {
   const cancel = useCancelRun(run.id);
+  const wide = useIsWide();
+  const focused = useRunFocus((f) => f.focused);
   const live = !isFinished(run.status);
   return (
     <>
@@ -184,7 +188,7 @@ export function RunResult({ run }: { run: RunDetail }) {
         <>
           {run.result.bands ? <BandsFact bands={run.result.bands} /> : null}
           <Section title={`Khovanov homology over ${run.result.ring}${run.result.reduced ? ', reduced' : ''}${run.result.bands ? ' of the diagram after the bands' : ''}`}>
-            <KhTable groups={run.result.groups} ring={run.result.ring} label="Khovanov homology" />
+            <KhTable groups={run.result.groups} ring={run.result.ring} label="Khovanov homology" focusable={wide && !focused} />
           </Section>
           <KhSummary result={run.result} />
           {run.result.s ? <SFact s={run.result.s} diagram={run.diagram} /> : null}

@@ -54,7 +54,8 @@ const columns = [
   }),
 ];
 
-const widths: Record<string, number> = { status: 1.1, label: 2.3, ring: 1, createdAt: 1, time: 0.8 };
+// Ring is short ("Z", "F7, reduced" wraps); Time needs "847 ms" on one line in the wide list pane.
+const widths: Record<string, number> = { status: 1.1, label: 2.3, ring: 0.7, createdAt: 1, time: 1.1 };
 
 /** What the filter looks in: the words each row shows. */
 const searchText = (r: RunSummary) =>

@@ -110,13 +110,14 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   };
   return (
     <View style={styles.form}>
-      {onSketch ? <Banner tone="info">On the sketch as it was last synced to the server; its PD code is below.</Banner> : null}
-      <Labelled label="Input" names={inputNames} value={input} onChange={setInput} />
+      {onSketch ? <Banner tone="info">On the sketch as it was last synced to the server; its PD code is below. Edit the code to run what you type instead.</Banner> : null}
+      {/* An edited code is what the person means to run: it leaves the sketch (never ignored for it). */}
+      <Labelled label="Input" names={inputNames} value={input} onChange={(k) => (setInput(k), setOnSketch(false))} />
       <View style={styles.field}>
         <Text style={styles.label}>{inputNames[input]}</Text>
         <TextInput
           value={code}
-          onChangeText={setCode}
+          onChangeText={(t) => (setCode(t), setOnSketch(false))}
           multiline
           aria-label={inputNames[input]}
           placeholder={codeKinds.find((c) => c.kind === input)!.example}

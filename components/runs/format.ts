@@ -1,6 +1,7 @@
 // Small words and numbers the run screens share.
 import { formatDuration } from '@/shared/text/duration';
-import type { RunStatus, RunSummary } from '@/shared/api/runs';
+import type { RunDetail, RunStatus, RunSummary } from '@/shared/api/runs';
+import { pdToText } from '@/shared/text/codes';
 
 export const statusLabel: Record<RunStatus, string> = {
   queued: 'Queued',
@@ -33,3 +34,7 @@ export function remaining(r: Pick<RunSummary, 'startedAt' | 'finishedAt' | 'stat
   if (elapsed < 5000) return null;
   return formatDuration((elapsed * (1 - f)) / f);
 }
+
+/** Whether a run's label is only its input again (the form labels a typed code with it, maybe cut with "…"). */
+export const labelRepeatsInput = (r: Pick<RunDetail, 'label' | 'source' | 'diagram'>): boolean =>
+  (r.source ?? `PD ${pdToText(r.diagram.pd)}`).startsWith(r.label.replace(/…$/, ''));

@@ -4,11 +4,14 @@
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, radius, space, type } from '@/constants/theme';
 
-export function DescendingNote({ onAlternate }: { onAlternate: () => void }) {
+/** What a descending diagram of this many components is: one component is a knot, so it is the unknot. */
+const trivial = (components: number) => (components === 1 ? 'the unknot' : `the ${components}-component unlink`);
+
+export function DescendingNote({ components, onAlternate }: { components: number; onAlternate: () => void }) {
   return (
     <View style={styles.box} role="status" testID="descending-note">
       <Text style={styles.text}>
-        Descending: each strand passes over before it passes under, so this is an unlink whatever it looks like. Flip crossings, or make it alternating.
+        Descending: each strand passes over before it passes under, so this is {trivial(components)} whatever it looks like. Flip crossings, or make it alternating.
       </Text>
       <Pressable role="button" accessibilityLabel="Make alternating" onPress={onAlternate} style={({ pressed }) => [styles.button, pressed && styles.pressed]}>
         <Text style={styles.buttonText}>Alternate</Text>

@@ -72,7 +72,8 @@ export function ShareControl({ sketch }: { sketch: LocalSketch }) {
       ) : groups.some((g) => g.id !== sketch.groupId) ? (
         <Text style={styles.note}>{sketch.groupId ? 'In your other groups' : 'In your groups'} you are a viewer; members, admins and owners share.</Text>
       ) : null}
-      <Text style={styles.note}>Everyone in the group sees the sketch, its photos and its Readout in the Feed. Works offline: the change syncs later.</Text>
+      {/* Only where there is a share to make or undo; a viewer everywhere has read why not. */}
+      {targets.length || sketch.groupId ? <Text style={styles.note}>Everyone in the group sees the sketch, its photos and its Readout in the Feed. Works offline: the change syncs later.</Text> : null}
       {update.error ? <Banner tone="error">{update.error.message}</Banner> : null}
     </View>
   );

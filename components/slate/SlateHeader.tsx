@@ -15,6 +15,8 @@ export function SlateHeader({ sketch, onDetails, onShare }: { sketch: LocalSketc
   const shareRefused = useRefusedShares(sketch.id).length > 0 ? 'share refused by the server' : null;
   const shared = sharedLabel(sketch, useKnownGroups());
   const meta = [shared, shareRefused, sketch.seenAt, sketch.tags.map((t) => `#${t}`).join(' ')].filter(Boolean).join(' · ');
+  // A titled sketch is not asked for a title again.
+  const hint = `Add ${sketch.title ? '' : 'a title, '}where it was seen, notes, a photo`;
   return (
     <View style={styles.header}>
       {!wide ? (
@@ -25,7 +27,7 @@ export function SlateHeader({ sketch, onDetails, onShare }: { sketch: LocalSketc
       <Pressable role="button" accessibilityLabel="Sketch details" onPress={onDetails} style={styles.titleBox}>
         {/* Two lines on a phone before the title is cut; the details show it whole. */}
         <Text role="heading" aria-level={1} style={styles.title} numberOfLines={2}>{sketch.title || 'Untitled sketch'}</Text>
-        <Text style={styles.meta} numberOfLines={1}>{meta || 'Add a title, where it was seen, notes, a photo'}</Text>
+        <Text style={styles.meta} numberOfLines={1}>{meta || hint}</Text>
       </Pressable>
       <View style={styles.actions}>
         {wide ? <Pressable role="button" accessibilityLabel="Keyboard shortcuts" onPress={() => useShortcutRegistry.getState().setSheet(true)} style={styles.quiet}><Text style={styles.quietText}>?</Text></Pressable> : null}

@@ -70,7 +70,7 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const empty = diagram ? null : analysis.markers.length ? 'markers' : analysis.open.length ? 'open' : 'nothing';
   const readoutPane = (
     <>
-      {descending ? <DescendingNote onAlternate={actions.alternateNow} /> : null}
+      {descending && diagram ? <DescendingNote components={diagram.framings.length} onAlternate={actions.alternateNow} /> : null}
       <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} numbers={componentNumbers} />
       {diagram ? <BandsReadout state={bands.certificate} presentation={bands.presentation} refused={bands.refused} s={sInvariant} signature={readout.values.signature} /> : null}
       <ReadoutActions

@@ -16,6 +16,7 @@ const tone = (s: Status) =>
 export function SyncStatus() {
   const { status, label, syncNow } = useSyncStatus();
   const t = tone(status);
+  const syncing = status.kind === 'syncing';
   return (
     <View style={styles.row} accessibilityLiveRegion="polite">
       <Pressable
@@ -29,11 +30,10 @@ export function SyncStatus() {
         <Text style={[styles.text, { color: t.fg }]}>{label}</Text>
       </Pressable>
       {status.kind === 'failed' ? <Text style={styles.reason} numberOfLines={2}>{status.error}</Text> : null}
-      {status.kind !== 'syncing' ? (
-        <Pressable role="button" accessibilityLabel="Sync now" onPress={() => void syncNow()} style={styles.action}>
-          <Text style={styles.actionText}>Sync now</Text>
-        </Pressable>
-      ) : null}
+      {/* Kept (disabled) while syncing, so the row keeps its width and the list below does not jump. */}
+      <Pressable role="button" accessibilityLabel="Sync now" aria-disabled={syncing} disabled={syncing} onPress={() => void syncNow()} style={[styles.action, syncing && styles.idle]}>
+        <Text style={styles.actionText}>Sync now</Text>
+      </Pressable>
     </View>
   );
 }
@@ -45,4 +45,5 @@ const styles = StyleSheet.create({
   reason: { ...type.small, color: colors.danger, flexShrink: 1 },
   action: { minHeight: 44, justifyContent: 'center', paddingHorizontal: space.sm },
   actionText: { ...type.label, color: colors.accent },
+  idle: { opacity: 0.4 },
 });

@@ -57,8 +57,11 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     alignItems: 'center',
     justifyContent: 'center',
+    // A long label (a group's full name) wraps inside its box instead of running out of a dialog.
+    maxWidth: '100%',
+    paddingVertical: space.xs,
   },
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
-  label: { ...type.heading },
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexShrink: 1 },
+  label: { ...type.heading, flexShrink: 1, textAlign: 'center' },
   disabled: { opacity: 0.45 },
 });

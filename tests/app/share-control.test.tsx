@@ -96,3 +96,12 @@ test('S24: a share the server refused shows where the owner shares, with the rea
   await waitFor(() => expect(screen.queryByTestId('share-refused')).toBeNull());
   expect(await store.rejected(sketch.id)).toEqual([]);
 });
+
+test('a viewer in every group reads why there is no share button, and no promise of what sharing does', async () => {
+  mockFetch((c) => (c.path.endsWith('/api/groups') ? { status: 200, body: [groups[1]] } : { status: 404, body: {} }));
+  const sketch = await store.create({ title: 'Unknot, read only' });
+  renderWithProviders(<Shared id={sketch.id} />);
+  expect(await screen.findByText('In your groups you are a viewer; members, admins and owners share.')).toBeOnTheScreen();
+  expect(screen.queryByRole('button', { name: /^Share to/ })).toBeNull();
+  expect(screen.queryByText(/Everyone in the group sees the sketch/)).toBeNull();
+});

@@ -11,6 +11,7 @@ import { Banner } from '@/components/ui/Banner';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { RunResult } from '@/components/runs/RunResult';
 import { useRun } from '@/hooks/queries/useRuns';
+import { labelRepeatsInput } from '@/components/runs/format';
 import type { RunSummary } from '@/shared/api/runs';
 import { colors, type } from '@/constants/theme';
 
@@ -35,7 +36,8 @@ export default function RunPage() {
           <Button variant="secondary" label={focus ? 'Show the runs list' : 'Focus: use the whole width'} onPress={() => setFocused(!focus)} />
         </View>
       ) : null}
-      {run.data && !run.data.sketchId ? <Text style={styles.code} selectable>{run.data.label}</Text> : null}
+      {/* A typed code's run is named by its own label, unless that only repeats the input shown below. */}
+      {run.data && !run.data.sketchId && !labelRepeatsInput(run.data) ? <Text style={styles.code} selectable>{run.data.label}</Text> : null}
       {run.isError ? <Banner tone="error">{run.error.message}</Banner> : null}
       {run.isPending ? <ActivityIndicator color={colors.accent} /> : null}
       {run.data ? <RunResult run={run.data} /> : null}

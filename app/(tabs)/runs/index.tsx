@@ -20,7 +20,7 @@ export default function RunsScreen() {
       <StartRunForm key={sketchId} initialPD={pd} sketchId={sketchId} />
     </Section>
   ) : (
-    <Section key="form" title="Start a run" note="Paste a PD code or a braid word; the server computes it and mails you when it is done.">
+    <Section key="form" title="Start a run" note="Paste a PD code, DT code or braid word; the server computes it and mails you when it is done.">
       <StartRunForm key="" initialPD={pd} />
     </Section>
   );
