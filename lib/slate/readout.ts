@@ -83,8 +83,16 @@ export function computeReadout(d: Diagram): ReadoutValues {
   return readoutStages.reduce<Partial>((done, s) => ({ ...done, ...s.run(d, done) }), {}) as ReadoutValues;
 }
 
-/** "3_1" as TeX: 3_1, mirror marked with a star as is common practice. */
-export const nameTeX = (name: string, mirror: boolean): string => {
+/** "3_1" as TeX, 3_{1}; a mirror is said in words beside it (docs/conventions.md, Names). */
+export const nameTeX = (name: string): string => {
   const [n, k] = name.split('_');
-  return `${n}_{${k}}${mirror ? '^{*}' : ''}`;
+  return `${n}_{${k}}`;
+};
+
+const SUBSCRIPT: Record<string, string> = { 0: '₀', 1: '₁', 2: '₂', 3: '₃', 4: '₄', 5: '₅', 6: '₆', 7: '₇', 8: '₈', 9: '₉' };
+
+/** "3_1" as "3₁": what screen readers and the native build show in the TeX's place. */
+export const nameUnicode = (name: string): string => {
+  const [n, k] = name.split('_');
+  return n + [...k].map((ch) => SUBSCRIPT[ch]).join('');
 };

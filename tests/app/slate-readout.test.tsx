@@ -41,7 +41,9 @@ test('values of the positive trefoil appear once computed, marked as updating be
   // Signature of the positive trefoil is -2 in the convention where positive knots have
   // negative signature (Rolfsen, Knots and Links; from memory).
   expect(screen.getByTestId('readout-signature')).toHaveTextContent('−2', { exact: false });
-  expect(screen.getByText('invariants match 3_1')).toBeOnTheScreen();
+  // The name once, typeset (here the native stand-in 3₁), never again in ASCII.
+  expect(screen.getByTestId('readout-name')).toHaveTextContent('invariants match 3₁');
+  expect(screen.getByLabelText('invariants match 3_1')).toBeOnTheScreen();
   // HOMFLY-PT of the positive trefoil: 2v^2 - v^4 + v^2 z^2 (docs/conventions.md; from memory).
   expect(screen.getByText('P(v,z) = 2v² − v⁴ + v²z²')).toBeOnTheScreen();
 });
@@ -65,7 +67,7 @@ test('a new diagram marks the old values stale until recomputed; a drag postpone
   run();
   expect(screen.getByTestId('readout-jones')).toHaveProp('aria-busy', false);
   expect(screen.getByText('V(t) = −t⁻⁴ + t⁻³ + t⁻¹')).toBeOnTheScreen();
-  expect(screen.getByText('invariants match 3_1 (mirror)')).toBeOnTheScreen();
+  expect(screen.getByTestId('readout-name')).toHaveTextContent('invariants match 3₁ (mirror)');
 });
 
 test('a Hopf link shows its linking number and no name guess', () => {

@@ -27,7 +27,7 @@ test('the name line tells the chirality of 3_1 and the Readout opens the convent
   await page.getByRole('radio', { name: 'Braid word' }).click();
   await page.getByRole('textbox', { name: 'Braid word' }).fill('1 1 1');
   await page.getByRole('button', { name: 'Draw it' }).click();
-  await page.getByText(/invariants match 3_1/).waitFor();
+  await page.getByLabel(/invariants match 3_1/).waitFor();
   await page.getByTestId('readout-chirality').getByText("Our table's 3_1 is the positive (right-handed) trefoil, with signature −2. Positive knots have negative signature here.").waitFor();
   await page.getByTestId('readout-chirality').scrollIntoViewIfNeeded();
   await shoot(page, 'conventions-00-readout-name');
