@@ -4,6 +4,7 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { defaultExportChoices, type ExportChoices } from '@/lib/slate/exports';
+import { Checkbox } from '@/components/ui/Checkbox';
 import { colors, radius, space, type } from '@/constants/theme';
 
 export type ExportKind = 'svg' | 'png' | 'tikz';
@@ -29,15 +30,6 @@ function Action({ label, onPress, disabled = false, primary = false }: { label: 
     <Pressable role="button" accessibilityLabel={label} aria-disabled={disabled} disabled={disabled} onPress={onPress}
       style={({ pressed }) => [styles.action, primary && styles.primary, pressed && styles.pressed, disabled && styles.disabled]}>
       <Text style={[styles.actionText, primary && styles.primaryText]}>{label}</Text>
-    </Pressable>
-  );
-}
-
-function Toggle({ label, on, onPress }: { label: string; on: boolean; onPress: () => void }) {
-  return (
-    <Pressable role="checkbox" aria-checked={on} accessibilityLabel={label} onPress={onPress} style={styles.toggle}>
-      <View style={[styles.tick, on && styles.tickOn]}>{on ? <Text style={styles.tickMark}>✓</Text> : null}</View>
-      <Text style={styles.actionText}>{label}</Text>
     </Pressable>
   );
 }
@@ -76,7 +68,7 @@ export function ReadoutActions(p: Props) {
         </View>
         <View style={styles.row} role="group" aria-label="What the exports show">
           {toggles.map(([key, label]) => (
-            <Toggle key={key} label={label} on={choices[key]} onPress={() => setChoices((c) => ({ ...c, [key]: !c[key] }))} />
+            <Checkbox key={key} label={label} on={choices[key]} onPress={() => setChoices((c) => ({ ...c, [key]: !c[key] }))} />
           ))}
         </View>
       </View>
@@ -96,9 +88,5 @@ const styles = StyleSheet.create({
   disabled: { opacity: 0.4 },
   actionText: { ...type.label, color: colors.ink },
   primaryText: { color: colors.accent },
-  toggle: { minHeight: 44, flexDirection: 'row', alignItems: 'center', gap: space.xs + 2, paddingRight: space.sm },
-  tick: { width: 20, height: 20, borderRadius: radius.sm, borderWidth: 1.5, borderColor: colors.inkMuted, alignItems: 'center', justifyContent: 'center' },
-  tickOn: { borderColor: colors.accent, backgroundColor: colors.accent },
-  tickMark: { color: colors.surface, fontSize: 13, lineHeight: 15 },
   message: { ...type.small, color: colors.success },
 });

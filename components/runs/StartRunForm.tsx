@@ -3,7 +3,7 @@
 // it came from; the result page opens. Small diagrams can also be computed on this device,
 // offline (a web worker on web), with s when asked for a knot.
 import { useEffect, useState } from 'react';
-import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
+import { StyleSheet, Text, TextInput, View } from 'react-native';
 import { router } from 'expo-router';
 import { isApiError } from '@/lib/api';
 import { codeKinds, parseCode, sourceOf, type CodeKind } from '@/lib/slate/codes';
@@ -12,9 +12,10 @@ import { pdToText } from '@/shared/text/codes';
 import { useStartRun } from '@/hooks/queries/useRuns';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
+import { Checkbox } from '@/components/ui/Checkbox';
 import { Choice } from '@/components/ui/Choice';
 import { Section } from '@/components/ui/Section';
-import { TOUCH, colors, fonts, radius, space, type } from '@/constants/theme';
+import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { computeLocally, warmUpLocal } from './computeLocally';
 import { KhTable } from './KhTable';
 import { LOCAL_MAX_CROSSINGS } from './local-kh';
@@ -24,7 +25,7 @@ import { computeS } from '@/components/readout/computeS';
 import { orient } from '@/shared/knot/pd';
 
 const ringNames = { Z: 'Z', Q: 'Q', F2: 'F2', F3: 'F3', Fp: 'F_p, any prime' } as const;
-const sweepNames = { '0': 'Khovanov homology', '2': 'Cable sweep, r+ + r- ≤ 2', '3': 'Cable sweep, r+ + r- ≤ 3', '4': 'Cable sweep, r+ + r- ≤ 4' } as const;
+const sweepNames = { '0': 'Khovanov homology', '2': 'Cable sweep, up to 2 strands', '3': 'Cable sweep, up to 3 strands', '4': 'Cable sweep, up to 4 strands' } as const;
 const inputNames = Object.fromEntries(codeKinds.map((c) => [c.kind, c.label])) as Record<CodeKind, string>;
 const LABEL_MAX = 120;
 
@@ -135,11 +136,11 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
       ) : null}
       <Labelled label="Homology" names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} value={reduced} onChange={setReduced} />
       <Labelled label="Computation" names={sweepNames} value={sweep} onChange={setSweep} />
+      {/* In the words of the sweep's result page (SweepGrid), where its cells are laid out by (r+, r-). */}
+      {sweep !== '0' ? <Text style={styles.label}>{`Each component takes every (r+, r-) with r+ + r- from 1 up to ${sweep}: r+ parallel and r- reversed copies, following the framing.`}</Text> : null}
       {sweep === '0' ? (
         // The server refuses it for a link, saying s is defined for knots here.
-        <Pressable role="checkbox" aria-checked={alsoS} aria-label="Also compute s" onPress={() => setAlsoS(!alsoS)} style={[styles.check, alsoS && styles.checked]}>
-          <Text style={[styles.checkText, alsoS && styles.checkedText]}>{`${alsoS ? '☑' : '☐'} Also compute s (Rasmussen invariant, knots only)`}</Text>
-        </Pressable>
+        <Checkbox label="Also compute s (Rasmussen invariant, knots only)" on={alsoS} onPress={() => setAlsoS(!alsoS)} />
       ) : null}
       {start.error && !(onSketch && isApiError(start.error, 'not_found')) ? <Banner tone="error">{start.error.message}</Banner> : null}
       <Button label="Start run" busy={start.isPending} busyLabel="Starting…" onPress={submit} />
@@ -167,10 +168,6 @@ const styles = StyleSheet.create({
   form: { gap: space.lg },
   field: { gap: space.xs },
   label: { ...type.label, color: colors.inkMuted },
-  check: { alignSelf: 'flex-start', minHeight: TOUCH, justifyContent: 'center', paddingHorizontal: space.md, borderRadius: radius.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
-  checked: { backgroundColor: colors.accent, borderColor: colors.accent },
-  checkText: { ...type.small, color: colors.ink },
-  checkedText: { color: colors.onAccent, fontFamily: fonts.medium },
   prime: { minHeight: 0, width: 120 },
   code: { fontFamily: fonts.mono, fontSize: 14, minHeight: 72, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, padding: space.md, backgroundColor: colors.surface, color: colors.ink },
   error: { ...type.small, color: colors.danger },

@@ -91,7 +91,7 @@ test('a PD code run shows torsion typeset, and the runs table lists both', async
 test('a cable sweep shows a grid of small tables', async () => {
   await page.getByRole('radio', { name: 'PD code' }).click();
   await page.getByLabel('PD code').fill('[[4,2,5,1],[2,6,3,5],[6,4,1,3]]');
-  await page.getByRole('radio', { name: 'Cable sweep, r+ + r- ≤ 2' }).click();
+  await page.getByRole('radio', { name: 'Cable sweep, up to 2 strands' }).click();
   await page.getByRole('button', { name: 'Start run' }).click();
   await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 90_000 });
   await shoot(page, 'runs-06-cable-sweep');
