@@ -1,7 +1,7 @@
 // The Feed tab's list: pick a group, filter (tag, person, has results), scroll the shared
 // sketches newest first; more pages load as the end comes into view.
 import { useEffect, useState } from 'react';
-import { ActivityIndicator, FlatList, ScrollView, StyleSheet, Text, TextInput, View } from 'react-native';
+import { ActivityIndicator, FlatList, StyleSheet, Text, TextInput, View } from 'react-native';
 import { useGlobalSearchParams, useRouter } from 'expo-router';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { canPost } from '@/shared/api/feed-rules';
@@ -17,6 +17,7 @@ import { useFilterShortcut } from '@/components/shell/shortcuts';
 import { COLUMN_MAX, colors, fonts, radius, space, type } from '@/constants/theme';
 import { Chip } from './Chip';
 import { FeedCard } from './FeedCard';
+import { PeopleFilter } from './PeopleFilter';
 import { ShareSketch } from './ShareSketch';
 
 export function FeedList() {
@@ -64,11 +65,7 @@ export function FeedList() {
         <Chip label="Has results" on={!!filters.hasResults} onPress={() => setFilters((f) => ({ ...f, hasResults: !f.hasResults || undefined }))} />
       </View>
       {members.data && members.data.length > 1 ? (
-        // One scrolling row, so a big group's names do not push the feed below the fold.
-        <ScrollView horizontal showsHorizontalScrollIndicator={false} aria-label="Filter by person" contentContainerStyle={styles.people}>
-          <Chip label="Everyone" on={!filters.person} onPress={() => setFilters((f) => ({ ...f, person: undefined }))} />
-          {members.data.map((m) => <Chip key={m.userId} label={m.displayName} on={filters.person === m.userId} onPress={() => setFilters((f) => ({ ...f, person: m.userId }))} />)}
-        </ScrollView>
+        <PeopleFilter key={groupId} people={members.data} person={filters.person} onPick={(person) => setFilters((f) => ({ ...f, person }))} />
       ) : null}
       {group && canPost(group.role) ? (
         sharing ? (
@@ -119,7 +116,6 @@ const styles = StyleSheet.create({
   filters: { flexDirection: 'row', gap: space.sm, alignItems: 'center' },
   tag: { flex: 1, minHeight: 40, paddingHorizontal: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface, fontFamily: fonts.regular, fontSize: 15, color: colors.ink },
   row: { flexDirection: 'row' },
-  people: { flexDirection: 'row', gap: space.sm },
   empty: { gap: space.xs },
   muted: { ...type.small, color: colors.inkMuted },
   link: { color: colors.accent },
