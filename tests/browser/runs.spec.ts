@@ -92,6 +92,9 @@ test('a cable sweep shows a grid of small tables', async () => {
   await page.getByRole('radio', { name: 'PD code' }).click();
   await page.getByLabel('PD code').fill('[[4,2,5,1],[2,6,3,5],[6,4,1,3]]');
   await page.getByRole('radio', { name: 'Cable sweep, up to 2 strands' }).click();
+  const note = page.getByText(/^Each component takes every \(r\+, r-\)/);
+  await note.scrollIntoViewIfNeeded();
+  await shoot(page, 'runs-06-sweep-choice');
   await page.getByRole('button', { name: 'Start run' }).click();
   await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 90_000 });
   await shoot(page, 'runs-06-cable-sweep');
@@ -133,6 +136,8 @@ test('on the device, s of a knot with its slice-genus bounds; a link is told s i
   await page.getByRole('radio', { name: 'Khovanov homology' }).click();
   const alsoS = page.getByRole('checkbox', { name: 'Also compute s' });
   if ((await alsoS.getAttribute('aria-checked')) !== 'true') await alsoS.click();
+  await alsoS.scrollIntoViewIfNeeded();
+  await shoot(page, 'runs-07-also-s');
   await page.getByRole('button', { name: /Compute on this device/ }).click();
   // The closure of [-1,-1,-1] is the negative trefoil: s = -2 (the positive one has s = 2,
   // docs/conventions.md, and s of a mirror is -s, Rasmussen 2004, math/0402131), signature +2.
