@@ -64,7 +64,7 @@ export const auth = (a: Account) => bearer(a.token);
  * The group's feed once no item's summary is still computing (the server computes them off the
  * request thread after a write, server/feed/summaries.ts).
  */
-export async function summarisedFeed(server: RunningServer, who: Account, groupId: string, timeoutMs = 30_000): Promise<FeedPage> {
+export async function summarisedFeed(server: RunningServer, who: Pick<Account, 'token'>, groupId: string, timeoutMs = 30_000): Promise<FeedPage> {
   for (const t0 = Date.now(); ; await new Promise((r) => setTimeout(r, 50))) {
     const page = FeedPage.parse((await api(server).get(`/api/groups/${groupId}/feed?limit=50`).set(auth(who))).body);
     if (!page.items.some((i) => i.invariants.computing)) return page;
