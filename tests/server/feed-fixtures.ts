@@ -58,7 +58,7 @@ export async function sketchOf(server: RunningServer, who: Account, over: Partia
 }
 
 export const api = (server: RunningServer) => request(server.url);
-export const auth = (a: Account) => bearer(a.token);
+export const auth = (a: Pick<Account, 'token'>) => bearer(a.token);
 
 /**
  * The group's feed once no item's summary is still computing (the server computes them off the
