@@ -17,7 +17,7 @@ import { jonesFromBracket } from '@/shared/knot/jones';
 import { seededRng } from '@/shared/knot/moves/random';
 import { stateSumBracket } from '@/shared/knot/statesum';
 import { temperleyLieb } from '@/shared/knot/temperley-lieb';
-import { scramble } from '../shared/scramble';
+import { scramble } from '@/tests/shared/scramble';
 import type { Line } from './timing';
 
 const SIZES = [15, 30, 60, 100];

@@ -17,7 +17,7 @@ import type { Point } from '@/shared/drawing/point';
 import type { Sketch } from '@/shared/drawing/sketch';
 import { bandCertificate } from '@/shared/knot/bands';
 import { closedBraidSketch, layoutPD, layoutToSketch } from '@/shared/layout';
-import { p33m3 } from '../shared/bands-fixtures';
+import { p33m3 } from '@/tests/shared/bands-fixtures';
 import { drawBand, moreReadout, presentation, withBand } from './bands-touch';
 import { baseUrl, newTitledSketch, person, phoneWithTouch, shoot } from './helpers';
 
