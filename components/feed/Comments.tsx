@@ -11,18 +11,25 @@ import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { CommentText } from './CommentText';
+import { useCommentDrafts } from './draft-store';
 import { when } from '@/lib/when';
 
-/** `field` names the text box, `label` its button: two names, so each can be found by its own. */
-function Composer({ initial = '', field, label, busy, onSubmit, onCancel }: { initial?: string; field: string; label: string; busy: boolean; onSubmit: (body: string) => void; onCancel?: () => void }) {
-  const [body, setBody] = useState(initial);
+/**
+ * `field` names the text box, `label` its button: two names, so each can be found by its own.
+ * What is typed lives in the draft store under `draft`, so a remount (the page refetching, the
+ * window crossing the two-column width) keeps it; `onSubmit` gets a `done` that ends the draft.
+ */
+function Composer({ draft, initial = '', field, label, busy, onSubmit, onCancel }: { draft: string; initial?: string; field: string; label: string; busy: boolean; onSubmit: (body: string, done: () => void) => void; onCancel?: () => void }) {
+  const body = useCommentDrafts((s) => s.drafts[draft]) ?? initial;
+  const { setDraft, clearDraft } = useCommentDrafts.getState();
+  const done = () => clearDraft(draft);
   return (
     <View style={styles.composer}>
-      <TextInput value={body} onChangeText={setBody} multiline aria-label={field} placeholder="Write a comment: Markdown, maths between $…$"
+      <TextInput value={body} onChangeText={(b) => setDraft(draft, b)} multiline aria-label={field} placeholder="Write a comment: Markdown, maths between $…$"
         placeholderTextColor={colors.inkFaint} style={styles.input} />
       <View style={styles.row}>
-        <Button label={label} busy={busy} busyLabel="Saving…" disabled={!body.trim()} onPress={() => onSubmit(body)} />
-        {onCancel ? <Button variant="quiet" label="Cancel" onPress={onCancel} /> : null}
+        <Button label={label} busy={busy} busyLabel="Saving…" disabled={!body.trim()} onPress={() => onSubmit(body, done)} />
+        {onCancel ? <Button variant="quiet" label="Cancel" onPress={() => { done(); onCancel(); }} /> : null}
       </View>
     </View>
   );
@@ -38,8 +45,8 @@ function Item({ c, groupId, mine, moderate, canWrite }: { c: Comment; groupId: s
         <Text style={styles.author}>{c.author.displayName}</Text> · {when(c.createdAt)}{c.editedAt ? ' · edited' : ''}
       </Text>
       {editing ? (
-        <Composer initial={c.body} field="Edit comment" label="Save" busy={edit.isPending} onCancel={() => setEditing(false)}
-          onSubmit={(body) => edit.mutate({ id: c.id, body }, { onSuccess: () => setEditing(false) })} />
+        <Composer draft={`edit:${c.id}`} initial={c.body} field="Edit comment" label="Save" busy={edit.isPending} onCancel={() => setEditing(false)}
+          onSubmit={(body, done) => edit.mutate({ id: c.id, body }, { onSuccess: () => { done(); setEditing(false); } })} />
       ) : (
         <CommentText body={c.body} />
       )}
@@ -77,7 +84,6 @@ export function Comments({ groupId, sketchId, comments, canComment, moderate }: 
   const me = useSession((s) => s.user);
   const add = useAddComment(groupId, sketchId);
   const unsent = useUnsentComments(groupId, sketchId).filter((c) => !comments.some((s) => s.id === c.id));
-  const [round, setRound] = useState(0); // remounts the composer empty after a post
   return (
     <View style={styles.wrap}>
       {comments.length + unsent.length === 0 ? <Text style={styles.muted}>No comments yet.</Text> : null}
@@ -85,7 +91,7 @@ export function Comments({ groupId, sketchId, comments, canComment, moderate }: 
       {unsent.map((c) => <Unsent key={c.id} c={c} author={me?.displayName ?? 'Me'} />)}
       {add.error ? <Banner tone="error">{add.error.message}</Banner> : null}
       {canComment ? (
-        <Composer key={round} field="Comment" label="Post comment" busy={add.isPending} onSubmit={(body) => add.mutate(body, { onSuccess: () => setRound((r) => r + 1) })} />
+        <Composer draft={`new:${sketchId}`} field="Comment" label="Post comment" busy={add.isPending} onSubmit={(body, done) => add.mutate(body, { onSuccess: done })} />
       ) : (
         <Text style={styles.muted}>Viewers read the discussion; ask an admin to make you a member to comment.</Text>
       )}

@@ -10,6 +10,7 @@ import { Screen } from '@/components/ui/Screen';
 import { PageTitle } from '@/components/ui/PageTitle';
 import { Section } from '@/components/ui/Section';
 import { LoadError } from '@/components/ui/LoadError';
+import { Banner } from '@/components/ui/Banner';
 import { TWO_COLUMN_BREAKPOINT, colors, space, type } from '@/constants/theme';
 import { Comments } from './Comments';
 import { PhotoStrip } from './PhotoStrip';
@@ -23,7 +24,8 @@ export function GroupSketchPage({ groupId, sketchId }: { groupId: string; sketch
   const wide = useIsWide();
   const q = useGroupSketch(groupId, sketchId);
   const back = wide ? undefined : () => (router.canGoBack() ? router.back() : router.replace('/feed'));
-  if (q.isPending || q.isError) {
+  // A failed refetch keeps the page it had (and the comment being typed), with a banner.
+  if (q.data === undefined) {
     return (
       <Screen>
         <PageTitle title="Sketch" onBack={back} backLabel="Feed" />
@@ -37,6 +39,7 @@ export function GroupSketchPage({ groupId, sketchId }: { groupId: string; sketch
   return (
     <Screen wide>
       <PageTitle kicker="Shared sketch" title={q.data.title || 'Untitled sketch'} onBack={back} backLabel="Feed" />
+      {q.isError ? <Banner tone="error">Could not refresh the sketch: {q.error.message}</Banner> : null}
       <SketchAndDiscussion s={q.data} groupId={groupId} />
     </Screen>
   );
