@@ -6,7 +6,7 @@ import { apiUrl } from '@/lib/api';
 import { colors, radius, space, type } from '@/constants/theme';
 import type { PressState } from '@/components/ui/press-state';
 import { Jones } from './Jones';
-import { DiagramPicture } from './DiagramPicture';
+import { DiagramPicture } from '@/components/ui/DiagramPicture';
 import { when } from '@/lib/when';
 
 const PIC = 84;

@@ -9,7 +9,7 @@ import { framedText } from '@/lib/slate/framed-text';
 import { diagramNumbers } from '@/lib/slate/picture';
 import { readoutStages } from '@/lib/slate/readout';
 import { docFromStored } from '@/lib/slate/record';
-import type { PictureSource } from './DiagramPicture';
+import type { PictureSource } from '@/components/ui/DiagramPicture';
 import { colors, type } from '@/constants/theme';
 
 const framingStage = readoutStages.find((s) => s.keys.includes('framings'))!;

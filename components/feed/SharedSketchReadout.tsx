@@ -8,11 +8,11 @@ import type { GroupSketch } from '@/shared/api/feed';
 import { apiUrl } from '@/lib/api';
 import { Section } from '@/components/ui/Section';
 import { colors, radius, space, type } from '@/constants/theme';
-import { DiagramPicture } from './DiagramPicture';
+import { DiagramPicture } from '@/components/ui/DiagramPicture';
 import { FramedLink } from './FramedLink';
 import { Jones } from './Jones';
 import { pdToText } from '@/shared/text/codes';
-import { SliceBounds } from '@/components/runs/SliceBounds';
+import { SliceBounds } from '@/components/ui/SliceBounds';
 
 export function SharedSketchPicture({ s }: { s: GroupSketch }) {
   const photo = s.photos[0];

@@ -2,6 +2,7 @@
 // and the line under a knot's name saying which chirality the name table means by it.
 import { StyleSheet, Text, View } from 'react-native';
 import { Dialog } from '@/components/ui/Dialog';
+import { NameText } from './NameText';
 import { colors, space, type } from '@/constants/theme';
 
 const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
@@ -33,7 +34,7 @@ export function ConventionsSheet({ visible, onClose }: { visible: boolean; onClo
       {sections.map(([title, text]) => (
         <View key={title} style={styles.section}>
           <Text role="heading" aria-level={3} style={styles.title}>{title}</Text>
-          <Text style={styles.text}>{text}</Text>
+          <NameText style={styles.text} text={text} />
         </View>
       ))}
     </Dialog>

@@ -9,10 +9,11 @@ import type { SState } from '@/hooks/useSInvariant';
 import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
 import { S_MAX_CROSSINGS } from './local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
-import { HOMFLY_DEVICE_LIMIT, nameTeX, nameUnicode } from '@/lib/slate/readout';
+import { HOMFLY_DEVICE_LIMIT } from '@/lib/slate/readout';
 import { framedText, signed } from '@/lib/slate/framed-text';
 import { TeX } from '@/components/ui/Math';
 import { ConventionsSheet, chiralityNote } from './Conventions';
+import { NameText } from './NameText';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 
 type Props = {
@@ -119,7 +120,6 @@ export function Readout({ state, s, empty, markers, openStrands, numbers }: Prop
     );
   }
   const name = v.name;
-  const nameAround = name ? name.text.split(name.name) : [];
   const chirality = name && v.signature !== undefined ? chiralityNote(name.name, name.mirror, v.signature) : null;
   return (
     <View style={styles.box} testID="readout">
@@ -134,17 +134,12 @@ export function Readout({ state, s, empty, markers, openStrands, numbers }: Prop
         </Text>
         <View aria-busy={state.stale.has('name')} testID="readout-name" style={state.stale.has('name') && styles.staleValue}>
           {name ? (
-            // The shared text says it in ASCII ("invariants match 4_1"): the name in it is typeset instead, once.
-            <View style={styles.nameRow} aria-label={name.text}>
-              <Text style={styles.nameText}>{nameAround[0]}</Text>
-              <TeX tex={nameTeX(name.name)} text={nameUnicode(name.name)} />
-              {nameAround[1] ? <Text style={styles.nameText}>{nameAround[1]}</Text> : null}
-            </View>
+            <NameText style={styles.nameText} text={name.text} />
           ) : v.name === null ? (
             <Text style={styles.nameText}>{v.components === 1 ? 'Not among the knots up to 8 crossings' : 'A link: no name guess'}</Text>
           ) : null}
         </View>
-        {chirality ? <Text style={styles.nameText} testID="readout-chirality">{chirality}</Text> : null}
+        {chirality ? <NameText style={styles.nameText} testID="readout-chirality" text={chirality} /> : null}
         <ConventionsLink />
       </View>
 
@@ -194,7 +189,6 @@ const styles = StyleSheet.create({
   headline: { gap: 2, paddingBottom: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
   big: { ...type.display, color: colors.ink },
   sub: { ...type.small, color: colors.inkMuted },
-  nameRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', gap: space.xs, marginTop: space.xs },
   nameText: { ...type.small, color: colors.inkMuted, marginTop: space.xs },
   conventions: { minHeight: 44, justifyContent: 'center', alignSelf: 'flex-start' },
   conventionsText: { ...type.label, color: colors.accent },

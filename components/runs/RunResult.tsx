@@ -20,7 +20,7 @@ import { useRunFocus } from './focus-store';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { TeX } from '@/components/ui/Math';
 import { ProgressBar } from './ProgressBar';
-import { SliceBounds } from './SliceBounds';
+import { SliceBounds } from '@/components/ui/SliceBounds';
 import { SweepGrid } from './SweepGrid';
 import { duration, remaining, runDate, statusLabel } from './format';
 import { saveText } from '@/components/ui/save';

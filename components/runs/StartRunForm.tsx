@@ -10,6 +10,7 @@ import { codeKinds, parseCode, sourceOf, type CodeKind } from '@/lib/slate/codes
 import { RunRing, runPagePath, type KhResultJson, type RunDiagram, type StartRunRequest } from '@/shared/api/runs';
 import { pdToText } from '@/shared/text/codes';
 import { useStartRun } from '@/hooks/queries/useRuns';
+import { useLocalSketch } from '@/hooks/queries/useLocalSketches';
 import { Banner } from '@/components/ui/Banner';
 import { Button } from '@/components/ui/Button';
 import { Checkbox } from '@/components/ui/Checkbox';
@@ -20,7 +21,7 @@ import { computeLocally, warmUpLocal } from './computeLocally';
 import { KhTable } from './KhTable';
 import { LOCAL_MAX_CROSSINGS } from './local-kh';
 import { KhSummary } from './RunResult';
-import { SliceBounds } from './SliceBounds';
+import { SliceBounds } from '@/components/ui/SliceBounds';
 import { computeS } from '@/components/readout/computeS';
 import { orient } from '@/shared/knot/pd';
 
@@ -70,6 +71,9 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   const [local, setLocal] = useState<{ fraction: number; result?: KhResultJson; error?: string } | null>(null);
   const [localS, setLocalS] = useState<{ s: number; diagram: Pick<RunDiagram, 'pd' | 'unknots'> } | { note: string } | null>(null);
   const start = useStartRun();
+  // The device holds the sketches a run can be started from (mine and my groups').
+  const sketch = useLocalSketch(sketchId ?? '').data;
+  const named = sketch ? `“${sketch.title || 'Untitled sketch'}”` : 'the sketch';
   useEffect(warmUpLocal, []);
   const computeHere = () => {
     const body = request(input, code, ring, reduced === 'reduced', 0);
@@ -111,7 +115,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
   };
   return (
     <View style={styles.form}>
-      {onSketch ? <Banner tone="info">On the sketch as it was last synced to the server; its PD code is below. Edit the code to run what you type instead.</Banner> : null}
+      {onSketch ? <Banner tone="info">{`On ${named} as it was last synced to the server; its PD code is below. Edit the code to run what you type instead.`}</Banner> : null}
       {/* An edited code is what the person means to run: it leaves the sketch (never ignored for it). */}
       <Labelled label="Input" names={inputNames} value={input} onChange={(k) => (setInput(k), setOnSketch(false))} />
       <View style={styles.field}>

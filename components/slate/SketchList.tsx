@@ -6,7 +6,7 @@ import { router, usePathname } from 'expo-router';
 import { useKnownGroups, useLocalSketches } from '@/hooks/queries/useLocalSketches';
 import type { LocalGroup, LocalSketch } from '@/lib/store/types';
 import { summaryOf } from '@/lib/slate/summary';
-import { DiagramPicture } from '@/components/feed/DiagramPicture';
+import { DiagramPicture } from '@/components/ui/DiagramPicture';
 import { when } from '@/lib/when';
 import { TeX } from '@/components/ui/Math';
 import { Screen } from '@/components/ui/Screen';

@@ -1,6 +1,7 @@
 // Arcs of a diagram and the Wirtinger relation at each crossing (W. Wirtinger 1905; as in
 // Lickorish, An Introduction to Knot Theory, ch. 6 and 11): an arc runs from one under-passing
 // to the next, so the two over-edges b, d of X[a,b,c,d] lie on one arc.
+import { labelClasses } from './label-classes';
 import { slotsOf, type Oriented } from './pd';
 
 export interface Relation {
@@ -19,15 +20,8 @@ export interface Arcs {
 
 export function arcsOf(o: Oriented): Arcs {
   const labels = [...slotsOf(o.pd).keys()];
-  const parent = new Map(labels.map((l) => [l, l]));
-  const find = (l: number): number => {
-    const p = parent.get(l)!;
-    if (p === l) return l;
-    const root = find(p);
-    parent.set(l, root);
-    return root;
-  };
-  for (const x of o.pd) parent.set(find(x[1]), find(x[3]));
+  const { find, join } = labelClasses();
+  for (const x of o.pd) join(x[1], x[3]);
   const index = new Map<number, number>();
   for (const l of labels) if (!index.has(find(l))) index.set(find(l), index.size);
   const arc = (l: number) => index.get(find(l))!;

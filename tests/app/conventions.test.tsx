@@ -1,5 +1,7 @@
-// The line under a knot's name: which mirror image the table's entry is, told by the signature.
-import { chiralityNote } from '@/components/readout/Conventions';
+// The line under a knot's name: which mirror image the table's entry is, told by the signature;
+// the Conventions sheet writes names as the Readout does.
+import { render, screen } from '@testing-library/react-native';
+import { ConventionsSheet, chiralityNote } from '@/components/readout/Conventions';
 
 test('the table\'s 3_1 is the positive trefoil, signature -2, whichever image is drawn', () => {
   // The positive trefoil has signature -2 and the table's 3_1 is it (docs/conventions.md,
@@ -14,4 +16,12 @@ test('other entries name their signature; signature 0 cannot tell mirror images 
   expect(chiralityNote('5_1', true, 4)).toContain("Our table's 5_1 has signature −4; this diagram is its mirror.");
   // The figure-eight knot is amphichiral with signature 0 (Rolfsen, Knots and Links, from memory).
   expect(chiralityNote('4_1', false, 0)).toBeNull();
+});
+
+test('the sheet typesets the names it mentions, as the Readout\'s name line does', () => {
+  render(<ConventionsSheet visible onClose={() => {}} />);
+  // 3_1 is the positive trefoil in our table (docs/conventions.md, Names).
+  const names = screen.getByLabelText(/3_1 is the positive trefoil/);
+  expect(names).toHaveTextContent(/3₁ is the positive trefoil; the other one reads "3₁ \(mirror\)"/);
+  expect(names).not.toHaveTextContent(/3_1/);
 });

@@ -1,10 +1,14 @@
 // The run form's choices: a cable sweep is chosen by its number of strands and says what it
-// runs; "Also compute s" is a checkbox (the Slate's) whose checked state reaches the request.
+// runs; "Also compute s" is a checkbox (the Slate's) whose checked state reaches the request;
+// opened from a sketch, it names the sketch.
 import { fireEvent, screen, waitFor } from '@testing-library/react-native';
 import { StartRunForm } from '@/components/runs/StartRunForm';
+import { useSession } from '@/hooks/useSession';
+import { openDevice } from '@/lib/store/device';
 import { apiError, mockFetch, renderWithProviders } from './support';
 
 jest.mock('expo-router', () => ({ router: { push: jest.fn() } }));
+jest.mock('@/lib/store/device', () => jest.requireActual('./device-mock').deviceMock());
 
 // A PD code of the trefoil (docs/conventions.md, PD code; from memory).
 const trefoil = '[[4,2,5,1],[2,6,3,5],[6,4,1,3]]';
@@ -33,4 +37,16 @@ test('"Also compute s" is a checkbox: unchecked at first, checked when pressed, 
   fireEvent.press(screen.getByRole('button', { name: 'Start run' }));
   await waitFor(() => expect(calls).toHaveLength(1));
   expect(calls[0].body).toMatchObject({ computeS: true });
+});
+
+test('opened from a sketch, the form names it, and the run goes on that sketch', async () => {
+  useSession.setState({ status: 'signedIn', token: 't', user: { id: 'u1', email: 'a@b.example', displayName: 'Ada' } });
+  const { store } = await openDevice('u1', () => 't');
+  const sketch = await store.create({ title: 'Trefoil from the talk' });
+  const calls = mockFetch(refuse);
+  renderWithProviders(<StartRunForm initialPD={trefoil} sketchId={sketch.id} />);
+  expect(await screen.findByText(/^On “Trefoil from the talk” as it was last synced to the server/)).toBeOnTheScreen();
+  fireEvent.press(screen.getByRole('button', { name: 'Start run' }));
+  await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
+  expect(calls.find((c) => c.method === 'POST')!.body).toMatchObject({ sketchId: sketch.id });
 });

@@ -13,6 +13,7 @@
 // Hopf link has rank 4 = 2^2, like the 2-component unlink (Khovanov 2000, arXiv math/9908171).
 
 import { khovanov, type KhGroup } from '../../khovanov';
+import { labelClasses } from '../label-classes';
 import { AfterBands, simplifiedStage } from './after';
 import { Stage } from './saddle';
 import { BandPresentation } from './types';
@@ -83,21 +84,10 @@ function unlinkCertificate(after: AfterBands, maxCrossings: number, homology: Af
 // Components of the link (PD part) and of the surface's PD part: labels joined along the link's
 // components and by every band.
 function joined(start: Stage, p: BandPresentation): { links: number; surfaces: number } {
-  const parent = new Map<number, number>();
-  const find = (l: number): number => {
-    const q = parent.get(l) ?? l;
-    if (q === l) return l;
-    const root = find(q);
-    parent.set(l, root);
-    return root;
-  };
-  const union = (a: number, b: number): void => {
-    const [ra, rb] = [find(a), find(b)];
-    if (ra !== rb) parent.set(ra, rb);
-  };
-  for (const [label, h] of start.heads) union(label, start.pd[h.crossing][(h.position + 2) % 4]);
+  const { find, join } = labelClasses();
+  for (const [label, h] of start.heads) join(label, start.pd[h.crossing][(h.position + 2) % 4]);
   const count = (): number => [...start.heads.keys()].filter((l) => find(l) === l).length;
   const links = count();
-  for (const { a, b } of p.saddles) union(a, b);
+  for (const { a, b } of p.saddles) join(a, b);
   return { links, surfaces: count() };
 }

@@ -3,6 +3,7 @@
 
 import { assemble, Framed } from '../assemble';
 import { Diagram } from '../diagram';
+import { labelClasses } from '../label-classes';
 import { mapLabels, orient, PDCode, PDError, Slot, slotsOf } from '../pd';
 
 /**
@@ -47,14 +48,7 @@ export function splice(d: Diagram, remove: readonly number[], joins: readonly (r
  * kept, so this also serves smoothings.
  */
 export function joinedCode(pd: PDCode, remove: readonly number[], joins: readonly (readonly [number, number])[]): { pd: PDCode; find: (l: number) => number } {
-  const parent = new Map<number, number>();
-  const find = (l: number): number => {
-    const p = parent.get(l) ?? l;
-    if (p === l) return l;
-    const root = find(p);
-    parent.set(l, root);
-    return root;
-  };
-  for (const [a, b] of joins) parent.set(find(a), find(b));
+  const { find, join } = labelClasses();
+  for (const [a, b] of joins) join(a, b);
   return { pd: pd.flatMap((x, i) => (remove.includes(i) ? [] : [mapLabels(x, (l) => find(l))])), find };
 }

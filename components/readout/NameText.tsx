@@ -1,0 +1,15 @@
+// A sentence that names knots of the table in the shared ASCII form ("invariants match 4_1"),
+// with each name typeset (4₁) as the Readout's name line shows it; the ASCII stays its label.
+import { Text, type StyleProp, type TextStyle } from 'react-native';
+import { nameTeX, nameUnicode } from '@/lib/slate/readout';
+import { TeX } from '@/components/ui/Math';
+
+const NAME = /(\b\d+_\d+\b)/;
+
+export function NameText({ text, style, testID }: { text: string; style?: StyleProp<TextStyle>; testID?: string }) {
+  return (
+    <Text style={style} testID={testID} aria-label={text}>
+      {text.split(NAME).map((piece, i) => (i % 2 === 1 ? <TeX key={i} tex={nameTeX(piece)} text={nameUnicode(piece)} /> : piece))}
+    </Text>
+  );
+}
