@@ -8,6 +8,7 @@ import type { PressState } from '@/components/ui/press-state';
 import { Jones } from './Jones';
 import { DiagramPicture } from '@/components/ui/DiagramPicture';
 import { when } from '@/lib/when';
+import { minus } from '@/shared/text/integers';
 
 const PIC = 84;
 
@@ -28,7 +29,7 @@ export function FeedCard({ item, onOpen, active }: { item: FeedItem; onOpen: () 
         <View style={styles.jones}><Jones inv={inv} /></View>
         <View style={styles.foot}>
           {item.latestRun ? <Text style={styles.run} numberOfLines={1}>{item.latestRun.summary || item.latestRun.kind}</Text> : null}
-          {item.latestRun?.s !== undefined ? <Text style={styles.run}>{`s = ${item.latestRun.s}`}</Text> : null}
+          {item.latestRun?.s !== undefined ? <Text style={styles.run}>{`s = ${minus(item.latestRun.s)}`}</Text> : null}
           <Text style={styles.count}>{item.commentCount} comment{item.commentCount === 1 ? '' : 's'}</Text>
           {item.tags.slice(0, 3).map((t) => <Text key={t} style={styles.tag}>#{t}</Text>)}
         </View>

@@ -13,6 +13,7 @@ import { FramedLink } from './FramedLink';
 import { Jones } from './Jones';
 import { pdToText } from '@/shared/text/codes';
 import { SliceBounds } from '@/components/ui/SliceBounds';
+import { minus } from '@/shared/text/integers';
 
 export function SharedSketchPicture({ s }: { s: GroupSketch }) {
   const photo = s.photos[0];
@@ -33,7 +34,7 @@ export function SharedSketchPicture({ s }: { s: GroupSketch }) {
 function SFromRun({ s, diagram }: { s: number; diagram: GroupSketch['diagram'] }) {
   return (
     <View testID="shared-s">
-      <Text style={styles.readout}>{`s = ${s} over Q (Rasmussen, from a run)`}</Text>
+      <Text style={styles.readout}>{`s = ${minus(s)} over Q (Rasmussen, from a run)`}</Text>
       <SliceBounds s={s} diagram={diagram} />
     </View>
   );

@@ -9,12 +9,11 @@ import type { BandPresentation } from '@/shared/knot/bands';
 import type { BandsState } from '@/hooks/useBandCertificate';
 import type { SState } from '@/hooks/useSInvariant';
 import { BANDS_KH_CROSSINGS, BANDS_MAX_CROSSINGS, type BandsAnswer } from './local-bands';
+import { minus } from '@/shared/text/integers';
 import { colors, fonts, space, type } from '@/constants/theme';
 import { BandsCompare } from './BandsCompare';
 import { BandsServerCheck } from './BandsServerCheck';
 import { SurfaceClassText } from './SurfaceClassText';
-
-const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 function unlinkText(c: BandsAnswer): string {

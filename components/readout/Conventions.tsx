@@ -3,9 +3,8 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { Dialog } from '@/components/ui/Dialog';
 import { NameText } from './NameText';
+import { minus } from '@/shared/text/integers';
 import { colors, space, type } from '@/constants/theme';
-
-const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
 
 /**
  * Which of the two mirror images the table's entry is, told by its signature (the one

@@ -10,7 +10,8 @@ import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
 import { S_MAX_CROSSINGS } from './local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
 import { HOMFLY_DEVICE_LIMIT } from '@/lib/slate/readout';
-import { framedText, signed } from '@/lib/slate/framed-text';
+import { framedText } from '@/lib/slate/framed-text';
+import { minus, signed } from '@/shared/text/integers';
 import { TeX } from '@/components/ui/Math';
 import { ConventionsSheet, chiralityNote } from './Conventions';
 import { NameText } from './NameText';
@@ -61,8 +62,6 @@ function ConventionsLink() {
     </>
   );
 }
-
-const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
 
 /** s (from its worker) with the two slice-genus bounds; for a link or a large diagram, why not. */
 function SRow({ s, signature }: { s: SState; signature?: number }) {

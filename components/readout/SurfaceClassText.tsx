@@ -5,13 +5,12 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { SurfaceClass } from '@/shared/knot/bands';
 import { CLASS_CROSSINGS } from '@/shared/knot/bands';
+import { minus } from '@/shared/text/integers';
 import { colors, fonts, type } from '@/constants/theme';
 import type { ClassAnswer } from './local-bands';
 
 /** Basis states listed before "… and n more". */
 const shown = 6;
-
-const minus = (n: number) => (n < 0 ? `−${-n}` : `${n}`);
 
 export const bidegree = (c: SurfaceClass) => `(h, q) = (0, ${minus(c.q)})`;
 

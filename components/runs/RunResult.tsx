@@ -24,6 +24,7 @@ import { SliceBounds } from '@/components/ui/SliceBounds';
 import { SweepGrid } from './SweepGrid';
 import { duration, remaining, runDate, statusLabel } from './format';
 import { saveText } from '@/components/ui/save';
+import { minus } from '@/shared/text/integers';
 
 function Fact({ name, children }: { name: string; children: React.ReactNode }) {
   return (
@@ -92,7 +93,7 @@ function SFact({ s, diagram }: { s: SValues; diagram: RunDetail['diagram'] }) {
   return (
     <Fact name="Rasmussen s">
       <View style={styles.euler}>
-        <Text style={styles.value} testID="run-s">{`s = ${s.Q} over Q, ${s.F2} over F2`}</Text>
+        <Text style={styles.value} testID="run-s">{`s = ${minus(s.Q)} over Q, ${minus(s.F2)} over F2`}</Text>
         <SliceBounds s={s.Q} diagram={diagram} />
       </View>
     </Fact>

@@ -24,6 +24,7 @@ import { KhSummary } from './RunResult';
 import { SliceBounds } from '@/components/ui/SliceBounds';
 import { computeS } from '@/components/readout/computeS';
 import { orient } from '@/shared/knot/pd';
+import { minus } from '@/shared/text/integers';
 
 const ringNames = { Z: 'Z', Q: 'Q', F2: 'F2', F3: 'F3', Fp: 'F_p, any prime' } as const;
 const sweepNames = { '0': 'Khovanov homology', '2': 'Cable sweep, up to 2 strands', '3': 'Cable sweep, up to 3 strands', '4': 'Cable sweep, up to 4 strands' } as const;
@@ -158,7 +159,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
           <KhSummary result={local.result} />
           {localS && 's' in localS ? (
             <View testID="local-s">
-              <Text style={styles.value}>{`s = ${localS.s} over Q (Rasmussen)`}</Text>
+              <Text style={styles.value}>{`s = ${minus(localS.s)} over Q (Rasmussen)`}</Text>
               <SliceBounds s={localS.s} diagram={localS.diagram} />
             </View>
           ) : localS ? <Text role="status" style={styles.label}>{localS.note}</Text> : null}

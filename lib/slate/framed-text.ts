@@ -1,9 +1,8 @@
 // The framed-link data as one line each, with the components numbered as the picture numbers
 // them (the Slate's drawing order; 1, 2, ... for a typed code): the Readout and a shared
 // sketch's page say it the same way.
+import { signed } from '@/shared/text/integers';
 import type { ReadoutValues } from './readout';
-
-export const signed = (n: number) => (n > 0 ? `+${n}` : n < 0 ? `−${-n}` : '0');
 
 /** `numbers[k]`: the number shown for diagram component k. */
 export function framedText(framings: ReadoutValues['framings'], linking: ReadoutValues['linking'], numbers?: readonly number[]): { framings: string; linking: string | null } {

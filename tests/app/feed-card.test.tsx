@@ -33,6 +33,10 @@ test('the card shows s when a run computed it, and nothing of s otherwise', () =
   // docs/conventions.md: the positive trefoil has s = 2.
   const view = render(<FeedCard item={{ ...item, latestRun: { ...item.latestRun!, s: 2 } }} onOpen={() => undefined} />);
   expect(screen.getByText('s = 2')).toBeTruthy();
+  // Its mirror has s = -2 (s changes sign under mirroring, Rasmussen 2010, arXiv math/0402131),
+  // printed with a minus sign as the Readout prints it, not a hyphen.
+  view.rerender(<FeedCard item={{ ...item, latestRun: { ...item.latestRun!, s: -2 } }} onOpen={() => undefined} />);
+  expect(screen.getByText('s = −2')).toBeTruthy();
   view.rerender(<FeedCard item={item} onOpen={() => undefined} />);
   expect(screen.queryByText(/^s = /)).toBeNull();
 });

@@ -142,7 +142,7 @@ test('on the device, s of a knot with its slice-genus bounds; a link is told s i
   // The closure of [-1,-1,-1] is the negative trefoil: s = -2 (the positive one has s = 2,
   // docs/conventions.md, and s of a mirror is -s, Rasmussen 2004, math/0402131), signature +2.
   const s = page.getByTestId('local-s');
-  await s.getByText('s = -2 over Q (Rasmussen)').waitFor({ timeout: 30_000 });
+  await s.getByText('s = −2 over Q (Rasmussen)').waitFor({ timeout: 30_000 });
   await s.getByText('Slice genus ≥ 1: |s|/2 = 1, |σ|/2 = 1, the same bound').waitFor();
   await s.scrollIntoViewIfNeeded();
   await shoot(page, 'runs-08-on-device-s');

@@ -1,0 +1,7 @@
+// Integers as the app prints them: negative ones with the true minus sign (U+2212), as the
+// polynomials print theirs, never a hyphen.
+
+export const minus = (n: number): string => (n < 0 ? `−${-n}` : `${n}`);
+
+/** With its sign always (+2, −1, 0): framings, linking numbers, writhe. */
+export const signed = (n: number): string => (n > 0 ? `+${n}` : minus(n));
