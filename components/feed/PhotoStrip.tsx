@@ -60,11 +60,13 @@ export function PhotoStrip({ groupId, sketchId, photos, canUpload, canModerate }
       {upload.error ? <Banner tone="error" title="Photo not added">{upload.error.message}</Banner> : null}
       {remove.error ? <Banner tone="error">{remove.error.message}</Banner> : null}
       {canUpload ? (
-        <View style={styles.row}>
-          <Button variant="secondary" label="Add a board photo" busy={upload.isPending} busyLabel="Uploading…" onPress={pick} />
-        </View>
+        <>
+          <View style={styles.row}>
+            <Button variant="secondary" label="Add a board photo" busy={upload.isPending} busyLabel="Uploading…" onPress={pick} />
+          </View>
+          <Text style={styles.note}>JPEG, PNG or WebP up to 10 MB. Location and camera data are removed.</Text>
+        </>
       ) : null}
-      <Text style={styles.note}>JPEG, PNG or WebP up to 10 MB. Location and camera data are removed.</Text>
     </View>
   );
 }

@@ -5,6 +5,7 @@ import { arrowOf } from '@/shared/drawing/pick';
 import type { Analysis } from '@/shared/drawing/analyse';
 import type { Point } from '@/shared/drawing/point';
 import { gapsAround, visiblePieces } from '@/shared/drawing/pieces';
+import { signed } from '@/shared/text/integers';
 import { chalkFor } from '@/constants/theme';
 import type { SlateDoc } from './record';
 import type { View } from './slate-store';
@@ -37,7 +38,7 @@ export const colourOf = (doc: SlateDoc, id: string): string => {
   return chalkFor(doc.colours[id] ?? (c ? c.seq - 1 : 0));
 };
 
-export const framingText = (framing: number | null): string => (framing === null ? 'bb' : framing > 0 ? `+${framing}` : `${framing}`);
+export const framingText = (framing: number | null): string => (framing === null ? 'bb' : signed(framing));
 
 /**
  * Closed components numbered 1, 2, ... in the order they were first drawn (a stroke that
@@ -81,8 +82,14 @@ export function strandPictures(doc: SlateDoc, a: Analysis, view: View): StrandPi
   });
 }
 
+/**
+ * Room round a fitted drawing: a framing badge sits badgeOffset beside an arrow that may lie on
+ * the drawing's edge, and its pill is 30 px wide (SlatePicture), so less would cut it off.
+ */
+const FIT_MARGIN = screenSizes.badgeOffset + 18;
+
 /** A view that fits every point into a box of the given size with a margin, at most 4x. */
-export function fitView(points: readonly Point[], width: number, height: number, margin = 36): View {
+export function fitView(points: readonly Point[], width: number, height: number, margin = FIT_MARGIN): View {
   if (points.length === 0 || width <= 0 || height <= 0) return { k: 1, x: 0, y: 0 };
   const xs = points.map((p) => p.x);
   const ys = points.map((p) => p.y);

@@ -33,3 +33,15 @@ test('a moderator sees Remove on feed uploads only, and no details link on photo
   expect(screen.getAllByRole('button', { name: 'Remove' })).toHaveLength(1);
   expect(screen.queryByRole('link', { name: "Remove in the sketch's details" })).toBeNull();
 });
+
+test('without the right to upload (a viewer), neither the button nor the note on what may be uploaded shows', () => {
+  useSession.setState({ status: 'signedIn', token: 't', user: me });
+  const view = renderWithProviders(<PhotoStrip groupId="g1" sketchId="s1" photos={[]} canUpload={false} canModerate={false} />);
+  expect(screen.getByText('No board photos yet.')).toBeOnTheScreen();
+  expect(screen.queryByRole('button', { name: 'Add a board photo' })).toBeNull();
+  expect(screen.queryByText(/up to 10 MB/)).toBeNull();
+  view.unmount();
+  renderWithProviders(<PhotoStrip groupId="g1" sketchId="s1" photos={[]} canUpload canModerate={false} />);
+  expect(screen.getByRole('button', { name: 'Add a board photo' })).toBeOnTheScreen();
+  expect(screen.getByText(/up to 10 MB/)).toBeOnTheScreen();
+});

@@ -3,7 +3,7 @@
 import { analyse } from '@/shared/drawing/analyse';
 import { fromBraid } from '@/shared/knot/braid';
 import { defaultExportChoices, exportFiles } from '@/lib/slate/exports';
-import { drawingNumbers } from '@/lib/slate/picture';
+import { drawingNumbers, fitView, strandPictures } from '@/lib/slate/picture';
 import { docFromDiagram } from '@/lib/slate/record';
 
 const labelsOf = (svg: string) => [...svg.matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1]);
@@ -21,6 +21,13 @@ test('a framed Hopf link: each label pairs the Slate number with that component 
   expect(files.tikz.name).toBe('hopf-framed.tex');
   expect(files.tikz.text).toContain(`{$${second}\\colon -2$};`);
   expect(files.tikz.text.split('\n')[0]).toBe('\\documentclass[border=2mm]{standalone}');
+});
+
+test('the canvas badges write those framings as the SVG labels do, with a minus sign', () => {
+  // The Hopf link as above (docs/conventions.md, Braid word), framings 1 and -2.
+  const doc = docFromDiagram({ ...fromBraid([1, 1]), framings: [1, -2] });
+  const pictures = strandPictures(doc, analyse(doc.sketch), fitView(doc.sketch.components.flatMap((c) => c.points), 400, 400));
+  expect(pictures.map((p) => p.badge?.text).sort()).toEqual(['+1', '\u22122']);
 });
 
 test('a blackboard framing is written as its integer, the writhe', () => {

@@ -5,7 +5,10 @@
 // board keeps what it showed), and the reverse resize gives the first fit back; a new height
 // alone, or any resize once zoomed by hand, only keeps the centre.
 import { seededRng } from '@/shared/knot/moves/random';
-import { fitView, toWorld } from '@/lib/slate/picture';
+import { analyse } from '@/shared/drawing/analyse';
+import { fromBraid } from '@/shared/knot/braid';
+import { fitView, strandPictures, toWorld } from '@/lib/slate/picture';
+import { docFromDiagram } from '@/lib/slate/record';
 import { useSlate } from '@/lib/slate/slate-store';
 import { fitBaseOf, pinchedView, refit, wheelView, zoomAbout } from '@/lib/slate/zoom';
 
@@ -83,4 +86,18 @@ test('the Slate: a new width refits, its reverse gives the first fit back; a new
   s().setView({ k: 2, x: 5, y: 5 });
   s().resize(590, 500);
   expect(s().view).toEqual({ k: 2, x: 5 + (590 - 390) / 2, y: 5 + (500 - 240) / 2 });
+});
+
+test('a fitted drawing keeps every framing badge on the board, at phone and wide sizes', () => {
+  // The badge's pill is 30 x 20 px round its centre (components/slate/SlatePicture.tsx); an arrow
+  // on the drawing's edge put it partly off a phone's board before.
+  const words = [[1, 1, 1], [1, -2, 1, -2], [1, 1], [1, 2, 1, 2, 1, 2, 1, 2], [-1, -1, -1, -1, -1], [1, 2, 3, 1, 2, 3]];
+  for (const w of words) {
+    const doc = docFromDiagram(fromBraid(w));
+    const points = doc.sketch.components.flatMap((c) => c.points);
+    for (const [width, height] of [[390, 388], [390, 230], [812, 786]]) {
+      const badges = strandPictures(doc, analyse(doc.sketch), fitView(points, width, height)).map((p) => p.badge!.at);
+      expect(badges.every((b) => b.x - 15 >= 0 && b.x + 15 <= width && b.y - 10 >= 0 && b.y + 10 <= height)).toBe(true);
+    }
+  }
 });

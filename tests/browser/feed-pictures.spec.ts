@@ -152,7 +152,7 @@ test('the shared page shows Bruno the framing, the component numbers and the lin
   expect(Math.abs(linked.lk)).toBe(1);
   await framed.getByText(`Linking numbers: lk(1,2) = ${linked.lk > 0 ? '+1' : '−1'}`).waitFor();
   const label = await brunoPage.getByRole('img', { name: `Picture of ${LINKED}` }).evaluate((e) => e.textContent ?? '');
-  expect(label).toContain(`${na}: -1`); // the picture's own label, as on the Slate's badge
+  expect(label).toContain(`${na}: −1`); // the picture's own label, as on the Slate's badge and the framings line
   expect(label).toContain(`${nb}: bb`);
   await shoot(brunoPage, 'feed-pictures-03-shared-page');
 });
