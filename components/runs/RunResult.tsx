@@ -76,8 +76,10 @@ export function KhSummary({ result }: { result: KhResultJson }) {
         <Fact name="Euler characteristic">
           <View style={styles.euler}>
             <TeX tex={poly(euler.computed).format('q', 'latex')} text={poly(euler.computed).format('q')} />
-            <Text style={[styles.value, { color: euler.ok ? colors.success : colors.danger }]}>
-              {`${euler.ok ? '=' : '≠'} ${result.reduced ? 'V' : '(q + q⁻¹) V'} at t^(1/2) = −q${euler.ok ? ', as the Jones polynomial says ✓' : ': it differs from the Jones polynomial, which gives'}`}
+            <Text style={[styles.value, { color: euler.ok ? colors.success : colors.danger }]} testID="run-euler-check">
+              {`${euler.ok ? '=' : '≠'} ${result.reduced ? 'V' : '(q + q⁻¹) V'} at `}
+              <TeX tex="t^{1/2} = -q" text="t^(1/2) = −q" />
+              {euler.ok ? ', as the Jones polynomial says ✓' : ': it differs from the Jones polynomial, which gives'}
             </Text>
             {euler.ok ? null : <TeX tex={poly(euler.expected).format('q', 'latex')} text={poly(euler.expected).format('q')} />}
           </View>

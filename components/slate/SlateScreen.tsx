@@ -3,7 +3,7 @@
 import { useCallback, useMemo, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useFocusEffect, useIsFocused } from 'expo-router';
-import { isDescending } from '@/shared/drawing/alternate';
+import { alternatingFlips, isDescending } from '@/shared/drawing/alternate';
 import { analyse } from '@/shared/drawing/analyse';
 import type { LocalSketch } from '@/lib/store/types';
 import { braidToText, pdToText } from '@/shared/text/codes';
@@ -65,12 +65,14 @@ export function SlateScreen({ sketch }: { sketch: LocalSketch }) {
   const numberOf = useCallback((id: string) => numbers.get(id) ?? null, [numbers]);
   const componentNumbers = useMemo(() => diagramNumbers(doc, analysis), [doc, analysis]);
   const descending = useMemo(() => isDescending(analysis), [analysis]);
+  // Only asked of a descending drawing: whether Alternate would change any crossing.
+  const alternating = useMemo(() => descending && !!alternatingFlips(analysis)?.every((flip) => !flip), [descending, analysis]);
   const onFraming = (id: string) => setOpen({ framing: id });
 
   const empty = diagram ? null : analysis.markers.length ? 'markers' : analysis.open.length ? 'open' : 'nothing';
   const readoutPane = (
     <>
-      {descending && diagram ? <DescendingNote components={diagram.framings.length} onAlternate={actions.alternateNow} /> : null}
+      {descending && diagram ? <DescendingNote components={diagram.framings.length} alternating={alternating} onAlternate={actions.alternateNow} /> : null}
       <Readout state={readout} s={sInvariant} empty={empty} markers={analysis.markers} openStrands={analysis.open.length} numbers={componentNumbers} />
       {diagram ? <BandsReadout state={bands.certificate} presentation={bands.presentation} refused={bands.refused} s={sInvariant} signature={readout.values.signature} /> : null}
       <ReadoutActions

@@ -41,8 +41,8 @@ export const familyList: readonly Family[] = [
   { kind: 'cable', label: 'Cable of the sketch', fromSketch: true, fields: [
     { key: 'component', label: 'Component', hint: 'number as in the Readout', initial: '1' },
     { key: 'framing', label: 'Framing', hint: 'integer, or blank for its current framing', initial: '' },
-    { key: 'rPlus', label: 'r+ (parallel copies)', hint: 'integer >= 0', initial: '2' },
-    { key: 'rMinus', label: 'r- (reversed copies)', hint: 'integer >= 0', initial: '0' },
+    { key: 'rPlus', label: 'r+ (parallel copies)', hint: 'integer ≥ 0', initial: '2' },
+    { key: 'rMinus', label: 'r- (reversed copies)', hint: 'integer ≥ 0', initial: '0' },
   ] },
 ];
 

@@ -47,6 +47,7 @@ test('connected sum multiplies Jones polynomials; the mirror inverts t', () => {
 test('the (2,0)-cable of an unknot framed 1 is a two-component link with linking number 1', () => {
   const onDraw = setup(unknot);
   press('Cable of the sketch');
+  expect(screen.getAllByText('integer ≥ 0')).toHaveLength(2); // r+ and r-, in the maths' sign, not ">="
   fireEvent.changeText(field('Framing'), '1');
   press('Draw it', 'button');
   // Parallel copies along a framing n link n times (common practice; Gompf and Stipsicz ch. 5).

@@ -62,6 +62,8 @@ test('start a run from a braid word, watch its progress, read the table', async 
   // positive braid knots), s = (p-1)(q-1) = 42 (Rasmussen 2004, math/0402131).
   await expect(table.getByRole('rowheader', { name: '41', exact: true }).isVisible()).resolves.toBe(true);
   await expect(page.getByText('as the Jones polynomial says ✓').isVisible()).resolves.toBe(true);
+  // The substitution typeset, as the polynomials beside it are, not written t^(1/2).
+  expect(await page.getByTestId('run-euler-check').locator('.katex').count()).toBe(1);
   await shoot(page, 'runs-03-result');
 }, 150_000);
 

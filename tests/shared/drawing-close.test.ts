@@ -1,11 +1,11 @@
 // Closing strokes as a finger draws them (quick strokes with far-apart samples, overshoots),
 // retraced strands, and the alternating / descending readings of a drawing.
 
-import { alternate, isDescending } from '@/shared/drawing/alternate';
+import { alternate, alternatingFlips, isDescending } from '@/shared/drawing/alternate';
 import { analyse, type Analysis } from '@/shared/drawing/analyse';
 import { defaultOptions } from '@/shared/drawing/options';
 import { dist, Point } from '@/shared/drawing/point';
-import { addStroke, emptySketch, Sketch } from '@/shared/drawing/sketch';
+import { addStroke, emptySketch, flipCrossing, Sketch } from '@/shared/drawing/sketch';
 import { length } from '@/shared/drawing/smooth';
 import { jones } from '@/shared/knot/jones';
 import { Laurent } from '@/shared/poly/laurent';
@@ -117,6 +117,26 @@ describe('alternating and descending', () => {
       passes.sort((x, y) => x.arc - y.arc);
       return passes.every((x, k) => x.over !== passes[(k + 1) % passes.length].over);
     });
+
+  test('curls drawn in one stroke are descending and already alternating, and no flip changes them', () => {
+    // What the Slate's note says of such a drawing: a reduced alternating diagram with n > 0
+    // crossings has bracket span 4n (Kauffman, Murasugi, Thistlethwaite 1987), so an alternating
+    // diagram of the unknot has only nugatory crossings, and flipping one keeps the unknot: V = 1.
+    const limacon = (t: number) => ({ x: 200 + 60 * (1 + 2 * Math.cos(t)) * Math.cos(t), y: 200 + 60 * (1 + 2 * Math.cos(t)) * Math.sin(t) });
+    const lemniscate = (t: number) => ({ x: 200 + 120 * Math.sin(t + 1), y: 200 + 90 * Math.sin(t + 1) * Math.cos(t + 1) });
+    for (const curve of [limacon, lemniscate]) {
+      const drawn = addStroke(emptySketch, touches(curve, 400));
+      const a = analyse(drawn);
+      expect(a.crossings).toHaveLength(1);
+      expect(isDescending(a)).toBe(true);
+      expect(alternatingFlips(a)).toEqual([false]);
+      expect(alternate(drawn).flips).toEqual(drawn.flips);
+      const c = a.crossings[0];
+      const flipped = flipCrossing(drawn, { a: c.over, b: c.under, at: c.at });
+      expect(isDescending(analyse(flipped))).toBe(true);
+      expect(jonesOf(flipped).equals(Laurent.one)).toBe(true);
+    }
+  });
 
   test('a trefoil drawn in one stroke is descending; Alternate makes it a trefoil', () => {
     const drawn = addStroke(emptySketch, touches(trefoilCurve, 400));
