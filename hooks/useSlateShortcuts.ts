@@ -27,6 +27,7 @@ export function useSlateShortcuts(paste: () => void, enabled: boolean) {
       slate('f', 'Flip crossings', () => s().setTool('flip')),
       slate('m', 'Move a component', () => s().setTool('move')),
       slate('r', 'Reshape a strand', () => s().setTool('reshape')),
+      slate('b', 'Draw bands', () => s().setTool('bands')),
       slate('Delete', 'Delete the selected component', deleteSelected),
       slate('Backspace', 'The same as Delete', deleteSelected),
       slate('Escape', 'Clear the selection', () => s().select(null)),
