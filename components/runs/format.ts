@@ -20,7 +20,7 @@ export const ringLabel = (r: Pick<RunSummary, 'ring' | 'reduced'>) => `${r.ring}
 
 /** A run's date and time in the reader's locale: "2 Dec 2026, 18:30", or "2 Dec, 18:30" where room is short. */
 export const runDate = (iso: string, short = false): string =>
-  new Date(iso).toLocaleString(undefined, short ? { month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' } : { dateStyle: 'medium', timeStyle: 'short' });
+  new Date(iso).toLocaleString(undefined, short ? { month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' } : { dateStyle: 'medium', timeStyle: 'short' });
 
 /**
  * What remains, from the time so far and the fraction done (the engine weighs each step by the
