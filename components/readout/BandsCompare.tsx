@@ -57,7 +57,8 @@ export function BandsCompare() {
   const r = useBandComparison(sketch, other?.sketch ?? null, dragging);
   return (
     <View style={styles.box} testID="readout-bands-compare">
-      <View style={styles.row}>
+      {/* The title wraps beside the button, never below it (the Readout pane is narrow when wide). */}
+      <View style={styles.head}>
         <Chip label="Compare with…" on={open} onPress={() => setOpen(!open)} />
         {other ? <Text style={styles.line}>with “{other.title}”</Text> : null}
       </View>
@@ -91,7 +92,8 @@ export function BandsCompare() {
 const styles = StyleSheet.create({
   box: { gap: space.xs, marginTop: space.xs },
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
-  line: { ...type.small, color: colors.ink },
+  head: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  line: { ...type.small, color: colors.ink, flexShrink: 1 },
   stale: { opacity: 0.5 },
   updating: { ...type.label, fontSize: 12, color: colors.accent },
   note: { ...type.small, fontSize: 12, color: colors.inkFaint },

@@ -22,7 +22,7 @@ export function SlateCanvas({ analysis, onFraming }: { analysis: Analysis; onFra
   const tool = useSlate((s) => s.tool);
   const fitRequest = useSlate((s) => s.fitRequest);
   const [size, setSize] = useState({ width: 0, height: 0 });
-  const pictures = useMemo(() => strandPictures(doc, analysis, view), [doc, analysis, view]);
+  const pictures = useMemo(() => strandPictures(doc, analysis, view, size), [doc, analysis, view, size]);
   const { gesture, surface, live } = useSlateGestures({ analysis, doc, pictures, onFraming });
 
   // A document from outside (opened, pasted, built) is fitted into the board once it has a size.

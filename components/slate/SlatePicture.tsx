@@ -6,7 +6,7 @@ import type { Analysis } from '@/shared/drawing/analyse';
 import type { Point } from '@/shared/drawing/point';
 import type { SlateDoc } from '@/lib/slate/record';
 import { HIT } from '@/lib/slate/drag-actions';
-import { screenSizes, toScreen, type StrandPicture } from '@/lib/slate/picture';
+import { badgePill, screenSizes, toScreen, type StrandPicture } from '@/lib/slate/picture';
 import type { Tool, View } from '@/lib/slate/slate-store';
 import { fonts, slate } from '@/constants/theme';
 import { BandLayer } from './BandLayer';
@@ -67,7 +67,7 @@ function Strand({ p }: { p: StrandPicture }) {
       {p.arrow ? <Arrow at={p.arrow.at} direction={p.arrow.direction} colour={p.colour} /> : null}
       {p.badge ? (
         <G>
-          <Rect x={p.badge.at.x - 15} y={p.badge.at.y - 10} width={30} height={20} rx={10} fill={slate.raised} stroke={p.colour} strokeWidth={1} strokeOpacity={p.badge.blackboard ? 0.5 : 1} />
+          <Rect x={p.badge.at.x - badgePill.width / 2} y={p.badge.at.y - badgePill.height / 2} width={badgePill.width} height={badgePill.height} rx={badgePill.height / 2} fill={slate.raised} stroke={p.colour} strokeWidth={1} strokeOpacity={p.badge.blackboard ? 0.5 : 1} />
           <SvgText x={p.badge.at.x} y={p.badge.at.y + 4} fontSize={11} fontFamily={fonts.mono} fill={p.badge.blackboard ? slate.chalkDim : p.colour} textAnchor="middle">{p.badge.text}</SvgText>
         </G>
       ) : null}

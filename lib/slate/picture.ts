@@ -30,6 +30,22 @@ export interface StrandPicture {
 /** Sizes on screen, whatever the zoom (pixels). */
 export const screenSizes = { stroke: 3.4, gap: 8, badgeOffset: 30, labelOffset: 15 };
 
+/** The framing badge's pill on the Slate (px). */
+export const badgePill = { width: 30, height: 20 };
+
+type Board = { width: number; height: number };
+
+/**
+ * Where the badge goes so that all of its pill is on the board: beside an arrow on the
+ * drawing's edge it would be cut off (the fit's margin is smaller than the badge's reach, so
+ * that a short board still shows the drawing large).
+ */
+const onBoard = (at: Point, board: Board | undefined): Point => {
+  if (!board) return at;
+  const within = (v: number, half: number, size: number) => Math.min(Math.max(v, half), size - half);
+  return { x: within(at.x, badgePill.width / 2, board.width), y: within(at.y, badgePill.height / 2, board.height) };
+};
+
 const fixed = (x: number) => Math.round(x * 10) / 10;
 
 /** Component colour: chosen by hand, else by drawing rank. */
@@ -56,7 +72,8 @@ export function diagramNumbers(doc: SlateDoc, a: Analysis): number[] | undefined
   return a.diagram?.componentIds.map((id) => numbers.get(id) ?? 0);
 }
 
-export function strandPictures(doc: SlateDoc, a: Analysis, view: View): StrandPicture[] {
+/** `board`: the Slate's size, which keeps the framing badges on it. */
+export function strandPictures(doc: SlateDoc, a: Analysis, view: View, board?: Board): StrandPicture[] {
   const numbers = drawingNumbers(doc);
   const screen = (p: Point) => toScreen(view, p);
   const pathData = (points: readonly Point[]) => points.map((p, i) => `${i ? 'L' : 'M'}${fixed(screen(p).x)} ${fixed(screen(p).y)}`).join(' ');
@@ -75,21 +92,15 @@ export function strandPictures(doc: SlateDoc, a: Analysis, view: View): StrandPi
       pieces: visiblePieces(path.points, path.closed, gaps.filter((g) => g.component === path.id)).map(pathData),
       arrow: arrow && at ? { at, direction: arrow.direction } : null,
       // Beside the arrow, off to its left as it travels.
-      badge: arrow && at ? { at: { x: at.x + arrow.direction.y * d, y: at.y - arrow.direction.x * d }, text: framingText(c.framing), blackboard: c.framing === null } : null,
+      badge: arrow && at ? { at: onBoard({ x: at.x + arrow.direction.y * d, y: at.y - arrow.direction.x * d }, board), text: framingText(c.framing), blackboard: c.framing === null } : null,
       label: arrow && at && number ? { at: { x: at.x - arrow.direction.y * l, y: at.y + arrow.direction.x * l }, text: String(number) } : null,
       ends: path.closed || path.points.length === 0 ? [] : [screen(path.points[0]), screen(path.points[path.points.length - 1])],
     };
   });
 }
 
-/**
- * Room round a fitted drawing: a framing badge sits badgeOffset beside an arrow that may lie on
- * the drawing's edge, and its pill is 30 px wide (SlatePicture), so less would cut it off.
- */
-const FIT_MARGIN = screenSizes.badgeOffset + 18;
-
 /** A view that fits every point into a box of the given size with a margin, at most 4x. */
-export function fitView(points: readonly Point[], width: number, height: number, margin = FIT_MARGIN): View {
+export function fitView(points: readonly Point[], width: number, height: number, margin = 36): View {
   if (points.length === 0 || width <= 0 || height <= 0) return { k: 1, x: 0, y: 0 };
   const xs = points.map((p) => p.x);
   const ys = points.map((p) => p.y);

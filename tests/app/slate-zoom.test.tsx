@@ -7,7 +7,7 @@
 import { seededRng } from '@/shared/knot/moves/random';
 import { analyse } from '@/shared/drawing/analyse';
 import { fromBraid } from '@/shared/knot/braid';
-import { fitView, strandPictures, toWorld } from '@/lib/slate/picture';
+import { badgePill, fitView, strandPictures, toWorld } from '@/lib/slate/picture';
 import { docFromDiagram } from '@/lib/slate/record';
 import { useSlate } from '@/lib/slate/slate-store';
 import { fitBaseOf, pinchedView, refit, wheelView, zoomAbout } from '@/lib/slate/zoom';
@@ -89,15 +89,18 @@ test('the Slate: a new width refits, its reverse gives the first fit back; a new
 });
 
 test('a fitted drawing keeps every framing badge on the board, at phone and wide sizes', () => {
-  // The badge's pill is 30 x 20 px round its centre (components/slate/SlatePicture.tsx); an arrow
-  // on the drawing's edge put it partly off a phone's board before.
+  // An arrow on the drawing's edge put the badge's pill partly off a phone's board.
   const words = [[1, 1, 1], [1, -2, 1, -2], [1, 1], [1, 2, 1, 2, 1, 2, 1, 2], [-1, -1, -1, -1, -1], [1, 2, 3, 1, 2, 3]];
   for (const w of words) {
     const doc = docFromDiagram(fromBraid(w));
     const points = doc.sketch.components.flatMap((c) => c.points);
     for (const [width, height] of [[390, 388], [390, 230], [812, 786]]) {
-      const badges = strandPictures(doc, analyse(doc.sketch), fitView(points, width, height)).map((p) => p.badge!.at);
-      expect(badges.every((b) => b.x - 15 >= 0 && b.x + 15 <= width && b.y - 10 >= 0 && b.y + 10 <= height)).toBe(true);
+      const board = { width, height };
+      const pictures = strandPictures(doc, analyse(doc.sketch), fitView(points, width, height), board);
+      const [w, h] = [badgePill.width / 2, badgePill.height / 2];
+      expect(pictures.every(({ badge: b }) => b!.at.x - w >= 0 && b!.at.x + w <= width && b!.at.y - h >= 0 && b!.at.y + h <= height)).toBe(true);
+      // Still beside its arrow: at most the badge's offset plus a pill away.
+      expect(pictures.every(({ badge: b, arrow }) => Math.hypot(b!.at.x - arrow!.at.x, b!.at.y - arrow!.at.y) <= 30 + w)).toBe(true);
     }
   }
 });

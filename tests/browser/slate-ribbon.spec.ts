@@ -89,6 +89,16 @@ test('another band on the same strands, compared with the first sketch', async (
   const verdict = expected.verdict === 'differ' ? 'Their classes differ: the surfaces are not isotopic rel boundary.' : 'Equal classes (no conclusion).';
   await page.getByTestId('readout-bands-verdict').getByText(verdict).waitFor();
   await moreReadout(page);
-  await shoot(page, 'slate-ribbon-compare', () => page.getByTestId('readout-bands-verdict').scrollIntoViewIfNeeded());
+  // At both sizes the other sketch's title stays beside the button, wrapping there if it must.
+  const besideButton = async () => {
+    const compare = page.getByTestId('readout-bands-compare');
+    const [button, title] = [await compare.getByRole('button', { name: 'Compare with…' }).boundingBox(), await compare.getByText('with “Square knot, disk A”').boundingBox()];
+    expect(title!.x).toBeGreaterThan(button!.x + button!.width);
+    expect(title!.y).toBeLessThan(button!.y + button!.height);
+  };
+  await shoot(page, 'slate-ribbon-compare', async () => {
+    await page.getByTestId('readout-bands-verdict').scrollIntoViewIfNeeded();
+    await besideButton();
+  });
   keep('slate-ribbon-compare');
 });
