@@ -28,7 +28,10 @@ function ScopePicker({ value, onChange }: { value: RunScope; onChange: (s: RunSc
   );
 }
 
-/** `formWhere` says where the start form is ("below", "on the right"); `hideEmpty` when the form leads anyway. */
+/**
+ * `formWhere` says where the start form is ("below", "on the right"); `hideEmpty` when the form
+ * leads anyway: then no runs is one line, not the invitation (a blank list pane looked broken).
+ */
 export function RunsOverview({ formWhere, hideEmpty = false }: { formWhere: string; hideEmpty?: boolean }) {
   const [scope, setScope] = useState<RunScope>('mine');
   const runs = useRunList(scope);
@@ -37,6 +40,7 @@ export function RunsOverview({ formWhere, hideEmpty = false }: { formWhere: stri
     <>
       <ScopePicker value={scope} onChange={setScope} />
       {runs.isError ? <Banner tone="error">{runs.error.message}</Banner> : null}
+      {runs.data && runs.data.length === 0 && hideEmpty ? <Text style={styles.none}>{scope === 'mine' ? 'No runs yet.' : 'No runs in this group yet.'}</Text> : null}
       {runs.data && runs.data.length === 0 && !hideEmpty ? (
         <EmptyState art={<RunsIcon color={colors.inkFaint} size={40} />} title={scope === 'mine' ? 'No runs yet' : 'No runs in this group yet'}>
           Start a run {formWhere}, or from a sketch: Khovanov homology over the integers, Q or F_p, or a cable sweep over
@@ -54,4 +58,5 @@ const styles = StyleSheet.create({
   chosen: { backgroundColor: colors.ink, borderColor: colors.ink },
   scopeText: { ...type.small, color: colors.ink, flexShrink: 1 },
   chosenText: { color: colors.onAccent, fontFamily: fonts.medium },
+  none: { ...type.small, color: colors.inkMuted },
 });
