@@ -5,7 +5,7 @@
 // the simplified complex), or why it was not computed (the crossing limits).
 import { StyleSheet, Text, View } from 'react-native';
 import type { SurfaceClass } from '@/shared/knot/bands';
-import { CLASS_CROSSINGS, LOCAL_CLASS_CROSSINGS } from '@/shared/knot/bands';
+import { CLASS_CROSSINGS, LOCAL_CLASS_CROSSINGS, LOCAL_CLASS_EDGES } from '@/shared/knot/bands';
 import { colors, fonts, type } from '@/constants/theme';
 import type { ClassAnswer } from './local-bands';
 
@@ -35,7 +35,7 @@ export function SurfaceClassText({ surface }: { surface: ClassAnswer }) {
         {c.basis === 'cube'
           ? "Basis: enhanced states of the band drawing's code (resolution per crossing; x-circles by smallest edge label)."
           : "Basis: generators g0, g1, … of the code's complex simplified by the local algorithm (numbered in its order, for this drawing's bands only)."}{' '}
-        Cube of resolutions up to {CLASS_CROSSINGS} crossings, local algorithm up to {LOCAL_CLASS_CROSSINGS}.
+        Cube of resolutions up to {CLASS_CROSSINGS} crossings; past it the local algorithm, up to {LOCAL_CLASS_CROSSINGS} crossings and bands on {LOCAL_CLASS_EDGES} edges.
       </Text>
     </View>
   );

@@ -11,7 +11,7 @@ import { pretzelLink } from '@/shared/knot/families';
 import { seededRng } from '@/shared/knot/moves';
 import { PDCode } from '@/shared/knot/pd';
 import { F2Echelon } from '@/shared/linalg/f2';
-import { disks946, p33m3, ribbon, trefoil } from './bands-fixtures';
+import { disks946, p33m3, ribbon, summed, trefoil } from './bands-fixtures';
 import { movedAway } from './bands-moved';
 import { scramble } from './scramble';
 
@@ -125,5 +125,16 @@ describe('past the cube: surfaceClass and compareSurfaces take the local route',
     const p = { pd, unknots: 0, saddles: [{ a: 1, b: 2 }] };
     expect(() => surfaceClass(p, { ring: 'Z' })).toThrow('the class is computed on the cube of resolutions, up to 14 crossings (over F2 further, by the local algorithm); this diagram has 16');
     expect(() => surfaceClass(p, { localCrossings: 15 })).toThrow('the class is computed on the cube of resolutions, up to 14 crossings and by the local algorithm up to 15; this diagram has 16');
+    const four = summed(new Array<BandPresentation>(4).fill(ribbon[3].presentation));
+    expect(() => surfaceClass(four)).toThrow('the class is computed on the cube of resolutions, up to 14 crossings and by the local algorithm up to 30; this diagram has 36');
+    expect(() => surfaceClass(four, { localCrossings: 40 })).toThrow('past 14 crossings the class is computed by the local algorithm with the bands\' edges cut open, up to 6 edges; these bands touch 8');
   });
+
+  it('a connected sum of ribbon disks, one band each, is a ribbon disk with a nonzero class', () => {
+    // A boundary connected sum of disks is a disk; its class is nonzero at q = 1 (Levine and
+    // Zemke, arXiv 1903.01546). 9_46 # 9_46 # 9_46: 27 crossings, three bands on six edges.
+    const p = summed([ribbon[3].presentation, ribbon[3].presentation, ribbon[3].presentation]);
+    expect(bandCertificate(p)).toMatchObject({ ribbon: true, bands: 3 });
+    expect(surfaceClass(p)).toMatchObject({ basis: 'local', h: 0, q: 1, zero: false });
+  }, 120_000);
 });

@@ -22,10 +22,14 @@ export type { EnhancedState } from './cube-levels';
 export const CLASS_CROSSINGS = 14;
 
 /**
- * The local algorithm's default crossing limit for the class over F2 (class-local.ts), past the
- * cube's. Measured in tests/bench/bands.bench.ts; see LOCAL_CLASS_NOTE there.
+ * The local route's limits (class-local.ts, over F2), past the cube's: crossings, and edges the
+ * bands touch (each cut open for the whole computation, two open ends an edge, so the complex
+ * grows with them). Measured in tests/bench/bands.bench.ts: 40-crossing pretzels with one band
+ * in about 3 s; three bands on six edges (9_46^#3, 27 crossings) in about 3 s and 0.3 GB; four
+ * bands on eight edges (9_46^#4) took 28 s and 1 GB before the saddles.
  */
-export const LOCAL_CLASS_CROSSINGS = 40;
+export const LOCAL_CLASS_CROSSINGS = 30;
+export const LOCAL_CLASS_EDGES = 6;
 
 /** How the class was computed, which fixes the basis of its coordinates. */
 export type ClassBasis = 'cube' | 'local';
@@ -76,6 +80,8 @@ export interface ClassOptions {
   maxCrossings?: number;
   /** Past the cube's limit, the local route's (over F2), default LOCAL_CLASS_CROSSINGS; 0 turns it off. */
   localCrossings?: number;
+  /** The local route's limit on the edges the bands touch, default LOCAL_CLASS_EDGES. */
+  localEdges?: number;
   /** The Khovanov unlink check's limit (certificate.ts). */
   unlinkCrossings?: number;
   /** Default F2. */
@@ -126,6 +132,11 @@ function classesOf(pd: PDCode, unknots: number, bands: Saddle[][], opts: ClassOp
   if (basis === 'local' && pd.length > localLimit) {
     const local = localLimit > cubeLimit ? ` and by the local algorithm up to ${localLimit}` : ring === 'Z' ? ' (over F2 further, by the local algorithm)' : '';
     throw new BandError(`the class is computed on the cube of resolutions, up to ${cubeLimit} crossings${local}; this diagram has ${pd.length}`);
+  }
+  const edges = new Set(bands.flat().flatMap(({ a, b }) => [a, b])).size;
+  const edgeLimit = opts.localEdges ?? LOCAL_CLASS_EDGES;
+  if (basis === 'local' && edges > edgeLimit) {
+    throw new BandError(`past ${cubeLimit} crossings the class is computed by the local algorithm with the bands' edges cut open, up to ${edgeLimit} edges; these bands touch ${edges}`);
   }
   const presentations = bands.map((saddles) => ({ pd, unknots, saddles }));
   const stages = presentations.map(bandStages);
