@@ -6,6 +6,9 @@ import { spawn, spawnSync } from 'node:child_process';
 import path from 'node:path';
 import { answerLine, jsonInteger } from '@/server/cli/requests';
 import { fromBraid } from '@/shared/knot/braid';
+import { seededRng } from '@/shared/knot/moves';
+import { disks946, p33m3 } from '@/tests/shared/bands-fixtures';
+import { movedAway } from '@/tests/shared/bands-moved';
 
 const bin = path.join(__dirname, '../../server/cli/bin.mjs');
 const run = (args: string[], input = '') => spawnSync(process.execPath, [bin, ...args], { input, encoding: 'utf8', timeout: 60_000 });
@@ -192,6 +195,17 @@ describe('bands in requests', () => {
     const a = ask({ pd: p946, bands: [[2, 12]], compareBands: [[6, 14]], compute: ['surfaceClass'] });
     expect(a.surfaceClass).toMatchObject({ h: 0, q: 1, zero: false, compare: { verdict: 'differ', other: { h: 0, q: 1, zero: false } } });
     expect(a.surfaceClass.support[0]).toEqual({ smoothing: expect.stringMatching(/^[01]{9}$/), x: expect.any(Array) });
+  });
+
+  it('answers "surfaceClass" past 14 crossings on the local route: 9_46 moved away from its bands, the disks still differ', () => {
+    // Moves away from the bands induce an isomorphism carrying both classes (Jacobsson 2004, arXiv
+    // math/0206303), so they still differ (Sundberg and Swann, arXiv 2103.01438).
+    const { pd, bands } = movedAway(p33m3.pd, [disks946.first[0].saddles, disks946.second[0].saddles], 6, seededRng(18));
+    expect(pd.length).toBeGreaterThan(14);
+    const pairs = (list: { a: number; b: number }[]) => list.map(({ a, b }) => [a, b]);
+    const a = ask({ pd, bands: pairs(bands[0]), compareBands: pairs(bands[1]), compute: ['surfaceClass'] });
+    expect(a.surfaceClass).toMatchObject({ basis: 'local', h: 0, q: 1, zero: false, compare: { verdict: 'differ', other: { basis: 'local', q: 1, zero: false } } });
+    expect(a.surfaceClass.support[0]).toEqual({ generator: expect.any(Number) });
   });
 
   it('answers "surfaceClass" over Z with "ring": "Z": the disks of 9_46 differ up to sign, each class primitive (tests/shared/bands-class.test.ts)', () => {

@@ -24,9 +24,11 @@ export const CLASS_CROSSINGS = 14;
 /**
  * The local route's limits (class-local.ts, over F2), past the cube's: crossings, and edges the
  * bands touch (each cut open for the whole computation, two open ends an edge, so the complex
- * grows with them). Measured in tests/bench/bands.bench.ts: 40-crossing pretzels with one band
- * in about 3 s; three bands on six edges (9_46^#3, 27 crossings) in about 3 s and 0.3 GB; four
- * bands on eight edges (9_46^#4) took 28 s and 1 GB before the saddles.
+ * grows with them). Measured in tests/bench/bands.bench.ts (load about 4): a 40-crossing pretzel
+ * with one band in 0.3 s; three bands on six edges (9_46^#3, 27 crossings) in 0.8 s, peak 0.3 GB;
+ * four bands on eight edges (9_46^#4, at load 12) took 68 s and 2.5 GB, five ran out of memory. Crossings
+ * are limited below the pretzels' 40 since other diagrams give wider tangles (the unlink check's
+ * Kh of 30-crossing diagrams took 11 s to 190 s: certificate.ts).
  */
 export const LOCAL_CLASS_CROSSINGS = 30;
 export const LOCAL_CLASS_EDGES = 6;
