@@ -25,7 +25,7 @@ import { addInOrder } from '../../khovanov/parts';
 import { tensor } from '../../khovanov/tensor';
 import { F2Echelon, F2Vector, kernel, parity } from '../../linalg/f2';
 import { primeField } from '../../linalg/ring';
-import { orient, PDCode } from '../pd';
+import { orient, PDCode, withLabelAt } from '../pd';
 import { cycleCount, Stage } from './saddle';
 import { Saddle } from './types';
 
@@ -46,11 +46,15 @@ interface Cut {
 }
 
 /** The crossings of `pd` with the edges `cut` opened at their heads, through the local algorithm. */
-export function cutTangle(pd: PDCode, cut: readonly number[]): Cut {
+function cutTangle(pd: PDCode, cut: readonly number[]): Cut {
   const o = orient(pd);
   const fresh = Math.max(...pd.flat()) + 1;
   const headEnd = new Map(cut.map((l, k) => [l, fresh + k]));
-  const code = pd.map((x, c) => x.map((l, p) => (headEnd.has(l) && o.head.get(l)!.crossing === c && o.head.get(l)!.position === p ? headEnd.get(l)! : l)) as unknown as PDCode[number]);
+  let code = pd;
+  for (const [l, end] of headEnd) {
+    const { crossing, position } = o.head.get(l)!;
+    code = code.map((x, c) => (c === crossing ? withLabelAt(x, position, end) : x));
+  }
   const empty = new TangleComplex(F2, []);
   empty.addObject({ mat: empty.matchingId([]), shift: 0, height: 0 });
   return { tangle: addInOrder(empty, code, crossingOrder(pd), () => {}), headEnd, nMinus: o.signs.filter((s) => s < 0).length };
@@ -61,15 +65,15 @@ function closing(cut: Cut, start: Stage, stage: Stage): Matching {
   const ends = cut.tangle.boundary;
   const position = new Map(ends.map((l, k) => [l, k]));
   const partner = new Array<number>(ends.length).fill(-1);
-  for (const [l, end] of cut.headEnd) {
+  for (const l of cut.headEnd.keys()) {
     const h = stage.heads.get(l)!;
     // The head slot belongs, in the start's code, to the edge whose head end it now is.
-    const m = start.pd[h.crossing][h.position];
-    const [u, v] = [position.get(l)!, position.get(cut.headEnd.get(m) ?? end)!];
+    const end = cut.headEnd.get(start.pd[h.crossing][h.position]);
+    if (end === undefined) throw new Error('internal: a band moved the head of an edge that was not cut');
+    const [u, v] = [position.get(l)!, position.get(end)!];
     partner[u] = v;
     partner[v] = u;
   }
-  if (partner.includes(-1)) throw new Error('internal: a band moved the head of an edge that was not cut');
   return partner;
 }
 
