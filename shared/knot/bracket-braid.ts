@@ -100,17 +100,17 @@ export function sweep(word: BraidWord, strands: number, precision: Precision = D
 }
 
 /**
- * One letter sigma_(k+1)^(+-1): only e_k's image changes. First its own entries times
- * -A^(-+3), one slot down (or up) and negated, which only moves the row's base and flips its
- * sign, and its window widened to take its sources; then every other matching s, in memory
- * order, times A^(-+1) into its image: two exponents apart, so one slot lower, the same or one
- * higher; last the image's bounds, measured where near the limit, and windows narrowed.
+ * One letter sigma_(k+1)^(+-1): only e_k's image changes. Each row t of the image is first
+ * its own entries times -A^(-+3), one slot down (or up) and negated, which only moves the
+ * row's base and flips its sign; its window is widened to take its sources, and then each
+ * source s times A^(-+1) is added in: two exponents apart, so one slot lower, the same or one
+ * higher. Row by row, so that t stays in the cache while its sources are read; last its bound,
+ * measured where near the limit, and its window narrowed.
  */
 function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: number): void {
   const { lo, hi, base, neg } = b;
-  const { size, cls } = tl;
+  const { cls } = tl;
   const [image, from, sources] = [tl.image[k], tl.from[k], tl.sources[k]];
-  const target = tl.target.subarray(k * size, (k + 1) * size);
   const shift = up ? 1 : -1;
   for (let j = 0; j < image.length; j++) {
     const t = image[j];
@@ -135,17 +135,15 @@ function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: nu
     if (base[t] + low < t * b.stride || base[t] + high >= (t + 1) * b.stride) recentre(b, t, low, high);
     lo[t] = low;
     hi[t] = high;
-  }
-  for (const limb of b.limbs) {
-    for (let s = 0; s < size; s++) {
-      const t = target[s];
-      if (t === s || lo[s] > hi[s]) continue;
-      const into = base[t] + lo[s] + slot(cls, s, t, up);
-      if (neg[s] === neg[t]) addInto(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1);
-      else subtractFrom(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1);
+    for (const limb of b.limbs) {
+      for (let x = from[j]; x < from[j + 1]; x++) {
+        const s = sources[x];
+        if (lo[s] > hi[s]) continue;
+        const into = base[t] + lo[s] + slot(cls, s, t, up);
+        if (neg[s] === neg[t]) addInto(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1);
+        else subtractFrom(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1);
+      }
     }
-  }
-  for (const t of image) {
     // Loose bounds near the limit would force carries or rescans.
     for (let r = 0; r < b.limbs.length; r++) if (b.peaks[r][t] >= limit / 64) b.peaks[r][t] = rowPeak(b, b.limbs[r], t);
     trim(b, t);

@@ -59,12 +59,47 @@ export function temperleyLieb(n: number): TemperleyLieb {
       target[k * total + s] = t;
     }
   }
-  const closure = new Uint8Array(size);
-  for (let s = 0; s < size; s++) closure[s] = closureLoops(points, s * 2 * n, n);
-  const tl: TemperleyLieb = { strands: n, size, target, cls, closureLoops: closure, image: [], from: [], sources: [] };
+  const tl = renumbered(points, n, target, cls);
   for (let k = 0; k + 1 < n; k++) group(tl, k);
   cache.set(n, tl);
   return tl;
+}
+
+/**
+ * The tables with the matchings renumbered by their bottom halves (fewest arcs first, so the
+ * identity stays 0), then their top halves. e_k on top changes the bottom half only when it
+ * joins two through-strands, so most of a letter's sums stay within a block of rows that share
+ * the bottom half, and the sweep's reads and writes stay near each other in memory.
+ */
+function renumbered(points: Int8Array, n: number, target: Int32Array, cls: Uint8Array): TemperleyLieb {
+  const size = cls.length;
+  const key = (s: number, side: number) => {
+    let arcs = 0;
+    let code = 0;
+    for (let i = 0; i < n; i++) {
+      const p = points[2 * n * s + side + i] - side;
+      arcs += p >= 0 && p < n && p > i ? 1 : 0;
+      code = 3 * code + (p < 0 || p >= n ? 0 : p > i ? 1 : 2);
+    }
+    return arcs * 3 ** n + code;
+  };
+  const bottom = Float64Array.from({ length: size }, (_, s) => key(s, 0));
+  const top = Float64Array.from({ length: size }, (_, s) => key(s, n));
+  const order = Array.from({ length: size }, (_, s) => s).sort((a, b) => bottom[a] - bottom[b] || top[a] - top[b]);
+  const rank = new Int32Array(size);
+  order.forEach((s, i) => (rank[s] = i));
+  const moved = new Int32Array(target.length);
+  for (let k = 0; k + 1 < n; k++) for (let s = 0; s < size; s++) moved[k * size + rank[s]] = rank[target[k * size + s]];
+  return {
+    strands: n,
+    size,
+    target: moved,
+    cls: Uint8Array.from(order, (s) => cls[s]),
+    closureLoops: Uint8Array.from(order, (s) => closureLoops(points, s * 2 * n, n)),
+    image: [],
+    from: [],
+    sources: [],
+  };
 }
 
 /** Catalan(n), the number of basis matchings of TL_n. */
