@@ -72,7 +72,7 @@ function cheaperOrder(pd: PDCode, greedy = greedyOrder(pd), score: OrderScore = 
 }
 
 /** A dense polynomial in A: sum of c[i] A^(off + i). */
-interface Dense {
+export interface Dense {
   off: number;
   c: bigint[];
 }
@@ -122,7 +122,7 @@ export function greedyOrder(pd: PDCode): number[] {
 }
 
 // p / (-A^2 - A^-2) = -A^2 p / (1 + A^4); exact because every state closed at least one loop.
-function divideByLoop(p: Dense): Dense {
+export function divideByLoop(p: Dense): Dense {
   const c = p.c;
   const q = new Array<bigint>(Math.max(c.length - 4, 0)).fill(0n);
   for (let i = 0; i < q.length; i++) q[i] = c[i] - (i >= 4 ? q[i - 4] : 0n);
