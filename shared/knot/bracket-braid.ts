@@ -9,7 +9,7 @@
 // letter is one long sum per row of the module rather than one per entry. Coefficients are
 // exact limbs of doubles with lazy carries, as in bracket-sum.ts.
 
-import { bracket, divideByLoop, greedyOrder, loopFactor } from './bracket';
+import { bracket, Dense, divideByLoop, greedyOrder, loopFactor } from './bracket';
 import { BraidWord, braidStrands, checkBraid, fromBraid } from './braid';
 import { carry, DOUBLES, Precision } from './bracket-sum';
 import { scoreOrder } from './contraction-order';
@@ -272,7 +272,9 @@ function quantumDimension(p: number): Laurent {
 }
 
 /** A Laurent polynomial written densely from its lowest exponent. */
-function dense(p: Laurent): { off: number; c: bigint[] } {
-  const { min, max } = p.span() ?? { min: 0, max: 0 };
-  return { off: min, c: Array.from({ length: max - min + 1 }, (_, i) => p.coefficient(min + i)) };
+function dense(p: Laurent): Dense {
+  const { min, max } = p.span() ?? { min: 0, max: -1 };
+  const c = new Array<bigint>(max - min + 1).fill(0n);
+  for (const [e, x] of p.toPairs()) c[e - min] = x;
+  return { off: min, c };
 }
