@@ -152,7 +152,7 @@ export function answer(r: Request): Answer {
     out.bands = { after: c.after, components: c.components, bands: c.bands, unlink: c.unlink, chi: c.chi, genusBound: c.genusBound, ribbon: c.ribbon };
   }
   if (wanted.has('surfaceClass')) {
-    // The crossing limit is checked before any work (surfaceClass, CLASS_CROSSINGS).
+    // The limits are checked before any work (surfaceClass: CLASS_CROSSINGS, LOCAL_CLASS_CROSSINGS, LOCAL_CLASS_EDGES).
     const ring = r.ring === 'Z' ? 'Z' : 'F2';
     if (r.compareBands) {
       const cmp = compareSurfaces(d.pd, d.unknots, presentation.saddles, saddles(r.compareBands), { ring });
