@@ -9,7 +9,7 @@ import { BandError, BandPresentation, compareOnDiagram, surfaceClass, surfaceCla
 import { Chain, Fingers, undoFingers } from '@/shared/knot/bands/carry';
 import { CubeGenerator } from '@/shared/knot/bands/reidemeister-maps';
 import { diagram, Diagram } from '@/shared/knot/diagram';
-import { faces, pushAcross, seededRng } from '@/shared/knot/moves';
+import { applyR3, bigons, faces, kinks, pushAcross, seededRng, triangles } from '@/shared/knot/moves';
 import { orient } from '@/shared/knot/pd';
 import { F2Echelon, parity } from '@/shared/linalg/f2';
 import { connectedSum, mirror } from '@/shared/knot/families';
@@ -31,7 +31,32 @@ function withFingers(d: Diagram, count: number, seed: number, keep: readonly num
   return out;
 }
 
-// pushAcross appends its two crossings and keeps the others in place.
+/**
+ * Fingers, then random R3 moves (which keep every crossing's index), until a crossing of the
+ * knot lies inside a finger: no R1 or R2 of finger crossings alone is left, yet fingers remain.
+ * Searched over seeds from `seed`; the R3s avoid the edges in `keep`.
+ */
+function crossingInside(d: Diagram, seed: number, keep: readonly number[] = []): Diagram {
+  const n = d.pd.length;
+  const finger = (i: number) => i >= n;
+  // The kept edges by their head slots, which moves away from them leave in place.
+  const heads = orient(d.pd).head;
+  const slots = keep.map((l) => heads.get(l)!);
+  for (let s = seed; s < seed + 200; s++) {
+    const rnd = seededRng(s);
+    let x = withFingers(d, 1 + (s % 2), s, keep);
+    for (let k = 0; k < 4; k++) {
+      const kept = slots.map((h) => x.pd[h.crossing][h.position]);
+      const options = triangles(x).filter((t) => t.some((c) => finger(c.crossing)) && t.every((c) => x.pd[c.crossing].every((l) => !kept.includes(l))));
+      if (!options.length) break;
+      x = applyR3(x, options[Math.floor(rnd() * options.length)]);
+      if (!kinks(x).some(finger) && !bigons(x).some((b) => b.crossings.every(finger))) return x;
+    }
+  }
+  throw new Error('no finger with a crossing inside found');
+}
+
+// pushAcross appends its two crossings and keeps the others in place (applyR3 keeps all).
 const over = (d: Diagram, fingered: Diagram): Fingers => ({ common: d.pd, of: fingered.pd.map((_, i) => (i < d.pd.length ? i : -1)) });
 const fingeredPresentation = (p: BandPresentation, count: number, seed: number): { presentation: BandPresentation; fingers: Fingers } => {
   const d = withFingers(diagram(p.pd), count, seed, p.saddles.flatMap((s) => [s.a, s.b]));
@@ -73,6 +98,16 @@ describe('the fingers taken back', () => {
     expect(cycles).toBeGreaterThan(0);
   });
 
+  it.each([1, 300])('a crossing of the knot inside a finger: taken back with an R3, still a chain map of bidegree (0, 0) (search from seed %i)', (seed) => {
+    const inside = crossingInside(trefoil, seed);
+    const fingers = over(trefoil, inside);
+    // No R1 or R2 of finger crossings alone: the R3 is needed.
+    const finger = (i: number) => fingers.of[i] < 0;
+    expect([...kinks(inside).filter(finger), ...bigons(inside).filter((b) => b.crossings.every(finger))]).toEqual([]);
+    const f = asMap(undoFingers(inside.pd, fingers));
+    expect(chainMapFailures(f, cubeComplex(inside.pd), cubeComplex(trefoil.pd))).toEqual([]);
+  });
+
   test('a code that is not the knot drawing without its fingers is refused', () => {
     const fingered = withFingers(trefoil, 1, 9);
     const fig8 = diagram([[4, 2, 5, 1], [8, 6, 1, 5], [6, 3, 7, 4], [2, 7, 3, 8]]);
@@ -98,6 +133,15 @@ describe('classes on the knot diagram', () => {
       expect({ ...carried, basisSize: 0 }).toEqual({ ...plain, basisSize: 0 });
       expect(carried.basisSize).toBe(plain.basisSize);
     }
+  });
+
+  it.each([1, 300])('9_46, first disk, a crossing of the knot inside a finger away from the band: the class carried down is the class without it (search from seed %i)', (seed) => {
+    const inside = crossingInside(diagram(first.pd), seed, first.saddles.flatMap((x) => [x.a, x.b]));
+    // assemble renumbers the edges; the band's edges are untouched, so they keep their head slots.
+    const heads = orient(first.pd).head;
+    const label = (l: number) => inside.pd[heads.get(l)!.crossing][heads.get(l)!.position];
+    const presentation = { pd: inside.pd, unknots: 0, saddles: first.saddles.map(({ a, b }) => ({ a: label(a), b: label(b) })) };
+    expect(surfaceClassOn(presentation, over(diagram(first.pd), inside))).toEqual(surfaceClass(first));
   });
 
   test("9_46's two standard disks, each with its own fingers: still different classes, over F2 and Z", () => {

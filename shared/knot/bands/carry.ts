@@ -3,14 +3,17 @@
 // undo the fingers' R1 and R2 moves (Bar-Natan, "Khovanov's homology for tangles and
 // cobordisms", 2005, arXiv math/0410495, section 4.3: reidemeister-maps.ts), then the renaming
 // onto that diagram's code (renaming.ts). A finger lies in a thin strip along its band's core:
-// the face at its tip is a bigon (a strand it passes) or a monogon (a half twist), so it is
-// taken back from the tip one move at a time. Every move removes finger crossings only, so the
-// isotopy stays inside the strips and the diagram's own crossings never move.
+// the face at its tip is a bigon (a strand it passes), a monogon (a half twist) or a triangle (a
+// crossing of the knot inside the strip: R3, reidemeister3.ts), so it is taken back from the tip
+// one move at a time (a few R3s in a row where crossings of the knot lie deeper inside). Every
+// move has a finger crossing, so the isotopy stays near the strips and the diagram's own
+// crossings are never removed.
 
 import { diagram, Diagram } from '../diagram';
-import { bigons, kinks, removeBigon, removeKink } from '../moves';
+import { applyR3, bigons, kinks, removeBigon, removeKink, triangles } from '../moves';
 import { PDCode } from '../pd';
 import { CubeGenerator, reidemeisterMaps, Term } from './reidemeister-maps';
+import { reidemeister3Map } from './reidemeister3';
 import { renaming } from './renaming';
 import { BandError } from './types';
 
@@ -40,38 +43,74 @@ export function applyMap(f: (g: CubeGenerator) => Term[], c: Chain): Chain {
   return out;
 }
 
-/** One removal: the code before and after it and the crossings it took out (indices before). */
-export interface FingerMove {
-  readonly big: PDCode;
-  readonly small: PDCode;
-  readonly moved: readonly number[];
+type GeneratorMap = (g: CubeGenerator) => Term[];
+
+// The R1 and R2 removals of finger crossings available in d.
+function removals(d: Diagram, finger: (i: number) => boolean): { moved: number[]; next: () => Diagram }[] {
+  return [
+    ...kinks(d).filter(finger).map((k) => ({ moved: [k], next: () => removeKink(d, k) })),
+    ...bigons(d).filter((b) => b.crossings.every(finger)).map((b) => ({ moved: [...b.crossings].sort((p, q) => p - q), next: () => removeBigon(d, b) })),
+  ];
+}
+
+/** How many R3 moves in a row may free a removal: a finger's tip past the knot crossings inside it. */
+const R3_DEPTH = 3;
+
+// Up to `depth` R3 moves on triangles with a finger corner after which an R1 or R2 of finger
+// crossings is possible, with their chain maps (triangles whose map reidemeister3.ts refuses are
+// passed over); the shortest such sequence, depth first.
+function slides(d: Diagram, finger: (i: number) => boolean, depth: number): { maps: GeneratorMap[]; after: Diagram } | undefined {
+  for (let k = 1; k <= depth; k++) {
+    const found = slideExactly(d, finger, k);
+    if (found) return found;
+  }
+  return undefined;
+}
+
+function slideExactly(d: Diagram, finger: (i: number) => boolean, k: number): { maps: GeneratorMap[]; after: Diagram } | undefined {
+  for (const t of triangles(d).filter((tri) => tri.some((c) => finger(c.crossing)))) {
+    const after = applyR3(d, t);
+    const rest = k === 1 ? (removals(after, finger).length > 0 ? { maps: [], after } : undefined) : slideExactly(after, finger, k - 1);
+    if (!rest) continue;
+    try {
+      return { maps: [reidemeister3Map(d.pd, after.pd, t), ...rest.maps], after: rest.after };
+    } catch (e) {
+      if (!(e instanceof RangeError)) throw e;
+    }
+  }
+  return undefined;
 }
 
 /**
- * The R1 and R2 removals of finger crossings from `pd` down to the knot's own crossings. `pick`
- * chooses among the removals available at each step (default the first): tests pass a random
- * one, since any order takes back the same fingers. BandError when fingers remain that no such
- * move removes (a crossing of the knot inside a finger's strip would need R3).
+ * The moves taking the fingers back from `pd` to the knot's own crossings, as chain maps: R1
+ * and R2 removals of finger crossings and, where a crossing of the knot lies inside a finger,
+ * the R3 moves that slide the finger's tip past it (up to R3_DEPTH in a row, taken only when a
+ * removal follows). `pick` chooses among the removals available at each step (default
+ * the first): tests pass a random one, since any order takes back the same fingers. BandError
+ * when fingers remain that no such move takes back.
  */
-export function fingerMoves(pd: PDCode, of: readonly number[], pick: (count: number) => number = () => 0): { moves: FingerMove[]; last: PDCode; kept: number[] } {
-  const moves: FingerMove[] = [];
+export function fingerMoves(pd: PDCode, of: readonly number[], pick: (count: number) => number = () => 0): { maps: GeneratorMap[]; last: PDCode; kept: number[] } {
+  const maps: GeneratorMap[] = [];
   let d: Diagram = diagram(pd);
   let left = [...of];
+  const finger = (i: number) => left[i] < 0;
   while (left.some((x) => x < 0)) {
-    const finger = (i: number) => left[i] < 0;
-    const options: { moved: number[]; next: () => Diagram }[] = [
-      ...kinks(d).filter(finger).map((k) => ({ moved: [k], next: () => removeKink(d, k) })),
-      ...bigons(d).filter((b) => b.crossings.every(finger)).map((b) => ({ moved: [...b.crossings].sort((p, q) => p - q), next: () => removeBigon(d, b) })),
-    ];
-    if (options.length === 0) throw new BandError('the fingers of the bands cannot be taken back by R1 and R2 moves alone (a crossing lies inside a finger)');
+    const options = removals(d, finger);
+    if (options.length === 0) {
+      const slid = slides(d, finger, R3_DEPTH);
+      if (!slid) throw new BandError('the fingers of the bands cannot be taken back by Reidemeister moves through their own crossings');
+      maps.push(...slid.maps);
+      d = slid.after;
+      continue;
+    }
     const { moved, next } = options[pick(options.length)];
     const small = next();
     if (small.unknots > d.unknots) throw new BandError('taking a finger back leaves a crossingless circle, which the cube leaves out');
-    moves.push({ big: d.pd, small: small.pd, moved });
+    maps.push(reidemeisterMaps(small.pd, d.pd, moved).down);
     left = left.filter((_, i) => !moved.includes(i));
     d = small;
   }
-  return { moves, last: d.pd, kept: left };
+  return { maps, last: d.pd, kept: left };
 }
 
 /**
@@ -81,7 +120,7 @@ export function fingerMoves(pd: PDCode, of: readonly number[], pick: (count: num
  */
 export function undoFingers(pd: PDCode, { common, of }: Fingers, pick?: (count: number) => number): (c: Chain) => Chain {
   if (of.length !== pd.length) throw new RangeError(`${of.length} crossings placed for a code of ${pd.length}`);
-  const { moves, last, kept } = fingerMoves(pd, of, pick);
+  const { maps, last, kept } = fingerMoves(pd, of, pick);
   if (kept.length === 0 || kept.length !== common.length) throw new BandError('the knot drawing has no crossings or other crossings than the presentation: no common diagram');
   let rename: (g: CubeGenerator) => Term[];
   try {
@@ -93,6 +132,5 @@ export function undoFingers(pd: PDCode, { common, of }: Fingers, pick?: (count: 
   kept.forEach((k, j) => {
     if (rename({ state: 1 << j, mask: 0 })[0][0].state !== 1 << k) throw new BandError('without its fingers the presentation is not drawn on the knot drawing given');
   });
-  const downs = moves.map(({ big, small, moved }) => reidemeisterMaps(small, big, moved).down);
-  return (c) => applyMap(rename, downs.reduce((x, down) => applyMap(down, x), c));
+  return (c) => applyMap(rename, maps.reduce((x, f) => applyMap(f, x), c));
 }
