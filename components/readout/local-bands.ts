@@ -2,7 +2,8 @@
 // presentation and, when the bands end at a certified unlink, the surface's class in
 // Kh^{0,chi}(K; F2) (shared/knot/bands). The Khovanov check of the unlink runs on the device up to
 // BANDS_KH_CROSSINGS crossings of the simplified after-bands diagram; the finger drawing's code
-// is taken up to BANDS_MAX_CROSSINGS crossings, and its class up to CLASS_CROSSINGS.
+// is taken up to BANDS_MAX_CROSSINGS crossings, and its class up to CLASS_CROSSINGS on the cube, then
+// LOCAL_CLASS_CROSSINGS and LOCAL_CLASS_EDGES by the local algorithm.
 import { BandError, bandCertificate, surfaceClass, type BandCertificate, type BandPresentation, type SurfaceClass } from '@/shared/knot/bands';
 
 export const BANDS_MAX_CROSSINGS = 80;

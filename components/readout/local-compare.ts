@@ -7,15 +7,16 @@
 //   same PD code, crossing for crossing (a fork, or the strands moved without changing the
 //   diagram); other drawings, even of the same knot, are another diagram: no comparison;
 // - where that drawing has a strand crossing nothing (the cube leaves such circles out, so the
-//   fingers cannot be taken back), on one drawing carrying both sets of bands, which needs the
-//   same strands (shared/drawing/band-union.ts).
+//   fingers cannot be taken back), or a finger drawing is past the cube (the local route's basis
+//   belongs to one code), on one drawing carrying both sets of bands, which needs the same
+//   strands (shared/drawing/band-union.ts).
 import { fingersOf } from '@/shared/drawing/band-fingers';
 import { readBands } from '@/shared/drawing/band-read';
 import { bandsOf } from '@/shared/drawing/bands';
 import { bandUnion } from '@/shared/drawing/band-union';
 import { analyse, type Analysis } from '@/shared/drawing/analyse';
 import type { Sketch } from '@/shared/drawing/sketch';
-import { compareOnDiagram, compareSurfaces, type Placed, type SurfaceComparison } from '@/shared/knot/bands';
+import { CLASS_CROSSINGS, compareOnDiagram, compareSurfaces, type Placed, type SurfaceComparison } from '@/shared/knot/bands';
 import { BANDS_KH_CROSSINGS, orRefusal } from './local-bands';
 
 export interface CompareRequest {
@@ -56,6 +57,8 @@ export function compareSketches({ a, b }: CompareRequest): CompareAnswer {
     const refusal = 'reason' in pa ? pa : (pb as { reason: string; flat: boolean });
     return refusal.flat ? onUnion(a, b) : { kind: 'refused', reason: refusal.reason };
   }
+  // Past the cube the local route's basis belongs to one code: both classes on the union then.
+  if ([pa, pb].some((p) => p.presentation.pd.length > CLASS_CROSSINGS)) return onUnion(a, b);
   const r = orRefusal(() => compareOnDiagram(pa, pb, opts));
   return 'reason' in r ? { kind: 'refused', reason: r.reason } : { kind: 'compared', on: 'knot', ...r.value };
 }

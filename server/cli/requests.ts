@@ -162,7 +162,7 @@ export function answer(r: Request): Answer {
     out.bands = { after: c.after, components: c.components, bands: c.bands, unlink: c.unlink, chi: c.chi, genusBound: c.genusBound, ribbon: c.ribbon };
   }
   if (wanted.has('surfaceClass')) {
-    // The crossing limit is checked before any work (surfaceClass, CLASS_CROSSINGS).
+    // The limits are checked before any work (surfaceClass: CLASS_CROSSINGS, LOCAL_CLASS_CROSSINGS, LOCAL_CLASS_EDGES).
     const ring = r.ring === 'Z' ? 'Z' : 'F2';
     if (r.knot) {
       // The crossings that are not fingers are the knot's, in its order (carry.ts checks it).

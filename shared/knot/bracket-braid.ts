@@ -1,30 +1,33 @@
 // The Kauffman bracket of a braid closure in the Temperley-Lieb algebra (Kauffman, "State
 // models and the Jones polynomial", Topology 26, 1987): sigma_k = A + A^-1 e_k and
-// sigma_k^-1 = A^-1 + A e_k act on the basis of temperley-lieb.ts letter by letter, and the
-// closure is the Markov trace, sum of the coefficients times (-A^2 - A^-2)^(loops - 1). Since
-// e_k sigma_k = -A^-3 e_k, a letter only shifts the matchings in the image of e_k and adds
-// every other matching into its image: one sparse update, no matching work. Coefficients are
+// sigma_k^-1 = A^-1 + A e_k act letter by letter on each standard module of temperley-lieb.ts,
+// and the closure is the Markov trace, the modules' traces weighted by the quantum dimensions
+// [p + 1] (Goodman, de la Harpe and Jones, "Coxeter graphs and towers of algebras", 1989),
+// divided by one loop for <O> = 1. Since e_k sigma_k = -A^-3 e_k, a letter only shifts the
+// states in the image of e_k and adds every other state into its image. The braid's matrix
+// on a module is kept by rows, all the columns of a row under one window of exponents, so a
+// letter is one long sum per row of the module rather than one per entry. Coefficients are
 // exact limbs of doubles with lazy carries, as in bracket-sum.ts.
 
-import { bracket, greedyOrder, loopFactor } from './bracket';
+import { bracket, Dense, divideByLoop, greedyOrder, loopFactor } from './bracket';
 import { BraidWord, braidStrands, checkBraid, fromBraid } from './braid';
 import { carry, DOUBLES, Precision } from './bracket-sum';
 import { scoreOrder } from './contraction-order';
-import { catalan, TemperleyLieb, temperleyLieb } from './temperley-lieb';
+import { catalan, StandardModule, standardModules } from './temperley-lieb';
 import { Laurent } from '@/shared/poly/laurent';
 
-/** Most coefficients (matchings times exponents) one limb holds: 32 MB of doubles. */
+/** Most coefficients (entries times exponents) one limb holds: 32 MB of doubles. */
 const MAX_ENTRIES = 2 ** 22;
 
-/** Slots a row has room for at first. */
+/** Slots a column has room for at first. */
 const FIRST_STRIDE = 8;
 
-/** Whether the Temperley-Lieb sweep's buffers fit for this braid. */
+/** Whether the Temperley-Lieb sweep's buffers fit for this braid (the modules hold Catalan(strands) entries). */
 export const braidSweepFits = (strands: number, letters: number): boolean => catalan(strands) * (letters + 1) <= MAX_ENTRIES;
 
 /**
  * <closure of word> (normalised <O> = 1), equal to bracket(fromBraid(word, strands)). The
- * sweep keeps up to Catalan(strands) matchings all along; when the closure's greedy order
+ * sweep keeps up to Catalan(strands) entries all along; when the closure's greedy order
  * never cuts 2 strands ends, the general contraction's matchings are fewer and it is used, as
  * it is when the sweep's buffers would not fit.
  */
@@ -37,24 +40,30 @@ export function bracketOfBraid(word: BraidWord, strands = braidStrands(word)): L
 /** The bracket by the sweep alone (braidSweepFits must hold). */
 export function sweepBracket(word: BraidWord, strands = braidStrands(word), precision: Precision = DOUBLES): Laurent {
   checkBraid(word, strands);
-  return markovTrace(sweep(word, strands, precision), strands, precision);
+  const modules = standardModules(strands);
+  const traced = sweep(word, strands, precision).reduce((sum, b, i) => sum.add(trace(b, precision).mul(quantumDimension(modules[i].through))), Laurent.zero);
+  const p = divideByLoop(dense(traced));
+  return Laurent.fromDense(p.c, p.off);
 }
 
 /**
- * The braid as an element of TL_n: slot i of row s, the coefficient of A^(4 (i - zero) +
- * cls[s] + writhe), is (-1)^neg[s] times limb[base[s] + i], summed over limbs r times
- * 2^(r limbBits). Row s keeps its entries in limb[s stride .. (s + 1) stride), the stride
+ * The braid's matrix on one module: slot i of column v of row u, the coefficient of state u in
+ * the image of state v at A^(4 (i - zero) + cls[u] - cls[v] + writhe), is (-1)^neg[u] times
+ * limb[base[u] + v stride + i], summed over limbs r times 2^(r limbBits). Row u keeps its
+ * entries in limb[u cols stride .. (u + 1) cols stride), column v from v stride on, the stride
  * doubling when a window outgrows it (so that the rows stay compact in the cache).
  */
 export interface Sweep {
   limbs: Float64Array[];
-  /** Window of nonzero slots of each row, empty while lo > hi. */
+  /** Window of slots of each row, the same in all its columns; empty while lo > hi. */
   lo: Int32Array;
   hi: Int32Array;
   base: Int32Array;
   neg: Uint8Array;
-  /** peaks[r][s] bounds |entry| of row s in limb r. */
+  /** peaks[r][u] bounds |entry| of row u in limb r. */
   peaks: Float64Array[];
+  /** Columns of a row: the module's size. */
+  cols: number;
   /** Slots 0..width - 1 (the letters plus one) hold every exponent. */
   width: number;
   stride: number;
@@ -62,55 +71,57 @@ export interface Sweep {
   writhe: number;
 }
 
-/** The letters applied one by one to the identity, in limbs of doubles (braidSweepFits must hold). */
-export function sweep(word: BraidWord, strands: number, precision: Precision = DOUBLES): Sweep {
-  const tl = temperleyLieb(strands);
-  const { size } = tl;
+/** The letters applied one by one to the identity of each module, in limbs of doubles (braidSweepFits must hold). */
+export function sweep(word: BraidWord, strands: number, precision: Precision = DOUBLES): Sweep[] {
+  return standardModules(strands).map((m) => moduleSweep(word, m, precision));
+}
+
+function moduleSweep(word: BraidWord, m: StandardModule, precision: Precision): Sweep {
+  const { size } = m;
   // Each positive letter moves exponents down by at most one slot and each negative one up,
   // so the slots 0..letters suffice with the identity's constant term at zero = #positive letters.
   const width = word.length + 1;
   const zero = word.filter((k) => k > 0).length;
   const stride = Math.min(width, FIRST_STRIDE);
+  const block = size * stride;
   const b: Sweep = {
-    limbs: [new Float64Array(size * stride)],
-    lo: new Int32Array(size).fill(width),
-    hi: new Int32Array(size).fill(-1),
-    base: Int32Array.from({ length: size }, (_, s) => s * stride - zero + (stride >> 1)),
+    limbs: [new Float64Array(size * block)],
+    lo: new Int32Array(size).fill(zero),
+    hi: new Int32Array(size).fill(zero),
+    base: Int32Array.from({ length: size }, (_, u) => u * block - zero + (stride >> 1)),
     neg: new Uint8Array(size),
-    peaks: [new Float64Array(size)],
+    peaks: [new Float64Array(size).fill(1)],
+    cols: size,
     width,
     stride,
     zero,
     writhe: word.reduce((g, k) => g + Math.sign(k), 0),
   };
-  b.limbs[0][stride >> 1] = 1;
-  [b.lo[0], b.hi[0], b.peaks[0][0]] = [zero, zero, 1];
+  for (let u = 0; u < size; u++) b.limbs[0][b.base[u] + u * stride + zero] = 1;
   const limit = 2 ** (precision.exactBits - 1);
   const unit = 2 ** precision.limbBits;
   for (const letter of word) {
     const k = Math.abs(letter) - 1;
-    const [image, from, sources] = [tl.image[k], tl.from[k], tl.sources[k]];
-    for (let r = unbounded(b, image, from, sources, limit); r >= 0; r = unbounded(b, image, from, sources, limit)) {
+    for (let r = unbounded(b, m, k, limit); r >= 0; r = unbounded(b, m, k, limit)) {
       b.limbs = carry(b.limbs, unit, r === b.limbs.length - 1);
-      b.peaks = b.limbs.map((limb) => rowPeaks(b, limb));
+      b.peaks = b.limbs.map((limb) => Float64Array.from(b.lo, (_, u) => rowPeak(b, limb, u)));
     }
-    letterOn(b, tl, k, letter < 0, limit);
+    letterOn(b, m, k, letter < 0);
   }
   return b;
 }
 
 /**
- * One letter sigma_(k+1)^(+-1): only e_k's image changes. First its own entries times
- * -A^(-+3), one slot down (or up) and negated, which only moves the row's base and flips its
- * sign, and its window widened to take its sources; then every other matching s, in memory
- * order, times A^(-+1) into its image: two exponents apart, so one slot lower, the same or one
- * higher; last the image's bounds, measured where near the limit, and windows narrowed.
+ * One letter sigma_(k+1)^(+-1): only e_k's image changes. Each row t of the image is first
+ * its own entries times -A^(-+3), one slot down (or up) and negated, which only moves the
+ * row's base and flips its sign; its window is widened to take its sources, and then each
+ * source s times A^(-+1) is added in: two exponents apart, so one slot lower, the same or one
+ * higher, in every column at once. Last its window is narrowed.
  */
-function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: number): void {
+function letterOn(b: Sweep, m: StandardModule, k: number, up: boolean): void {
   const { lo, hi, base, neg } = b;
-  const { size, cls } = tl;
-  const [image, from, sources] = [tl.image[k], tl.from[k], tl.sources[k]];
-  const target = tl.target.subarray(k * size, (k + 1) * size);
+  const { cls } = m;
+  const [image, from, sources] = [m.image[k], m.from[k], m.sources[k]];
   const shift = up ? 1 : -1;
   for (let j = 0; j < image.length; j++) {
     const t = image[j];
@@ -132,22 +143,19 @@ function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: nu
       hi[t] += shift;
     }
     if (high - low >= b.stride) widen(b, high - low + 1);
-    if (base[t] + low < t * b.stride || base[t] + high >= (t + 1) * b.stride) recentre(b, t, low, high);
+    const start = t * b.cols * b.stride;
+    if (base[t] + low < start || base[t] + high >= start + b.stride) recentre(b, t, low, high);
     lo[t] = low;
     hi[t] = high;
-  }
-  for (const limb of b.limbs) {
-    for (let s = 0; s < size; s++) {
-      const t = target[s];
-      if (t === s || lo[s] > hi[s]) continue;
-      const into = base[t] + lo[s] + slot(cls, s, t, up);
-      if (neg[s] === neg[t]) addInto(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1);
-      else subtractFrom(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1);
+    for (const limb of b.limbs) {
+      for (let x = from[j]; x < from[j + 1]; x++) {
+        const s = sources[x];
+        if (lo[s] > hi[s]) continue;
+        const into = base[t] + lo[s] + slot(cls, s, t, up);
+        if (neg[s] === neg[t]) addInto(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1, b.cols, b.stride);
+        else subtractFrom(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1, b.cols, b.stride);
+      }
     }
-  }
-  for (const t of image) {
-    // Loose bounds near the limit would force carries or rescans.
-    for (let r = 0; r < b.limbs.length; r++) if (b.peaks[r][t] >= limit / 64) b.peaks[r][t] = rowPeak(b, b.limbs[r], t);
     trim(b, t);
   }
 }
@@ -155,33 +163,35 @@ function letterOn(b: Sweep, tl: TemperleyLieb, k: number, up: boolean, limit: nu
 /** Slots from s to its image t under e_k: -1, 0 or 1 (the classes differ by 2, the letter's A^(-+1)). */
 const slot = (cls: Uint8Array, s: number, t: number, up: boolean): number => (cls[s] - cls[t] + (up ? 2 : -2)) / 4;
 
-function addInto(limb: Float64Array, from: number, to: number, n: number): void {
-  for (let i = 0; i < n; i++) limb[to + i] += limb[from + i];
+/** n slots of each of cols columns stride apart: column by column, since a window is often much narrower than the stride. */
+function addInto(limb: Float64Array, from: number, to: number, n: number, cols: number, stride: number): void {
+  for (let end = from + cols * stride; from < end; from += stride, to += stride) for (let i = 0; i < n; i++) limb[to + i] += limb[from + i];
 }
 
-function subtractFrom(limb: Float64Array, from: number, to: number, n: number): void {
-  for (let i = 0; i < n; i++) limb[to + i] -= limb[from + i];
+function subtractFrom(limb: Float64Array, from: number, to: number, n: number, cols: number, stride: number): void {
+  for (let end = from + cols * stride; from < end; from += stride, to += stride) for (let i = 0; i < n; i++) limb[to + i] -= limb[from + i];
 }
 
-/** Row t's window narrowed to its nonzero entries: cancellation at its ends is common, and later sums skip them. */
-function trim({ limbs, lo, hi, base }: Sweep, t: number): void {
-  while (lo[t] <= hi[t] && zeroAt(limbs, base[t] + lo[t])) lo[t]++;
-  while (lo[t] <= hi[t] && zeroAt(limbs, base[t] + hi[t])) hi[t]--;
+/** Row t's window narrowed to the slots nonzero in some column: cancellation at its ends is common, and later sums skip them. */
+function trim(b: Sweep, t: number): void {
+  const { lo, hi, base } = b;
+  while (lo[t] <= hi[t] && zeroAt(b, base[t] + lo[t])) lo[t]++;
+  while (lo[t] <= hi[t] && zeroAt(b, base[t] + hi[t])) hi[t]--;
 }
 
-function zeroAt(limbs: Float64Array[], i: number): boolean {
-  for (let r = 0; r < limbs.length; r++) if (limbs[r][i] !== 0) return false;
+function zeroAt({ limbs, cols, stride }: Sweep, i: number): boolean {
+  for (const limb of limbs) for (let v = 0; v < cols; v++) if (limb[i + v * stride] !== 0) return false;
   return true;
 }
 
 /**
  * Row t's entries moved within its block so that the window low..high (which holds its own)
- * is centred there: rare, as a row's base drifts only by one slot a letter.
+ * is centred in each column: rare, as a row's base drifts only by one slot a letter.
  */
-function recentre({ limbs, lo, hi, base, stride }: Sweep, t: number, low: number, high: number): void {
-  const moved = t * stride + Math.floor((stride - (high - low + 1)) / 2) - low;
+function recentre({ limbs, lo, hi, base, cols, stride }: Sweep, t: number, low: number, high: number): void {
+  const moved = t * cols * stride + Math.floor((stride - (high - low + 1)) / 2) - low;
   if (lo[t] <= hi[t]) {
-    const [from, to, n] = [base[t] + lo[t], moved + lo[t], hi[t] - lo[t] + 1];
+    const [from, to, n] = [base[t] + lo[t], moved + lo[t], (cols - 1) * stride + hi[t] - lo[t] + 1];
     for (const limb of limbs) {
       limb.copyWithin(to, from, from + n);
       if (to > from) limb.fill(0, from, Math.min(to, from + n));
@@ -191,37 +201,39 @@ function recentre({ limbs, lo, hi, base, stride }: Sweep, t: number, low: number
   base[t] = moved;
 }
 
-/** Every row copied to the middle of a block of at least twice the stride and at least slots. */
+/** Every column copied to the middle of a block of at least twice the stride and at least slots. */
 function widen(b: Sweep, slots: number): void {
   const stride = Math.min(b.width, Math.max(2 * b.stride, slots));
-  const { lo, hi, base } = b;
+  const { lo, hi, base, cols } = b;
+  const moved = Int32Array.from(base, (x, u) => u * cols * stride + ((stride - b.stride) >> 1) + x - u * cols * b.stride);
   b.limbs = b.limbs.map((limb) => {
-    const wide = new Float64Array(lo.length * stride);
-    for (let s = 0; s < lo.length; s++) {
-      const moved = s * stride + ((stride - b.stride) >> 1) + base[s] - s * b.stride;
-      if (lo[s] <= hi[s]) wide.set(limb.subarray(base[s] + lo[s], base[s] + hi[s] + 1), moved + lo[s]);
+    const wide = new Float64Array(lo.length * cols * stride);
+    for (let u = 0; u < lo.length; u++) {
+      for (let v = 0; v < cols; v++) {
+        const [from, to] = [base[u] + v * b.stride, moved[u] + v * stride];
+        for (let i = lo[u]; i <= hi[u]; i++) wide[to + i] = limb[from + i];
+      }
     }
     return wide;
   });
-  for (let s = 0; s < lo.length; s++) base[s] = s * stride + ((stride - b.stride) >> 1) + base[s] - s * b.stride;
+  base.set(moved);
   b.stride = stride;
 }
 
-/** The largest |entry| of row s in limb. */
-function rowPeak({ lo, hi, base }: Sweep, limb: Float64Array, s: number): number {
+/** The largest |entry| of row u in limb. */
+function rowPeak({ lo, hi, base, cols, stride }: Sweep, limb: Float64Array, u: number): number {
   let p = 0;
-  for (let i = base[s] + lo[s]; i <= base[s] + hi[s]; i++) p = Math.max(p, Math.abs(limb[i]));
+  for (let v = 0; v < cols; v++) for (let i = base[u] + v * stride + lo[u]; i <= base[u] + v * stride + hi[u]; i++) p = Math.max(p, Math.abs(limb[i]));
   return p;
 }
-
-const rowPeaks = (b: Sweep, limb: Float64Array): Float64Array => Float64Array.from(b.lo, (_, s) => rowPeak(b, limb, s));
 
 /**
  * The first limb in which a partial sum of the letter could be inexact, or -1: a row of e_k's
  * image sums its own entries and its sources', so its bound plus theirs must stay below
  * limit. Bounds that fail are first replaced by the rows' actual peaks.
  */
-function unbounded(b: Sweep, image: Int32Array, from: Int32Array, sources: Int32Array, limit: number): number {
+function unbounded(b: Sweep, m: StandardModule, k: number, limit: number): number {
+  const [image, from, sources] = [m.image[k], m.from[k], m.sources[k]];
   for (let r = 0; r < b.limbs.length; r++) {
     const [limb, peak] = [b.limbs[r], b.peaks[r]];
     const bound = (j: number) => {
@@ -239,42 +251,30 @@ function unbounded(b: Sweep, image: Int32Array, from: Int32Array, sources: Int32
   return -1;
 }
 
-/**
- * The closure: sum over matchings of their coefficients times (-A^2 - A^-2)^(loops - 1). Rows
- * of one (loops, class) are first added in doubles: exact when the rows' largest entries add
- * up to less than 2^52, else after carrying every limb but the top one below unit/2 (then,
- * with a letter or more, at most 2^21 rows fit in MAX_ENTRIES, so their sums stay below
- * 2^52), and the top one too, into a new limb, while its sums might not be exact.
- */
-function markovTrace(braid: Sweep, strands: number, precision: Precision): Laurent {
-  const { lo, hi, base, neg, width, zero, writhe } = braid;
-  let limbs = braid.limbs;
-  const unit = 2 ** precision.limbBits;
-  const fits = (peaks: Float64Array[]) => peaks.every((p) => p.reduce((a, b) => a + b, 0) < 2 ** 52);
-  const measured = () => limbs.map((limb) => rowPeaks(braid, limb));
-  if (!fits(braid.peaks) && !fits(measured())) {
-    limbs = carry(limbs, unit, false);
-    while (!fits(measured())) limbs = carry(limbs, unit, true);
+/** The module's trace: its diagonal entries, each at A^(4 (i - zero) + writhe). */
+function trace({ limbs, lo, hi, base, neg, cols, stride, zero, writhe }: Sweep, precision: Precision): Laurent {
+  const sums = new Map<number, bigint>();
+  for (let u = 0; u < cols; u++) {
+    for (let i = lo[u]; i <= hi[u]; i++) {
+      const at = base[u] + u * stride + i;
+      const x = limbs.reduce((sum, limb, r) => (limb[at] === 0 ? sum : sum + (BigInt(limb[at]) << BigInt(r * precision.limbBits))), 0n);
+      if (x !== 0n) sums.set(i, (sums.get(i) ?? 0n) + (neg[u] ? -x : x));
+    }
   }
-  const { size, cls, closureLoops } = temperleyLieb(strands);
-  const groups = new Map<number, Float64Array[]>(); // 2 loops + cls / 2 -> summed rows, per limb
-  for (let s = 0; s < size; s++) {
-    if (lo[s] > hi[s]) continue;
-    const g = 2 * closureLoops[s] + cls[s] / 2;
-    if (!groups.has(g)) groups.set(g, limbs.map(() => new Float64Array(width)));
-    const sums = groups.get(g)!;
-    const sign = neg[s] ? -1 : 1;
-    limbs.forEach((limb, r) => {
-      for (let i = lo[s]; i <= hi[s]; i++) sums[r][i] += sign * limb[base[s] + i];
-    });
-  }
-  let total = Laurent.zero;
-  for (const [g, sums] of groups) {
-    const pairs = Array.from({ length: width }, (_, i): [number, bigint] => [
-      4 * (i - zero) + 2 * (g & 1) + writhe,
-      sums.reduce((x, sum, r) => x + (BigInt(sum[i]) << BigInt(r * precision.limbBits)), 0n),
-    ]);
-    total = total.add(Laurent.fromPairs(pairs).mul(loopFactor().pow((g >> 1) - 1)));
-  }
-  return total;
+  return Laurent.fromPairs([...sums].map(([i, x]) => [4 * (i - zero) + writhe, x]));
+}
+
+/** [p + 1], the closure of p parallel strands: 1, delta, delta^2 - 1, ... with delta = -A^2 - A^-2 (Chebyshev). */
+function quantumDimension(p: number): Laurent {
+  let [previous, current] = [Laurent.zero, Laurent.one];
+  for (let i = 0; i < p; i++) [previous, current] = [current, current.mul(loopFactor()).sub(previous)];
+  return current;
+}
+
+/** A Laurent polynomial written densely from its lowest exponent. */
+function dense(p: Laurent): Dense {
+  const { min, max } = p.span() ?? { min: 0, max: -1 };
+  const c = new Array<bigint>(max - min + 1).fill(0n);
+  for (const [e, x] of p.toPairs()) c[e - min] = x;
+  return { off: min, c };
 }

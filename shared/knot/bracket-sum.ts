@@ -33,23 +33,38 @@ export function closedSum(graph: StateGraph, precision = DOUBLES): Strided {
   const unit = 2 ** precision.limbBits;
   let at: Windows = { off: Int32Array.of(0), len: Int32Array.of(1), start: Int32Array.of(0), total: 1 };
   let limbs: Float64Array[] = [Float64Array.of(1)];
-  let peaks = [1]; // largest |entry| of each limb
+  let peaks = [1]; // a bound on |entry| in each limb
   for (const step of steps) {
     const next = windows(step, at, stride);
-    // First the bound from the largest entries alone, then the one state by state; if that
-    // fails, carry into the top limb, and only if that is not enough into a new one.
-    if (!peaks.every((p) => p * step.inWeight < limit) && !fits(step, limbs, at, limit)) {
+    // First the bound from the largest entries alone (measured only when the bound carried
+    // over from the last step is too loose), then the one state by state; if that fails,
+    // carry into the top limb, and only while that is not enough into new ones (one may not
+    // do when a state's terms weigh more than a limb's unit).
+    const exact = () => peaks.every((p) => p * step.inWeight < limit);
+    if (!exact()) peaks = limbs.map(peakOf);
+    if (!exact() && !fits(step, limbs, at, limit)) {
       limbs = carry(limbs, unit, false);
-      if (!fits(step, limbs, at, limit)) limbs = carry(limbs, unit, true);
-      if (!fits(step, limbs, at, limit)) throw new RangeError('too many states meet at one matching for an exact sum');
+      while (!fits(step, limbs, at, limit)) {
+        if (peakOf(limbs[limbs.length - 1]) <= unit / 2) throw new RangeError('too many states meet at one matching for an exact sum');
+        limbs = carry(limbs, unit, true);
+      }
+      peaks = limbs.map(peakOf);
     }
     limbs = limbs.map((limb) => accumulate(step, at, next, stride, limb));
-    peaks = limbs.map((limb) => limb.reduce((p, x) => Math.max(p, Math.abs(x)), 0));
+    // Each new entry sums terms of total weight at most inWeight.
+    peaks = peaks.map((p) => p * step.inWeight);
     at = next;
   }
   // The last step leaves one state, the empty matching.
   const c = Array.from({ length: at.len[0] }, (_, i) => limbs.reduce((sum, limb, r) => sum + (BigInt(limb[at.start[0] + i]) << BigInt(r * precision.limbBits)), 0n));
   return { off: at.off[0], c, limbs: limbs.length };
+}
+
+/** The largest |entry| (a plain loop: reduce over a typed array costs as much as the step's sums). */
+function peakOf(limb: Float64Array): number {
+  let p = 0;
+  for (let i = 0; i < limb.length; i++) p = Math.max(p, Math.abs(limb[i]));
+  return p;
 }
 
 /** Where each state's polynomial lies: exponents off[s] + stride i, entries start[s] + i, i < len[s]. */

@@ -6,7 +6,8 @@
 // "Fast Khovanov homology computations", 2007, arXiv math/0606318. The order comes from
 // contraction-order.ts (or a greedy sweep when that is cheaper), the matchings and their
 // transitions from bracket-states.ts, the exact sums of their polynomials from bracket-sum.ts.
-// A code that braid-closure.ts reads as a closed braid goes to bracket-braid.ts's sweep instead.
+// A code that braid-closure.ts reads as a closed braid goes to bracket-braid.ts's sweep instead,
+// and a wide one that summands.ts splits into connected summands is the product of theirs.
 
 import { Diagram } from './diagram';
 import { Laurent } from '@/shared/poly/laurent';
@@ -16,6 +17,7 @@ import { stateGraph } from './bracket-states';
 import { closedSum, Strided } from './bracket-sum';
 import { braidClosure, ClosedBraid } from './braid-closure';
 import { braidSweepFits, sweepBracket } from './bracket-braid';
+import { connectedSummands } from './summands';
 
 /** The Kauffman bracket <D> in A, normalised so that <O> = 1 (docs/conventions.md). */
 export function bracket(d: Diagram): Laurent {
@@ -32,7 +34,12 @@ export function bracketOfPD(pd: PDCode, unknots = 0): Laurent {
   const greedy = greedyOrder(pd);
   const score = scoreOrder(pd, greedy);
   const braid = sweepable(pd, score.widest);
-  const closed = braid ? sweepBracket(braid.word, braid.strands) : contracted(pd, cheaperOrder(pd, greedy, score));
+  const summands = braid || score.widest <= NARROW ? undefined : connectedSummands(pd);
+  const closed = braid
+    ? sweepBracket(braid.word, braid.strands)
+    : summands
+      ? summands.reduce((product, s) => product.mul(bracketOfPD(s)), Laurent.one)
+      : contracted(pd, cheaperOrder(pd, greedy, score));
   return closed.mul(loopFactor().pow(unknots));
 }
 
@@ -72,7 +79,7 @@ function cheaperOrder(pd: PDCode, greedy = greedyOrder(pd), score: OrderScore = 
 }
 
 /** A dense polynomial in A: sum of c[i] A^(off + i). */
-interface Dense {
+export interface Dense {
   off: number;
   c: bigint[];
 }
@@ -122,7 +129,7 @@ export function greedyOrder(pd: PDCode): number[] {
 }
 
 // p / (-A^2 - A^-2) = -A^2 p / (1 + A^4); exact because every state closed at least one loop.
-function divideByLoop(p: Dense): Dense {
+export function divideByLoop(p: Dense): Dense {
   const c = p.c;
   const q = new Array<bigint>(Math.max(c.length - 4, 0)).fill(0n);
   for (let i = 0; i < q.length; i++) q[i] = c[i] - (i >= 4 ? q[i - 4] : 0n);

@@ -6,6 +6,9 @@ import { spawn, spawnSync } from 'node:child_process';
 import path from 'node:path';
 import { answerLine, jsonInteger } from '@/server/cli/requests';
 import { fromBraid } from '@/shared/knot/braid';
+import { seededRng } from '@/shared/knot/moves';
+import { disks946, p33m3 } from '@/tests/shared/bands-fixtures';
+import { movedAway } from '@/tests/shared/bands-moved';
 
 const bin = path.join(__dirname, '../../server/cli/bin.mjs');
 const run = (args: string[], input = '') => spawnSync(process.execPath, [bin, ...args], { input, encoding: 'utf8', timeout: 60_000 });
@@ -194,6 +197,17 @@ describe('bands in requests', () => {
     expect(a.surfaceClass.support[0]).toEqual({ smoothing: expect.stringMatching(/^[01]{9}$/), x: expect.any(Array) });
   });
 
+  it('answers "surfaceClass" past 14 crossings on the local route: 9_46 moved away from its bands, the disks still differ', () => {
+    // Moves away from the bands induce an isomorphism carrying both classes (Jacobsson 2004, arXiv
+    // math/0206303), so they still differ (Sundberg and Swann, arXiv 2103.01438).
+    const { pd, bands } = movedAway(p33m3.pd, [disks946.first[0].saddles, disks946.second[0].saddles], 6, seededRng(18));
+    expect(pd.length).toBeGreaterThan(14);
+    const pairs = (list: { a: number; b: number }[]) => list.map(({ a, b }) => [a, b]);
+    const a = ask({ pd, bands: pairs(bands[0]), compareBands: pairs(bands[1]), compute: ['surfaceClass'] });
+    expect(a.surfaceClass).toMatchObject({ basis: 'local', h: 0, q: 1, zero: false, compare: { verdict: 'differ', other: { basis: 'local', q: 1, zero: false } } });
+    expect(a.surfaceClass.support[0]).toEqual({ generator: expect.any(Number) });
+  });
+
   it('answers "surfaceClass" over Z with "ring": "Z": the disks of 9_46 differ up to sign, each class primitive (tests/shared/bands-class.test.ts)', () => {
     const a = ask({ pd: p946, bands: [[2, 12]], compareBands: [[6, 14]], compute: ['surfaceClass'], ring: 'Z' });
     expect(a.surfaceClass).toMatchObject({ ring: 'Z', h: 0, q: 1, zero: false, divisibility: 1, compare: { verdict: 'differ', other: { ring: 'Z', q: 1, divisibility: 1 } } });
@@ -226,7 +240,7 @@ describe('bands in requests', () => {
     expect(ask({ braid: [1, 1, 1], bands: [[4, 6]], compute: ['bands'] }).error).toMatch(/name edges of the request's "pd" code/);
     expect(ask({ pd: trefoil, compute: ['surfaceClass'] }).error).toMatch(/need "bands"/);
     expect(ask({ pd: trefoil, bands: [[2, 5]], compute: ['bands'] }).error).toBe('band 1 would make the surface non-orientable: edges 2 and 5 run opposite ways around their common face');
-    const big = ask({ braid: new Array(16).fill(1), compute: ['pd'] }).pd;
-    expect(ask({ pd: big, bands: [[1, 3]], compute: ['surfaceClass'] }).error).toBe('the class is computed on the cube of resolutions, up to 14 crossings; this diagram has 16');
+    const big = ask({ braid: new Array(31).fill(1), compute: ['pd'] }).pd;
+    expect(ask({ pd: big, bands: [[1, 3]], compute: ['surfaceClass'] }).error).toBe('the class is computed on the cube of resolutions, up to 14 crossings and by the local algorithm up to 30; this diagram has 31');
   });
 });

@@ -1,45 +1,16 @@
 // The class of a band surface in Kh(K; F2) (shared/knot/bands/class.ts). Sources beside each
 // value; the presentations are built in bands-fixtures.ts.
-import { BandError, bandCertificate, BandPresentation, compareSurfaces, Saddle, surfaceClass } from '@/shared/knot/bands';
-import { diagram, Diagram } from '@/shared/knot/diagram';
-import { addKink, faces, pushAcross, Rng, seededRng } from '@/shared/knot/moves';
-import { orient, PDCode } from '@/shared/knot/pd';
+import { BandError, bandCertificate, BandPresentation, compareSurfaces, surfaceClass } from '@/shared/knot/bands';
+import { seededRng } from '@/shared/knot/moves';
 import { pretzelLink } from '@/shared/knot/families';
 import { disks946, p33m3, ribbon, trefoil } from './bands-fixtures';
+import { movedAway } from './bands-moved';
 import { scramble } from './scramble';
 
 const renamed = (p: BandPresentation, seed: number): BandPresentation => {
   const { pd, rename } = scramble(p.pd, seededRng(seed));
   return { ...p, pd, saddles: p.saddles.map(({ a, b }) => ({ a: rename.get(a)!, b: rename.get(b)! })) };
 };
-
-/**
- * Random R1 and R2 moves (adding a kink or a finger) that keep away from the bands: no kink on a
- * band's edge, no finger in a face holding one. The moves keep the crossing order and slots of
- * the old crossings, so a band's edge is found again at its old head slot.
- */
-function movedAway(pd: PDCode, bands: Saddle[][], moves: number, rng: Rng): { pd: PDCode; bands: Saddle[][] } {
-  let d: Diagram = diagram(pd);
-  let current = bands;
-  const pick = <T>(list: readonly T[]): T => list[Math.floor(rng() * list.length)];
-  for (let k = 0; k < moves; k++) {
-    const busy = new Set(current.flat().flatMap(({ a, b }) => [a, b]));
-    const free = [...new Set(d.pd.flat())].filter((l) => !busy.has(l));
-    const quiet = faces(d.pd).filter((f) => f.length >= 2 && f.every((c) => !busy.has(d.pd[c.crossing][c.arrive])));
-    const heads = orient(d.pd).head;
-    const next = quiet.length > 0 && rng() < 0.5
-      ? (() => {
-          const f = pick(quiet);
-          const i = Math.floor(rng() * f.length);
-          return pushAcross(d, f, i, (i + 1 + Math.floor(rng() * (f.length - 1))) % f.length, rng() < 0.5);
-        })()
-      : addKink(d, pick(free), { sign: rng() < 0.5 ? 1 : -1, overFirst: rng() < 0.5 });
-    const at = (l: number): number => next.pd[heads.get(l)!.crossing][heads.get(l)!.position];
-    current = current.map((list) => list.map(({ a, b }) => ({ a: at(a), b: at(b) })));
-    d = next;
-  }
-  return { pd: d.pd, bands: current };
-}
 
 describe('the class of a ribbon disk', () => {
   // A ribbon disk is a ribbon concordance from the unknot plus a birth, and a ribbon concordance
@@ -175,7 +146,7 @@ describe('other surfaces and refusals', () => {
 
   it('refuses bands that do not end at a certified unlink, and codes over the crossing limit before any work', () => {
     expect(() => surfaceClass({ pd: trefoil.pd, unknots: 0, saddles: [{ a: 4, b: 6 }] })).toThrow(/certified unlink; the result is not an unlink/);
-    expect(() => surfaceClass(disks946.first[0], { maxCrossings: 8 })).toThrow(new BandError('the class is computed on the cube of resolutions, up to 8 crossings; this diagram has 9'));
+    expect(() => surfaceClass(disks946.first[0], { maxCrossings: 8, localCrossings: 0 })).toThrow(new BandError('the class is computed on the cube of resolutions, up to 8 crossings; this diagram has 9'));
   });
 
   it('a crossingless unknot with no bands: its disk, the class 1', () => {

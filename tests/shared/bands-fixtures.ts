@@ -4,9 +4,10 @@
 // orientable saddle of that diagram and keeping those certified ribbon, and are fixed here.
 import { BandPresentation } from '@/shared/knot/bands';
 import { fromBraid } from '@/shared/knot/braid';
-import { Diagram } from '@/shared/knot/diagram';
+import { diagram, Diagram } from '@/shared/knot/diagram';
 import { connectedSum, mirror, pretzelLink, rationalLink } from '@/shared/knot/families';
 import { faces, pushAcross } from '@/shared/knot/moves';
+import { orient } from '@/shared/knot/pd';
 
 export const trefoil = fromBraid([1, 1, 1], 2); // positive trefoil, PD [[4,2,5,1],[2,6,3,5],[6,4,1,3]]
 
@@ -39,3 +40,26 @@ export const disks946 = {
   first: [band(p33m3, [2, 12]), band(p33m3, [3, 11])],
   second: [band(p33m3, [6, 14]), band(p33m3, [5, 15])],
 };
+
+/**
+ * The connected sum of band presentations of knots, with every summand's bands: connectedSum
+ * keeps each summand's crossings in order and their slots, so a band's edge is found again at
+ * its tail slot (the sum moves heads only). The sum of ribbon disks along a band is a ribbon disk (a boundary connected
+ * sum); the tests check each sum's certificate rather than rely on it.
+ */
+export function summed(parts: readonly BandPresentation[]): BandPresentation {
+  let d = diagram(parts[0].pd);
+  const saddles: { a: number; b: number }[] = [];
+  const before: number[] = [];
+  for (const p of parts.slice(1)) {
+    before.push(d.pd.length);
+    d = connectedSum(d, diagram(p.pd));
+  }
+  parts.forEach((p, k) => {
+    const tails = orient(p.pd).tail;
+    const offset = k === 0 ? 0 : before[k - 1];
+    const at = (l: number): number => d.pd[tails.get(l)!.crossing + offset][tails.get(l)!.position];
+    saddles.push(...p.saddles.map(({ a, b }) => ({ a: at(a), b: at(b) })));
+  });
+  return { pd: d.pd, unknots: 0, saddles };
+}

@@ -36,6 +36,15 @@ describe('exact sums in limbs of doubles', () => {
     expect(carried).toBeGreaterThan(0); // the carries were exercised, not only the one-limb path
   }, 60_000);
 
+  it('grow as many limbs as one step needs when its terms weigh more than a limb holds', () => {
+    // A case the property above met: with 2-bit limbs one new limb per step was not enough.
+    const d = wideBraid(5, 33, -2147483646);
+    const graph = stateGraph(d.pd, contractionOrder(d.pd).order);
+    const small = closedSum(graph, { exactBits: 12, limbBits: 2 });
+    const plain = closedSum(graph);
+    expect({ off: small.off, c: small.c }).toEqual({ off: plain.off, c: plain.c });
+  });
+
   it('carry a 200-crossing closure through several limbs to the same bracket as 32-bit limbs', () => {
     const d = wideBraid(6, 200, 7);
     const graph = stateGraph(d.pd, contractionOrder(d.pd).order);

@@ -14,12 +14,15 @@ import { Chain, Fingers, undoFingers } from './carry';
 import { level, movie, EnhancedState } from './cube-levels';
 import { cubeLabels } from './reidemeister-maps';
 import type { SurfaceClass } from './index';
+import { BandError } from './types';
 
 /** The states of a class's normal form with their coefficients, as a chain of the cube of `pd`. */
 export function classChain(pd: PDCode, c: SurfaceClass): Chain {
   const labels = cubeLabels(pd);
   const out = new Map<string, readonly [{ state: number; mask: number }, number]>();
-  c.support.forEach(({ smoothing, x }: EnhancedState, i) => {
+  c.support.forEach((e, i) => {
+    if ('generator' in e) throw new BandError('a class on the local route has no cube coordinates to carry');
+    const { smoothing, x }: EnhancedState = e;
     const state = [...smoothing].reduce((s, bit, k) => s | (bit === '1' ? 1 << k : 0), 0);
     const circles = resolve(pd, state, labels);
     const mask = x.reduce((m, l) => m | (1 << circles.of[labels.get(l)!]), 0);

@@ -3,8 +3,9 @@
 import type { PDCode } from '../pd';
 import { AfterBands, simplifiedStage } from './after';
 import { AfterHomology, BandCertificate, certify } from './certificate';
-import { ClassVector, classVector } from './class';
+import { classVector } from './class';
 import { classVectorZ } from './class-z';
+import { localClasses } from './class-local';
 import { EnhancedState } from './cube-levels';
 import { bandStages } from './saddle';
 import { Fingers } from './carry';
@@ -20,14 +21,36 @@ export { UNLINK_CROSSINGS } from './certificate';
 export type { EnhancedState } from './cube-levels';
 export type { Fingers } from './carry';
 
-/** The cube's default crossing limit for the class. */
+/** The cube's default crossing limit for the class (class.ts, class-z.ts). */
 export const CLASS_CROSSINGS = 14;
+
+/**
+ * The local route's limits (class-local.ts, over F2), past the cube's: crossings, and edges the
+ * bands touch (each cut open for the whole computation, two open ends an edge, so the complex
+ * grows with them). Measured in tests/bench/bands.bench.ts (load about 4): a 40-crossing pretzel
+ * with one band in 0.3 s; three bands on six edges (9_46^#3, 27 crossings) in 0.8 s, peak 0.3 GB;
+ * four bands on eight edges (9_46^#4, at load 12) took 68 s and 2.5 GB, five ran out of memory. Crossings
+ * are limited below the pretzels' 40 since other diagrams give wider tangles (the unlink check's
+ * Kh of 30-crossing diagrams took 11 s to 190 s: certificate.ts).
+ */
+export const LOCAL_CLASS_CROSSINGS = 30;
+export const LOCAL_CLASS_EDGES = 6;
+
+/** How the class was computed, which fixes the basis of its coordinates. */
+export type ClassBasis = 'cube' | 'local';
+
+/** A generator of the simplified complex of the local route (class-local.ts), by its number. */
+export interface LocalGenerator {
+  generator: number;
+}
 
 /** The coefficient ring of the class: F2, or Z with the class up to an overall sign. */
 export type ClassRing = 'F2' | 'Z';
 
 export interface SurfaceClass {
   ring: ClassRing;
+  /** 'cube': coordinates on enhanced states (class.ts, class-z.ts); 'local': on generators of the simplified complex (class-local.ts, over F2). */
+  basis: ClassBasis;
   /** Bidegree of the class: h = 0, q = chi. */
   h: number;
   q: number;
@@ -35,12 +58,14 @@ export interface SurfaceClass {
   /**
    * The class by its nonzero coefficients in the basis of enhanced states (F2: class.ts, the
    * states outside the boundaries' pivots; Z: class-z.ts, the Hermite normal form with the sign
-   * that makes the first nonzero coefficient positive).
+   * that makes the first nonzero coefficient positive), or on the local route in the basis of
+   * class-local.ts: comparable only with classes of the same code computed together
+   * (compareSurfaces).
    */
-  support: EnhancedState[];
+  support: (EnhancedState | LocalGenerator)[];
   /** The coefficient of each state of `support` (all 1 over F2). */
   coefficients: number[];
-  /** The rank of C^{0,q}/B^{0,q} of the code's cube: the number of states outside the pivots. */
+  /** The rank of C^{0,q}/B^{0,q} of the code's cube (or of the simplified complex): the number of basis elements outside the pivots. */
   basisSize: number;
   /** Over Z: the class mod 2, the class over F2 by universal coefficients. */
   mod2?: { support: EnhancedState[]; basisSize: number };
@@ -56,8 +81,12 @@ export interface SurfaceComparison {
 }
 
 export interface ClassOptions {
-  /** Default CLASS_CROSSINGS: the cube has 2^n resolutions. */
+  /** The cube's limit, default CLASS_CROSSINGS: the cube has 2^n resolutions. */
   maxCrossings?: number;
+  /** Past the cube's limit, the local route's (over F2), default LOCAL_CLASS_CROSSINGS; 0 turns it off. */
+  localCrossings?: number;
+  /** The local route's limit on the edges the bands touch, default LOCAL_CLASS_EDGES. */
+  localEdges?: number;
   /** The Khovanov unlink check's limit (certificate.ts). */
   unlinkCrossings?: number;
   /** Default F2. */
@@ -80,33 +109,18 @@ export function bandCertificate(p: BandPresentation, opts: { maxCrossings?: numb
 }
 
 /**
- * The class of the surface in Kh^{0,chi}(K; F2) (class.ts) or Kh^{0,chi}(K; Z) up to sign
- * (class-z.ts). BandError unless the bands end at a certified unlink, or when the code has more
- * than maxCrossings.
+ * The class of the surface in Kh^{0,chi}(K; F2) (class.ts; past the cube's limit class-local.ts)
+ * or Kh^{0,chi}(K; Z) up to sign (class-z.ts). BandError unless the bands end at a certified
+ * unlink, or when the code is over the limits.
  */
 export function surfaceClass(p: BandPresentation, opts: ClassOptions = {}): SurfaceClass {
-  const ring = opts.ring ?? 'F2';
-  const maxCrossings = opts.maxCrossings ?? CLASS_CROSSINGS;
-  // The cheap fact first: the cube has 2^n resolutions.
-  if (p.pd.length > maxCrossings) throw new BandError(`the class is computed on the cube of resolutions, up to ${maxCrossings} crossings; this diagram has ${p.pd.length}`);
-  const stages = bandStages(p);
-  // No crossings, so no edges and no bands: the unknots' disks, 1 x ... x 1.
-  if (p.pd.length === 0) {
-    const one = { support: [{ smoothing: '', x: [] }], basisSize: 1 };
-    return { ring, h: 0, q: p.unknots, zero: false, ...one, coefficients: [1], ...(ring === 'Z' ? { mod2: one, divisibility: 1 } : {}) };
-  }
-  const cert = certify(p, stages, opts.unlinkCrossings);
-  if (cert.unlink === 'none' || cert.unlink === 'too-large') {
-    throw new BandError(`the class needs the bands to end at a certified unlink; the result is ${cert.unlink === 'none' ? 'not an unlink' : `too large to check (over ${cert.maxCrossings} crossings)`}`);
-  }
-  const f2 = (v: ClassVector) => ({ ...v, coefficients: v.support.map(() => 1) });
-  const found = ring === 'Z' ? classVectorZ(stages, p.saddles) : f2(classVector(stages, p.saddles));
-  return { ...found, ring, h: 0, q: cert.chi, zero: found.support.length === 0 };
+  return classesOf(p.pd, p.unknots, [p.saddles], opts)[0];
 }
 
 /** Two presentations on the same PD code (the union of both sets of finger moves): do their classes differ? */
 export function compareSurfaces(pd: PDCode, unknots: number, a: Saddle[], b: Saddle[], opts: ClassOptions = {}): SurfaceComparison {
-  return compared(surfaceClass({ pd, unknots, saddles: a }, opts), surfaceClass({ pd, unknots, saddles: b }, opts));
+  const [ca, cb] = classesOf(pd, unknots, [a, b], opts);
+  return compared(ca, cb);
 }
 
 /**
@@ -115,7 +129,8 @@ export function compareSurfaces(pd: PDCode, unknots: number, a: Saddle[], b: Sad
  */
 export function surfaceClassOn(p: BandPresentation, fingers: Fingers, opts: ClassOptions = {}): SurfaceClass {
   if (p.unknots > 0) throw new BandError('the class is carried to a knot drawing of one connected piece; this presentation has crossingless unknots');
-  return carriedClass(p.pd, surfaceClass(p, opts), fingers);
+  // The chain maps act on the cube, so the class is the cube's (the local route's basis is another).
+  return carriedClass(p.pd, surfaceClass(p, { ...opts, localCrossings: 0 }), fingers);
 }
 
 /** Two presentations with their own fingers over one knot diagram (the same `fingers.common`): do their classes differ? */
@@ -131,9 +146,46 @@ export interface Placed {
 }
 
 function compared(ca: SurfaceClass, cb: SurfaceClass): SurfaceComparison {
-  // Normal forms are canonical (over Z with the sign fixed), so the classes agree exactly when bidegree and coefficients do.
+  // Normal forms are canonical (over Z with the sign fixed; on the local route for classes computed together), so the classes agree exactly when bidegree and coefficients do.
   const key = (c: SurfaceClass): string => JSON.stringify([c.q, c.support, c.coefficients]);
   const same = (ca.zero && cb.zero) || key(ca) === key(cb);
   const equal = ca.ring === 'Z' ? 'equal up to sign: no conclusion' : 'equal: no conclusion';
   return { verdict: same ? equal : 'differ', a: ca, b: cb };
+}
+
+/** The classes of presentations on one code, each route's limits checked before any work. */
+function classesOf(pd: PDCode, unknots: number, bands: Saddle[][], opts: ClassOptions): SurfaceClass[] {
+  const ring = opts.ring ?? 'F2';
+  const cubeLimit = opts.maxCrossings ?? CLASS_CROSSINGS;
+  const localLimit = ring === 'F2' ? (opts.localCrossings ?? LOCAL_CLASS_CROSSINGS) : 0;
+  const basis: ClassBasis = pd.length <= cubeLimit ? 'cube' : 'local';
+  // The cheap fact first: the cube has 2^n resolutions.
+  if (basis === 'local' && pd.length > localLimit) {
+    const local = localLimit > cubeLimit ? ` and by the local algorithm up to ${localLimit}` : ring === 'Z' ? ' (over F2 further, by the local algorithm)' : '';
+    throw new BandError(`the class is computed on the cube of resolutions, up to ${cubeLimit} crossings${local}; this diagram has ${pd.length}`);
+  }
+  const edges = new Set(bands.flat().flatMap(({ a, b }) => [a, b])).size;
+  const edgeLimit = opts.localEdges ?? LOCAL_CLASS_EDGES;
+  if (basis === 'local' && edges > edgeLimit) {
+    throw new BandError(`past ${cubeLimit} crossings the class is computed by the local algorithm with the bands' edges cut open, up to ${edgeLimit} edges; these bands touch ${edges}`);
+  }
+  const presentations = bands.map((saddles) => ({ pd, unknots, saddles }));
+  const stages = presentations.map(bandStages);
+  // No crossings, so no edges and no bands: the unknots' disks, 1 x ... x 1.
+  if (pd.length === 0) {
+    const one = { support: [{ smoothing: '', x: [] }], basisSize: 1 };
+    return bands.map(() => ({ ring, basis, h: 0, q: unknots, zero: false, ...one, coefficients: [1], ...(ring === 'Z' ? { mod2: one, divisibility: 1 } : {}) }));
+  }
+  const certs = presentations.map((p, k) => certify(p, stages[k], opts.unlinkCrossings));
+  for (const cert of certs) {
+    if (cert.unlink === 'none' || cert.unlink === 'too-large') {
+      throw new BandError(`the class needs the bands to end at a certified unlink; the result is ${cert.unlink === 'none' ? 'not an unlink' : `too large to check (over ${cert.maxCrossings} crossings)`}`);
+    }
+  }
+  const f2 = (v: { support: (EnhancedState | LocalGenerator)[]; basisSize: number }) => ({ ...v, coefficients: v.support.map(() => 1) });
+  const found =
+    basis === 'local'
+      ? localClasses(pd, bands.map((saddles, k) => ({ stages: stages[k], saddles }))).map((v) => f2({ support: v.support.map((generator) => ({ generator })), basisSize: v.basisSize }))
+      : bands.map((saddles, k) => (ring === 'Z' ? classVectorZ(stages[k], saddles) : f2(classVector(stages[k], saddles))));
+  return found.map((v, k) => ({ ...v, ring, basis, h: 0, q: certs[k].chi, zero: v.support.length === 0 }));
 }

@@ -1,0 +1,24 @@
+// The class's lines in the Readout's bands section: bidegree, coordinates and basis on both
+// routes, and the limits of each. The classes are computed (shared/knot/bands), not made up: the
+// first ribbon disk of 9_46 on the cube and, with the cube's limit set below its 9 crossings, on
+// the local route; a ribbon disk's class is nonzero at q = 1 (Levine and Zemke, arXiv 1903.01546).
+import { render, screen } from '@testing-library/react-native';
+import { SurfaceClassText } from '@/components/readout/SurfaceClassText';
+import { surfaceClass } from '@/shared/knot/bands';
+import { disks946 } from '../shared/bands-fixtures';
+
+const limits = 'Cube of resolutions up to 14 crossings; past it the local algorithm, up to 30 crossings and bands on 6 edges.';
+
+test('on the cube: enhanced states as coordinates', () => {
+  render(<SurfaceClassText surface={{ value: surfaceClass(disks946.first[0]) }} />);
+  screen.getByText('Class over F2: nonzero at (h, q) = (0, 1)');
+  screen.getByText(/^Coordinates: 1 at [01]{9}/);
+  screen.getByText(`Basis: enhanced states of the band drawing's code (resolution per crossing; x-circles by smallest edge label). ${limits}`);
+});
+
+test('on the local route: numbered generators of the simplified complex', () => {
+  render(<SurfaceClassText surface={{ value: surfaceClass(disks946.first[0], { maxCrossings: 0 }) }} />);
+  screen.getByText('Class over F2: nonzero at (h, q) = (0, 1)');
+  screen.getByText(/^Coordinates: 1 at g\d+/);
+  screen.getByText(`Basis: generators g0, g1, … of the code's complex simplified by the local algorithm (numbered in its order, for this drawing's bands only). ${limits}`);
+});
