@@ -1,7 +1,7 @@
-// "Compare with…": the Slate's band surface against another sketch's on the same strands (a
-// fork, or a copy with other bands). Both are read on one drawing (local-compare.ts) in a worker;
-// different classes over F2 mean the surfaces are not isotopic rel boundary, equal ones prove
-// nothing, and other strands (even of the same knot) are another diagram: no comparison.
+// "Compare with…": the Slate's band surface against another sketch's on the same knot drawing (a
+// fork, or a copy with other bands). Both classes are carried to one diagram (local-compare.ts)
+// in a worker; different classes over F2 mean the surfaces are not isotopic rel boundary, equal
+// ones prove nothing, and another drawing (even of the same knot) is another diagram: no comparison.
 import { useMemo, useState } from 'react';
 import { create } from 'zustand';
 import { StyleSheet, Text, View } from 'react-native';
@@ -26,7 +26,7 @@ const useChoice = create<{ of: string | null; other: string | null; choose(of: s
 }));
 
 function verdictText(r: CompareAnswer): string {
-  if (r.kind === 'not-same') return 'Not the same knot diagram: no comparison (the two sketches need the same strands, as a fork has).';
+  if (r.kind === 'not-same') return 'Drawn on different diagrams: no comparison (the two sketches need the same knot drawing, as a fork has; their bands may differ).';
   if (r.kind === 'refused') return `No comparison: ${r.reason}`;
   if (r.verdict === 'differ') return 'Their classes differ: the surfaces are not isotopic rel boundary.';
   return 'Equal classes (no conclusion).';
@@ -80,7 +80,7 @@ export function BandsCompare() {
           <Text style={styles.line}>{verdictText(r.value)}</Text>
           {r.value.kind === 'compared' ? (
             <Text style={styles.note}>
-              This sketch: {r.value.a.zero ? 'zero' : 'nonzero'} at {bidegree(r.value.a)}; “{other.title}”: {r.value.b.zero ? 'zero' : 'nonzero'} at {bidegree(r.value.b)} (over F2, on the drawing with both sets of bands).
+              This sketch: {r.value.a.zero ? 'zero' : 'nonzero'} at {bidegree(r.value.a)}; “{other.title}”: {r.value.b.zero ? 'zero' : 'nonzero'} at {bidegree(r.value.b)} (over F2, {r.value.on === 'knot' ? 'on the knot drawing, the fingers that bring each band to a saddle taken back' : 'on the drawing with both sets of bands'}).
             </Text>
           ) : null}
         </View>

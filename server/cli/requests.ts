@@ -13,9 +13,10 @@ import { homfly } from '@/shared/knot/homfly';
 import { jonesFromBracket } from '@/shared/knot/jones';
 import { linkingMatrix } from '@/shared/knot/linking';
 import { guessName } from '@/shared/knot/names';
+import type { PDCode } from '@/shared/knot/pd';
 import { khovanov, KhRing } from '@/shared/khovanov';
 import { rasmussenS } from '@/shared/rasmussen';
-import { bandCertificate, compareSurfaces, Saddle, surfaceClass } from '@/shared/knot/bands';
+import { bandCertificate, compareOnDiagram, compareSurfaces, Saddle, surfaceClass, surfaceClassOn } from '@/shared/knot/bands';
 
 export const computable = [
   'components',
@@ -56,6 +57,8 @@ const oneCode = (keys: string[]) => (r: Record<string, unknown>) => keys.filter(
 
 // A band is a saddle between two edges of one face; a diagram has at most 2 * crossings edges.
 const Saddles = z.array(z.tuple([z.number().int(), z.number().int()])).max(diagramLimits.crossings);
+// Crossings of a presentation's code that its fingers made, numbered from 1.
+const Fingered = z.array(z.number().int().min(1)).max(diagramLimits.crossings);
 
 /** The diagram a cable is taken of: a code, with a framing per component (null = blackboard). */
 const CableOf = z
@@ -83,11 +86,18 @@ export const Request = z
     bands: Saddles.optional(),
     /** For "surfaceClass": a second presentation on the same code, to compare classes with. */
     compareBands: Saddles.optional(),
+    /** For "surfaceClass": the knot's own diagram, the request's "pd" without the crossings "fingers" (numbered from 1); the class is carried there. */
+    knot: PdCode.optional(),
+    fingers: Fingered.optional(),
+    /** With "knot": a second presentation on its own code over the same knot diagram, to compare classes with. */
+    compareWith: z.object({ pd: PdCode, bands: Saddles, fingers: Fingered.optional() }).strict().optional(),
   })
   .strict()
   .refine(oneCode(['pd', 'braid', 'dt', 'cable']), { message: 'give exactly one of "pd", "braid", "dt" or "cable"' })
   .refine((r) => (r.bands === undefined && r.compareBands === undefined) || r.pd !== undefined, { message: '"bands" and "compareBands" name edges of the request\'s "pd" code' })
   .refine((r) => !r.compute?.some((c) => c === 'bands' || c === 'surfaceClass') || r.bands !== undefined, { message: '"bands" and "surfaceClass" need "bands": [[a, b], ...]' })
+  .refine((r) => (r.fingers === undefined && r.compareWith === undefined) || r.knot !== undefined, { message: '"fingers" and "compareWith" need "knot", the diagram without the fingers' })
+  .refine((r) => r.knot === undefined || (r.pd !== undefined && r.compareBands === undefined), { message: '"knot" goes with a "pd" code, and a second presentation is then "compareWith", not "compareBands"' })
   .refine((r) => !r.compute?.includes('surfaceClass') || r.ring === undefined || r.ring === 'F2' || r.ring === 'Z', { message: '"surfaceClass" is computed over "F2" (the default) or "Z"' });
 export type Request = z.infer<typeof Request>;
 
@@ -154,7 +164,22 @@ export function answer(r: Request): Answer {
   if (wanted.has('surfaceClass')) {
     // The limits are checked before any work (surfaceClass: CLASS_CROSSINGS, LOCAL_CLASS_CROSSINGS, LOCAL_CLASS_EDGES).
     const ring = r.ring === 'Z' ? 'Z' : 'F2';
-    if (r.compareBands) {
+    if (r.knot) {
+      // The crossings that are not fingers are the knot's, in its order (carry.ts checks it).
+      const knot = diagram(r.knot).pd;
+      const placed = (pd: PDCode, fingers: number[] = []) => {
+        const bad = fingers.find((f) => f > pd.length);
+        if (bad !== undefined) throw new RangeError(`there is no crossing ${bad} among ${pd.length} to be a finger's`);
+        let next = 0;
+        return { common: knot, of: pd.map((_, i) => (fingers.includes(i + 1) ? -1 : next++)) };
+      };
+      const a = { presentation, fingers: placed(d.pd, r.fingers) };
+      if (r.compareWith) {
+        const other = r.compareWith;
+        const cmp = compareOnDiagram(a, { presentation: { pd: other.pd, unknots: 0, saddles: saddles(other.bands) }, fingers: placed(other.pd, other.fingers) }, { ring });
+        out.surfaceClass = { ...cmp.a, compare: { verdict: cmp.verdict, other: cmp.b } };
+      } else out.surfaceClass = surfaceClassOn(presentation, a.fingers, { ring });
+    } else if (r.compareBands) {
       const cmp = compareSurfaces(d.pd, d.unknots, presentation.saddles, saddles(r.compareBands), { ring });
       out.surfaceClass = { ...cmp.a, compare: { verdict: cmp.verdict, other: cmp.b } };
     } else out.surfaceClass = surfaceClass(presentation, { ring });

@@ -10,7 +10,10 @@
 // cases first, then the cube's, each in growing size, so each figure bounds that case). The
 // class over Z on P(3,-3,4) and P(3,-3,6).
 
-import { bandCertificate, BandPresentation, surfaceClass } from '@/shared/knot/bands';
+import { bandCertificate, BandPresentation, surfaceClass, surfaceClassOn } from '@/shared/knot/bands';
+import { diagram } from '@/shared/knot/diagram';
+import { faces, pushAcross } from '@/shared/knot/moves';
+import { orient } from '@/shared/knot/pd';
 import { pretzelLink } from '@/shared/knot/families/pretzel';
 import { ribbon, summed } from '@/tests/shared/bands-fixtures';
 import { Line, median, round } from './timing';
@@ -92,6 +95,26 @@ export function bandsBench(): Line[] {
       times.push(performance.now() - t);
     }
     lines.push({ name: `disk class over Z of P(${twists.join(',')}) (${p.pd.length} crossings)`, value: round(median(times)), unit: 'ms' });
+  }
+  // The class with a finger pushed in a face away from the band, carried back to the pretzel's
+  // own code (carry.ts, common-class.ts), beside the class on the fingered code alone.
+  const p = ribbonBand([3, -3, 6]);
+  const keep = p.saddles.flatMap((s) => [s.a, s.b]);
+  const plain = diagram(p.pd);
+  const face = faces(plain.pd).find((f) => f.length > 2 && f.every((c) => !keep.includes(plain.pd[c.crossing][c.arrive])))!;
+  const fingered = pushAcross(plain, face, 0, 1, true);
+  const heads = orient(p.pd).head;
+  const label = (l: number) => fingered.pd[heads.get(l)!.crossing][heads.get(l)!.position];
+  const q = { pd: fingered.pd, unknots: 0, saddles: p.saddles.map(({ a, b }) => ({ a: label(a), b: label(b) })) };
+  const fingers = { common: p.pd, of: fingered.pd.map((_, i) => (i < p.pd.length ? i : -1)) };
+  for (const [name, f] of [['on the fingered code', () => surfaceClass(q, { maxCrossings: 16 })], ['carried to the knot code', () => surfaceClassOn(q, fingers, { maxCrossings: 16 })]] as const) {
+    const times: number[] = [];
+    for (let r = 0; r < 3; r++) {
+      const t = performance.now();
+      f();
+      times.push(performance.now() - t);
+    }
+    lines.push({ name: `disk class of P(3,-3,6) with a finger (${q.pd.length} crossings), ${name}`, value: round(median(times)), unit: 'ms' });
   }
   return lines;
 }

@@ -215,6 +215,27 @@ describe('bands in requests', () => {
     expect(ask({ pd: p946, bands: [[2, 12]], compute: ['surfaceClass'], ring: 'Q' }).error).toMatch(/over "F2" \(the default\) or "Z"/);
   });
 
+  // The two disks, each after a finger of its own (an R2 pushed in a face away from its band:
+  // crossings 10 and 11), so their codes differ; 9_46 itself is the common diagram.
+  const fingeredA = [[1, 10, 2, 11], [11, 22, 12, 1], [21, 12, 22, 13], [15, 4, 16, 5], [5, 14, 6, 15], [13, 6, 14, 7], [18, 10, 19, 9], [8, 20, 9, 19], [20, 8, 21, 7], [17, 2, 18, 3], [16, 4, 17, 3]];
+  const fingeredB = [[1, 10, 2, 11], [11, 22, 12, 1], [21, 12, 22, 13], [15, 2, 16, 3], [3, 14, 4, 15], [13, 4, 14, 5], [16, 8, 17, 7], [6, 20, 7, 19], [20, 6, 21, 5], [18, 10, 19, 9], [17, 8, 18, 9]];
+
+  it('answers "surfaceClass" on "knot": each disk carried down its own finger, the classes still differ and the first is the class without the finger', () => {
+    const a = ask({ pd: fingeredA, bands: [[11, 1]], knot: p946, fingers: [10, 11], compareWith: { pd: fingeredB, bands: [[15, 3]], fingers: [10, 11] }, compute: ['surfaceClass'] });
+    // Sundberg and Swann, arXiv 2103.01438: the two standard disks of 9_46 have different classes.
+    expect(a.surfaceClass).toMatchObject({ h: 0, q: 1, zero: false, compare: { verdict: 'differ', other: { q: 1, zero: false } } });
+    // A finger is an isotopy away from the band: its chain maps give back the class on 9_46 itself.
+    const plain = ask({ pd: p946, bands: [[2, 12]], compute: ['surfaceClass'] }).surfaceClass;
+    expect(a.surfaceClass.support).toEqual(plain.support);
+  });
+
+  it('refuses "fingers" without "knot", "knot" with "compareBands", and fingers that are not the knot diagram\'s complement', () => {
+    expect(ask({ pd: fingeredA, bands: [[11, 1]], fingers: [10, 11], compute: ['surfaceClass'] }).error).toMatch(/need "knot"/);
+    expect(ask({ pd: fingeredA, bands: [[11, 1]], knot: p946, compareBands: [[1, 11]], compute: ['surfaceClass'] }).error).toMatch(/"compareWith", not "compareBands"/);
+    expect(ask({ pd: fingeredA, bands: [[11, 1]], knot: p946, fingers: [10, 12], compute: ['surfaceClass'] }).error).toBe('there is no crossing 12 among 11 to be a finger\'s');
+    expect(ask({ pd: fingeredA, bands: [[11, 1]], knot: p946, fingers: [1, 2], compute: ['surfaceClass'] }).error).toMatch(/fingers/);
+  });
+
   it('refuses bands without a PD code, a class without bands, a bad band and a code over the crossing limit', () => {
     expect(ask({ braid: [1, 1, 1], bands: [[4, 6]], compute: ['bands'] }).error).toMatch(/name edges of the request's "pd" code/);
     expect(ask({ pd: trefoil, compute: ['surfaceClass'] }).error).toMatch(/need "bands"/);

@@ -1,5 +1,7 @@
-// Comparing two band surfaces drawn on the same strands (components/readout/local-compare.ts):
-// both are read on one drawing with both sets of bands, and their classes in Kh(K; F2) compared.
+// Comparing two band surfaces drawn on the same strands (components/readout/local-compare.ts).
+// The unknot drawn as an ellipse crosses nothing, so its fingers cannot be taken back (the cube
+// leaves crossingless circles out): both are read on one drawing with both sets of bands, and
+// their classes in Kh(K; F2) compared there.
 
 import { certifyBands } from '@/components/readout/local-bands';
 import { compareSketches } from '@/components/readout/local-compare';
@@ -49,7 +51,7 @@ describe('comparing two sketches', () => {
   test('two ribbon disks of the unknot: equal classes, no conclusion', () => {
     // Kh^{0,1}(unknot; F2) is one-dimensional (Khovanov 2000), so both nonzero classes agree.
     const r = compareSketches({ a: disk, b: otherDisk });
-    expect(r).toMatchObject({ kind: 'compared', verdict: 'equal: no conclusion', a: { q: 1, zero: false }, b: { q: 1, zero: false } });
+    expect(r).toMatchObject({ kind: 'compared', on: 'union', verdict: 'equal: no conclusion', a: { q: 1, zero: false }, b: { q: 1, zero: false } });
   });
 
   test('a disk and a torus: their classes differ', () => {

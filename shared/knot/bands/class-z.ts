@@ -21,7 +21,7 @@ import { bezout, combine, dot, kernel, ZEchelon, ZVector } from '../../linalg/la
 import { smith } from '../../linalg/smith';
 import { sparse } from '../../linalg/sparse';
 import { backwards, ClassVector, f2NormalForm, odd, unlinkStart } from './class';
-import { Cube, differential, enhancedState, EnhancedState, level, Level } from './cube-levels';
+import { Cube, differential, enhancedState, EnhancedState, level, Level, Movie } from './cube-levels';
 import { Stage } from './saddle';
 import { BandError, Saddle } from './types';
 
@@ -99,9 +99,12 @@ export function classVectorZ(stages: Stage[], saddles: Saddle[]): ClassVectorZ {
   const d0 = nMinus < n ? differential(unlink, zeroLevel, level(unlink, nMinus + 1, c)) : () => [];
   const g = generator(zeroLevel.gens.length, (i) => images(d0, i), boundaryRows(unlink, nMinus, c, zeroLevel));
   const { chain, at } = backwards(m, stages, saddles, c, zeroLevel, g);
+  return zNormalForm(m, stages[0], at, c - last, chain);
+}
 
-  const q = c - last;
-  const rows = boundaryRows(m.cubeOf(stages[0]), nMinus, q, at);
+/** The class over Z up to sign of an integer cycle of C^{0,q} of `start` (`at` that level), with its reduction mod 2 and divisibility. */
+export function zNormalForm(m: Movie, start: Stage, at: Level, q: number, chain: ZVector): ClassVectorZ {
+  const rows = boundaryRows(m.cubeOf(start), m.nMinus, q, at);
   const echelon = new ZEchelon();
   for (const row of rows) echelon.add(row);
   const [plus, minus] = [chain, combine(-1, chain, 0, new Map())].map((v) => echelon.reduce(v));
@@ -114,7 +117,7 @@ export function classVectorZ(stages: Stage[], saddles: Saddle[]): ClassVectorZ {
     support: normal.map(([i]) => enhancedState(m, at, i)),
     coefficients: normal.map(([, x]) => safe(x)),
     basisSize: at.gens.length - echelon.rank,
-    mod2: f2NormalForm(m, stages[0], at, q, odd(chain)),
+    mod2: f2NormalForm(m, start, at, q, odd(chain)),
     divisibility: safe(divisibility),
   };
 }

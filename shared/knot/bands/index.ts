@@ -8,6 +8,8 @@ import { classVectorZ } from './class-z';
 import { localClasses } from './class-local';
 import { EnhancedState } from './cube-levels';
 import { bandStages } from './saddle';
+import { Fingers } from './carry';
+import { carriedClass } from './common-class';
 import { BandError, BandPresentation, Saddle } from './types';
 
 export { BandError } from './types';
@@ -17,6 +19,7 @@ export type { AfterBands } from './after';
 export type { AfterHomology, BandCertificate, UnlinkCertificate } from './certificate';
 export { UNLINK_CROSSINGS } from './certificate';
 export type { EnhancedState } from './cube-levels';
+export type { Fingers } from './carry';
 
 /** The cube's default crossing limit for the class (class.ts, class-z.ts). */
 export const CLASS_CROSSINGS = 14;
@@ -117,6 +120,32 @@ export function surfaceClass(p: BandPresentation, opts: ClassOptions = {}): Surf
 /** Two presentations on the same PD code (the union of both sets of finger moves): do their classes differ? */
 export function compareSurfaces(pd: PDCode, unknots: number, a: Saddle[], b: Saddle[], opts: ClassOptions = {}): SurfaceComparison {
   const [ca, cb] = classesOf(pd, unknots, [a, b], opts);
+  return compared(ca, cb);
+}
+
+/**
+ * The class of p carried to the knot's own diagram `fingers.common`, the fingers that made the
+ * bands short saddles taken back (common-class.ts). BandError when they cannot be.
+ */
+export function surfaceClassOn(p: BandPresentation, fingers: Fingers, opts: ClassOptions = {}): SurfaceClass {
+  if (p.unknots > 0) throw new BandError('the class is carried to a knot drawing of one connected piece; this presentation has crossingless unknots');
+  // The chain maps act on the cube, so the class is the cube's (the local route's basis is another).
+  return carriedClass(p.pd, surfaceClass(p, { ...opts, localCrossings: 0 }), fingers);
+}
+
+/** Two presentations with their own fingers over one knot diagram (the same `fingers.common`): do their classes differ? */
+export function compareOnDiagram(a: Placed, b: Placed, opts: ClassOptions = {}): SurfaceComparison {
+  if (JSON.stringify(a.fingers.common) !== JSON.stringify(b.fingers.common)) throw new BandError('the presentations are drawn on different diagrams');
+  return compared(surfaceClassOn(a.presentation, a.fingers, opts), surfaceClassOn(b.presentation, b.fingers, opts));
+}
+
+/** A presentation and where its code sits over the knot's own diagram. */
+export interface Placed {
+  presentation: BandPresentation;
+  fingers: Fingers;
+}
+
+function compared(ca: SurfaceClass, cb: SurfaceClass): SurfaceComparison {
   // Normal forms are canonical (over Z with the sign fixed; on the local route for classes computed together), so the classes agree exactly when bidegree and coefficients do.
   const key = (c: SurfaceClass): string => JSON.stringify([c.q, c.support, c.coefficients]);
   const same = (ca.zero && cb.zero) || key(ca) === key(cb);
