@@ -32,26 +32,10 @@ export function cutWidths(pd: PDCode, order: readonly number[]): number[] {
   });
 }
 
-/**
- * Widest cut and cost of any order, so a caller can compare its own order with ours. With
- * `growth` > 1 the cut after step k counts growth^(k - n) times (see improveOrder).
- */
-export function scoreOrder(pd: PDCode, order: readonly number[], growth = 1): OrderScore {
+/** Widest cut and cost of any order, so a caller can compare its own order with ours. */
+export function scoreOrder(pd: PDCode, order: readonly number[]): OrderScore {
   const cuts = cutWidths(pd, order);
-  const step = stepWeights(order.length, growth);
-  return { widest: Math.max(0, ...cuts), cost: cuts.reduce((s, w, k) => s + weight(w) * step[k + 1], 0) };
-}
-
-/** step[L] = growth^(L - n): at most 1, so late steps never overflow. */
-const stepWeights = (n: number, growth: number): number[] => Array.from({ length: n + 1 }, (_, L) => growth ** (L - n));
-
-/**
- * `order` after single-crossing moves that lower its cost with this growth: where the work of
- * a step grows with the crossings already placed, not only with the cut (a tangle's Khovanov
- * complex does), growth > 1 makes a wide cut late in the order dearer than one early.
- */
-export function improveOrder(pd: PDCode, order: readonly number[], growth: number): number[] {
-  return improve(crossingGraph(pd), [...order], growth);
+  return { widest: Math.max(0, ...cuts), cost: cuts.reduce((s, w) => s + weight(w), 0) };
 }
 
 /** 2^cut, capped where a double would overflow (such a cut is far beyond any contraction). */
@@ -201,21 +185,18 @@ const PASSES = 4;
  * most (if any). Removing crossing x from a placed set P changes its cut by 2 e(x, P) - deg x,
  * adding it by deg x - 2 e(x, P), so each candidate place costs O(1) while scanning.
  */
-function improve(graph: Graph, start: number[], growth = 1): number[] {
+function improve(graph: Graph, start: number[]): number[] {
   const n = start.length;
   const pow = Array.from({ length: 4 * n + 5 }, (_, w) => weight(w));
-  const step = stepWeights(n, growth);
   let order = start;
   let cuts = prefixCuts(graph, order);
   for (let pass = 0; pass < PASSES; pass++) {
     let moved = false;
-    // Whole-number costs (growth 1) gain at least 1; a smaller gain is rounding.
-    const least = Math.max(0.5, 1e-12 * cuts.reduce((s, w, L) => s + pow[w] * step[L], 0));
     for (const x of [...order]) {
       const i = order.indexOf(x);
       const d = graph.degree[x];
       const e = graph.edges[x];
-      let bestDelta = -least;
+      let bestDelta = -0.5; // costs are whole numbers: a smaller gain is rounding
       let bestJ = i;
       // Later: prefixes L = i+1..j lose x; cuts[L] is the cut after L crossings.
       let delta = 0;
@@ -224,7 +205,7 @@ function improve(graph: Graph, start: number[], growth = 1): number[] {
       const before = toPlaced;
       for (let j = i + 1; j < n; j++) {
         toPlaced += e.get(order[j]) ?? 0;
-        delta += (pow[cuts[j + 1] + 2 * toPlaced - d] - pow[cuts[j]]) * step[j];
+        delta += pow[cuts[j + 1] + 2 * toPlaced - d] - pow[cuts[j]];
         if (delta < bestDelta) [bestDelta, bestJ] = [delta, j];
       }
       // Earlier: prefixes L = j+1..i gain x (x then sits at index j).
@@ -232,7 +213,7 @@ function improve(graph: Graph, start: number[], growth = 1): number[] {
       toPlaced = before;
       for (let j = i - 1; j >= 0; j--) {
         toPlaced -= e.get(order[j]) ?? 0; // now e(x, order[0..j-1])
-        delta += (pow[cuts[j] + d - 2 * toPlaced] - pow[cuts[j + 1]]) * step[j + 1];
+        delta += pow[cuts[j] + d - 2 * toPlaced] - pow[cuts[j + 1]];
         if (delta < bestDelta) [bestDelta, bestJ] = [delta, j];
       }
       if (bestJ !== i) {

@@ -1,12 +1,11 @@
 // The engine's crossing order (shared/khovanov/order.ts): a permutation of the crossings on
-// random diagrams, kinks, split links, framed cables and the empty code; its moves never raise
-// the cost they lower; and the engine in it, and in every start it is chosen from, equals the
-// reference cube.
+// random diagrams, kinks, split links, framed cables and the empty code; and the engine in it,
+// and in both orders it is chosen from, equals the reference cube.
 import fc from 'fast-check';
 import { cubeKhovanov } from '@/shared/khovanov/cube';
 import { fastKhovanov, withUnknots } from '@/shared/khovanov/engine';
 import { crossingOrder, greedyOrder } from '@/shared/khovanov/order';
-import { contractionOrder, cutWidths, improveOrder, scoreOrder } from '@/shared/knot/contraction-order';
+import { contractionOrder, cutWidths } from '@/shared/knot/contraction-order';
 import { fromBraid } from '@/shared/knot/braid';
 import { diagram } from '@/shared/knot/diagram';
 import { cable } from '@/shared/knot/families/cable';
@@ -39,29 +38,15 @@ describe('crossingOrder', () => {
     ];
     for (const pd of codes) expect(isPermutation(crossingOrder(pd), pd.length)).toBe(true);
   });
-
-  it('moves crossings only where that lowers the growth-weighted cost', () => {
-    fc.assert(
-      fc.property(arbDiagram(16), fc.constantFrom(1, 1.15, 2), (d, growth) => {
-        for (const start of [greedyOrder(d.pd).order, [...contractionOrder(d.pd).order].reverse()]) {
-          const moved = improveOrder(d.pd, start, growth);
-          expect(isPermutation(moved, d.pd.length)).toBe(true);
-          expect(scoreOrder(d.pd, moved, growth).cost).toBeLessThanOrEqual(scoreOrder(d.pd, start, growth).cost * (1 + 1e-12));
-        }
-      }),
-      { numRuns: 60 },
-    );
-  });
 });
 
-describe('the engine in the crossing order and in each of its starts = reference cube', () => {
+describe('the engine in the crossing order and in the greedy and tree orders = reference cube', () => {
   it('on random diagrams up to 8 crossings', () => {
     fc.assert(
       fc.property(arbDiagram(8), (d) => {
         // the cube reads the empty code as an unknot already
         fc.pre(d.pd.length > 0);
-        const starts = [greedyOrder(d.pd).order, contractionOrder(d.pd).order];
-        const orders = [crossingOrder(d.pd), ...[...starts, ...starts.map((o) => [...o].reverse())].map((o) => improveOrder(d.pd, o, 1.15))];
+        const orders = [crossingOrder(d.pd), greedyOrder(d.pd).order, contractionOrder(d.pd).order];
         for (const [name, ring] of cubeRings) {
           const cube = table(withUnknots(cubeKhovanov(d.pd, ring), d.unknots));
           orders.forEach((order, k) => expect([name, k, table(fastKhovanov(d.pd, ring, { order, unknots: d.unknots }))]).toEqual([name, k, cube]));
