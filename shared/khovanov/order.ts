@@ -3,6 +3,11 @@
 // of Bar-Natan, math/0606318, Sect. 6). The greedy walk is tried from several first crossings
 // and the order whose boundaries cost least (sum of 2^width over the steps) is kept, unless the
 // order from a tree decomposition (../knot/contraction-order.ts) costs less still.
+// At a fixed cut the simplified complex still grows with the crossings inside (about 1.13x per
+// crossing on T(8,8), 1.2x on the (3,0)-cable of the figure-eight), yet weighting the late
+// steps by that growth (moving crossings to lower sum 2^cut * 1.15^k) was measured slower on a
+// random 6-strand braid, the figure-eight's 3-cable and the 0-framed trefoil's 4-cable: the
+// plain sum stays.
 
 import { contractionOrder } from '../knot/contraction-order';
 import { PDCode } from '../knot/pd';

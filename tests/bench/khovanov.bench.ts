@@ -7,15 +7,15 @@
 // is sampled once at its end, a lower bound of its peak.
 // Then cables at research scale, each run once and stopped after CAP_S seconds ("over" the cap
 // then), with its cpu time, peak rss, widest open boundary, most objects, the Euler check
-// (q + q^-1) V of every result, and the widest cut of the greedy and of the tree-decomposition
-// crossing order (the engine takes the cheaper). KH_ONLY=<text> runs only the cable items whose
-// name (with its ring, e.g. "T(8,8) over Q") contains that text, the sweep for "sweep" and the
-// first part for "goals", so one item can be measured alone.
+// (q + q^-1) V of every result, and the widest cut of the engine's crossing order and of the
+// greedy and tree-decomposition orders it starts from. KH_ONLY=<text> runs only the cable
+// items whose name (with its ring, e.g. "T(8,8) over Q") contains that text, the sweep for
+// "sweep" and the first part for "goals", so one item can be measured alone.
 
 import { khovanov, KhCancelled, KhRing, Progress } from '@/shared/khovanov';
 import { cubeKhovanov } from '@/shared/khovanov/cube';
 import { fastKhovanov } from '@/shared/khovanov/engine';
-import { greedyOrder } from '@/shared/khovanov/order';
+import { crossingOrder, greedyOrder } from '@/shared/khovanov/order';
 import { contractionOrder, scoreOrder } from '@/shared/knot/contraction-order';
 import { fromBraid } from '@/shared/knot/braid';
 import { diagram, Diagram } from '@/shared/knot/diagram';
@@ -60,6 +60,13 @@ function timeEngine(pd: PDCode, ring: KhRing, runs: number, sampleMemory = true)
 
 const round = (x: number, digits = 0) => Number(x.toFixed(digits));
 
+/** The widest cut of the engine's crossing order, beside those of the greedy and the tree-decomposition order it starts from. */
+const orderLine = (label: string, pd: PDCode): Line => ({
+  name: `${label}, widest cut of the engine's order (of the greedy / of the tree-decomposition order)`,
+  value: scoreOrder(pd, crossingOrder(pd)).widest,
+  unit: `(${scoreOrder(pd, greedyOrder(pd).order).widest} / ${contractionOrder(pd).widest}) points`,
+});
+
 /** Seconds after which a research-scale run is stopped. */
 const CAP_S = 180;
 
@@ -98,7 +105,7 @@ function cableLines(name: string, d: Diagram, ring: KhRing, goal?: string, memGo
     { name: `${label}, most objects${done ? '' : ' so far'}`, value: objects, unit: 'objects' },
     // How far a run stopped at the cap got, to compare two engines that both miss it.
     ...(done ? [] : [{ name: `${label}, crossings merged at the cap`, value: merged, unit: `/ ${d.pd.length}` }]),
-    { name: `${label}, widest cut of the greedy order / of the tree-decomposition order`, value: scoreOrder(d.pd, greedyOrder(d.pd).order).widest, unit: `/ ${contractionOrder(d.pd).widest} points` },
+    orderLine(label, d.pd),
     ...(done ? [{ name: `${label}, Euler characteristic = (q + q^-1) V`, value: euler ? 1 : 0, unit: euler ? '(yes)' : '(NO)', goal: '1' }] : []),
     // The machine is shared: the load beside the figures says how far the wall time is to be trusted.
     { name: `${label}, load average (1 min) at its end`, value: round(loadavg()[0], 2), unit: '' },
@@ -168,7 +175,7 @@ export function khovanovBench(): Line[] {
     lines.push({ name: `kh: ${name}, peak rss`, value: round(r.rssMB), unit: 'MB', goal: memGoal });
     lines.push({ name: `kh: ${name}, peak heap used`, value: round(r.heapMB), unit: 'MB' });
     lines.push({ name: `kh: ${name}, widest open boundary`, value: r.boundary, unit: 'points' });
-    lines.push({ name: `kh: ${name}, widest cut of the greedy order / of the tree-decomposition order`, value: scoreOrder(pd, greedyOrder(pd).order).widest, unit: `/ ${contractionOrder(pd).widest} points` });
+    lines.push(orderLine(`kh: ${name}`, pd));
   }
 
   // Blackboard-framed (r, 0)-cables of the right trefoil (closure of s1^3): 12 and 27 crossings.

@@ -9,8 +9,8 @@ import { fromBraid } from '@/shared/knot/braid';
 import { diagram, Diagram } from '@/shared/knot/diagram';
 import { cable } from '@/shared/knot/families/cable';
 import { mirror } from '@/shared/knot/families/mirror';
-import { integers, primeField, rationals, Ring } from '@/shared/linalg/ring';
-import { mirrorDual, table, torusWord } from './khovanov-fixtures';
+import { integers, primeField, Ring } from '@/shared/linalg/ring';
+import { cubeRings, mirrorDual, table, torusWord } from './khovanov-fixtures';
 
 const kh = (d: Diagram, ring: KhRing) => khovanov(d.pd, { ring, unknots: d.unknots, eulerCheck: false }).groups;
 const trefoil = fromBraid([1, 1, 1]);
@@ -19,12 +19,7 @@ const eight = fromBraid([1, -2, 1, -2]);
 const framedUnknot = (n: number): Diagram => diagram([], { unknots: 1, framings: [n] });
 
 describe('fast engine = reference cube on cables (<= 12 crossings)', () => {
-  const rings: [KhRing, Ring<unknown>][] = [
-    ['Z', integers as Ring<unknown>],
-    ['Q', rationals as Ring<unknown>],
-    ['F2', primeField(2) as Ring<unknown>],
-    ['F3', primeField(3) as Ring<unknown>],
-  ];
+  const rings = cubeRings;
   const cables: [string, Diagram][] = [
     ['(2,0)-cable of the blackboard trefoil', cable(trefoil, 0, 2, 0)],
     ['(1,1)-cable of the blackboard trefoil', cable(trefoil, 0, 1, 1)],

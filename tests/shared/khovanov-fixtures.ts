@@ -4,6 +4,8 @@
 import { fromBraid } from '@/shared/knot/braid';
 import { PDCode } from '@/shared/knot/pd';
 import { KhGroup } from '@/shared/khovanov/homology';
+import type { KhRing } from '@/shared/khovanov';
+import { integers, primeField, rationals, Ring } from '@/shared/linalg/ring';
 
 /** (sigma_1 ... sigma_{p-1})^q closes to the positive torus link T(p, q). */
 export function torusWord(p: number, q: number): number[] {
@@ -47,3 +49,11 @@ export function mirrorDual(groups: readonly KhGroup[]): KhGroup[] {
     .filter((g) => g.free > 0 || g.torsion.length > 0)
     .sort((a, b) => a.i - b.i || a.j - b.j);
 }
+
+/** The rings the engine is checked over against the reference cube, by name and as rings. */
+export const cubeRings: [KhRing, Ring<unknown>][] = [
+  ['Z', integers as Ring<unknown>],
+  ['Q', rationals as Ring<unknown>],
+  ['F2', primeField(2) as Ring<unknown>],
+  ['F3', primeField(3) as Ring<unknown>],
+];
