@@ -1,21 +1,24 @@
 // A morphism between two crossingless matchings: its coefficient on each dotted-disc basis
 // cobordism, keyed by the dot mask (cobordism.ts). Most differential entries have a single
-// term, so that term lives in two fields and a Map is made only for a second one: a Map per
-// entry was most of the engine's garbage. Masks are >= 0; -1 marks the empty field.
+// term, so that term lives in two fields; a second term moves all terms into two short arrays,
+// scanned linearly: entries have a handful of terms, where a Map per entry cost more in hashing
+// and in garbage than the scan. Masks are >= 0; -1 marks the empty field.
 
 export class Mor<T> {
   private mask = -1;
   private value: T | undefined = undefined;
-  private map: Map<number, T> | undefined = undefined;
+  /** Every term's mask and coefficient, once the entry has had two terms. */
+  private masks: number[] | undefined = undefined;
+  private values: T[] | undefined = undefined;
 
   get size(): number {
-    if (this.map) return this.map.size;
+    if (this.masks) return this.masks.length;
     return this.mask < 0 ? 0 : 1;
   }
 
   /** The mask of the only term, or -1 when there are several (or none): lets hot loops skip forEach's closure. */
   get single(): number {
-    return this.map ? -1 : this.mask;
+    return this.masks ? -1 : this.mask;
   }
 
   /** The coefficient of the only term (when `single` >= 0). */
@@ -24,20 +27,42 @@ export class Mor<T> {
   }
 
   get(mask: number): T | undefined {
-    if (this.map) return this.map.get(mask);
+    if (this.masks) {
+      const k = this.masks.indexOf(mask);
+      return k < 0 ? undefined : this.values![k];
+    }
     return mask === this.mask ? this.value : undefined;
   }
 
   set(mask: number, value: T): void {
-    if (this.map) this.map.set(mask, value);
-    else if (this.mask < 0 || this.mask === mask) {
+    if (this.masks) {
+      const k = this.masks.indexOf(mask);
+      if (k >= 0) this.values![k] = value;
+      else {
+        this.masks.push(mask);
+        this.values!.push(value);
+      }
+    } else if (this.mask < 0 || this.mask === mask) {
       this.mask = mask;
       this.value = value;
-    } else this.map = new Map([[this.mask, this.value as T], [mask, value]]);
+    } else {
+      this.masks = [this.mask, mask];
+      this.values = [this.value as T, value];
+      this.value = undefined;
+    }
   }
 
   delete(mask: number): boolean {
-    if (this.map) return this.map.delete(mask);
+    if (this.masks) {
+      const { masks, values } = this;
+      const k = masks.indexOf(mask);
+      if (k < 0) return false;
+      masks[k] = masks[masks.length - 1];
+      values![k] = values![masks.length - 1];
+      masks.pop();
+      values!.pop();
+      return true;
+    }
     if (mask !== this.mask) return false;
     this.mask = -1;
     this.value = undefined;
@@ -45,7 +70,8 @@ export class Mor<T> {
   }
 
   forEach(f: (value: T, mask: number) => void): void {
-    if (this.map) this.map.forEach(f);
-    else if (this.mask >= 0) f(this.value as T, this.mask);
+    if (this.masks) {
+      for (let k = 0; k < this.masks.length; k++) f(this.values![k], this.masks[k]);
+    } else if (this.mask >= 0) f(this.value as T, this.mask);
   }
 }
