@@ -18,45 +18,104 @@ export interface Obj {
   readonly height: number;
 }
 
-/** The nonzero components of the differential out of one object, in no order. */
+/**
+ * The nonzero components of the differential out of one object, in no order. An entry with a
+ * single term (most of them) is held in the row's arrays, with no object of its own: a Mor per
+ * entry was most of the heap the garbage collector walked. An entry with several terms holds a
+ * Mor in `values`, and its mask is -1.
+ */
 export class Row<T> {
   readonly targets: number[] = [];
-  readonly mors: Mor<T>[] = [];
+  readonly masks: number[] = [];
+  readonly values: (T | Mor<T>)[] = [];
 
   get size(): number {
     return this.targets.length;
-  }
-
-  get(t: number): Mor<T> | undefined {
-    const k = this.targets.indexOf(t);
-    return k < 0 ? undefined : this.mors[k];
   }
 
   keys(): readonly number[] {
     return this.targets;
   }
 
-  forEach(f: (m: Mor<T>, t: number) => void): void {
-    for (let k = 0; k < this.targets.length; k++) f(this.mors[k], this.targets[k]);
+  /** The terms of entry k, as (coefficient, mask). */
+  terms(k: number, f: (c: T, mask: number) => void): void {
+    if (this.masks[k] >= 0) f(this.values[k] as T, this.masks[k]);
+    else (this.values[k] as Mor<T>).forEach(f);
   }
 
-  push(t: number, m: Mor<T>): void {
+  /** Entry k's coefficient on the basis cobordism `mask`. */
+  coefficient(k: number, mask: number): T | undefined {
+    const m = this.masks[k];
+    if (m >= 0) return m === mask ? (this.values[k] as T) : undefined;
+    return (this.values[k] as Mor<T>).get(mask);
+  }
+
+  /** The number of terms of entry k. */
+  termCount(k: number): number {
+    return this.masks[k] >= 0 ? 1 : (this.values[k] as Mor<T>).size;
+  }
+
+  /** The entry to t as a Mor of its own (a copy when it has one term), or undefined: for callers off the hot path. */
+  get(t: number): Mor<T> | undefined {
+    const k = this.targets.indexOf(t);
+    return k < 0 ? undefined : this.entry(k);
+  }
+
+  forEach(f: (m: Mor<T>, t: number) => void): void {
+    for (let k = 0; k < this.targets.length; k++) f(this.entry(k), this.targets[k]);
+  }
+
+  private entry(k: number): Mor<T> {
+    if (this.masks[k] < 0) return this.values[k] as Mor<T>;
+    const m = new Mor<T>();
+    m.set(this.masks[k], this.values[k] as T);
+    return m;
+  }
+
+  push(t: number, mask: number, c: T): void {
     this.targets.push(t);
-    this.mors.push(m);
+    this.masks.push(mask);
+    this.values.push(c);
+  }
+
+  /** Adds c [mask] to entry k; true when the entry is now zero (the caller removes it). */
+  add(k: number, mask: number, c: T, coef: Coefficients<T>, isZero: (a: T) => boolean): boolean {
+    const m = this.masks[k];
+    if (m === mask) {
+      const v = coef.add(this.values[k] as T, c);
+      this.values[k] = v;
+      return isZero(v);
+    }
+    if (isZero(c)) return false;
+    let mor: Mor<T>;
+    if (m >= 0) {
+      mor = new Mor<T>();
+      mor.set(m, this.values[k] as T);
+      this.masks[k] = -1;
+      this.values[k] = mor;
+    } else mor = this.values[k] as Mor<T>;
+    const old = mor.get(mask);
+    const v = old === undefined ? c : coef.add(old, c);
+    if (!isZero(v)) mor.set(mask, v);
+    else if (mor.delete(mask)) return mor.size === 0;
+    return false;
   }
 
   /** Drops entry k; the last entry takes its place. */
   removeAt(k: number): void {
     const last = this.targets.length - 1;
     this.targets[k] = this.targets[last];
-    this.mors[k] = this.mors[last];
+    this.masks[k] = this.masks[last];
+    this.values[k] = this.values[last];
     this.targets.pop();
-    this.mors.pop();
+    this.masks.pop();
+    this.values.pop();
   }
 
   clear(): void {
     this.targets.length = 0;
-    this.mors.length = 0;
+    this.masks.length = 0;
+    this.values.length = 0;
   }
 }
 
@@ -80,6 +139,7 @@ export class TangleComplex<T> {
   /** pos[t] = position of t in the row being updated, -1 elsewhere. */
   private pos = new Int32Array(0);
   private readonly coef: Coefficients<T>;
+  private readonly isZero: (a: T) => boolean;
   live = 0;
 
   /** `boundary` lists the labels of the open ends; matchings are on their positions. */
@@ -89,6 +149,7 @@ export class TangleComplex<T> {
     readonly theory: Theory = khovanovTheory,
   ) {
     this.coef = coefficients(ring);
+    this.isZero = (a) => ring.isZero(a);
   }
 
   matchingId(m: Matching): number {
@@ -120,24 +181,16 @@ export class TangleComplex<T> {
   }
 
   private create(s: number, row: Row<T>, t: number, mask: number, c: T): void {
-    const m = new Mor<T>();
-    m.set(mask, c);
-    row.push(t, m);
+    row.push(t, mask, c);
     this.inn[t].push(s);
   }
 
   /** Adds c [mask] to entry k of row s; true when the entry cancelled (and entry k is now another one). */
   private addAt(s: number, row: Row<T>, k: number, mask: number, c: T): boolean {
-    const m = row.mors[k];
-    const old = m.get(mask);
-    const v = old === undefined ? c : this.coef.add(old, c);
-    if (!this.ring.isZero(v)) m.set(mask, v);
-    else if (m.delete(mask) && m.size === 0) {
-      drop(this.inn[row.targets[k]], s);
-      row.removeAt(k);
-      return true;
-    }
-    return false;
+    if (!row.add(k, mask, c, this.coef, this.isZero)) return false;
+    drop(this.inn[row.targets[k]], s);
+    row.removeAt(k);
+    return true;
   }
 
   remove(x: number): void {
@@ -161,27 +214,29 @@ export class TangleComplex<T> {
     return comp;
   }
 
-  /** d(a -> c) += factor (y o x) for x: a -> b and every component y: b -> c of d, c other than `skip`. */
-  addComposites(a: number, b: number, x: Mor<T>, skip: number, factor: T): void {
+  /** d(a -> c) += factor (y o x) for x = d(a -> skip), skip -> b an isomorphism, and every component y: b -> c of d, c other than `skip`. */
+  addComposites(a: number, b: number, skip: number, factor: T): void {
     const row = this.out[a];
     if (this.pos.length < this.objs.length) this.pos = new Int32Array(2 * this.objs.length).fill(-1);
     const { pos } = this;
     for (let k = 0; k < row.targets.length; k++) pos[row.targets[k]] = k;
+    // x is read before row a changes: its entry may move, a Mor of several terms stays as it is.
+    const kx = pos[skip];
+    const x1 = row.masks[kx];
+    const x = row.values[kx];
     const ys = this.out[b];
     const ma = this.objs[a].mat;
     const mb = this.objs[b].mat;
-    const x1 = x.single;
     for (let n = 0; n < ys.targets.length; n++) {
       const c = ys.targets[n];
       if (c === skip) continue;
       const comp = this.compositionOf(ma, mb, this.objs[c].mat);
-      const y = ys.mors[n];
-      const y1 = y.single;
-      if (x1 >= 0 && y1 >= 0) this.accumulate(a, row, c, composite(comp, x1, y1, this.theory), this.coef.mul(factor, this.coef.mul(x.singleValue, y.singleValue)));
+      const y1 = ys.masks[n];
+      if (x1 >= 0 && y1 >= 0) this.accumulate(a, row, c, composite(comp, x1, y1, this.theory), this.coef.mul(factor, this.coef.mul(x as T, ys.values[n] as T)));
       else {
-        x.forEach((c1, m1) => {
-          y.forEach((c2, m2) => this.accumulate(a, row, c, composite(comp, m1, m2, this.theory), this.coef.mul(factor, this.coef.mul(c1, c2))));
-        });
+        const each = (c1: T, m1: number): void => ys.terms(n, (c2, m2) => this.accumulate(a, row, c, composite(comp, m1, m2, this.theory), this.coef.mul(factor, this.coef.mul(c1, c2))));
+        if (x1 >= 0) each(x as T, x1);
+        else (x as Mor<T>).forEach(each);
       }
     }
     for (let k = 0; k < row.targets.length; k++) pos[row.targets[k]] = -1;
@@ -191,7 +246,8 @@ export class TangleComplex<T> {
   private accumulate(a: number, row: Row<T>, c: number, terms: [number, number][], c12: T): void {
     const { pos } = this;
     for (let n = 0; n < terms.length; n++) {
-      const [mask, k] = terms[n];
+      const mask = terms[n][0];
+      const k = terms[n][1];
       const v = k === 1 ? c12 : this.coef.mul(this.ring.fromInt(k), c12);
       const at = pos[c];
       if (at < 0) {

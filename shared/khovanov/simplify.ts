@@ -8,14 +8,14 @@
 
 import { TangleComplex } from './complex';
 
-function unitIdentity<T>(cx: TangleComplex<T>, s: number, t: number): T | undefined {
+/** The unit c when entry k of row s is c times an isomorphism (same matching, same shift, undotted). */
+function unitIdentity<T>(cx: TangleComplex<T>, s: number, k: number): T | undefined {
+  const row = cx.out[s];
   const a = cx.objs[s];
-  const b = cx.objs[t];
-  if (a.mat !== b.mat || a.shift !== b.shift) return undefined;
-  const m = cx.out[s].get(t);
-  if (!m) return undefined;
-  const c = m.get(0);
-  return m.size === 1 && c !== undefined && cx.ring.isUnit(c) ? c : undefined;
+  const b = cx.objs[row.targets[k]];
+  if (a.mat !== b.mat || a.shift !== b.shift || row.masks[k] !== 0) return undefined;
+  const c = row.values[k] as T;
+  return cx.ring.isUnit(c) ? c : undefined;
 }
 
 const markowitz = <T>(cx: TangleComplex<T>, b1: number, b2: number): number => (cx.inn[b2].length - 1) * (cx.out[b1].size - 1);
@@ -28,12 +28,14 @@ export function simplify<T>(cx: TangleComplex<T>, check: () => void): void {
     const candidates: [number, number, number][] = [];
     for (let b1 = 0; b1 < cx.objs.length; b1++) {
       if (!cx.alive[b1]) continue;
-      for (const t of cx.out[b1].keys()) if (unitIdentity(cx, b1, t) !== undefined) candidates.push([markowitz(cx, b1, t), b1, t]);
+      const row = cx.out[b1];
+      for (let k = 0; k < row.size; k++) if (unitIdentity(cx, b1, k) !== undefined) candidates.push([markowitz(cx, b1, row.targets[k]), b1, row.targets[k]]);
     }
     candidates.sort((x, y) => x[0] - y[0]);
     for (const [cost, b1, b2] of candidates) {
       if (!cx.alive[b1] || !cx.alive[b2]) continue;
-      const phi = unitIdentity(cx, b1, b2);
+      const k = cx.out[b1].targets.indexOf(b2);
+      const phi = k < 0 ? undefined : unitIdentity(cx, b1, k);
       if (phi === undefined) continue;
       // Earlier cancellations changed the counts: a pair grown dearer waits for the next pass.
       if (markowitz(cx, b1, b2) > 2 * cost + 8) {
@@ -51,7 +53,7 @@ export function simplify<T>(cx: TangleComplex<T>, check: () => void): void {
 // The loops run over inn[b2] and out[b1] while adding s -> t terms: those touch out[s] and
 // inn[t] only, never these two (s is not b1 and t is not b2), so no copies are needed.
 export function cancel<T>(cx: TangleComplex<T>, b1: number, b2: number, minusInverse: T): void {
-  for (const s of cx.inn[b2]) if (s !== b1) cx.addComposites(s, b1, cx.out[s].get(b2)!, b2, minusInverse);
+  for (const s of cx.inn[b2]) if (s !== b1) cx.addComposites(s, b1, b2, minusInverse);
   cx.remove(b1);
   cx.remove(b2);
 }

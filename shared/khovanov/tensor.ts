@@ -8,8 +8,7 @@ import { Crossing } from '../knot/pd';
 import { Ring } from '../linalg/ring';
 import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, Theory } from './cobordism';
 import { coefficients } from './coefficients';
-import { TangleComplex } from './complex';
-import { Mor } from './mor';
+import { Row, TangleComplex } from './complex';
 
 /** 0-smoothing joins (a,b)(c,d), 1-smoothing joins (a,d)(b,c) (docs/conventions.md). */
 const SMOOTHING: readonly Matching[] = [
@@ -208,15 +207,16 @@ export function tensor<T>(first: TangleComplex<T>, second: TangleComplex<T>, end
   // The glued morphism between summands: cups on bottom loops (dotted for x), caps on top
   // loops (dotted for 1).
   const coef = coefficients(ring);
-  const connect = (from: number[], to: number[], g: Gluing, f: Mor<T>, sign: T): void => {
-    f.forEach((c, mask) => {
+  const connect = (from: number[], to: number[], g: Gluing, row: Row<T>, k: number, sign: T): void => {
+    row.terms(k, (c, mask) => {
       const sc = coef.mul(sign, c);
       for (let sigma = 0; sigma < from.length; sigma++) {
         for (let tau = 0; tau < to.length; tau++) {
           const terms = surface(first.theory, g, mask, sigma, tau);
           for (let t = 0; t < terms.length; t++) {
-            const [m, k] = terms[t];
-            cx.addTerm(from[sigma], to[tau], m, k === 1 ? sc : coef.mul(ring.fromInt(k), sc));
+            const m = terms[t][0];
+            const n = terms[t][1];
+            cx.addTerm(from[sigma], to[tau], m, n === 1 ? sc : coef.mul(ring.fromInt(n), sc));
           }
         }
       }
@@ -228,9 +228,17 @@ export function tensor<T>(first: TangleComplex<T>, second: TangleComplex<T>, end
     if (!first.alive[k1]) return;
     for (const k2 of live2) {
       const m2 = second.objs[k2].mat;
-      first.out[k1].forEach((f, t) => connect(ids[k1][k2], ids[t][k2], gluing(o1.mat, first.objs[t].mat, m2, m2, 0), f, ring.one));
+      const row1 = first.out[k1];
+      for (let k = 0; k < row1.size; k++) {
+        const t = row1.targets[k];
+        connect(ids[k1][k2], ids[t][k2], gluing(o1.mat, first.objs[t].mat, m2, m2, 0), row1, k, ring.one);
+      }
       const sign = o1.height % 2 ? minusOne : ring.one;
-      second.out[k2].forEach((f, t) => connect(ids[k1][k2], ids[k1][t], gluing(o1.mat, o1.mat, m2, second.objs[t].mat, 1), f, sign));
+      const row2 = second.out[k2];
+      for (let k = 0; k < row2.size; k++) {
+        const t = row2.targets[k];
+        connect(ids[k1][k2], ids[k1][t], gluing(o1.mat, o1.mat, m2, second.objs[t].mat, 1), row2, k, sign);
+      }
     }
   });
   return cx;
