@@ -66,10 +66,7 @@ export class Row<T> {
   }
 
   private entry(k: number): Mor<T> {
-    if (this.masks[k] < 0) return this.values[k] as Mor<T>;
-    const m = new Mor<T>();
-    m.set(this.masks[k], this.values[k] as T);
-    return m;
+    return this.masks[k] < 0 ? (this.values[k] as Mor<T>) : Mor.single(this.masks[k], this.values[k] as T);
   }
 
   push(t: number, mask: number, c: T): void {
@@ -87,17 +84,9 @@ export class Row<T> {
       return isZero(v);
     }
     if (isZero(c)) return false;
-    let mor: Mor<T>;
-    if (m >= 0) {
-      mor = new Mor<T>();
-      mor.set(m, this.values[k] as T);
-      this.masks[k] = -1;
-      this.values[k] = mor;
-    } else mor = this.values[k] as Mor<T>;
-    const old = mor.get(mask);
-    const v = old === undefined ? c : coef.add(old, c);
-    if (!isZero(v)) mor.set(mask, v);
-    else if (mor.delete(mask)) return mor.size === 0;
+    if (m < 0) return (this.values[k] as Mor<T>).add(mask, c, coef.add, isZero);
+    this.masks[k] = -1;
+    this.values[k] = Mor.pair(m, this.values[k] as T, mask, c);
     return false;
   }
 

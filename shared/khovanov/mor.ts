@@ -1,10 +1,27 @@
 // A morphism between two crossingless matchings: its coefficient on each dotted-disc basis
-// cobordism, keyed by the dot mask (cobordism.ts). Most differential entries have a single
-// term, so that term lives in two fields; a second term moves all terms into two short arrays,
-// scanned linearly: entries have a handful of terms, where a Map per entry cost more in hashing
-// and in garbage than the scan. Masks are >= 0; -1 marks the empty field.
+// cobordism, keyed by the dot mask (cobordism.ts). A row of the differential keeps an entry with
+// several terms as a Mor, its terms in two short arrays scanned linearly (entries have a handful
+// of terms; a Map per entry cost more in hashing and garbage than the scan); a single term is
+// kept in the row itself (complex.ts) and becomes a Mor in two fields only for readers off the
+// hot path. Masks are >= 0; -1 marks the empty field.
 
 export class Mor<T> {
+  /** The morphism with the one term c [mask]. */
+  static single<T>(mask: number, c: T): Mor<T> {
+    const m = new Mor<T>();
+    m.mask = mask;
+    m.value = c;
+    return m;
+  }
+
+  /** The morphism c1 [m1] + c2 [m2], m1 != m2. */
+  static pair<T>(m1: number, c1: T, m2: number, c2: T): Mor<T> {
+    const m = new Mor<T>();
+    m.masks = [m1, m2];
+    m.values = [c1, c2];
+    return m;
+  }
+
   private mask = -1;
   private value: T | undefined = undefined;
   /** Every term's mask and coefficient, once the entry has had two terms. */
@@ -34,39 +51,26 @@ export class Mor<T> {
     return mask === this.mask ? this.value : undefined;
   }
 
-  set(mask: number, value: T): void {
-    if (this.masks) {
-      const k = this.masks.indexOf(mask);
-      if (k >= 0) this.values![k] = value;
-      else {
-        this.masks.push(mask);
-        this.values!.push(value);
-      }
-    } else if (this.mask < 0 || this.mask === mask) {
-      this.mask = mask;
-      this.value = value;
-    } else {
-      this.masks = [this.mask, mask];
-      this.values = [this.value as T, value];
-      this.value = undefined;
+  /** Adds c (nonzero) to the coefficient of `mask` of an entry that has had two terms, dropping a term that cancels; true when none is left. */
+  add(mask: number, c: T, plus: (a: T, b: T) => T, isZero: (a: T) => boolean): boolean {
+    const masks = this.masks!;
+    const values = this.values!;
+    const k = masks.indexOf(mask);
+    if (k < 0) {
+      masks.push(mask);
+      values.push(c);
+      return false;
     }
-  }
-
-  delete(mask: number): boolean {
-    if (this.masks) {
-      const { masks, values } = this;
-      const k = masks.indexOf(mask);
-      if (k < 0) return false;
-      masks[k] = masks[masks.length - 1];
-      values![k] = values![masks.length - 1];
-      masks.pop();
-      values!.pop();
-      return true;
+    const v = plus(values[k], c);
+    if (!isZero(v)) {
+      values[k] = v;
+      return false;
     }
-    if (mask !== this.mask) return false;
-    this.mask = -1;
-    this.value = undefined;
-    return true;
+    masks[k] = masks[masks.length - 1];
+    values[k] = values[masks.length - 1];
+    masks.pop();
+    values.pop();
+    return masks.length === 0;
   }
 
   forEach(f: (value: T, mask: number) => void): void {
