@@ -94,7 +94,7 @@ test('two sketches of 9_46 with the two disks: "Compare with…" says the classe
   await page.getByTestId('readout-bands-verdict').getByText('Their classes differ: the surfaces are not isotopic rel boundary.').waitFor();
   await moreReadout(page);
   await shoot(page, 'slate-946-compare', () => page.getByTestId('readout-bands-verdict').scrollIntoViewIfNeeded());
-});
+}, 150_000); // two sketches made, drawn and checked on the device: past 60 s on a loaded machine
 
 test('past the device: "Check on the server" starts a bands run whose page shows the certificate', async () => {
   await pasteWithBand('T(2,17) with a band', 'Braid word', T217.join(' '), 17, braid217, innerBand);
