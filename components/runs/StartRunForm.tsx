@@ -22,7 +22,7 @@ import { KhTable } from './KhTable';
 import { LOCAL_MAX_CROSSINGS } from './local-kh';
 import { KhSummary } from './RunResult';
 import { SliceBounds } from '@/components/ui/SliceBounds';
-import { computeS } from '@/components/readout/computeS';
+import { computeS } from '@/lib/on-device/computeS';
 import { orient } from '@/shared/knot/pd';
 import { minus } from '@/shared/text/integers';
 

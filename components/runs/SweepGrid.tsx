@@ -8,7 +8,7 @@ import { Section } from '@/components/ui/Section';
 import { colors, radius, space, type } from '@/constants/theme';
 import { KhTable } from './KhTable';
 import { ProgressBar } from './ProgressBar';
-import { statusLabel } from './format';
+import { statusLabel } from '@/lib/run-format';
 
 type Cell = RunDetail['children'][number];
 
