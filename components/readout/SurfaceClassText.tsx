@@ -32,6 +32,9 @@ export function element(s: SurfaceClass['support'][number]): Piece {
   return { tex: parts.map((p) => p.tex).join('\\cdot '), text: parts.map((p) => p.text).join('·') };
 }
 
+/** Each but the last element carries its comma, so a line never starts with one (and none breaks inside an element). */
+const listed = (pieces: Piece[]): Piece[] => pieces.map((p, i) => (i < pieces.length - 1 ? { tex: `${p.tex},`, text: `${p.text},` } : p));
+
 const F2: Piece = { tex: '\\mathbb{F}_2', text: '𝔽₂' };
 
 export function SurfaceClassText({ surface }: { surface: ClassAnswer }) {
@@ -45,7 +48,7 @@ export function SurfaceClassText({ surface }: { surface: ClassAnswer }) {
         Coordinates:{' '}
         {c.zero
           ? `all 0 (a basis of ${c.basisSize})`
-          : <>1 at {c.support.slice(0, shown).map((e, i) => <Fragment key={i}>{i ? ', ' : ''}<TeX {...element(e)} /></Fragment>)}
+          : <>1 at {listed(c.support.slice(0, shown).map(element)).map((e, i) => <Fragment key={i}>{i ? ' ' : ''}<TeX {...e} nowrap /></Fragment>)}
             {c.support.length > shown ? ` … and ${c.support.length - shown} more` : ''} (of a basis of {c.basisSize})</>}
       </Text>
       <Text style={styles.note}>
