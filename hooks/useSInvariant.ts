@@ -1,8 +1,8 @@
 // The Readout's s-invariant, computed off the gesture path (hooks/useDeviceComputation, in a web
-// worker on the web: components/readout/computeS) for knots up to S_MAX_CROSSINGS crossings.
+// worker on the web: lib/on-device/computeS) for knots up to S_MAX_CROSSINGS crossings.
 import { componentCount, type Diagram } from '@/shared/knot/diagram';
-import { computeS } from '@/components/readout/computeS';
-import { S_MAX_CROSSINGS } from '@/components/readout/local-s';
+import { computeS } from '@/lib/on-device/computeS';
+import { S_MAX_CROSSINGS } from '@/lib/on-device/local-s';
 import { useDeviceComputation } from './useDeviceComputation';
 
 export type SState =

@@ -2,6 +2,7 @@
 // orientation arrows, each component's number and framing), the crossing and component count,
 // the framed-link data, the Jones polynomial, s with its slice-genus bounds when a run of the
 // sketch computed it, the PD code and the latest run.
+import { useState } from 'react';
 import { Image, StyleSheet, Text, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import type { GroupSketch } from '@/shared/api/feed';
@@ -15,16 +16,24 @@ import { pdToText } from '@/shared/text/codes';
 import { SliceBounds } from '@/components/ui/SliceBounds';
 import { minus } from '@/shared/text/integers';
 
+/**
+ * The picture fills the column up to a cap, so it is as wide as the phone's column and not a
+ * poster on a wide pane (beside a photo it stays small); whole tens of pixels, so a few pixels of resizing keep the cached picture.
+ */
+export const pictureSize = (column: number) => Math.max(160, Math.min(480, Math.floor(column / 10) * 10));
+
 export function SharedSketchPicture({ s }: { s: GroupSketch }) {
   const photo = s.photos[0];
+  const [column, setColumn] = useState<number | null>(null);
+  const size = Math.min(photo ? 220 : Infinity, column === null ? 300 : pictureSize(column));
   return (
-    <View style={styles.picture}>
+    <View style={styles.picture} testID="shared-picture" onLayout={(e) => setColumn(e.nativeEvent.layout.width)}>
       {photo ? (
         <View style={[styles.hero, { aspectRatio: photo.width / photo.height }]}>
           <Image source={{ uri: apiUrl(photo.url) }} style={StyleSheet.absoluteFill} resizeMode="cover" accessibilityLabel="Board photo" />
         </View>
       ) : null}
-      <DiagramPicture diagram={s.diagram} size={photo ? 220 : 300} pictureKey={`${s.id}:${s.version}`} crossings={s.invariants.crossings} marks
+      <DiagramPicture diagram={s.diagram} size={size} pictureKey={`${s.id}:${s.version}`} crossings={s.invariants.crossings} marks
         label={`Picture of ${s.title || 'Untitled sketch'}`} />
     </View>
   );

@@ -15,7 +15,7 @@ import { useRun, useStartRun } from '@/hooks/queries/useRuns';
 import { useSlate } from '@/lib/slate/slate-store';
 import { useSession } from '@/hooks/useSession';
 import { Button } from '@/components/ui/Button';
-import { statusLabel } from '@/components/runs/format';
+import { statusLabel } from '@/lib/run-format';
 import { colors, space, type } from '@/constants/theme';
 
 /** The bands a run was started for, so its link stays while the Readout remounts and goes when the bands change. */

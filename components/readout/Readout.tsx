@@ -7,7 +7,7 @@ import type { Marker } from '@/shared/drawing/crossings';
 import type { ReadoutState } from '@/hooks/useReadout';
 import type { SState } from '@/hooks/useSInvariant';
 import { sliceBoundsText, sliceGenusBounds } from '@/shared/rasmussen';
-import { S_MAX_CROSSINGS } from './local-s';
+import { S_MAX_CROSSINGS } from '@/lib/on-device/local-s';
 import type { ReadoutKey } from '@/lib/slate/readout';
 import { HOMFLY_DEVICE_LIMIT } from '@/lib/slate/readout';
 import { framedText } from '@/lib/slate/framed-text';

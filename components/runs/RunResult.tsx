@@ -22,7 +22,7 @@ import { TeX } from '@/components/ui/Math';
 import { ProgressBar } from './ProgressBar';
 import { SliceBounds } from '@/components/ui/SliceBounds';
 import { SweepGrid } from './SweepGrid';
-import { duration, remaining, runDate, statusLabel } from './format';
+import { duration, remaining, runDate, statusLabel } from '@/lib/run-format';
 import { saveText } from '@/components/ui/save';
 import { minus } from '@/shared/text/integers';
 

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { useGlobalSearchParams } from 'expo-router';
 import { EmptyState } from '@/components/ui/EmptyState';
+import { TeX } from '@/components/ui/Math';
 import { Banner } from '@/components/ui/Banner';
 import { RunsIcon } from '@/components/shell/icons';
 import { useGroups } from '@/hooks/queries/useGroups';
@@ -43,7 +44,7 @@ export function RunsOverview({ formWhere, hideEmpty = false }: { formWhere: stri
       {runs.data && runs.data.length === 0 && hideEmpty ? <Text style={styles.none}>{scope === 'mine' ? 'No runs yet.' : 'No runs in this group yet.'}</Text> : null}
       {runs.data && runs.data.length === 0 && !hideEmpty ? (
         <EmptyState art={<RunsIcon color={colors.inkFaint} size={40} />} title={scope === 'mine' ? 'No runs yet' : 'No runs in this group yet'}>
-          Start a run {formWhere}, or from a sketch: Khovanov homology over the integers, Q or F_p, or a cable sweep over
+          Start a run {formWhere}, or from a sketch: Khovanov homology over the integers, Q or <TeX tex="\mathbb{F}_p" text="𝔽ₚ" />, or a cable sweep over
           strand counts. The group's server computes it; progress shows here and an e-mail says when it is done.
         </EmptyState>
       ) : null}

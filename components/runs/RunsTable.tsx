@@ -19,7 +19,7 @@ import { runPagePath } from '@/shared/api/runs';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { useFilterShortcut } from '@/components/shell/shortcuts';
 import { ProgressBar } from './ProgressBar';
-import { duration, ringLabel, runDate, statusLabel } from './format';
+import { duration, ringLabel, runDate, statusLabel } from '@/lib/run-format';
 
 const col = createColumnHelper<RunSummary>();
 

@@ -22,11 +22,12 @@ import { KhTable } from './KhTable';
 import { LOCAL_MAX_CROSSINGS } from './local-kh';
 import { KhSummary } from './RunResult';
 import { SliceBounds } from '@/components/ui/SliceBounds';
-import { computeS } from '@/components/readout/computeS';
+import { computeS } from '@/lib/on-device/computeS';
 import { orient } from '@/shared/knot/pd';
 import { minus } from '@/shared/text/integers';
 
-const ringNames = { Z: 'Z', Q: 'Q', F2: 'F2', F3: 'F3', Fp: 'F_p, any prime' } as const;
+// Written as the result tables write their groups (ℤ, ℤ/2), in the Readout's plain-text math.
+const ringNames = { Z: 'ℤ', Q: 'ℚ', F2: '𝔽₂', F3: '𝔽₃', Fp: '𝔽ₚ, any prime' } as const;
 const sweepNames = { '0': 'Khovanov homology', '2': 'Cable sweep, up to 2 strands', '3': 'Cable sweep, up to 3 strands', '4': 'Cable sweep, up to 4 strands' } as const;
 const inputNames = Object.fromEntries(codeKinds.map((c) => [c.kind, c.label])) as Record<CodeKind, string>;
 const LABEL_MAX = 120;
@@ -44,7 +45,7 @@ function Labelled<T extends string>({ label, names, value, onChange }: { label: 
 
 /** The request for the typed code, or the reason it is not a diagram (or the ring not a ring). */
 function request(input: CodeKind, code: string, ring: string, reduced: boolean, sweep: number): StartRunRequest | string {
-  if (!RunRing.safeParse(ring).success) return `${ring.slice(1) || 'p'} is not a prime: F_p needs a prime p, e.g. F5.`;
+  if (!RunRing.safeParse(ring).success) return `${ring.slice(1) || 'p'} is not a prime: 𝔽ₚ needs a prime p, e.g. 5.`;
   const parsed = parseCode(input, code);
   if (!parsed.ok) return parsed.error;
   const d = parsed.diagram;
@@ -141,8 +142,8 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
       ) : null}
       <Labelled label="Homology" names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} value={reduced} onChange={setReduced} />
       <Labelled label="Computation" names={sweepNames} value={sweep} onChange={setSweep} />
-      {/* In the words of the sweep's result page (SweepGrid), where its cells are laid out by (r+, r-). */}
-      {sweep !== '0' ? <Text style={styles.label}>{`Each component takes every (r+, r-) with r+ + r- from 1 up to ${sweep}: r+ parallel and r- reversed copies, following the framing.`}</Text> : null}
+      {/* In the words of the sweep's result page (SweepGrid), where its cells are laid out by (r₊, r₋). */}
+      {sweep !== '0' ? <Text style={styles.label}>{`Each component takes every (r₊, r₋) with r₊ + r₋ from 1 up to ${sweep}: r₊ parallel and r₋ reversed copies, following the framing.`}</Text> : null}
       {sweep === '0' ? (
         // The server refuses it for a link, saying s is defined for knots here.
         <Checkbox label="Also compute s (Rasmussen invariant, knots only)" on={alsoS} onPress={() => setAlsoS(!alsoS)} />

@@ -8,7 +8,7 @@ import { Section } from '@/components/ui/Section';
 import { colors, radius, space, type } from '@/constants/theme';
 import { KhTable } from './KhTable';
 import { ProgressBar } from './ProgressBar';
-import { statusLabel } from './format';
+import { statusLabel } from '@/lib/run-format';
 
 type Cell = RunDetail['children'][number];
 
@@ -37,7 +37,7 @@ export function SweepGrid({ cells }: { cells: Cell[] }) {
   const rows = Array.from({ length: max + 1 }, (_, m) => m);
   const at = new Map(cells.map((c) => [pairs(c), c]));
   return (
-    <Section title="Cables" note="(r+, r-): r+ parallel and r- reversed copies, following the framing.">
+    <Section title="Cables" note="(r₊, r₋): r₊ parallel and r₋ reversed copies, following the framing.">
       {knot ? (
         <View style={styles.grid}>
           {rows.map((minus) => (

@@ -5,7 +5,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { bandsOf, deleteBand, setBandTwists } from '@/shared/drawing/bands';
 import { useSlate } from '@/lib/slate/slate-store';
 import { colors, space, type } from '@/constants/theme';
-import { Chip } from './Toolbar';
+import { ToolChip as Chip } from '@/components/ui/ToolChip';
 
 export function BandBar({ afterComponents, refused }: { afterComponents: number | null; refused: string | null }) {
   const tool = useSlate((s) => s.tool);

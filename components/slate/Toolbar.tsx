@@ -4,7 +4,11 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { deleteComponent, reverseComponent } from '@/shared/drawing/sketch';
 import { colourOf } from '@/lib/slate/picture';
 import { redoable, undoable, useSlate, type Tool } from '@/lib/slate/slate-store';
-import { chalk, colors, radius, space, type } from '@/constants/theme';
+import { chalk, colors, space, type } from '@/constants/theme';
+import { ToolChip as Chip } from '@/components/ui/ToolChip';
+
+// BandsCompare still imports the chip from here; it moves to components/ui/ToolChip with that file's next change.
+export { ToolChip as Chip } from '@/components/ui/ToolChip';
 
 const tools: { tool: Tool; label: string }[] = [
   { tool: 'draw', label: 'Draw' },
@@ -13,15 +17,6 @@ const tools: { tool: Tool; label: string }[] = [
   { tool: 'reshape', label: 'Reshape' },
   { tool: 'bands', label: 'Bands' },
 ];
-
-export function Chip({ label, text, onPress, on = false, disabled = false }: { label: string; text?: string; onPress: () => void; on?: boolean; disabled?: boolean }) {
-  return (
-    <Pressable role="button" accessibilityLabel={label} aria-pressed={on} aria-disabled={disabled} disabled={disabled} onPress={onPress}
-      style={({ pressed }) => [styles.chip, on && styles.chipOn, pressed && styles.chipPressed, disabled && styles.disabled]}>
-      <Text style={[styles.chipText, on && styles.chipTextOn, text !== undefined && styles.symbol]}>{text ?? label}</Text>
-    </Pressable>
-  );
-}
 
 export function Toolbar() {
   const tool = useSlate((s) => s.tool);
@@ -74,13 +69,6 @@ export function SelectionBar({ numberOf, onFraming }: { numberOf: (id: string) =
 const styles = StyleSheet.create({
   bar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm, paddingHorizontal: space.sm, paddingVertical: space.sm, backgroundColor: colors.paper },
   group: { flexDirection: 'row', flexWrap: 'wrap', gap: 4 },
-  chip: { flexDirection: 'row', alignItems: 'center', gap: 5, minHeight: 40, minWidth: 38, justifyContent: 'center', paddingHorizontal: 9, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
-  chipOn: { backgroundColor: colors.ink, borderColor: colors.ink },
-  chipPressed: { backgroundColor: colors.accentSoft },
-  chipText: { ...type.label, color: colors.ink },
-  chipTextOn: { color: colors.paper },
-  symbol: { fontSize: 18, lineHeight: 22 },
-  disabled: { opacity: 0.4 },
   selection: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.sunken, borderTopWidth: 1, borderTopColor: colors.line },
   selText: { ...type.label, color: colors.ink },
   swatches: { flexDirection: 'row', gap: 6 },

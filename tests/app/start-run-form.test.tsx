@@ -20,7 +20,7 @@ test('a cable sweep is chosen by its number of strands, with a note on the (r+, 
   expect(screen.queryByText(/r\+ \+ r- ≤/)).toBeNull();
   expect(screen.queryByText(/Each component takes every/)).toBeNull();
   fireEvent.press(screen.getByRole('radio', { name: 'Cable sweep, up to 3 strands' }));
-  expect(screen.getByText('Each component takes every (r+, r-) with r+ + r- from 1 up to 3: r+ parallel and r- reversed copies, following the framing.')).toBeOnTheScreen();
+  expect(screen.getByText('Each component takes every (r₊, r₋) with r₊ + r₋ from 1 up to 3: r₊ parallel and r₋ reversed copies, following the framing.')).toBeOnTheScreen();
   fireEvent.press(screen.getByRole('button', { name: 'Start run' }));
   await waitFor(() => expect(calls).toHaveLength(1));
   expect(calls[0].body).toMatchObject({ kind: 'cable-sweep', sweep: { maxStrands: 3 } });

@@ -154,6 +154,12 @@ test('the shared page shows Bruno the framing, the component numbers and the lin
   const label = await brunoPage.getByRole('img', { name: `Picture of ${LINKED}` }).evaluate((e) => e.textContent ?? '');
   expect(label).toContain(`${na}: −1`); // the picture's own label, as on the Slate's badge and the framings line
   expect(label).toContain(`${nb}: bb`);
+  // On the 390 px phone the picture fills the page's column (the screen less its padding), not a fixed 300 px.
+  const column = (await brunoPage.getByTestId('shared-picture').boundingBox())!.width;
+  const picture = (await brunoPage.getByRole('img', { name: `Picture of ${LINKED}` }).boundingBox())!.width;
+  expect(column).toBeGreaterThan(330);
+  expect(picture).toBeGreaterThan(column - 10);
+  expect(picture).toBeLessThanOrEqual(column);
   await shoot(brunoPage, 'feed-pictures-03-shared-page');
 });
 

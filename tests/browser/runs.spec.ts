@@ -38,7 +38,7 @@ test('start a run from a braid word, watch its progress, read the table', async 
   await page.getByRole('heading', { name: 'No runs yet' }).waitFor();
   await page.getByRole('radio', { name: 'Braid word' }).click();
   await page.getByLabel('Braid word').fill(T78);
-  await page.getByRole('radio', { name: 'Q' }).click();
+  await page.getByRole('radio', { name: 'ℚ' }).click();
   await shoot(page, 'runs-01-form');
   await page.getByRole('button', { name: 'Start run' }).click();
 
@@ -72,7 +72,7 @@ test('a PD code run shows torsion typeset, and the runs table lists both', async
   await page.getByRole('heading', { name: 'Runs', exact: true }).waitFor();
   await page.getByRole('radio', { name: 'PD code' }).click();
   await page.getByLabel('PD code').fill('[[4,2,5,1],[2,6,3,5],[6,4,1,3]]');
-  await page.getByRole('radio', { name: 'Z', exact: true }).click();
+  await page.getByRole('radio', { name: 'ℤ', exact: true }).click();
   await page.getByRole('button', { name: 'Start run' }).click();
   await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 60_000 });
   // The positive trefoil over Z has Z/2 at (3,7) (Bar-Natan 2002, math/0201043).
@@ -94,7 +94,7 @@ test('a cable sweep shows a grid of small tables', async () => {
   await page.getByRole('radio', { name: 'PD code' }).click();
   await page.getByLabel('PD code').fill('[[4,2,5,1],[2,6,3,5],[6,4,1,3]]');
   await page.getByRole('radio', { name: 'Cable sweep, up to 2 strands' }).click();
-  const note = page.getByText(/^Each component takes every \(r\+, r-\)/);
+  const note = page.getByText(/^Each component takes every \(r₊, r₋\)/);
   await note.scrollIntoViewIfNeeded();
   await shoot(page, 'runs-06-sweep-choice');
   await page.getByRole('button', { name: 'Start run' }).click();
@@ -113,7 +113,7 @@ test('offline, a small diagram is computed on the device in a web worker', async
   try {
     await page.getByRole('radio', { name: 'Braid word' }).click();
     await page.getByLabel('Braid word').fill('-1 -1 -1');
-    await page.getByRole('radio', { name: 'Z', exact: true }).click();
+    await page.getByRole('radio', { name: 'ℤ', exact: true }).click();
     await page.getByRole('radio', { name: 'Khovanov homology' }).click();
     await page.getByRole('button', { name: /Compute on this device/ }).click();
     const table = page.getByRole('table', { name: 'Khovanov homology on this device' });
@@ -134,7 +134,7 @@ test('on the device, s of a knot with its slice-genus bounds; a link is told s i
   await page.getByRole('heading', { name: 'Runs', exact: true }).waitFor();
   await page.getByRole('radio', { name: 'Braid word' }).click();
   await page.getByLabel('Braid word').fill('-1 -1 -1');
-  await page.getByRole('radio', { name: 'Q', exact: true }).click();
+  await page.getByRole('radio', { name: 'ℚ', exact: true }).click();
   await page.getByRole('radio', { name: 'Khovanov homology' }).click();
   const alsoS = page.getByRole('checkbox', { name: 'Also compute s' });
   if ((await alsoS.getAttribute('aria-checked')) !== 'true') await alsoS.click();

@@ -1,5 +1,5 @@
 // The s-invariant on the Readout in a real browser: computed in its web worker (the separate
-// bundle the web export makes from components/readout/s.worker.ts), with the slice-genus bounds;
+// bundle the web export makes from lib/on-device/s.worker.ts), with the slice-genus bounds;
 // a link says s is defined for knots here. Also prints how long the worker takes on a
 // 14-crossing knot in this browser (goal <= 300 ms).
 import type { Browser, Page } from 'playwright-core';

@@ -88,7 +88,9 @@ test('two sketches of 9_46 with the two disks: "Compare with…" says the classe
   await page.getByTestId('readout-bands-ribbon').getByText('Ribbon disk: the knot is ribbon, hence slice').waitFor();
   await pasteWithBand('9_46, disk B', 'PD code', JSON.stringify(PD946), 9, strands946, diskB);
   await page.getByTestId('readout-bands-ribbon').getByText('Ribbon disk: the knot is ribbon, hence slice').waitFor();
-  await page.getByTestId('readout-bands-class').getByText('Class over F2: nonzero at (h, q) = (0, 1)').waitFor();
+  // The field is typeset (KaTeX), its plain name the math element's label.
+  await page.getByTestId('readout-bands-class').getByText(/^Class over .*: nonzero at \(h, q\) = \(0, 1\)$/).waitFor();
+  await page.getByTestId('readout-bands-class').getByRole('math', { name: '𝔽₂' }).waitFor();
   await page.getByRole('button', { name: 'Compare with…' }).click();
   await page.getByRole('button', { name: 'Compare with 9_46, disk A' }).click();
   await page.getByTestId('readout-bands-verdict').getByText('Their classes differ: the surfaces are not isotopic rel boundary.').waitFor();

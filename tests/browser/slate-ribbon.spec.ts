@@ -65,7 +65,9 @@ async function drawSquareKnotWithBand(title: string, band: [Point, Point]): Prom
   await drawBand(page, touch, strands, band);
   await page.getByTestId('readout-bands-ribbon').getByText('Ribbon disk: the knot is ribbon, hence slice').waitFor();
   await page.getByText('1 band → 2-component unlink', { exact: false }).waitFor();
-  await page.getByTestId('readout-bands-class').getByText('Class over F2: nonzero at (h, q) = (0, 1)').waitFor();
+  // The field is typeset (KaTeX), its plain name the math element's label.
+  await page.getByTestId('readout-bands-class').getByText(/^Class over .*: nonzero at \(h, q\) = \(0, 1\)$/).waitFor();
+  await page.getByTestId('readout-bands-class').getByRole('math', { name: '𝔽₂' }).waitFor();
 }
 
 const keep = (name: string) => {

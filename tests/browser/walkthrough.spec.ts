@@ -109,7 +109,7 @@ test("on a sketch's run form, a code typed over the sketch's is the one run (nev
   await page.getByRole('radio', { name: 'Braid word' }).click();
   await page.getByRole('textbox', { name: 'Braid word' }).fill('1 1 1');
   await banner.waitFor({ state: 'detached' });
-  await page.getByRole('radio', { name: 'Q', exact: true }).click();
+  await page.getByRole('radio', { name: 'ℚ', exact: true }).click();
   await page.getByRole('button', { name: 'Start run' }).click();
   await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
   await expect(page.getByTestId('run-source').innerText()).resolves.toBe('braid 1 1 1');

@@ -11,7 +11,7 @@ import { Banner } from '@/components/ui/Banner';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { RunResult } from '@/components/runs/RunResult';
 import { useRun } from '@/hooks/queries/useRuns';
-import { labelRepeatsInput } from '@/components/runs/format';
+import { labelRepeatsInput } from '@/lib/run-format';
 import type { RunSummary } from '@/shared/api/runs';
 import { colors, type } from '@/constants/theme';
 
