@@ -10,7 +10,8 @@ import { useBandComparison } from '@/hooks/useBandComparison';
 import { useLocalSketches } from '@/hooks/queries/useLocalSketches';
 import { drawnDoc } from '@/lib/slate/record';
 import { useSlate } from '@/lib/slate/slate-store';
-import { Chip } from '@/components/slate/Toolbar';
+import { ToolChip as Chip } from '@/components/ui/ToolChip';
+import { TeX } from '@/components/ui/Math';
 import { colors, space, type } from '@/constants/theme';
 import type { CompareAnswer } from './local-compare';
 import { bidegree } from './SurfaceClassText';
@@ -80,7 +81,7 @@ export function BandsCompare() {
           <Text style={styles.line}>{verdictText(r.value)}</Text>
           {r.value.kind === 'compared' ? (
             <Text style={styles.note}>
-              This sketch: {r.value.a.zero ? 'zero' : 'nonzero'} at {bidegree(r.value.a)}; “{other.title}”: {r.value.b.zero ? 'zero' : 'nonzero'} at {bidegree(r.value.b)} (over F2, {r.value.on === 'knot' ? 'on the knot drawing, the fingers that bring each band to a saddle taken back' : 'on the drawing with both sets of bands'}).
+              This sketch: {r.value.a.zero ? 'zero' : 'nonzero'} at {bidegree(r.value.a)}; “{other.title}”: {r.value.b.zero ? 'zero' : 'nonzero'} at {bidegree(r.value.b)} (over <TeX tex="\mathbb{F}_2" text="𝔽₂" />, {r.value.on === 'knot' ? 'on the knot drawing, the fingers that bring each band to a saddle taken back' : 'on the drawing with both sets of bands'}).
             </Text>
           ) : null}
         </View>

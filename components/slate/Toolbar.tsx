@@ -7,8 +7,6 @@ import { redoable, undoable, useSlate, type Tool } from '@/lib/slate/slate-store
 import { chalk, colors, space, type } from '@/constants/theme';
 import { ToolChip as Chip } from '@/components/ui/ToolChip';
 
-// BandsCompare still imports the chip from here; it moves to components/ui/ToolChip with that file's next change.
-export { ToolChip as Chip } from '@/components/ui/ToolChip';
 
 const tools: { tool: Tool; label: string }[] = [
   { tool: 'draw', label: 'Draw' },
