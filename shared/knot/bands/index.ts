@@ -32,7 +32,13 @@ export const CLASS_CROSSINGS = 14;
  * with one band in 0.3 s; three bands on six edges (9_46^#3, 27 crossings) in 0.8 s, peak 0.3 GB;
  * four bands on eight edges (9_46^#4, at load 12) took 68 s and 2.5 GB, five ran out of memory. Crossings
  * are limited below the pretzels' 40 since other diagrams give wider tangles (the unlink check's
- * Kh of 30-crossing diagrams took 11 s to 190 s: certificate.ts).
+ * Kh of 30-crossing diagrams took 11 s to 190 s: certificate.ts). On wide diagrams, 8_20 as a
+ * closed 3-braid stabilized to 6 to 10 strands and conjugated by random braids, one band (load
+ * 10): 29 to 43 crossings took 0.8 s to 5.5 s (eight codes), 47 to 57 up to 6 s (four), but one of 47 on 10
+ * strands 281 s and 2.3 GB, so the limit stays at 30. Over Z (class-local-z.ts) the times were
+ * those over F2 (50 crossings, 3 strands: 5.4 s against 5.5 s). Bands on one edge already share
+ * its cut; gluing the crossings at cut edges last (load 10) took 9_46^#4 from 68 s and 2.0 GB to
+ * 59 s and 1.5 GB but 9_46^#3 from 2.9 s to 4.8 s, so the order and the 6 edges stay.
  */
 export const LOCAL_CLASS_CROSSINGS = 30;
 export const LOCAL_CLASS_EDGES = 6;
