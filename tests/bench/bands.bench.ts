@@ -8,7 +8,7 @@
 // the basis of C^{0,1}/B^{0,1} (of the cube, or of the simplified complex) and the class's
 // support, and the peak resident memory of the bench process after each case (the local route's
 // cases first, then the cube's, each in growing size, so each figure bounds that case). The
-// class over Z on P(3,-3,4) and P(3,-3,6).
+// class over Z on P(3,-3,4) and P(3,-3,6) (cube) and on P(5,-5,6) to P(11,-11,6) (local).
 
 import { bandCertificate, BandPresentation, surfaceClass, surfaceClassOn } from '@/shared/knot/bands';
 import { diagram } from '@/shared/knot/diagram';
@@ -85,8 +85,9 @@ export function bandsBench(): Line[] {
     const { name, p } = pretzel(twists);
     lines.push(...timed(name, p, 'cube', runs, goal));
   }
-  // Over Z (class-z.ts: integer kernels, Hermite and Smith forms); P(5,-5,2) is over its limit.
-  for (const twists of [[3, -3, 4], [3, -3, 6]]) {
+  // Over Z (class-z.ts: integer kernels, Hermite and Smith forms; P(5,-5,2) is over its limit),
+  // past 14 crossings on the local route (class-local-z.ts).
+  for (const twists of [[3, -3, 4], [3, -3, 6], [5, -5, 6], [7, -7, 6], [11, -11, 6]]) {
     const p = ribbonBand(twists);
     const times: number[] = [];
     for (let r = 0; r < 3; r++) {
@@ -94,7 +95,7 @@ export function bandsBench(): Line[] {
       surfaceClass(p, { ring: 'Z' });
       times.push(performance.now() - t);
     }
-    lines.push({ name: `disk class over Z of P(${twists.join(',')}) (${p.pd.length} crossings)`, value: round(median(times)), unit: 'ms' });
+    lines.push({ name: `disk class over Z of P(${twists.join(',')}) (${p.pd.length} crossings), ${p.pd.length > 14 ? 'local' : 'cube'}`, value: round(median(times)), unit: 'ms' });
   }
   // The class with a finger pushed in a face away from the band, carried back to the pretzel's
   // own code (carry.ts, common-class.ts), beside the class on the fingered code alone.

@@ -15,7 +15,8 @@
 // Basis of the answer: the generators of T' P_0 at (h, q) = (0, c - b), in the engine's order
 // (tensor.ts: by object of T', then by x-mask of its closed loops), that are not pivots of the
 // boundaries' echelon form. T' depends on the code and the cut edges only, so classes computed
-// with the same cut (localClasses) are compared by their normal forms.
+// with the same cut (localClasses) are compared by their normal forms. class-local-z.ts runs the
+// same movie over Z.
 
 import { Matching, cycles } from '../../khovanov/cobordism';
 import { TangleComplex } from '../../khovanov/complex';
@@ -24,7 +25,7 @@ import { crossingOrder } from '../../khovanov/order';
 import { addInOrder } from '../../khovanov/parts';
 import { tensor } from '../../khovanov/tensor';
 import { F2Echelon, F2Vector, kernel, parity } from '../../linalg/f2';
-import { primeField } from '../../linalg/ring';
+import { primeField, Ring } from '../../linalg/ring';
 import { orient, PDCode, withLabelAt } from '../pd';
 import { cycleCount, Stage } from './saddle';
 import { Saddle } from './types';
@@ -37,16 +38,16 @@ export interface LocalClassVector {
   basisSize: number;
 }
 
-interface Cut {
+export interface Cut<T> {
   /** T': the crossings with every cut edge open, simplified. */
-  readonly tangle: TangleComplex<number>;
+  readonly tangle: TangleComplex<T>;
   /** The fresh label at the head end of each cut edge. */
   readonly headEnd: ReadonlyMap<number, number>;
   readonly nMinus: number;
 }
 
 /** The crossings of `pd` with the edges `cut` opened at their heads, through the local algorithm. */
-function cutTangle(pd: PDCode, cut: readonly number[]): Cut {
+function cutTangle<T>(ring: Ring<T>, pd: PDCode, cut: readonly number[]): Cut<T> {
   const o = orient(pd);
   const fresh = Math.max(...pd.flat()) + 1;
   const headEnd = new Map(cut.map((l, k) => [l, fresh + k]));
@@ -55,13 +56,18 @@ function cutTangle(pd: PDCode, cut: readonly number[]): Cut {
     const { crossing, position } = o.head.get(l)!;
     code = code.map((x, c) => (c === crossing ? withLabelAt(x, position, end) : x));
   }
-  const empty = new TangleComplex(F2, []);
+  const empty = new TangleComplex(ring, []);
   empty.addObject({ mat: empty.matchingId([]), shift: 0, height: 0 });
   return { tangle: addInOrder(empty, code, crossingOrder(pd), () => {}), headEnd, nMinus: o.signs.filter((s) => s < 0).length };
 }
 
+/** The cut of every edge any of the movies' bands touches. */
+export function cutFor<T>(ring: Ring<T>, pd: PDCode, movies: readonly { saddles: Saddle[] }[]): Cut<T> {
+  return cutTangle(ring, pd, [...new Set(movies.flatMap((m) => m.saddles.flatMap(({ a, b }) => [a, b])))].sort((x, y) => x - y));
+}
+
 /** Stage k's closing P_k on the tangle's ends: each cut edge's tail end to the head end now at its head. */
-function closing(cut: Cut, start: Stage, stage: Stage): Matching {
+function closing<T>(cut: Cut<T>, start: Stage, stage: Stage): Matching {
   const ends = cut.tangle.boundary;
   const position = new Map(ends.map((l, k) => [l, k]));
   const partner = new Array<number>(ends.length).fill(-1);
@@ -77,9 +83,9 @@ function closing(cut: Cut, start: Stage, stage: Stage): Matching {
   return partner;
 }
 
-/** T' closed by P: a complex of F2 vector spaces in the delooped basis, and where each object of T' starts in it. */
-interface Closed {
-  readonly cx: TangleComplex<number>;
+/** T' closed by P: a complex of free modules in the delooped basis, and where each object of T' starts in it. */
+export interface Closed<T> {
+  readonly cx: TangleComplex<T>;
   readonly p: Matching;
   /** The closed generator of object o of T' with x-mask 0; -1 for dead objects. */
   readonly first: number[];
@@ -87,9 +93,11 @@ interface Closed {
   readonly owner: number[];
 }
 
-function close(cut: Cut, p: Matching): Closed {
+/** T' closed by the closing of `stage`, a stage of the movie that starts at `start`. */
+export function closeAt<T>(cut: Cut<T>, start: Stage, stage: Stage): Closed<T> {
   const { tangle } = cut;
-  const cap = new TangleComplex(F2, tangle.boundary);
+  const p = closing(cut, start, stage);
+  const cap = new TangleComplex(tangle.ring, tangle.boundary);
   cap.addObject({ mat: cap.matchingId(p), shift: 0, height: 0 });
   const cx = tensor(tangle, cap);
   // tensor.ts numbers the new objects by object of the first factor, then by x-mask of the
@@ -111,7 +119,7 @@ function close(cut: Cut, p: Matching): Closed {
 }
 
 /** The closed generators at height r and shift s, ascending. */
-function levelOf(c: Closed, r: number, s: number): number[] {
+export function levelOf<T>(c: Closed<T>, r: number, s: number): number[] {
   const out: number[] = [];
   c.cx.objs.forEach((o, k) => {
     if (o.height === r && o.shift === s) out.push(k);
@@ -119,40 +127,75 @@ function levelOf(c: Closed, r: number, s: number): number[] {
   return out;
 }
 
-/** d of generator g as positions in `to` (a level's generators); every entry is 1 over F2. */
-function images(c: Closed, g: number, to: Map<number, number>): number[] {
-  return parity(c.cx.out[g].keys().map((t) => to.get(t)).filter((j): j is number => j !== undefined));
+/** d of generator g as positions in `to` (a level's generators) with their coefficients (closed objects: the undotted term). */
+export function imagesWith<T>(c: Closed<T>, g: number, to: Map<number, number>): [number, T][] {
+  const out: [number, T][] = [];
+  c.cx.out[g].forEach((m, t) => {
+    const j = to.get(t);
+    const x = m.get(0);
+    if (j !== undefined && x !== undefined) out.push([j, x]);
+  });
+  return out;
 }
 
-const positions = (level: number[]): Map<number, number> => new Map(level.map((g, i) => [g, i]));
-
-/** The boundaries at (r, s): the images of the level below. */
-function boundaries(c: Closed, r: number, s: number, at: number[]): F2Echelon {
-  const echelon = new F2Echelon();
-  const to = positions(at);
-  for (const g of levelOf(c, r - 1, s)) echelon.add(images(c, g, to));
-  return echelon;
-}
+export const positions = (level: number[]): Map<number, number> => new Map(level.map((g, i) => [g, i]));
 
 /**
- * The band {a, b} read backwards, from T' P_k (`from`, a vector over its level `at`) to
- * T' P_{k-1} at shift one lower: on every object the merge or split of the loops through the
- * two cut edges' tail ends.
+ * The band {a, b} read backwards on generator at[i] of T' P_k (`from`), into T' P_{k-1} at
+ * shift one lower (`to`, its level `toLevel`): on every object the merge or split of the loops
+ * through the two cut edges' tail ends. Positions in toLevel, each with coefficient 1.
  */
-function saddleBack(cut: Cut, from: Closed, to: Closed, at: number[], toLevel: number[], { a, b }: Saddle, v: F2Vector): number[] {
+export function saddleImages<T>(cut: Cut<T>, from: Closed<T>, to: Closed<T>, at: number[], toLevel: number[], { a, b }: Saddle, i: number): number[] {
   const ends = cut.tangle.boundary;
   const [pa, pb] = [ends.indexOf(a), ends.indexOf(b)];
   const toPos = positions(toLevel);
-  const out: number[] = [];
-  for (const i of v) {
-    const o = from.owner[at[i]];
-    const mask = at[i] - from.first[o];
-    const m = cut.tangle.matchings[cut.tangle.objs[o].mat];
-    const [before, after] = [cycles(m, from.p), cycles(m, to.p)];
-    if (Math.abs(before.count - after.count) !== 1) throw new Error('internal: a band that is neither a merge nor a split on a resolution');
-    for (const image of edgeMap(before, after, [pa, pb, pb], mask, (x) => x)) out.push(toPos.get(to.first[o] + image)!);
+  const o = from.owner[at[i]];
+  const mask = at[i] - from.first[o];
+  const m = cut.tangle.matchings[cut.tangle.objs[o].mat];
+  const [before, after] = [cycles(m, from.p), cycles(m, to.p)];
+  if (Math.abs(before.count - after.count) !== 1) throw new Error('internal: a band that is neither a merge nor a split on a resolution');
+  return edgeMap(before, after, [pa, pb, pb], mask, (x) => x).map((image) => toPos.get(to.first[o] + image)!);
+}
+
+/** The generic part of a movie read backwards: where it starts and how a vector crosses a band. */
+export interface Carry<T, V> {
+  /** A cycle of T' P_last at (r, shift) standing for 1 x ... x 1, given the level, its d and its boundaries' rows. */
+  start(at: number[], d: (i: number) => [number, T][], below: [number, T][][], c: number): V;
+  /** The image of v, given each generator's images (coefficient 1). */
+  cross(v: V, images: (i: number) => number[]): V;
+}
+
+/**
+ * The movie `stages`/`saddles` read backwards on T' closed per stage: the unlink's class at
+ * T' P_last to a cycle of T' P_0 at (0, q), with that level, its d and its boundaries' rows.
+ */
+export function carryBack<T, V>(cut: Cut<T>, k0: Closed<T>, stages: Stage[], saddles: Saddle[], carry: Carry<T, V>): { v: V; q: number; at: number[]; d: (i: number) => [number, T][]; below: [number, T][][] } {
+  const r = cut.nMinus;
+  const last = stages.length - 1;
+  const c = cycleCount(stages[last]);
+  // Shifts before the global q-shift n_+ - 2 n_-, which every stage shares.
+  const nPlus = stages[0].pd.length - r;
+  const shiftOf = (q: number): number => q - nPlus + 2 * r;
+  const around = (closed: Closed<T>, q: number) => {
+    const at = levelOf(closed, r, shiftOf(q));
+    const above = positions(levelOf(closed, r + 1, shiftOf(q)));
+    const here = positions(at);
+    const below = levelOf(closed, r - 1, shiftOf(q)).map((g) => imagesWith(closed, g, here));
+    return { at, d: (i: number) => imagesWith(closed, at[i], above), below };
+  };
+  let closed = last === 0 ? k0 : closeAt(cut, stages[0], stages[last]);
+  const first = around(closed, c);
+  let at = first.at;
+  let v = carry.start(first.at, first.d, first.below, c);
+  for (let k = last; k > 0; k--) {
+    const to = k === 1 ? k0 : closeAt(cut, stages[0], stages[k - 1]);
+    const toLevel = levelOf(to, r, shiftOf(c - (last - k) - 1));
+    const [from, fromLevel] = [closed, at];
+    v = carry.cross(v, (i) => saddleImages(cut, from, to, fromLevel, toLevel, saddles[k - 1], i));
+    [closed, at] = [to, toLevel];
   }
-  return parity(out);
+  const q = c - last;
+  return { v, q, ...around(closed, q) };
 }
 
 /**
@@ -161,38 +204,33 @@ function saddleBack(cut: Cut, from: Closed, to: Closed, at: number[], toLevel: n
  * (bandStages) and saddles; each must end at a certified unlink.
  */
 export function localClasses(pd: PDCode, movies: readonly { stages: Stage[]; saddles: Saddle[] }[]): LocalClassVector[] {
-  const cut = cutTangle(pd, [...new Set(movies.flatMap((m) => m.saddles.flatMap(({ a, b }) => [a, b])))].sort((x, y) => x - y));
+  const cut = cutFor(F2, pd, movies);
   const start = movies[0].stages[0];
-  const k0 = close(cut, closing(cut, start, start));
+  const k0 = closeAt(cut, start, start);
   return movies.map(({ stages, saddles }) => localClass(cut, k0, stages, saddles));
 }
 
-function localClass(cut: Cut, k0: Closed, stages: Stage[], saddles: Saddle[]): LocalClassVector {
-  const r = cut.nMinus;
-  const last = stages.length - 1;
-  const c = cycleCount(stages[last]);
-  // Shifts before the global q-shift n_+ - 2 n_-, which every stage shares.
-  const nPlus = stages[0].pd.length - r;
-  const shiftOf = (q: number): number => q - nPlus + 2 * r;
-  let closed = last === 0 ? k0 : close(cut, closing(cut, stages[0], stages[last]));
-  let at = levelOf(closed, r, shiftOf(c));
-  const above = positions(levelOf(closed, r + 1, shiftOf(c)));
-  const d0 = (i: number): number[] => images(closed, at[i], above);
-  const b0 = boundaries(closed, r, shiftOf(c), at);
-  const cyclesAt = [...kernel(at.length, d0)];
-  // Kh^{0,c} of the c-component unlink is F2: one cycle class beyond the boundaries.
-  if (cyclesAt.length - b0.rank !== 1) throw new Error(`Kh^{0,${c}} of the after-bands diagram has dimension ${cyclesAt.length - b0.rank}, not 1: it is not the ${c}-component unlink`);
-  let v: F2Vector = cyclesAt.map((k) => b0.reduce(k)).find((k) => k.length > 0)!;
-  for (let k = last; k > 0; k--) {
-    const to = k === 1 ? k0 : close(cut, closing(cut, stages[0], stages[k - 1]));
-    const toLevel = levelOf(to, r, shiftOf(c - (last - k) - 1));
-    v = saddleBack(cut, closed, to, at, toLevel, saddles[k - 1], v);
-    [closed, at] = [to, toLevel];
-  }
-  const q = c - last;
+const echelonOf = (rows: [number, number][][]): F2Echelon => {
+  const e = new F2Echelon();
+  for (const row of rows) e.add(parity(row.map(([j]) => j)));
+  return e;
+};
+
+const f2Carry: Carry<number, F2Vector> = {
+  start(at, d, below, c) {
+    const b0 = echelonOf(below);
+    const cyclesAt = [...kernel(at.length, (i) => parity(d(i).map(([j]) => j)))];
+    // Kh^{0,c} of the c-component unlink is F2: one cycle class beyond the boundaries.
+    if (cyclesAt.length - b0.rank !== 1) throw new Error(`Kh^{0,${c}} of the after-bands diagram has dimension ${cyclesAt.length - b0.rank}, not 1: it is not the ${c}-component unlink`);
+    return cyclesAt.map((k) => b0.reduce(k)).find((k) => k.length > 0)!;
+  },
+  cross: (v, images) => parity(v.flatMap(images)),
+};
+
+function localClass(cut: Cut<number>, k0: Closed<number>, stages: Stage[], saddles: Saddle[]): LocalClassVector {
+  const { v, at, d, below } = carryBack(cut, k0, stages, saddles, f2Carry);
   // The self-check: the image is a cycle of T' P_0 (the saddles are chain maps).
-  const up = positions(levelOf(closed, r + 1, shiftOf(q)));
-  if (parity(v.flatMap((i) => images(closed, at[i], up))).length > 0) throw new Error('internal: the image of the unlink class under the bands is not a cycle');
-  const b = boundaries(closed, r, shiftOf(q), at);
+  if (parity(v.flatMap((i) => d(i).map(([j]) => j))).length > 0) throw new Error('internal: the image of the unlink class under the bands is not a cycle');
+  const b = echelonOf(below);
   return { support: b.reduce(v), basisSize: at.length - b.rank };
 }

@@ -52,7 +52,7 @@ function boundaryRows(cube: Cube, r: number, q: number, at: Level): Map<number, 
 }
 
 /** A generator of Kh^{h,q} = Z^0/B when that group is Z: see the head of this file. */
-function generator(zeroCount: number, d0: (i: number) => Map<number, Int>, b: Map<number, Int>[]): Map<number, Int> {
+export function generator(zeroCount: number, d0: (i: number) => Map<number, Int>, b: Map<number, Int>[]): Map<number, Int> {
   const cycles = [...kernel(zeroCount, d0)];
   // The functionals vanishing on B: the integer kernel of B's transpose (all of them when B = 0).
   const transpose = Array.from({ length: zeroCount }, () => new Map<number, Int>());
@@ -104,22 +104,30 @@ export function classVectorZ(stages: Stage[], saddles: Saddle[]): ClassVectorZ {
 
 /** The class over Z up to sign of an integer cycle of C^{0,q} of `start` (`at` that level), with its reduction mod 2 and divisibility. */
 export function zNormalForm(m: Movie, start: Stage, at: Level, q: number, chain: ZVector): ClassVectorZ {
-  const rows = boundaryRows(m.cubeOf(start), m.nMinus, q, at);
+  const { normal, basisSize, divisibility } = signedNormalForm(boundaryRows(m.cubeOf(start), m.nMinus, q, at), at.gens.length, chain);
+  return {
+    support: normal.map(([i]) => enhancedState(m, at, i)),
+    coefficients: normal.map(([, x]) => x),
+    basisSize,
+    mod2: f2NormalForm(m, start, at, q, odd(chain)),
+    divisibility,
+  };
+}
+
+/**
+ * In any basis of a free module of rank `count` with boundaries spanned by `rows`: the normal
+ * form of +-chain (see the head of this file), the rank of C/B and the divisibility of the class.
+ */
+export function signedNormalForm(rows: ZVector[], count: number, chain: ZVector): { normal: [number, number][]; basisSize: number; divisibility: number } {
   const echelon = new ZEchelon();
   for (const row of rows) echelon.add(row);
   const [plus, minus] = [chain, combine(-1, chain, 0, new Map())].map((v) => echelon.reduce(v));
   const normal = [...(lexGreater(plus, minus) ? plus : minus)].sort((x, y) => x[0] - y[0]);
 
-  const matrix = (extra: ZVector[]) => sparse(rows.length + extra.length, at.gens.length, [...rows, ...extra].flatMap((r, i) => [...r].map(([j, x]) => [i, j, x] as const)), Z.add, Z.isZero);
+  const matrix = (extra: ZVector[]) => sparse(rows.length + extra.length, count, [...rows, ...extra].flatMap((r, i) => [...r].map(([j, x]) => [i, j, x] as const)), Z.add, Z.isZero);
   const [without, withZ] = [smith(matrix([])), smith(matrix([chain]))];
   const divisibility = withZ.rank === without.rank ? 0 : Z.divExact(product(withZ.invariants), product(without.invariants));
-  return {
-    support: normal.map(([i]) => enhancedState(m, at, i)),
-    coefficients: normal.map(([, x]) => safe(x)),
-    basisSize: at.gens.length - echelon.rank,
-    mod2: f2NormalForm(m, start, at, q, odd(chain)),
-    divisibility: safe(divisibility),
-  };
+  return { normal: normal.map(([i, x]) => [i, safe(x)]), basisSize: count - echelon.rank, divisibility: safe(divisibility) };
 }
 
 function safe(x: Int): number {

@@ -6,6 +6,7 @@ import { AfterHomology, BandCertificate, certify } from './certificate';
 import { classVector } from './class';
 import { classVectorZ } from './class-z';
 import { localClasses } from './class-local';
+import { localClassesZ } from './class-local-z';
 import { EnhancedState } from './cube-levels';
 import { bandStages } from './saddle';
 import { Fingers } from './carry';
@@ -25,13 +26,19 @@ export type { Fingers } from './carry';
 export const CLASS_CROSSINGS = 14;
 
 /**
- * The local route's limits (class-local.ts, over F2), past the cube's: crossings, and edges the
+ * The local route's limits (class-local.ts; over Z class-local-z.ts), past the cube's: crossings, and edges the
  * bands touch (each cut open for the whole computation, two open ends an edge, so the complex
  * grows with them). Measured in tests/bench/bands.bench.ts (load about 4): a 40-crossing pretzel
  * with one band in 0.3 s; three bands on six edges (9_46^#3, 27 crossings) in 0.8 s, peak 0.3 GB;
  * four bands on eight edges (9_46^#4, at load 12) took 68 s and 2.5 GB, five ran out of memory. Crossings
  * are limited below the pretzels' 40 since other diagrams give wider tangles (the unlink check's
- * Kh of 30-crossing diagrams took 11 s to 190 s: certificate.ts).
+ * Kh of 30-crossing diagrams took 11 s to 190 s: certificate.ts). On wide diagrams, 8_20 as a
+ * closed 3-braid stabilized to 6 to 10 strands and conjugated by random braids, one band (load
+ * 10): 29 to 43 crossings took 0.8 s to 5.5 s (eight codes), 47 to 57 up to 6 s (four), but one of 47 on 10
+ * strands 281 s and 2.3 GB, so the limit stays at 30. Over Z (class-local-z.ts) the times were
+ * those over F2 (50 crossings, 3 strands: 5.4 s against 5.5 s). Bands on one edge already share
+ * its cut; gluing the crossings at cut edges last (load 10) took 9_46^#4 from 68 s and 2.0 GB to
+ * 59 s and 1.5 GB but 9_46^#3 from 2.9 s to 4.8 s, so the order and the 6 edges stay.
  */
 export const LOCAL_CLASS_CROSSINGS = 30;
 export const LOCAL_CLASS_EDGES = 6;
@@ -49,7 +56,7 @@ export type ClassRing = 'F2' | 'Z';
 
 export interface SurfaceClass {
   ring: ClassRing;
-  /** 'cube': coordinates on enhanced states (class.ts, class-z.ts); 'local': on generators of the simplified complex (class-local.ts, over F2). */
+  /** 'cube': coordinates on enhanced states (class.ts, class-z.ts); 'local': on generators of the simplified complex (class-local.ts, class-local-z.ts). */
   basis: ClassBasis;
   /** Bidegree of the class: h = 0, q = chi. */
   h: number;
@@ -68,7 +75,7 @@ export interface SurfaceClass {
   /** The rank of C^{0,q}/B^{0,q} of the code's cube (or of the simplified complex): the number of basis elements outside the pivots. */
   basisSize: number;
   /** Over Z: the class mod 2, the class over F2 by universal coefficients. */
-  mod2?: { support: EnhancedState[]; basisSize: number };
+  mod2?: { support: (EnhancedState | LocalGenerator)[]; basisSize: number };
   /** Over Z: the free part of the class is this times a primitive element (1: primitive); 0 for a torsion class. */
   divisibility?: number;
 }
@@ -83,7 +90,7 @@ export interface SurfaceComparison {
 export interface ClassOptions {
   /** The cube's limit, default CLASS_CROSSINGS: the cube has 2^n resolutions. */
   maxCrossings?: number;
-  /** Past the cube's limit, the local route's (over F2), default LOCAL_CLASS_CROSSINGS; 0 turns it off. */
+  /** Past the cube's limit, the local route's, default LOCAL_CLASS_CROSSINGS; 0 turns it off. */
   localCrossings?: number;
   /** The local route's limit on the edges the bands touch, default LOCAL_CLASS_EDGES. */
   localEdges?: number;
@@ -110,7 +117,7 @@ export function bandCertificate(p: BandPresentation, opts: { maxCrossings?: numb
 
 /**
  * The class of the surface in Kh^{0,chi}(K; F2) (class.ts; past the cube's limit class-local.ts)
- * or Kh^{0,chi}(K; Z) up to sign (class-z.ts). BandError unless the bands end at a certified
+ * or Kh^{0,chi}(K; Z) up to sign (class-z.ts; past the cube's limit class-local-z.ts). BandError unless the bands end at a certified
  * unlink, or when the code is over the limits.
  */
 export function surfaceClass(p: BandPresentation, opts: ClassOptions = {}): SurfaceClass {
@@ -157,11 +164,11 @@ function compared(ca: SurfaceClass, cb: SurfaceClass): SurfaceComparison {
 function classesOf(pd: PDCode, unknots: number, bands: Saddle[][], opts: ClassOptions): SurfaceClass[] {
   const ring = opts.ring ?? 'F2';
   const cubeLimit = opts.maxCrossings ?? CLASS_CROSSINGS;
-  const localLimit = ring === 'F2' ? (opts.localCrossings ?? LOCAL_CLASS_CROSSINGS) : 0;
+  const localLimit = opts.localCrossings ?? LOCAL_CLASS_CROSSINGS;
   const basis: ClassBasis = pd.length <= cubeLimit ? 'cube' : 'local';
   // The cheap fact first: the cube has 2^n resolutions.
   if (basis === 'local' && pd.length > localLimit) {
-    const local = localLimit > cubeLimit ? ` and by the local algorithm up to ${localLimit}` : ring === 'Z' ? ' (over F2 further, by the local algorithm)' : '';
+    const local = localLimit > cubeLimit ? ` and by the local algorithm up to ${localLimit}` : '';
     throw new BandError(`the class is computed on the cube of resolutions, up to ${cubeLimit} crossings${local}; this diagram has ${pd.length}`);
   }
   const edges = new Set(bands.flat().flatMap(({ a, b }) => [a, b])).size;
@@ -183,9 +190,12 @@ function classesOf(pd: PDCode, unknots: number, bands: Saddle[][], opts: ClassOp
     }
   }
   const f2 = (v: { support: (EnhancedState | LocalGenerator)[]; basisSize: number }) => ({ ...v, coefficients: v.support.map(() => 1) });
-  const found =
-    basis === 'local'
-      ? localClasses(pd, bands.map((saddles, k) => ({ stages: stages[k], saddles }))).map((v) => f2({ support: v.support.map((generator) => ({ generator })), basisSize: v.basisSize }))
-      : bands.map((saddles, k) => (ring === 'Z' ? classVectorZ(stages[k], saddles) : f2(classVector(stages[k], saddles))));
+  const movies = bands.map((saddles, k) => ({ stages: stages[k], saddles }));
+  const generators = (support: number[]) => support.map((generator) => ({ generator }));
+  const local = (): Omit<SurfaceClass, 'ring' | 'basis' | 'h' | 'q' | 'zero'>[] =>
+    ring === 'Z'
+      ? localClassesZ(pd, movies).map((v) => ({ ...v, support: generators(v.support), mod2: { support: generators(v.mod2.support), basisSize: v.mod2.basisSize } }))
+      : localClasses(pd, movies).map((v) => f2({ support: generators(v.support), basisSize: v.basisSize }));
+  const found = basis === 'local' ? local() : bands.map((saddles, k) => (ring === 'Z' ? classVectorZ(stages[k], saddles) : f2(classVector(stages[k], saddles))));
   return found.map((v, k) => ({ ...v, ring, basis, h: 0, q: certs[k].chi, zero: v.support.length === 0 }));
 }
