@@ -5,7 +5,7 @@
 import { render, screen } from '@testing-library/react-native';
 import { element, SurfaceClassText } from '@/components/readout/SurfaceClassText';
 import { surfaceClass } from '@/shared/knot/bands';
-import { disks946 } from '../shared/bands-fixtures';
+import { disks946 } from '@/tests/shared/bands-fixtures';
 
 const limits = 'Cube of resolutions up to 14 crossings; past it the local algorithm, up to 30 crossings and bands on 6 edges.';
 

@@ -3,6 +3,7 @@ import { Saddle } from '@/shared/knot/bands';
 import { diagram, Diagram } from '@/shared/knot/diagram';
 import { addKink, faces, pushAcross, Rng } from '@/shared/knot/moves';
 import { orient, PDCode } from '@/shared/knot/pd';
+import { disks946, p33m3 } from './bands-fixtures';
 
 /**
  * Random R1 and R2 moves (adding a kink or a finger) that keep away from the bands: no kink on a
@@ -30,4 +31,12 @@ export function movedAway(pd: PDCode, bands: Saddle[][], moves: number, rng: Rng
     d = next;
   }
   return { pd: d.pd, bands: current };
+}
+
+/**
+ * 9_46 with its two ribbon disks and the first disk's slid band, moved away from all three bands
+ * together: the class tests over F_2 and over Z compare the same three surfaces.
+ */
+export function moved946(rng: Rng): { pd: PDCode; bands: Saddle[][] } {
+  return movedAway(p33m3.pd, [disks946.first[0].saddles, disks946.second[0].saddles, disks946.first[1].saddles], 6, rng);
 }
