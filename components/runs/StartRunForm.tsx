@@ -18,23 +18,26 @@ import { Choice } from '@/components/ui/Choice';
 import { Section } from '@/components/ui/Section';
 import { colors, fonts, radius, space, type } from '@/constants/theme';
 import { computeLocally, warmUpLocal } from './computeLocally';
+import { CableCopies, CablePair } from './CableWords';
 import { KhTable } from './KhTable';
 import { LOCAL_MAX_CROSSINGS } from './local-kh';
 import { KhSummary } from './RunResult';
 import { SliceBounds } from '@/components/ui/SliceBounds';
+import { TeX } from '@/components/ui/Math';
 import { computeS } from '@/lib/on-device/computeS';
 import { orient } from '@/shared/knot/pd';
 import { minus } from '@/shared/text/integers';
 
-// Written as the result tables write their groups (ℤ, ℤ/2), in the Readout's plain-text math.
-const ringNames = { Z: 'ℤ', Q: 'ℚ', F2: '𝔽₂', F3: '𝔽₃', Fp: '𝔽ₚ, any prime' } as const;
+// Typeset as the result tables write their groups (ℤ, ℤ/2); 𝔽ₚ asks for its prime in a field of its own.
+const ringNames = { Z: 'ℤ', Q: 'ℚ', F2: '𝔽₂', F3: '𝔽₃', Fp: '𝔽ₚ' } as const;
+const ringTeX = { Z: '\\mathbb{Z}', Q: '\\mathbb{Q}', F2: '\\mathbb{F}_2', F3: '\\mathbb{F}_3', Fp: '\\mathbb{F}_p' } as const;
 const sweepNames = { '0': 'Khovanov homology', '2': 'Cable sweep, up to 2 strands', '3': 'Cable sweep, up to 3 strands', '4': 'Cable sweep, up to 4 strands' } as const;
 const inputNames = Object.fromEntries(codeKinds.map((c) => [c.kind, c.label])) as Record<CodeKind, string>;
 const LABEL_MAX = 120;
 
 /** A visible caption over a segmented choice whose options are `names`' keys, in order. */
-function Labelled<T extends string>({ label, names, value, onChange }: { label: string; names: Record<T, string>; value: T; onChange: (v: T) => void }) {
-  const options = (Object.keys(names) as T[]).map((v) => ({ value: v, label: names[v] }));
+function Labelled<T extends string>({ label, names, tex, value, onChange }: { label: string; names: Record<T, string>; tex?: Record<T, string>; value: T; onChange: (v: T) => void }) {
+  const options = (Object.keys(names) as T[]).map((v) => ({ value: v, label: names[v], tex: tex?.[v] }));
   return (
     <View style={styles.field}>
       <Text style={styles.label}>{label}</Text>
@@ -45,7 +48,7 @@ function Labelled<T extends string>({ label, names, value, onChange }: { label: 
 
 /** The request for the typed code, or the reason it is not a diagram (or the ring not a ring). */
 function request(input: CodeKind, code: string, ring: string, reduced: boolean, sweep: number): StartRunRequest | string {
-  if (!RunRing.safeParse(ring).success) return `${ring.slice(1) || 'p'} is not a prime: 𝔽ₚ needs a prime p, e.g. 5.`;
+  if (!RunRing.safeParse(ring).success) return `${ring.slice(1) || 'p'} is not a prime; p must be a prime, e.g. 5.`;
   const parsed = parseCode(input, code);
   if (!parsed.ok) return parsed.error;
   const d = parsed.diagram;
@@ -133,7 +136,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
         />
         {invalid ? <Text role="alert" style={styles.error}>{invalid}</Text> : null}
       </View>
-      <Labelled label="Ring" names={ringNames} value={ringChoice} onChange={setRingChoice} />
+      <Labelled label="Ring" names={ringNames} tex={ringTeX} value={ringChoice} onChange={setRingChoice} />
       {ringChoice === 'Fp' ? (
         <View style={styles.field}>
           <Text style={styles.label}>Prime p</Text>
@@ -143,7 +146,7 @@ export function StartRunForm({ initialPD, sketchId }: { initialPD?: string; sket
       <Labelled label="Homology" names={{ unreduced: 'Unreduced', reduced: 'Reduced' }} value={reduced} onChange={setReduced} />
       <Labelled label="Computation" names={sweepNames} value={sweep} onChange={setSweep} />
       {/* In the words of the sweep's result page (SweepGrid), where its cells are laid out by (r₊, r₋). */}
-      {sweep !== '0' ? <Text style={styles.label}>{`Each component takes every (r₊, r₋) with r₊ + r₋ from 1 up to ${sweep}: r₊ parallel and r₋ reversed copies, following the framing.`}</Text> : null}
+      {sweep !== '0' ? <Text style={styles.label}>Each component takes every <CablePair /> with <TeX tex="r_+ + r_-" text="r₊ + r₋" nowrap /> from 1 up to {sweep}: <CableCopies /></Text> : null}
       {sweep === '0' ? (
         // The server refuses it for a link, saying s is defined for knots here.
         <Checkbox label="Also compute s (Rasmussen invariant, knots only)" on={alsoS} onPress={() => setAlsoS(!alsoS)} />

@@ -6,6 +6,7 @@ import { Link } from 'expo-router';
 import { runPagePath, type RunDetail } from '@/shared/api/runs';
 import { Section } from '@/components/ui/Section';
 import { colors, radius, space, type } from '@/constants/theme';
+import { CableCopies, CablePair } from './CableWords';
 import { KhTable } from './KhTable';
 import { ProgressBar } from './ProgressBar';
 import { statusLabel } from '@/lib/run-format';
@@ -37,7 +38,7 @@ export function SweepGrid({ cells }: { cells: Cell[] }) {
   const rows = Array.from({ length: max + 1 }, (_, m) => m);
   const at = new Map(cells.map((c) => [pairs(c), c]));
   return (
-    <Section title="Cables" note="(r₊, r₋): r₊ parallel and r₋ reversed copies, following the framing.">
+    <Section title="Cables" note={<><CablePair />: <CableCopies /></>}>
       {knot ? (
         <View style={styles.grid}>
           {rows.map((minus) => (

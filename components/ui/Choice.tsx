@@ -1,10 +1,12 @@
 // A segmented choice of a few options (radio semantics), used by dialogs and forms.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { TeX } from '@/components/ui/Math';
 import { TOUCH, colors, radius, shadows, space, type } from '@/constants/theme';
 
 export function Choice<T extends string>({ label, options, value, onChange }: {
   label: string;
-  options: readonly { value: T; label: string }[];
+  /** `tex`: the label typeset (a ring, ℤ); `label` stays its accessible name and native text. */
+  options: readonly { value: T; label: string; tex?: string }[];
   value: T;
   onChange: (v: T) => void;
 }) {
@@ -14,7 +16,7 @@ export function Choice<T extends string>({ label, options, value, onChange }: {
         const on = o.value === value;
         return (
           <Pressable key={o.value} role="radio" aria-checked={on} onPress={() => onChange(o.value)} style={[styles.option, on && styles.optionOn]}>
-            <Text style={[styles.optionText, on && styles.optionTextOn]}>{o.label}</Text>
+            <Text style={[styles.optionText, on && styles.optionTextOn]}>{o.tex ? <TeX tex={o.tex} text={o.label} nowrap /> : o.label}</Text>
           </Pressable>
         );
       })}

@@ -21,7 +21,7 @@ test('other entries name their signature; signature 0 cannot tell mirror images 
 test('the sheet typesets the names it mentions, as the Readout\'s name line does', () => {
   render(<ConventionsSheet visible onClose={() => {}} />);
   // 3_1 is the positive trefoil in our table (docs/conventions.md, Names).
-  const names = screen.getByLabelText(/3_1 is the positive trefoil/);
+  const names = screen.getByLabelText(/3₁ is the positive trefoil/);
   expect(names).toHaveTextContent(/3₁ is the positive trefoil; the other one reads "3₁ \(mirror\)"/);
   expect(names).not.toHaveTextContent(/3_1/);
 });

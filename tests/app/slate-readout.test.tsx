@@ -43,7 +43,7 @@ test('values of the positive trefoil appear once computed, marked as updating be
   expect(screen.getByTestId('readout-signature')).toHaveTextContent('−2', { exact: false });
   // The name once, typeset (here the native stand-in 3₁), never again in ASCII.
   expect(screen.getByTestId('readout-name')).toHaveTextContent('invariants match 3₁');
-  expect(screen.getByLabelText('invariants match 3_1')).toBeOnTheScreen();
+  expect(screen.getByLabelText('invariants match 3₁')).toBeOnTheScreen();
   // The line under it names the entry the same way (Rolfsen's table; docs/conventions.md, Names).
   expect(screen.getByTestId('readout-chirality')).toHaveTextContent(/^Our table's 3₁ is the positive/);
   // HOMFLY-PT of the positive trefoil: 2v^2 - v^4 + v^2 z^2 (docs/conventions.md; from memory).

@@ -27,9 +27,9 @@ test('the name line tells the chirality of 3_1 and the Readout opens the convent
   await page.getByRole('radio', { name: 'Braid word' }).click();
   await page.getByRole('textbox', { name: 'Braid word' }).fill('1 1 1');
   await page.getByRole('button', { name: 'Draw it' }).click();
-  await page.getByLabel(/invariants match 3_1/).waitFor();
+  await page.getByLabel(/invariants match 3₁/).waitFor();
   const chirality = page.getByTestId('readout-chirality');
-  await chirality.and(page.getByLabel("Our table's 3_1 is the positive (right-handed) trefoil, with signature −2. Positive knots have negative signature here.")).waitFor();
+  await chirality.and(page.getByLabel("Our table's 3₁ is the positive (right-handed) trefoil, with signature −2. Positive knots have negative signature here.")).waitFor();
   // The name in it typeset as on the name line (KaTeX), not written 3_1.
   await chirality.locator('.katex').waitFor();
   expect((await chirality.locator('.katex-html').innerText()).replace(/[\s\u200b]/g, '')).toBe('31');
@@ -39,7 +39,7 @@ test('the name line tells the chirality of 3_1 and the Readout opens the convent
   await page.getByRole('button', { name: 'Conventions' }).click();
   const sheet = page.getByRole('dialog', { name: 'Conventions' });
   await sheet.getByText(/Positive knots have negative signature: the positive trefoil has signature −2/).waitFor();
-  const names = sheet.getByLabel(/3_1 is the positive trefoil/);
+  const names = sheet.getByLabel(/3₁ is the positive trefoil/);
   expect(await names.locator('.katex').count()).toBe(2);
   expect(await names.evaluate((e) => Array.from(e.childNodes).filter((n) => n.nodeType === Node.TEXT_NODE).map((n) => n.textContent).join(''))).not.toMatch(/3_1/);
   expect(await sheet.innerText()).toMatch(/Components are numbered in drawing order/);

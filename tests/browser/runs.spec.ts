@@ -39,6 +39,8 @@ test('start a run from a braid word, watch its progress, read the table', async 
   await page.getByRole('radio', { name: 'Braid word' }).click();
   await page.getByLabel('Braid word').fill(T78);
   await page.getByRole('radio', { name: 'ℚ' }).click();
+  // The rings typeset (KaTeX's fonts), not drawn from whatever fallback font has ℚ and 𝔽ₚ.
+  for (const ring of ['ℤ', 'ℚ', '𝔽₂', '𝔽₃', '𝔽ₚ']) await page.getByRole('radio', { name: ring, exact: true }).locator('.katex').waitFor();
   await shoot(page, 'runs-01-form');
   await page.getByRole('button', { name: 'Start run' }).click();
 
@@ -94,11 +96,14 @@ test('a cable sweep shows a grid of small tables', async () => {
   await page.getByRole('radio', { name: 'PD code' }).click();
   await page.getByLabel('PD code').fill('[[4,2,5,1],[2,6,3,5],[6,4,1,3]]');
   await page.getByRole('radio', { name: 'Cable sweep, up to 2 strands' }).click();
-  const note = page.getByText(/^Each component takes every \(r₊, r₋\)/);
+  const note = page.getByText(/^Each component takes every/);
+  // (r₊, r₋) typeset: the interface faces have no subscript plus or minus.
+  await note.getByRole('math', { name: '(r₊, r₋)' }).waitFor();
   await note.scrollIntoViewIfNeeded();
   await shoot(page, 'runs-06-sweep-choice');
   await page.getByRole('button', { name: 'Start run' }).click();
   await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 90_000 });
+  await page.getByRole('math', { name: '(r₊, r₋)' }).waitFor(); // the grid's note, as the form wrote it
   await shoot(page, 'runs-06-cable-sweep');
   for (const [p, m] of [[1, 0], [0, 1], [2, 0], [1, 1], [0, 2]]) {
     await page.getByRole('table', { name: `Khovanov homology of the (${p}, ${m}) cable` }).waitFor();

@@ -48,7 +48,7 @@ test('a quick 30-sample trefoil closes; the Readout says it is descending; Alter
   await settled(page);
   await shoot(page, 'slate-descending');
   await page.getByRole('button', { name: 'Make alternating' }).click();
-  await page.getByLabel(/invariants match 3_1/).waitFor();
+  await page.getByLabel(/invariants match 3₁/).waitFor();
   await settled(page);
   expect(await page.getByTestId('descending-note').count()).toBe(0);
   // One of the two trefoils: V = t + t^3 - t^4 or its mirror V(1/t) (docs/conventions.md; Jones 1985).

@@ -91,13 +91,13 @@ test('a trefoil drawn with the mouse shows 3 crossings; flipping one changes its
   await settled(page);
   // A descending diagram (every crossing first met over) is the unknot (common practice): V = 1.
   expect(await jonesText(page)).toBe('V(t) = 1');
-  await page.getByLabel(/invariants match 0_1/).waitFor();
+  await page.getByLabel(/invariants match 0₁/).waitFor();
 
   const crossings = selfCrossings(drawn);
   expect(crossings).toHaveLength(3);
   await page.mouse.click(crossings[crossingToAlternate(crossings)].at.x, crossings[crossingToAlternate(crossings)].at.y);
   // (The crossing count stays 3, so wait for the name before reading the settled values.)
-  await page.getByLabel(/invariants match 3_1/).waitFor();
+  await page.getByLabel(/invariants match 3₁/).waitFor();
   await settled(page);
   // Now alternating: one of the two trefoils, V = t + t^3 - t^4 or its mirror (docs/conventions.md: the
   // closure of [1,1,1]; mirror V(t) -> V(1/t), Jones 1985).
@@ -108,12 +108,12 @@ test('a trefoil drawn with the mouse shows 3 crossings; flipping one changes its
 
 test('undo brings the unflipped crossing back', async () => {
   await page.getByRole('button', { name: 'Undo' }).click();
-  await page.getByLabel(/invariants match 0_1/).waitFor();
+  await page.getByLabel(/invariants match 0₁/).waitFor();
   await settled(page);
   expect(await jonesText(page)).toBe('V(t) = 1');
   await page.getByRole('button', { name: 'Redo' }).click();
   await settled(page);
-  await page.getByLabel(/invariants match 3_1/).waitFor();
+  await page.getByLabel(/invariants match 3₁/).waitFor();
 });
 
 test('a pasted PD code is drawn on the Slate', async () => {
@@ -129,7 +129,7 @@ test('a pasted PD code is drawn on the Slate', async () => {
   await page.getByTestId('readout-crossings-count').getByText('4 crossings').waitFor();
   await settled(page);
   expect(await jonesText(page)).toBe('V(t) = t⁻² − t⁻¹ + 1 − t + t²');
-  await page.getByLabel(/invariants match 4_1/).waitFor();
+  await page.getByLabel(/invariants match 4₁/).waitFor();
   // Drawn: the canvas holds the strand's visible pieces (one per under-crossing gap).
   expect(await page.getByTestId('slate-canvas').locator('path[stroke-dasharray]').count()).toBe(0);
   expect(await page.getByTestId('slate-canvas').locator('path').count()).toBeGreaterThanOrEqual(4);
@@ -141,7 +141,7 @@ test('codes are copied; a braid word is simplified; undo goes back', async () =>
   await page.getByRole('radio', { name: 'Braid word' }).click();
   await page.getByRole('textbox', { name: 'Braid word' }).fill('1 1 1');
   await page.getByRole('button', { name: 'Draw it' }).click();
-  await page.getByLabel(/invariants match 3_1/).waitFor();
+  await page.getByLabel(/invariants match 3₁/).waitFor();
   await page.getByRole('button', { name: 'Copy braid word' }).click();
   await page.getByText('Copied the braid word.').waitFor();
   expect(await page.evaluate(() => navigator.clipboard.readText())).toBe('1 1 1');
@@ -160,7 +160,7 @@ test('codes are copied; a braid word is simplified; undo goes back', async () =>
   await page.getByTestId('readout-crossings-count').getByText('0 crossings').waitFor();
   await page.getByText(/^2 components/).waitFor();
   for (let i = 0; i < 3; i++) await page.getByRole('button', { name: 'Undo' }).click();
-  await page.getByLabel(/invariants match 4_1/).waitFor();
+  await page.getByLabel(/invariants match 4₁/).waitFor();
 });
 
 test('the Families builder draws a torus link with its linking number', async () => {
@@ -193,7 +193,7 @@ test('details are saved and shown in the sketchbook; shortcuts undo on a wide sc
   await page.getByRole('link', { name: 'Open T(2,4) from the seminar' }).waitFor();
   await page.keyboard.press('Control+z');
   // Back to the pasted figure-eight knot.
-  await page.getByLabel(/invariants match 4_1/).waitFor();
+  await page.getByLabel(/invariants match 4₁/).waitFor();
   await page.keyboard.press('Control+Shift+z');
   await page.getByText('lk(1,2) = +2').waitFor();
   await page.keyboard.press('?');
