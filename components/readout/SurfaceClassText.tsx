@@ -8,7 +8,7 @@ import { Fragment } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { SurfaceClass } from '@/shared/knot/bands';
 import { CLASS_CROSSINGS, LOCAL_CLASS_CROSSINGS, LOCAL_CLASS_EDGES } from '@/shared/knot/bands';
-import { minus } from '@/shared/text/integers';
+import { minus, subscript } from '@/shared/text/integers';
 import { TeX } from '@/components/ui/Math';
 import { colors, fonts, type } from '@/constants/theme';
 import type { ClassAnswer } from './local-bands';
@@ -19,8 +19,6 @@ const shown = 6;
 export const bidegree = (c: SurfaceClass) => `(h, q) = (0, ${minus(c.q)})`;
 
 type Piece = { tex: string; text: string };
-
-const subscript = (s: string) => s.replace(/\d/g, (d) => '₀₁₂₃₄₅₆₇₈₉'[Number(d)]);
 
 /** One basis element as TeX and as plain text (screen readers, native): g_12, or a resolution and its x-labelled circles. */
 export function element(s: SurfaceClass['support'][number]): Piece {

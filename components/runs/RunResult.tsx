@@ -16,6 +16,7 @@ import { Button } from '@/components/ui/Button';
 import { Section } from '@/components/ui/Section';
 import { colors, fonts, space, type } from '@/constants/theme';
 import { KhTable } from './KhTable';
+import { RingName } from './RingName';
 import { useRunFocus } from './focus-store';
 import { useIsWide } from '@/components/shell/useIsWide';
 import { TeX } from '@/components/ui/Math';
@@ -162,7 +163,11 @@ function Input({ run }: { run: RunDetail }) {
         </Fact>
       ) : null}
       <Fact name="Computed">
-        {`${run.kind === 'cable-sweep' ? 'Cable sweep' : run.kind === 'bands' ? 'Unlink check of the bands by Khovanov homology' : 'Khovanov homology'} over ${run.ring}${run.reduced ? `, reduced at component ${(run.result?.component ?? 0) + 1}` : ''} · started ${runDate(run.createdAt)} by ${run.startedBy.displayName}${run.finishedAt ? ` · ended ${runDate(run.finishedAt)}` : ''}${run.computeS ? ' · with the s-invariant' : ''}${run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}${run.worker ? ` · computed by ${run.worker}` : ''}`}
+        <Text style={styles.value}>
+          {`${run.kind === 'cable-sweep' ? 'Cable sweep' : run.kind === 'bands' ? 'Unlink check of the bands by Khovanov homology' : 'Khovanov homology'} over `}
+          <RingName ring={run.ring} />
+          {`${run.reduced ? `, reduced at component ${(run.result?.component ?? 0) + 1}` : ''} · started ${runDate(run.createdAt)} by ${run.startedBy.displayName}${run.finishedAt ? ` · ended ${runDate(run.finishedAt)}` : ''}${run.computeS ? ' · with the s-invariant' : ''}${run.reusedFrom ? ' · reused a stored result of the same diagram' : ''}${run.worker ? ` · computed by ${run.worker}` : ''}`}
+        </Text>
       </Fact>
     </View>
   );

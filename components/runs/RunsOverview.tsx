@@ -44,7 +44,7 @@ export function RunsOverview({ formWhere, hideEmpty = false }: { formWhere: stri
       {runs.data && runs.data.length === 0 && hideEmpty ? <Text style={styles.none}>{scope === 'mine' ? 'No runs yet.' : 'No runs in this group yet.'}</Text> : null}
       {runs.data && runs.data.length === 0 && !hideEmpty ? (
         <EmptyState art={<RunsIcon color={colors.inkFaint} size={40} />} title={scope === 'mine' ? 'No runs yet' : 'No runs in this group yet'}>
-          Start a run {formWhere}, or from a sketch: Khovanov homology over the integers, Q or <TeX tex="\mathbb{F}_p" text="𝔽ₚ" />, or a cable sweep over
+          Start a run {formWhere}, or from a sketch: Khovanov homology over the integers, <TeX tex="\mathbb{Q}" text="ℚ" /> or <TeX tex="\mathbb{F}_p" text="𝔽ₚ" />, or a cable sweep over
           strand counts. The group's server computes it; progress shows here and an e-mail says when it is done.
         </EmptyState>
       ) : null}

@@ -1,6 +1,7 @@
 // The Readout's values, computed in stages so the quick ones show first and each value knows
 // whether it is current. Pure: the hook (useReadout) schedules the stages off the gesture path.
 import { alexander } from '@/shared/knot/alexander';
+import { subscript } from '@/shared/text/integers';
 import { bracket } from '@/shared/knot/bracket';
 import { componentCount, framingsOf, type Diagram } from '@/shared/knot/diagram';
 import { linkDeterminant, linkSignature } from '@/shared/knot/goeritz';
@@ -89,10 +90,8 @@ export const nameTeX = (name: string): string => {
   return `${n}_{${k}}`;
 };
 
-const SUBSCRIPT: Record<string, string> = { 0: '₀', 1: '₁', 2: '₂', 3: '₃', 4: '₄', 5: '₅', 6: '₆', 7: '₇', 8: '₈', 9: '₉' };
-
 /** "3_1" as "3₁": what screen readers and the native build show in the TeX's place. */
 export const nameUnicode = (name: string): string => {
   const [n, k] = name.split('_');
-  return n + [...k].map((ch) => SUBSCRIPT[ch]).join('');
+  return n + subscript(k);
 };

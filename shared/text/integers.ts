@@ -5,3 +5,6 @@ export const minus = (n: number): string => (n < 0 ? `−${-n}` : `${n}`);
 
 /** With its sign always (+2, −1, 0): framings, linking numbers, writhe. */
 export const signed = (n: number): string => (n > 0 ? `+${n}` : minus(n));
+
+/** The digits of `s` as Unicode subscripts (x₁₂, 𝔽₅), the plain-text stand-in for TeX's `_{12}`. */
+export const subscript = (s: string): string => s.replace(/\d/g, (d) => '₀₁₂₃₄₅₆₇₈₉'[Number(d)]);

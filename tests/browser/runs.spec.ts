@@ -104,6 +104,8 @@ test('a cable sweep shows a grid of small tables', async () => {
   await page.getByRole('button', { name: 'Start run' }).click();
   await page.getByTestId('run-status').getByText('Done').waitFor({ timeout: 90_000 });
   await page.getByRole('math', { name: '(r₊, r₋)' }).waitFor(); // the grid's note, as the form wrote it
+  // What was computed names the ring as the tables below do (ℤ), not as the API spells it (Z).
+  await page.getByText(/^Cable sweep over/).getByRole('math', { name: 'ℤ' }).waitFor();
   await shoot(page, 'runs-06-cable-sweep');
   for (const [p, m] of [[1, 0], [0, 1], [2, 0], [1, 1], [0, 2]]) {
     await page.getByRole('table', { name: `Khovanov homology of the (${p}, ${m}) cable` }).waitFor();
