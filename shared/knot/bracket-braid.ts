@@ -19,8 +19,11 @@ import { Laurent } from '@/shared/poly/laurent';
 /** Most coefficients (entries times exponents) one limb holds: 32 MB of doubles. */
 const MAX_ENTRIES = 2 ** 22;
 
-/** Slots a column has room for at first. */
-const FIRST_STRIDE = 8;
+/**
+ * Slots a column has room for at first (never more than the word's width): windows of a long
+ * word reach tens of slots, and each widening allocates and faults in the whole buffer anew.
+ */
+const FIRST_STRIDE = 64;
 
 /** Whether the Temperley-Lieb sweep's buffers fit for this braid (the modules hold Catalan(strands) entries). */
 export const braidSweepFits = (strands: number, letters: number): boolean => catalan(strands) * (letters + 1) <= MAX_ENTRIES;
@@ -133,7 +136,6 @@ function letterOn(b: Sweep, m: StandardModule, k: number, up: boolean): void {
       if (lo[s] > hi[s]) continue;
       low = Math.min(low, lo[s] + slot(cls, s, t, up));
       high = Math.max(high, hi[s] + slot(cls, s, t, up));
-      for (let r = 0; r < b.peaks.length; r++) b.peaks[r][t] += b.peaks[r][s];
     }
     if (low > high) continue;
     if (live) {
@@ -147,14 +149,21 @@ function letterOn(b: Sweep, m: StandardModule, k: number, up: boolean): void {
     if (base[t] + low < start || base[t] + high >= start + b.stride) recentre(b, t, low, high);
     lo[t] = low;
     hi[t] = high;
-    for (const limb of b.limbs) {
+    for (let r = 0; r < b.limbs.length; r++) {
+      const limb = b.limbs[r];
+      // Row t's own entries keep their sizes; every entry the sums write is bounded by the
+      // largest partial sum, measured as it is written (a bound as tight as the row's peak
+      // and without a second pass over the row).
+      let peak = b.peaks[r][t];
       for (let x = from[j]; x < from[j + 1]; x++) {
         const s = sources[x];
         if (lo[s] > hi[s]) continue;
         const into = base[t] + lo[s] + slot(cls, s, t, up);
-        if (neg[s] === neg[t]) addInto(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1, b.cols, b.stride);
-        else subtractFrom(limb, base[s] + lo[s], into, hi[s] - lo[s] + 1, b.cols, b.stride);
+        const n = hi[s] - lo[s] + 1;
+        const written = neg[s] === neg[t] ? addInto(limb, base[s] + lo[s], into, n, b.cols, b.stride) : subtractFrom(limb, base[s] + lo[s], into, n, b.cols, b.stride);
+        peak = Math.max(peak, written);
       }
+      b.peaks[r][t] = peak;
     }
     trim(b, t);
   }
@@ -163,13 +172,32 @@ function letterOn(b: Sweep, m: StandardModule, k: number, up: boolean): void {
 /** Slots from s to its image t under e_k: -1, 0 or 1 (the classes differ by 2, the letter's A^(-+1)). */
 const slot = (cls: Uint8Array, s: number, t: number, up: boolean): number => (cls[s] - cls[t] + (up ? 2 : -2)) / 4;
 
-/** n slots of each of cols columns stride apart: column by column, since a window is often much narrower than the stride. */
-function addInto(limb: Float64Array, from: number, to: number, n: number, cols: number, stride: number): void {
-  for (let end = from + cols * stride; from < end; from += stride, to += stride) for (let i = 0; i < n; i++) limb[to + i] += limb[from + i];
+/**
+ * n slots of each of cols columns stride apart: column by column, since a window is often much
+ * narrower than the stride. Returns the largest |sum| written.
+ */
+function addInto(limb: Float64Array, from: number, to: number, n: number, cols: number, stride: number): number {
+  let peak = 0;
+  for (let end = from + cols * stride; from < end; from += stride, to += stride) {
+    for (let i = 0; i < n; i++) {
+      const x = limb[to + i] + limb[from + i];
+      limb[to + i] = x;
+      peak = Math.max(peak, Math.abs(x));
+    }
+  }
+  return peak;
 }
 
-function subtractFrom(limb: Float64Array, from: number, to: number, n: number, cols: number, stride: number): void {
-  for (let end = from + cols * stride; from < end; from += stride, to += stride) for (let i = 0; i < n; i++) limb[to + i] -= limb[from + i];
+function subtractFrom(limb: Float64Array, from: number, to: number, n: number, cols: number, stride: number): number {
+  let peak = 0;
+  for (let end = from + cols * stride; from < end; from += stride, to += stride) {
+    for (let i = 0; i < n; i++) {
+      const x = limb[to + i] - limb[from + i];
+      limb[to + i] = x;
+      peak = Math.max(peak, Math.abs(x));
+    }
+  }
+  return peak;
 }
 
 /** Row t's window narrowed to the slots nonzero in some column: cancellation at its ends is common, and later sums skip them. */
@@ -251,17 +279,37 @@ function unbounded(b: Sweep, m: StandardModule, k: number, limit: number): numbe
   return -1;
 }
 
-/** The module's trace: its diagonal entries, each at A^(4 (i - zero) + writhe). */
-function trace({ limbs, lo, hi, base, neg, cols, stride, zero, writhe }: Sweep, precision: Precision): Laurent {
-  const sums = new Map<number, bigint>();
-  for (let u = 0; u < cols; u++) {
-    for (let i = lo[u]; i <= hi[u]; i++) {
-      const at = base[u] + u * stride + i;
-      const x = limbs.reduce((sum, limb, r) => (limb[at] === 0 ? sum : sum + (BigInt(limb[at]) << BigInt(r * precision.limbBits))), 0n);
-      if (x !== 0n) sums.set(i, (sums.get(i) ?? 0n) + (neg[u] ? -x : x));
-    }
+/** The module's trace: its diagonal entries, each at A^(4 (i - zero) + writhe), i the slot. */
+function trace(b: Sweep, precision: Precision): Laurent {
+  const c = new Array<bigint>(4 * (b.width - 1) + 1).fill(0n);
+  for (let r = 0; r < b.limbs.length; r++) {
+    const sums = diagonal(b, r, precision);
+    const shift = BigInt(r * precision.limbBits);
+    for (let i = 0; i < b.width; i++) if (sums[i] !== 0n) c[4 * i] += sums[i] << shift;
   }
-  return Laurent.fromPairs([...sums].map(([i, x]) => [4 * (i - zero) + writhe, x]));
+  return Laurent.fromDense(c, b.writhe - 4 * b.zero);
+}
+
+/**
+ * Limb r's diagonal, signed and summed slot by slot over the rows: in doubles (big integers
+ * only at the end, one per slot) when the rows' peaks add up below 2^exactBits, else in big
+ * integers entry by entry.
+ */
+function diagonal({ limbs, peaks, lo, hi, base, neg, cols, stride, width }: Sweep, r: number, precision: Precision): bigint[] {
+  const limb = limbs[r];
+  let bound = 0;
+  for (let u = 0; u < cols; u++) if (lo[u] <= hi[u]) bound += peaks[r][u];
+  if (bound >= 2 ** precision.exactBits) {
+    const big = new Array<bigint>(width).fill(0n);
+    for (let u = 0; u < cols; u++) for (let i = lo[u], at = base[u] + u * stride; i <= hi[u]; i++) big[i] += BigInt(neg[u] ? -limb[at + i] : limb[at + i]);
+    return big;
+  }
+  const sums = new Float64Array(width);
+  for (let u = 0; u < cols; u++) {
+    const [at, sign] = [base[u] + u * stride, neg[u] ? -1 : 1];
+    for (let i = lo[u]; i <= hi[u]; i++) sums[i] += sign * limb[at + i];
+  }
+  return Array.from(sums, (x) => BigInt(x));
 }
 
 /** [p + 1], the closure of p parallel strands: 1, delta, delta^2 - 1, ... with delta = -A^2 - A^-2 (Chebyshev). */
