@@ -57,6 +57,18 @@ export interface Piece {
 /** The reduced surface that is zero. */
 const NONE: [number, number][] = [];
 
+// Most reduced surfaces are one term, and every memo keeps its results for the life of a
+// complex: shared lists, one per (mask, handles), keep the memos from filling the young
+// generation with survivors that each scavenge copies (never mutated: callers only read them).
+const singles = new Map<number, [number, number][]>();
+
+function single(mask: number, handles: number): [number, number][] {
+  const key = mask * 32 + handles;
+  let terms = singles.get(key);
+  if (!terms) singles.set(key, (terms = [[mask, 2 ** handles]]));
+  return terms;
+}
+
 /**
  * A glued surface given by pieces, with `dots[k]` (plus `capDots[k]`) dots on piece k, in the
  * disc basis: [mask, coefficient]. Every term has the same coefficient (2^handles of the
@@ -66,16 +78,20 @@ const NONE: [number, number][] = [];
  */
 export function reduce(pieces: readonly Piece[], dots: readonly number[], capDots?: readonly number[]): [number, number][] {
   let dotted = 0;
-  let factor = 1;
+  let handles = 0;
+  let count = 1;
   for (let k = 0; k < pieces.length; k++) {
     const { genus, boundary } = pieces[k];
     const e = dots[k] + (capDots ? capDots[k] : 0) + genus;
     if (e >= 2) return NONE;
     if (e === 1) {
       dotted |= boundary;
-      if (genus === 1) factor *= 2;
+      handles += genus;
     } else if (boundary === 0) return NONE; // an undotted sphere
+    else count *= popcount(boundary);
   }
+  if (count === 1) return single(dotted, handles);
+  const factor = 2 ** handles;
   const terms: [number, number][] = [[dotted, factor]];
   for (let k = 0; k < pieces.length; k++) {
     const { genus, boundary } = pieces[k];
