@@ -60,9 +60,11 @@ const NONE: [number, number][] = [];
 // Most reduced surfaces are one term, and every memo keeps its results for the life of a
 // complex: shared lists, one per (mask, handles), keep the memos from filling the young
 // generation with survivors that each scavenge copies (never mutated: callers only read them).
+// Masks up to 16 circles are shared, so the table, which outlives every run, stays bounded.
 const singles = new Map<number, [number, number][]>();
 
 function single(mask: number, handles: number): [number, number][] {
+  if (mask >= 1 << 16) return [[mask, 2 ** handles]];
   const key = mask * 32 + handles;
   let terms = singles.get(key);
   if (!terms) singles.set(key, (terms = [[mask, 2 ** handles]]));
