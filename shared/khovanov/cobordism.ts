@@ -45,7 +45,7 @@ export interface Theory {
 
 /** Khovanov's theory: x^2 = 0, so a dual dot is a dot. */
 export const khovanovTheory: Theory = {
-  reduce: (pieces, dots, capDots) => reduce(pieces, capDots ? dots.map((d, k) => d + capDots[k]) : dots),
+  reduce: (pieces, dots, capDots) => reduce(pieces, dots, capDots),
 };
 
 /** A connected glued surface: its genus and the result cycles on its boundary (a mask). */
@@ -54,49 +54,95 @@ export interface Piece {
   readonly boundary: number;
 }
 
-/** A glued surface given by pieces, with `dots[k]` dots on piece k, in the disc basis: [mask, coefficient]. */
-export function reduce(pieces: readonly Piece[], dots: readonly number[]): [number, number][] {
-  let terms: [number, number][] = [[0, 1]];
-  for (let k = 0; k < pieces.length; k++) {
-    const { genus, boundary } = pieces[k];
-    const e = dots[k] + genus;
-    if (e >= 2) return [];
-    if (e === 1) {
-      const factor = genus === 1 ? 2 : 1;
-      terms = terms.map(([m, c]) => [m | boundary, c * factor]);
-    } else {
-      if (boundary === 0) return []; // an undotted sphere
-      const next: [number, number][] = [];
-      for (let b = boundary; b; b &= b - 1) {
-        const undotted = b & -b;
-        for (const [m, c] of terms) next.push([m | (boundary & ~undotted), c]);
-      }
-      terms = next;
-    }
-  }
+/** The reduced surface that is zero. */
+const NONE: [number, number][] = [];
+
+// Most reduced surfaces are one term, and every memo keeps its results for the life of a
+// complex: shared lists, one per (mask, handles), keep the memos from filling the young
+// generation with survivors that each scavenge copies (never mutated: callers only read them).
+// Masks up to 16 circles are shared, so the table, which outlives every run, stays bounded.
+const singles = new Map<number, [number, number][]>();
+
+function single(mask: number, handles: number): [number, number][] {
+  if (mask >= 1 << 16) return [[mask, 2 ** handles]];
+  const key = mask * 32 + handles;
+  let terms = singles.get(key);
+  if (!terms) singles.set(key, (terms = [[mask, 2 ** handles]]));
   return terms;
 }
 
 /**
- * Union-find over discs glued along arcs. Returns the component of every disc and each
- * component's Euler characteristic (discs minus gluing arcs).
+ * A glued surface given by pieces, with `dots[k]` (plus `capDots[k]`) dots on piece k, in the
+ * disc basis: [mask, coefficient]. Every term has the same coefficient (2^handles of the
+ * once-dotted pieces), and the terms are the choices of one undotted circle on each undotted
+ * piece, so the list is built at its final size: this runs on every memo miss, and the
+ * intermediate lists of a piece-by-piece product were the engine's largest allocation.
  */
-export function glue(discs: number, arcs: readonly (readonly [number, number])[]): { comp: number[]; euler: number[] } {
-  const parent = Array.from({ length: discs }, (_, k) => k);
-  const find = (x: number): number => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
-    return x;
-  };
-  for (const [a, b] of arcs) parent[find(a)] = find(b);
-  const ids = new Map<number, number>();
-  const comp = parent.map((_, k) => {
-    const r = find(k);
-    if (!ids.has(r)) ids.set(r, ids.size);
-    return ids.get(r)!;
-  });
-  const euler = new Array<number>(ids.size).fill(0);
-  comp.forEach((c) => euler[c]++);
-  for (const [a] of arcs) euler[comp[a]]--;
+export function reduce(pieces: readonly Piece[], dots: readonly number[], capDots?: readonly number[]): [number, number][] {
+  let dotted = 0;
+  let handles = 0;
+  let count = 1;
+  for (let k = 0; k < pieces.length; k++) {
+    const { genus, boundary } = pieces[k];
+    const e = dots[k] + (capDots ? capDots[k] : 0) + genus;
+    if (e >= 2) return NONE;
+    if (e === 1) {
+      dotted |= boundary;
+      handles += genus;
+    } else if (boundary === 0) return NONE; // an undotted sphere
+    else count *= popcount(boundary);
+  }
+  if (count === 1) return single(dotted, handles);
+  const factor = 2 ** handles;
+  const terms: [number, number][] = [[dotted, factor]];
+  for (let k = 0; k < pieces.length; k++) {
+    const { genus, boundary } = pieces[k];
+    if (dots[k] + (capDots ? capDots[k] : 0) + genus !== 0) continue;
+    const n = terms.length;
+    const first = boundary & -boundary;
+    for (let b = boundary & (boundary - 1); b; b &= b - 1) {
+      const others = boundary & ~(b & -b);
+      for (let t = 0; t < n; t++) terms.push([terms[t][0] | others, factor]);
+    }
+    for (let t = 0; t < n; t++) terms[t][0] |= boundary & ~first;
+  }
+  return terms;
+}
+
+// Union-find scratch: glue runs on every memo miss of a gluing or a composite.
+let parent = new Int32Array(64);
+let idOf = new Int32Array(64);
+
+function root(x: number): number {
+  while (parent[x] !== x) x = parent[x] = parent[parent[x]];
+  return x;
+}
+
+/**
+ * Union-find over discs glued along arcs, given flat as [a0, b0, a1, b1, ...]. Returns the
+ * component of every disc (numbered by first disc) and each component's Euler characteristic
+ * (discs minus gluing arcs).
+ */
+export function glue(discs: number, arcs: readonly number[]): { comp: number[]; euler: number[] } {
+  if (parent.length < discs) {
+    parent = new Int32Array(2 * discs);
+    idOf = new Int32Array(2 * discs);
+  }
+  for (let k = 0; k < discs; k++) {
+    parent[k] = k;
+    idOf[k] = -1;
+  }
+  for (let a = 0; a < arcs.length; a += 2) parent[root(arcs[a])] = root(arcs[a + 1]);
+  const comp = new Array<number>(discs);
+  let ids = 0;
+  for (let k = 0; k < discs; k++) {
+    const r = root(k);
+    if (idOf[r] < 0) idOf[r] = ids++;
+    comp[k] = idOf[r];
+  }
+  const euler = new Array<number>(ids).fill(0);
+  for (let k = 0; k < discs; k++) euler[comp[k]]++;
+  for (let a = 0; a < arcs.length; a += 2) euler[comp[arcs[a]]]--;
   return { comp, euler };
 }
 
@@ -122,7 +168,9 @@ export function composite(c: Composition, m1: number, m2: number, theory: Theory
   const key = m1 * (1 << c.compQR.length) + m2;
   let terms = c.memo[key];
   if (!terms) {
-    terms = theory.reduce(c.pieces, dotsOf(c.pieces.length, [c.compPQ, c.compQR], [m1, m2]));
+    const dots = discDots(c.pieces.length, c.compPQ, m1);
+    for (let m = m2; m; m &= m - 1) dots[c.compQR[31 - Math.clz32(m & -m)]]++;
+    terms = theory.reduce(c.pieces, dots);
     c.memo[key] = terms;
   }
   return terms;
@@ -133,20 +181,19 @@ export function composition(p: Matching, q: Matching, r: Matching): Composition 
   const qr = cycles(q, r);
   const pr = cycles(p, r);
   if (pq.count + qr.count > 52) throw new RangeError(`${pq.count + qr.count} cycles exceed the memo keys of composites; the diagram's open boundary grew too wide`);
-  const arcs: [number, number][] = [];
-  q.forEach((partner, k) => {
-    if (k < partner) arcs.push([pq.of[k], pq.count + qr.of[k]]);
-  });
+  const arcs: number[] = [];
+  for (let k = 0; k < q.length; k++) if (k < q[k]) arcs.push(pq.of[k], pq.count + qr.of[k]);
   const { comp, euler } = glue(pq.count + qr.count, arcs);
   const boundary = new Array<number>(euler.length).fill(0);
   const circles = new Array<number>(euler.length).fill(0);
-  const seen = new Set<number>();
-  pr.of.forEach((c, k) => {
-    if (seen.has(c)) return;
-    seen.add(c);
+  // Cycles are numbered by their smallest point, so cycle c is met first where of[k] = c is new.
+  for (let k = 0, next = 0; k < pr.of.length; k++) {
+    const c = pr.of[k];
+    if (c !== next) continue;
+    next++;
     boundary[comp[pq.of[k]]] |= 1 << c;
     circles[comp[pq.of[k]]]++;
-  });
+  }
   return {
     compPQ: comp.slice(0, pq.count),
     compQR: comp.slice(pq.count),
@@ -155,13 +202,16 @@ export function composition(p: Matching, q: Matching, r: Matching): Composition 
   };
 }
 
-/** Dots per component when the discs carry the dot masks `masks[k]` over the cycle sets `comps[k]`. */
-export function dotsOf(pieces: number, comps: readonly (readonly number[])[], masks: readonly number[]): number[] {
-  const dots = new Array<number>(pieces).fill(0);
-  comps.forEach((of, k) => {
-    for (let m = masks[k]; m; m &= m - 1) dots[of[31 - Math.clz32(m & -m)]]++;
-  });
-  return dots;
+const dotScratch: number[] = [];
+
+/**
+ * Dots per piece when the discs carry the dot mask `mask`, `of` giving each disc's piece. The
+ * array is scratch, overwritten by the next call: reduce reads it and keeps nothing.
+ */
+export function discDots(pieces: number, of: readonly number[], mask: number): number[] {
+  for (let k = 0; k < pieces; k++) dotScratch[k] = 0;
+  for (let m = mask; m; m &= m - 1) dotScratch[of[31 - Math.clz32(m & -m)]]++;
+  return dotScratch;
 }
 
 export function popcount(x: number): number {

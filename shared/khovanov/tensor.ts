@@ -6,7 +6,7 @@
 
 import { Crossing } from '../knot/pd';
 import { Ring } from '../linalg/ring';
-import { cycles, dotsOf, glue, genus, Matching, Piece, popcount, Theory } from './cobordism';
+import { cycles, discDots, glue, genus, Matching, Piece, popcount, Theory } from './cobordism';
 import { coefficients } from './coefficients';
 import { Row, TangleComplex } from './complex';
 
@@ -121,29 +121,22 @@ function smoothedSide(w: Wiring, p: Matching, q: Matching, matchingId: (m: numbe
 function glueSides(w: Wiring, [p1, q1, p2, q2]: Matching[], moving: 0 | 1, bottom: Side, top: Side, newCircles: { of: number[] }): Gluing {
   const discs1 = cycles(p1, q1);
   const discs2 = cycles(p2, q2);
-  const disc = (slot: number): number => (slot < w.n ? discs1.of[slot] : discs1.count + discs2.of[slot - w.n]);
-  const arcs: [number, number][] = [];
-  w.partner.forEach((other, slot) => {
-    if (slot < other) arcs.push([disc(slot), disc(other)]);
-  });
+  // The disc of every slot: the first factor's discs, then the second's.
+  const disc = new Array<number>(w.labelOf.length);
+  for (let slot = 0; slot < w.labelOf.length; slot++) disc[slot] = slot < w.n ? discs1.of[slot] : discs1.count + discs2.of[slot - w.n];
+  const arcs: number[] = [];
+  for (let slot = 0; slot < w.partner.length; slot++) if (slot < w.partner[slot]) arcs.push(disc[slot], disc[w.partner[slot]]);
   const { comp, euler } = glue(discs1.count + discs2.count, arcs);
   const circles = new Array<number>(euler.length).fill(0);
   const boundary = new Array<number>(euler.length).fill(0);
-  newCircles.of.forEach((c, k) => {
-    const piece = comp[disc(w.freeSlots[k])];
+  for (let k = 0; k < newCircles.of.length; k++) {
+    const c = newCircles.of[k];
+    const piece = comp[disc[w.freeSlots[k]]];
     if (!((boundary[piece] >> c) & 1)) circles[piece]++;
     boundary[piece] |= 1 << c;
-  });
-  const loopPieces = (s: Side): number[] => {
-    const out = new Array<number>(s.loops).fill(-1);
-    s.loopOf.forEach((loop, slot) => {
-      if (loop >= 0 && out[loop] < 0) out[loop] = comp[disc(slot)];
-    });
-    out.forEach((piece) => circles[piece]++);
-    return out;
-  };
-  const bottomLoops = loopPieces(bottom);
-  const topLoops = loopPieces(top);
+  }
+  const bottomLoops = loopPieces(bottom, comp, disc, circles);
+  const topLoops = loopPieces(top, comp, disc, circles);
   return {
     pieces: euler.map((e, c) => ({ genus: genus(e, circles[c]), boundary: boundary[c] })),
     compPQ: moving === 0 ? comp.slice(0, discs1.count) : comp.slice(discs1.count),
@@ -151,6 +144,17 @@ function glueSides(w: Wiring, [p1, q1, p2, q2]: Matching[], moving: 0 | 1, botto
     topLoops,
     memo: [],
   };
+}
+
+/** The piece of every closed loop of side s, each loop also counted in `circles` of its piece. */
+function loopPieces(s: Side, comp: readonly number[], disc: readonly number[], circles: number[]): number[] {
+  const out = new Array<number>(s.loops).fill(-1);
+  for (let slot = 0; slot < s.loopOf.length; slot++) {
+    const loop = s.loopOf[slot];
+    if (loop >= 0 && out[loop] < 0) out[loop] = comp[disc[slot]];
+  }
+  for (let l = 0; l < out.length; l++) circles[out[l]]++;
+  return out;
 }
 
 /**
@@ -244,16 +248,18 @@ export function tensor<T>(first: TangleComplex<T>, second: TangleComplex<T>, end
   return cx;
 }
 
+const capScratch: number[] = [];
+
 // The glued surface with dots `mask` on the old discs, capped as the summands say, reduced.
 function surface(theory: Theory, g: Gluing, mask: number, sigma: number, tau: number): [number, number][] {
   const key = (mask * (1 << g.bottomLoops.length) + sigma) * (1 << g.topLoops.length) + tau;
   let terms = g.memo[key];
   if (!terms) {
-    const dots = dotsOf(g.pieces.length, [g.compPQ], [mask]);
-    g.bottomLoops.forEach((piece, l) => (dots[piece] += (sigma >> l) & 1));
-    const capDots = new Array<number>(g.pieces.length).fill(0);
-    g.topLoops.forEach((piece, l) => (capDots[piece] += 1 - ((tau >> l) & 1)));
-    terms = theory.reduce(g.pieces, dots, capDots);
+    const dots = discDots(g.pieces.length, g.compPQ, mask);
+    for (let l = 0; l < g.bottomLoops.length; l++) dots[g.bottomLoops[l]] += (sigma >> l) & 1;
+    for (let k = 0; k < g.pieces.length; k++) capScratch[k] = 0;
+    for (let l = 0; l < g.topLoops.length; l++) capScratch[g.topLoops[l]] += 1 - ((tau >> l) & 1);
+    terms = theory.reduce(g.pieces, dots, capScratch);
     g.memo[key] = terms;
   }
   return terms;
